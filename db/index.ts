@@ -1,0 +1,28 @@
+import "server-only";
+import { Kysely, PostgresDialect } from "kysely";
+import pg from "pg";
+import { getEnv } from "@/server/env";
+import type { Database } from "./types";
+
+// `pg` returns int8 (bigint) as a string; our bigint columns are counters that fit in a JS number.
+pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number.parseInt(value, 10));
+
+// One pool per process. In development, hot reloads re-evaluate modules, so the instance is kept
+// on globalThis instead of opening a new pool every time.
+const globalForDb = globalThis as unknown as { sealpitchDb?: Kysely<Database> };
+
+function createDb(): Kysely<Database> {
+  const env = getEnv();
+  return new Kysely<Database>({
+    dialect: new PostgresDialect({
+      pool: new pg.Pool({ connectionString: env.DATABASE_URL, max: env.DATABASE_POOL_MAX }),
+    }),
+  });
+}
+
+export function getDb(): Kysely<Database> {
+  globalForDb.sealpitchDb ??= createDb();
+  return globalForDb.sealpitchDb;
+}
+
+export type Db = Kysely<Database>;

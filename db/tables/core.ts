@@ -1,0 +1,54 @@
+import type { ColumnType, Generated } from "kysely";
+
+// Tables of the foundation: schema bookkeeping, accounts, organisations, sessions.
+// Nullable columns are `T | null`; columns with database defaults are Generated<T>.
+type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+
+export type Role = "designer" | "approver" | "admin";
+export type UnitSystem = "SI" | "US";
+
+export interface AppMetaTable {
+  id: Generated<number>;
+  schema_version: string;
+  updated_at: Generated<Timestamp>;
+}
+
+export interface UsersTable {
+  id: Generated<string>;
+  email: string;
+  display_name: string;
+  password_hash: string | null;
+  unit_system: Generated<UnitSystem>;
+  created_at: Generated<Timestamp>;
+  disabled_at: Timestamp | null;
+}
+
+export interface OrganizationsTable {
+  id: Generated<string>;
+  name: string;
+  slug: string;
+  created_at: Generated<Timestamp>;
+}
+
+export interface MembershipsTable {
+  organization_id: string;
+  user_id: string;
+  roles: ColumnType<Role[], Role[] | undefined, Role[]>;
+  created_at: Generated<Timestamp>;
+}
+
+export interface SessionsTable {
+  id: string;
+  user_id: string;
+  expires_at: Timestamp;
+  active_organization_id: string | null;
+  created_at: Generated<Timestamp>;
+}
+
+export interface CoreTables {
+  app_meta: AppMetaTable;
+  users: UsersTable;
+  organizations: OrganizationsTable;
+  memberships: MembershipsTable;
+  sessions: SessionsTable;
+}

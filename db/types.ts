@@ -1,0 +1,5 @@
+import type { CoreTables } from "./tables/core";
+
+// The typed schema of the whole database. Each feature keeps its tables' interfaces in
+// db/tables/<area>.ts next to the migrations that create them; this interface joins them.
+export interface Database extends CoreTables {}

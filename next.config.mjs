@@ -1,0 +1,12 @@
+/** @type {import('next').NextConfig} */
+const nextConfig = {
+  reactStrictMode: true,
+  poweredByHeader: false,
+  // Nothing is fetched at build or run time: fonts come from node_modules through next/font/local.
+  images: { unoptimized: true },
+  experimental: {
+    serverActions: { bodySizeLimit: "2mb" },
+  },
+};
+
+export default nextConfig;

@@ -1,0 +1,65 @@
+import "server-only";
+import { z } from "zod";
+
+// Every server setting, parsed once. This is the only module that reads process.env (the
+// scripts under scripts/ set these variables; see .env.example). A bad or missing value stops
+// the process with one message that lists every problem at once.
+const booleanString = z
+  .enum(["true", "false", "1", "0"])
+  .transform((v) => v === "true" || v === "1");
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
+  DATABASE_URL: z
+    .string({ error: "is missing" })
+    .regex(/^postgres(ql)?:\/\//, "must be a postgres:// connection URL"),
+  DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  APP_URL: z.url({ error: "must be the public origin of the app, e.g. http://127.0.0.1:3000" }),
+  SMTP_HOST: z.string({ error: "is missing" }).min(1, "is empty"),
+  SMTP_PORT: z.coerce.number({ error: "must be a port number" }).int().min(1).max(65535),
+  SMTP_SECURE: booleanString.default(false),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default("Sealpitch <no-reply@sealpitch.local>"),
+  SESSION_IDLE_DAYS: z.coerce.number().int().min(1).max(90).default(14),
+});
+
+export type ServerEnv = z.infer<typeof envSchema>;
+
+export class ConfigurationError extends Error {
+  override name = "ConfigurationError";
+}
+
+/** Parses a variables object; exported for tests and scripts that pass their own. */
+export function parseEnv(source: Record<string, string | undefined>): ServerEnv {
+  const result = envSchema.safeParse(source);
+  if (result.success) return result.data;
+  throw new ConfigurationError(describeProblems(result.error.issues));
+}
+
+/** Parses only the named settings; for command-line scripts that need a few of them. */
+export function parseEnvKeys<K extends keyof ServerEnv>(keys: K[], source: Record<string, string | undefined> = process.env): Pick<ServerEnv, K> {
+  const mask = Object.fromEntries(keys.map((key) => [key, true])) as Record<K, true>;
+  const result = envSchema.pick(mask as never).safeParse(source);
+  if (result.success) return result.data as Pick<ServerEnv, K>;
+  throw new ConfigurationError(describeProblems(result.error.issues));
+}
+
+function describeProblems(issues: z.core.$ZodIssue[]): string {
+  const problems = issues.map((issue) => `${issue.path.join(".") || "(env)"} ${issue.message}`);
+  return `Sealpitch configuration is invalid: ${problems.join("; ")}.`;
+}
+
+let cached: ServerEnv | undefined;
+
+/** The validated settings of this process (parsed on first use, so `next build` needs none). */
+export function getEnv(): ServerEnv {
+  cached ??= parseEnv(process.env);
+  return cached;
+}
+
+/** True when the app is served over plain http on a loopback address (local development and tests). */
+export function isLoopbackHttp(env: ServerEnv = getEnv()): boolean {
+  const url = new URL(env.APP_URL);
+  return url.protocol === "http:" && ["127.0.0.1", "localhost", "[::1]"].includes(url.hostname);
+}
