@@ -8,7 +8,12 @@ source "$(dirname "$0")/lib/common.sh"
 cd "$PROJECT_ROOT"
 STARTED_AT=$(date +%s)
 
-APP_PORT=3100 PG_PORT=54331 SMTP_PORT=2535 OUTBOX_PORT=2590
+# SEALPITCH_TEST_OFFSET shifts every port (and the build folder) so that several developers'
+# runs can share one machine; VITEST_ARGS / PW_ARGS narrow a run while working on one area, and
+# SEALPITCH_SKIP_E2E=1 skips the build and the browser tests. CI sets none of them.
+OFFSET="${SEALPITCH_TEST_OFFSET:-0}"
+APP_PORT=$((3100 + OFFSET)) PG_PORT=$((54331 + OFFSET)) SMTP_PORT=$((2535 + OFFSET)) OUTBOX_PORT=$((2590 + OFFSET))
+if [ "$OFFSET" != 0 ]; then export SEALPITCH_DIST_DIR=".next-test-$OFFSET"; fi
 WORK="$(mktemp -d /tmp/sealpitch-test.XXXXXX)"
 chmod 755 "$WORK"
 REPORTS="$WORK/reports"
@@ -53,15 +58,24 @@ SMTP_PID=$!
 
 say "unit and integration tests (vitest)"
 set +e
-NODE_ENV=test npx vitest run --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
+NODE_ENV=test npx vitest run ${VITEST_ARGS:-} --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
 VITEST_CODE=$?
 set -e
 
+if [ "${SEALPITCH_SKIP_E2E:-}" = 1 ]; then
+  node scripts/lib/summarize-tests.mjs "$REPORTS/vitest.json" --vitest-only
+  exit "$VITEST_CODE"
+fi
+
 say "production build"
+# next build writes its dist folder into tsconfig.json; a developer run with its own folder puts it back.
+cp tsconfig.json "$WORK/tsconfig.json.orig"
 if ! npx next build >"$WORK/build.log" 2>&1; then
+  [ "$OFFSET" != 0 ] && cp "$WORK/tsconfig.json.orig" tsconfig.json
   tail -40 "$WORK/build.log" >&2
   die "next build failed"
 fi
+if [ "$OFFSET" != 0 ]; then cp "$WORK/tsconfig.json.orig" tsconfig.json; fi
 grep -E "^(Route|┌|├|└|○|ƒ|●|\+ First Load)" "$WORK/build.log" | head -60 || true
 
 npx tsx --conditions=react-server scripts/seed.ts --e2e >"$WORK/seed.log" 2>&1 || { cat "$WORK/seed.log" >&2; die "seeding the test database failed"; }
@@ -75,7 +89,7 @@ done
 
 say "browser tests (playwright, Debian chromium)"
 set +e
-PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/playwright.json" npx playwright test --reporter=list,json
+PLAYWRIGHT_JSON_OUTPUT_NAME="$REPORTS/playwright.json" npx playwright test ${PW_ARGS:-} --reporter=list,json
 PW_CODE=$?
 set -e
 [ "$PW_CODE" = 0 ] || { echo "--- app log (last 40 lines)"; tail -40 "$WORK/app.log"; }

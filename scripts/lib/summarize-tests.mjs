@@ -16,7 +16,9 @@ if (existsSync(vitestPath)) {
   console.log(`vitest: ${report.numPassedTests} passed, ${report.numFailedTests} failed in ${report.numTotalTestSuites} suites`);
 } else missing.push("vitest");
 
-if (existsSync(playwrightPath)) {
+if (playwrightPath === "--vitest-only") {
+  // a narrowed developer run without the browser tests
+} else if (existsSync(playwrightPath)) {
   const stats = JSON.parse(readFileSync(playwrightPath, "utf8")).stats ?? {};
   passed += stats.expected ?? 0;
   failed += stats.unexpected ?? 0;
