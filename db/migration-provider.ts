@@ -1,9 +1,8 @@
-import { readdir } from "node:fs/promises";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import type { Migration, MigrationProvider } from "kysely";
+import { listMigrationNames, MIGRATIONS_DIR } from "./migration-names";
 
-export const MIGRATIONS_DIR = path.resolve(process.cwd(), "migrations");
 
 /**
  * Kysely's FileMigrationProvider imports `.ts` files with a bare dynamic import that fails under
@@ -20,13 +19,4 @@ export class ProjectMigrationProvider implements MigrationProvider {
     }
     return migrations;
   }
-}
-
-/** Migration names (file names without `.ts`), oldest first. */
-export async function listMigrationNames(folder: string = MIGRATIONS_DIR): Promise<string[]> {
-  const files = await readdir(folder);
-  return files
-    .filter((file) => /^\d{4}_\d{2}_\d{2}_\d{6}_[a-z0-9_]+\.ts$/.test(file))
-    .map((file) => file.replace(/\.ts$/, ""))
-    .sort();
 }

@@ -31,8 +31,8 @@ export MAIL_FROM="Sealpitch <no-reply@sealpitch.local>"
 stop_all() {
   trap - INT TERM EXIT
   say "stopping"
-  [ -f "$RUN_DIR/app.pid" ] && kill "$(cat "$RUN_DIR/app.pid")" 2>/dev/null || true
-  [ -f "$RUN_DIR/smtp.pid" ] && kill "$(cat "$RUN_DIR/smtp.pid")" 2>/dev/null || true
+  [ -f "$RUN_DIR/app.pid" ] && stop_group "$(cat "$RUN_DIR/app.pid")"
+  [ -f "$RUN_DIR/smtp.pid" ] && stop_group "$(cat "$RUN_DIR/smtp.pid")"
   wait 2>/dev/null || true
   rm -f "$RUN_DIR/app.pid" "$RUN_DIR/smtp.pid"
   pg_stop "$PG_DATA"
@@ -43,7 +43,7 @@ trap stop_all INT TERM EXIT
 npx tsx --conditions=react-server db/migrate.ts
 npx tsx --conditions=react-server scripts/seed.ts >"$RUN_DIR/seed.txt"
 
-npx tsx scripts/fake-smtp.ts --smtp "$SMTP_PORT" --http "$OUTBOX_PORT" --store "$PROJECT_ROOT/.data/outbox.json" &
+setsid npx tsx scripts/fake-smtp.ts --smtp "$SMTP_PORT" --http "$OUTBOX_PORT" --store "$PROJECT_ROOT/.data/outbox.json" &
 echo $! >"$RUN_DIR/smtp.pid"
 
 # Rebuild only when a source file is newer than the last build.
@@ -52,7 +52,7 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app features server db public package
   npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -30 "$RUN_DIR/build.log" >&2; die "the build failed (log: $RUN_DIR/build.log)"; }
 fi
 
-npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
 echo $! >"$RUN_DIR/app.pid"
 for _ in $(seq 1 60); do
   http_ok "http://127.0.0.1:$APP_PORT/api/health" && break

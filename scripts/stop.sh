@@ -4,7 +4,7 @@ set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
 RUN_DIR="$PROJECT_ROOT/.data/run"
 for name in app smtp; do
-  if [ -f "$RUN_DIR/$name.pid" ]; then kill "$(cat "$RUN_DIR/$name.pid")" 2>/dev/null || true; rm -f "$RUN_DIR/$name.pid"; fi
+  if [ -f "$RUN_DIR/$name.pid" ]; then stop_group "$(cat "$RUN_DIR/$name.pid")"; rm -f "$RUN_DIR/$name.pid"; fi
 done
 if [ -f "$RUN_DIR/pg-data-dir" ]; then
   sleep 1

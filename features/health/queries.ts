@@ -1,7 +1,7 @@
 import "server-only";
 import { sql } from "kysely";
 import type { Db } from "@/db/index";
-import { listMigrationNames } from "@/db/migration-provider";
+import { listMigrationNames } from "@/db/migration-names";
 
 export type HealthReport =
   | { ok: true; schemaVersion: string; migrations: number }

@@ -60,6 +60,16 @@ port_free() {
   node -e 'const s=require("net").createServer();s.once("error",()=>process.exit(1));s.listen(Number(process.argv[1]),"127.0.0.1",()=>s.close(()=>process.exit(0)))' "$1"
 }
 
+# stop_group PID: stops a background service started with `setsid` together with its children
+# (npx and tsx run the real server as a child process, so killing the first pid is not enough).
+stop_group() {
+  local pid="$1"
+  [ -n "$pid" ] || return 0
+  kill -TERM -- "-$pid" 2>/dev/null || kill -TERM "$pid" 2>/dev/null || true
+  for _ in 1 2 3 4 5 6 7 8 9 10; do kill -0 -- "-$pid" 2>/dev/null || return 0; sleep 0.3; done
+  kill -KILL -- "-$pid" 2>/dev/null || true
+}
+
 # http_ok URL: exits 0 when the URL answers 2xx (Node's fetch; no curl on a bare machine).
 http_ok() {
   node -e 'fetch(process.argv[1]).then((r)=>process.exit(r.ok?0:1),()=>process.exit(1))' "$1"

@@ -1,6 +1,6 @@
 import { sql } from "kysely";
 import { afterAll, beforeEach, describe, expect, it } from "vitest";
-import { listMigrationNames } from "@/db/migration-provider";
+import { listMigrationNames } from "@/db/migration-names";
 import { migrateToLatest } from "@/db/migrate-to-latest";
 import { getHealth } from "@/features/health/queries";
 import { clearTables, getTestDb } from "../setup/test-db";
