@@ -1,0 +1,91 @@
+// Input schemas of Stockroom rows, shared by the add form, the server action and the CSV import.
+// Every schema reads flat string fields (FormData and CSV cells) and produces numbers in the
+// core's units (mm, MPa). Field names are the CSV column names, so an error names the column.
+import { z } from "zod";
+
+const text = (max: number) => z.string({ error: "is required" }).trim().min(1, "is required").max(max, `must be at most ${max} characters`);
+const optionalText = (max: number) => z.string().trim().max(max, `must be at most ${max} characters`).optional().default("");
+
+function toNumber(v: unknown): unknown {
+  if (typeof v === "string") {
+    const t = v.trim();
+    return t === "" ? undefined : Number(t);
+  }
+  return v;
+}
+
+const number = (check: (n: z.ZodNumber) => z.ZodNumber) =>
+  z.preprocess(toNumber, check(z.number({ error: (i) => (i.input === undefined ? "is required" : "must be a number") })));
+const optionalNumber = (check: (n: z.ZodNumber) => z.ZodNumber) =>
+  z.preprocess((v) => toNumber(v) ?? null, check(z.number({ error: "must be a number" })).nullable());
+
+const positive = (n: z.ZodNumber) => n.gt(0, "must be greater than 0");
+
+export const gasketInputSchema = z.object({
+  name: text(120),
+  gasket_type: text(60),
+  m: number((n) => n.min(0, "must be 0 or more").max(20, "must be at most 20")),
+  y_mpa: number((n) => n.min(0, "must be 0 or more").max(1000, "must be at most 1000 MPa")),
+  qmin_l1: optionalNumber(positive),
+  qsmin_l1: optionalNumber(positive),
+  qmin_l01: optionalNumber(positive),
+  qsmin_l01: optionalNumber(positive),
+  qmin_l001: optionalNumber(positive),
+  qsmin_l001: optionalNumber(positive),
+  qsmax_mpa: optionalNumber(positive),
+  pqr: optionalNumber((n) => n.gt(0, "must be greater than 0").max(1, "must be at most 1")),
+  eg_mpa: optionalNumber(positive),
+  modulus_mpa: number(positive),
+  thickness_mm: number((n) => positive(n).max(100, "must be at most 100 mm")),
+  source: text(300),
+  edition: optionalText(200),
+});
+export type GasketInput = z.output<typeof gasketInputSchema>;
+
+export const boltingInputSchema = z
+  .object({
+    name: text(120),
+    modulus_mpa: number(positive),
+    max_diameter_mm: number(positive),
+    proof_mpa: optionalNumber(positive),
+    yield_mpa: number(positive),
+    tensile_mpa: number(positive),
+    allowable_mpa: optionalNumber(positive),
+    source: text(300),
+    edition: optionalText(200),
+  })
+  .refine((r) => r.tensile_mpa >= r.yield_mpa, { path: ["tensile_mpa"], message: "must not be below the yield strength" });
+export type BoltingInput = z.output<typeof boltingInputSchema>;
+
+export const flangeInputSchema = z
+  .object({
+    standard: text(80),
+    pressure_class: text(40),
+    size: text(40),
+    outside_diameter_mm: number(positive),
+    bore_diameter_mm: optionalNumber(positive),
+    bolt_circle_diameter_mm: number(positive),
+    bolt_count: number((n) => n.int("must be a whole number").min(2, "must be at least 2").max(512, "must be at most 512")),
+    bolt_designation: text(20),
+    bolt_diameter_mm: number(positive),
+    hole_diameter_mm: number(positive),
+    source: text(300),
+    edition: optionalText(200),
+  })
+  .refine((r) => r.bolt_circle_diameter_mm < r.outside_diameter_mm, { path: ["bolt_circle_diameter_mm"], message: "must be smaller than the outside diameter" })
+  .refine((r) => r.hole_diameter_mm >= r.bolt_diameter_mm, { path: ["hole_diameter_mm"], message: "must not be smaller than the bolt" })
+  .refine((r) => r.bore_diameter_mm === null || r.bore_diameter_mm < r.bolt_circle_diameter_mm - r.hole_diameter_mm, {
+    path: ["bore_diameter_mm"],
+    message: "must leave room inside the bolt holes",
+  });
+export type FlangeInput = z.output<typeof flangeInputSchema>;
+
+export const libraryKindSchema = z.enum(["gasket", "bolting", "flange"]);
+
+export const hideBuiltinSchema = z.object({
+  kind: libraryKindSchema,
+  builtinId: z.string().min(1).max(120),
+  hidden: z.enum(["true", "false"]).transform((v) => v === "true"),
+});
+
+export const deleteRowSchema = z.object({ kind: libraryKindSchema, id: z.uuid("is not a row id") });
