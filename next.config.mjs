@@ -8,6 +8,7 @@ const nextConfig = {
   images: { unoptimized: true },
   experimental: {
     serverActions: { bodySizeLimit: "2mb" },
+    authInterrupts: true,
   },
 };
 

@@ -3,6 +3,7 @@ import { FlangeIllustration } from "@/features/marketing/flange-illustration";
 import { BrandMark } from "@/features/ui/brand-mark";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { CautionPanel } from "@/features/ui/caution-panel";
+import { getViewer } from "@/server/auth/guard";
 
 const steps = [
   {
@@ -19,7 +20,8 @@ const steps = [
   },
 ];
 
-export default function LandingPage() {
+export default async function LandingPage() {
+  const viewer = await getViewer();
   return (
     <div className="min-h-screen">
       <header className="border-b border-ink-100 bg-white">
@@ -28,8 +30,14 @@ export default function LandingPage() {
             <BrandMark /> Sealpitch
           </Link>
           <nav aria-label="Account" className="flex items-center gap-2">
-            <Link href="/sign-in" className={buttonStyles.quiet}>Sign in</Link>
-            <Link href="/sign-up" className={buttonStyles.primary}>Start an organisation</Link>
+            {viewer ? (
+              <Link href="/desk" className={buttonStyles.primary}>Open your desk</Link>
+            ) : (
+              <>
+                <Link href="/sign-in" className={buttonStyles.quiet}>Sign in</Link>
+                <Link href="/sign-up" className={buttonStyles.primary}>Start an organisation</Link>
+              </>
+            )}
           </nav>
         </div>
       </header>

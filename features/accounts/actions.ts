@@ -1,0 +1,48 @@
+"use server";
+
+import { headers } from "next/headers";
+import { redirect } from "next/navigation";
+import { revalidatePath } from "next/cache";
+import { getDb } from "@/db/index";
+import type { ActionResult } from "@/server/action-result";
+import { getViewerContext } from "@/server/auth/guard";
+import { clientAddressKey } from "@/server/auth/rate-limit";
+import { endAllSessions, endSession, startSession, switchSessionOrganization } from "@/server/auth/session";
+import { authenticate } from "./credentials";
+import { formFields, invalid } from "./form-data";
+import { safeNextPath, signInSchema, switchOrganizationSchema } from "./schema";
+
+// Session entry points. Each action parses its own input and never trusts the form for who
+// the user is: that comes from the session cookie.
+
+export async function signInAction(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
+  const parsed = signInSchema.safeParse(formFields(formData));
+  if (!parsed.success) return invalid(parsed.error);
+  const addressKey = clientAddressKey(await headers());
+  const outcome = await authenticate(getDb(), { email: parsed.data.email, password: parsed.data.password, addressKey });
+  if (!outcome.ok) return { ok: false, message: outcome.message };
+  await startSession(outcome.userId, outcome.organizationId);
+  redirect(safeNextPath(parsed.data.next));
+}
+
+export async function signOutAction(): Promise<void> {
+  const context = await getViewerContext();
+  if (context) await endSession(context.sessionId);
+  redirect("/sign-in?signed-out=1");
+}
+
+export async function signOutEverywhereAction(): Promise<void> {
+  const context = await getViewerContext();
+  if (context) await endAllSessions(context.viewer.userId);
+  redirect("/sign-in?signed-out=everywhere");
+}
+
+export async function switchOrganizationAction(formData: FormData): Promise<void> {
+  const context = await getViewerContext();
+  if (!context) redirect("/sign-in");
+  const parsed = switchOrganizationSchema.safeParse(formFields(formData));
+  // Only organisations the user belongs to: the update itself checks the membership.
+  if (parsed.success) await switchSessionOrganization(context.sessionId, context.viewer.userId, parsed.data.organizationId);
+  revalidatePath("/", "layout");
+  redirect("/desk");
+}

@@ -1,0 +1,29 @@
+"use client";
+
+import Link from "next/link";
+import { useActionState } from "react";
+import type { ActionResult } from "@/server/action-result";
+import { buttonStyles } from "@/features/ui/button-styles";
+import { FormStatus } from "@/features/ui/form-status";
+import { TextField } from "@/features/ui/text-field";
+
+export function SignInForm({ signInAction, next }: { signInAction: (prev: ActionResult | null, data: FormData) => Promise<ActionResult>; next?: string }) {
+  const [state, formAction, pending] = useActionState(signInAction, null);
+  const errors = state && !state.ok ? state.fieldErrors : undefined;
+  return (
+    <form action={formAction} className="flex flex-col gap-4" noValidate>
+      {next ? <input type="hidden" name="next" value={next} /> : null}
+      <TextField label="E-mail" name="email" type="email" autoComplete="username" required errors={errors?.email} />
+      <TextField label="Password" name="password" type="password" autoComplete="current-password" required errors={errors?.password} />
+      <FormStatus state={state} />
+      <button type="submit" className={buttonStyles.primary} disabled={pending}>
+        Sign in
+      </button>
+      <p className="text-table text-ink-600">
+        <Link href="/forgot-password" className="underline">Forgot your password?</Link>
+        {" · "}
+        <Link href="/sign-up" className="underline">Start an organisation</Link>
+      </p>
+    </form>
+  );
+}

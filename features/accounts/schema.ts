@@ -1,0 +1,85 @@
+import { z } from "zod";
+
+// Inputs of the account forms. Shared by the forms (first message per field) and the actions
+// (the authority). Every text field is bounded so a 1 KB paste gets a message, not a query.
+const ROLES = ["designer", "approver", "admin"] as const;
+const EMAIL_PATTERN = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+
+export const emailField = z
+  .string({ error: "Enter your e-mail address." })
+  .trim()
+  .toLowerCase()
+  .min(1, "Enter your e-mail address.")
+  .max(254, "An e-mail address has at most 254 characters.")
+  .regex(EMAIL_PATTERN, "Enter a valid e-mail address, like name@example.com.");
+
+const currentPassword = z
+  .string({ error: "Enter your password." })
+  .min(1, "Enter your password.")
+  .max(1024, "Passwords are limited to 1024 characters.");
+
+export const newPasswordField = z
+  .string({ error: "Choose a password." })
+  .min(10, "Use at least 10 characters.")
+  .max(1024, "Passwords are limited to 1024 characters.");
+
+const displayName = z
+  .string({ error: "Enter your name." })
+  .trim()
+  .min(1, "Enter your name.")
+  .max(120, "Names are limited to 120 characters.");
+
+export const roleSchema = z.enum(ROLES, { error: "Unknown role." });
+export const rolesField = z.array(roleSchema, { error: "Choose at least one role." }).min(1, "Choose at least one role.").max(3);
+
+export const signInSchema = z.object({
+  email: emailField,
+  password: currentPassword,
+  next: z.string().max(1024).optional(),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const signUpSchema = z
+  .object({
+    displayName,
+    email: emailField,
+    organizationName: z
+      .string({ error: "Name your organisation." })
+      .trim()
+      .min(2, "Name your organisation (at least 2 characters).")
+      .max(120, "Organisation names are limited to 120 characters."),
+    password: newPasswordField,
+    confirmPassword: z.string().max(1024, "Passwords are limited to 1024 characters."),
+  })
+  .refine((v) => v.password === v.confirmPassword, { path: ["confirmPassword"], message: "The two passwords differ." });
+export type SignUpInput = z.infer<typeof signUpSchema>;
+
+export const forgotPasswordSchema = z.object({ email: emailField });
+
+const tokenField = z.string().min(10).max(200);
+
+export const resetPasswordSchema = z
+  .object({ token: tokenField, password: newPasswordField, confirmPassword: z.string().max(1024, "Passwords are limited to 1024 characters.") })
+  .refine((v) => v.password === v.confirmPassword, { path: ["confirmPassword"], message: "The two passwords differ." });
+
+/** New invitees choose a name and password; people who already have an account confirm theirs. */
+export const acceptInvitationSchema = z.object({
+  token: tokenField,
+  displayName: displayName.optional(),
+  password: z.string({ error: "Enter a password." }).min(1, "Enter a password.").max(1024, "Passwords are limited to 1024 characters."),
+  confirmPassword: z.string().max(1024).optional(),
+});
+
+export const inviteMemberSchema = z.object({ email: emailField, roles: rolesField });
+export type InviteMemberInput = z.infer<typeof inviteMemberSchema>;
+
+export const changeRolesSchema = z.object({ userId: z.uuid("Unknown member."), roles: rolesField });
+export const memberIdSchema = z.object({ userId: z.uuid("Unknown member.") });
+export const invitationIdSchema = z.object({ invitationId: z.uuid("Unknown invitation.") });
+export const switchOrganizationSchema = z.object({ organizationId: z.uuid("Unknown organisation.") });
+
+/** Only our own paths are followed after sign-in (no open redirect to another site). */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return "/desk";
+  return next;
+}

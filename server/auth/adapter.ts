@@ -1,0 +1,84 @@
+import "server-only";
+import type { Adapter, DatabaseSession, DatabaseUser } from "lucia";
+import type { Kysely } from "kysely";
+import type { Database } from "@/db/types";
+import type { UnitSystem } from "@/db/tables/core";
+
+// Lucia's storage contract over our own `sessions` and `users` tables (migration 000200).
+// Only the columns below ever leave the database here: password_hash is never selected, so it
+// cannot end up in a session, a viewer or anything serialised to the browser.
+export interface SessionRowAttributes {
+  active_organization_id: string | null;
+}
+
+export interface UserRowAttributes {
+  email: string;
+  display_name: string;
+  unit_system: UnitSystem;
+}
+
+const sessionColumns = ["sessions.id", "sessions.user_id", "sessions.expires_at", "sessions.active_organization_id"] as const;
+
+function toDatabaseSession(row: { id: string; user_id: string; expires_at: Date; active_organization_id: string | null }): DatabaseSession {
+  return {
+    id: row.id,
+    userId: row.user_id,
+    expiresAt: new Date(row.expires_at),
+    attributes: { active_organization_id: row.active_organization_id },
+  };
+}
+
+export function createKyselyAdapter(db: Kysely<Database>): Adapter {
+  return {
+    async getSessionAndUser(sessionId) {
+      const row = await db
+        .selectFrom("sessions")
+        .innerJoin("users", "users.id", "sessions.user_id")
+        .select([...sessionColumns, "users.email", "users.display_name", "users.unit_system", "users.disabled_at"])
+        .where("sessions.id", "=", sessionId)
+        .executeTakeFirst();
+      if (!row) return [null, null];
+      const session = toDatabaseSession(row);
+      // A disabled account has no user: lucia then deletes the session.
+      if (row.disabled_at) return [session, null];
+      const user: DatabaseUser = {
+        id: row.user_id,
+        attributes: { email: row.email, display_name: row.display_name, unit_system: row.unit_system },
+      };
+      return [session, user];
+    },
+
+    async getUserSessions(userId) {
+      const rows = await db.selectFrom("sessions").select(sessionColumns).where("sessions.user_id", "=", userId).execute();
+      return rows.map(toDatabaseSession);
+    },
+
+    async setSession(session) {
+      await db
+        .insertInto("sessions")
+        .values({
+          id: session.id,
+          user_id: session.userId,
+          expires_at: session.expiresAt,
+          active_organization_id: session.attributes.active_organization_id ?? null,
+        })
+        .execute();
+    },
+
+    async updateSessionExpiration(sessionId, expiresAt) {
+      await db.updateTable("sessions").set({ expires_at: expiresAt }).where("id", "=", sessionId).execute();
+    },
+
+    async deleteSession(sessionId) {
+      await db.deleteFrom("sessions").where("id", "=", sessionId).execute();
+    },
+
+    async deleteUserSessions(userId) {
+      await db.deleteFrom("sessions").where("user_id", "=", userId).execute();
+    },
+
+    async deleteExpiredSessions() {
+      await db.deleteFrom("sessions").where("expires_at", "<=", new Date()).execute();
+    },
+  };
+}
