@@ -1,0 +1,250 @@
+import "server-only";
+import { createHash } from "node:crypto";
+import PDFDocument from "pdfkit";
+import { CAUTIONS } from "@/features/ui/cautions";
+import { buildBoltRows, type BoltRow } from "@/features/exports/model/bolt-rows";
+import { angle, sheetUnits } from "./format";
+import { getSheetFonts } from "./fonts";
+import { drawFlange } from "./draw-flange";
+import { drawProfileChart } from "./draw-profile-chart";
+import { drawKeyValues, drawTable, type Cell } from "./draw-table";
+import { jointDataItems } from "./joint-data";
+import { readResultView, type SheetResultView, type SheetStatus } from "./result-view";
+import { C, PAPER_SIZES, createContext, heading, type SheetContext } from "./sheet-context";
+import type { RenderOptions, SheetInput } from "./sheet-input";
+import { drawNotApprovedMark, drawTitleBlock } from "./title-block";
+
+const STATUS_STYLE: Record<SheetStatus, { text: string; color: string; fill: string }> = {
+  pass: { text: "PASS", color: C.pass, fill: C.passBg },
+  warn: { text: "WARN", color: C.warn, fill: C.warnBg },
+  fail: { text: "FAIL", color: C.fail, fill: C.failBg },
+  na: { text: "N/A", color: C.na, fill: C.naBg },
+};
+
+/**
+ * The file identifier in the trailer. pdfkit derives it from the info dictionary (so from the
+ * creation date); we derive it from the content hash instead so that two renders of one revision
+ * differ only in the date strings.
+ */
+function fileId(input: SheetInput): Buffer {
+  const basis = input.revision.contentHash ?? `${input.design.name}|${input.revision.number}|${input.revision.status}`;
+  return createHash("sha256").update(`sealpitch-sheet|${basis}|${input.paper}|${input.units}`).digest().subarray(0, 16);
+}
+
+function pageOne(ctx: SheetContext, rows: BoltRow[], view: SheetResultView): void {
+  const { doc, input, content, u } = ctx;
+  const { design, revision } = input;
+  doc.font("sansBold").fontSize(15).fillColor(C.ink900).text("Bolt-spacing sheet", content.x0, ctx.y, { lineBreak: false });
+  doc.font("sans").fontSize(9).fillColor(C.ink700).text(`${design.equipmentTag ? `${design.equipmentTag} · ` : ""}${design.name} · revision ${revision.number}`, content.x0, ctx.y + 19, { lineBreak: false });
+  ctx.y += 36;
+  const drawW = (content.x1 - content.x0) * 0.64;
+  const drawH = Math.min(390, (content.y1 - content.y0) * 0.55);
+  const box = { x: content.x0, y: ctx.y, w: drawW, h: drawH };
+  doc.lineWidth(0.5).strokeColor(C.ink300).rect(box.x, box.y, box.w, box.h).stroke();
+  drawFlange(ctx, box, input.document, rows);
+  const sideX = content.x0 + drawW + 12;
+  const sideW = content.x1 - sideX;
+  const savedY = ctx.y;
+  doc.font("sansBold").fontSize(8).fillColor(C.ink900).text("JOINT DATA", sideX, ctx.y, { lineBreak: false, characterSpacing: 0.5 });
+  ctx.y += 12;
+  const items = [...jointDataItems(input.document, u), ...view.keyValues];
+  ctx.y = drawKeyValues(ctx, sideX, sideW, items);
+  ctx.y = Math.max(ctx.y, savedY + drawH) + 12;
+}
+
+function boltTable(ctx: SheetContext, rows: BoltRow[]): void {
+  const { u } = ctx;
+  heading(ctx, "Bolt table", `${rows.length} bolts · x, y from the flange centre (y up) · angle clockwise from the top · ${u.length}`);
+  const byNumber = rows;
+  drawTable(
+    ctx,
+    [
+      { header: "No.", width: 0.6, align: "right" },
+      { header: "Id", width: 0.7 },
+      { header: "Angle °", width: 1, align: "right", mono: true },
+      { header: `x ${u.length}`, width: 1.1, align: "right", mono: true },
+      { header: `y ${u.length}`, width: 1.1, align: "right", mono: true },
+      { header: "Next", width: 0.6, align: "right" },
+      { header: `Pitch ${u.length}`, width: 1.1, align: "right", mono: true },
+      { header: `Chord ${u.length}`, width: 1.1, align: "right", mono: true },
+      { header: "Tightening order", width: 1.1, align: "right" },
+    ],
+    byNumber.map((r) => [
+      { text: String(r.number), style: { bold: true } },
+      r.id,
+      angle(r.angleDeg),
+      u.len(r.xMm),
+      u.len(r.yMm),
+      r.nextNumber === null ? "—" : String(r.nextNumber),
+      r.pitchToNextMm === null ? "—" : u.len(r.pitchToNextMm),
+      r.chordToNextMm === null ? "—" : u.len(r.chordToNextMm),
+      r.tighteningOrder === null ? "—" : String(r.tighteningOrder),
+    ]),
+  );
+}
+
+function checkTable(ctx: SheetContext, view: SheetResultView): void {
+  heading(ctx, "Checks", "as stored with the revision");
+  if (view.checks.length === 0) {
+    ctx.doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result has no checks.", ctx.content.x0, ctx.y);
+    ctx.y += 16;
+    return;
+  }
+  drawTable(
+    ctx,
+    [
+      { header: "Check", width: 2.6, wrap: true },
+      { header: "Value", width: 1.2, align: "right", mono: true },
+      { header: "Limit", width: 1.2, align: "right", mono: true },
+      { header: "Status", width: 0.7, align: "center" },
+      { header: "Source", width: 2.6, wrap: true },
+    ],
+    view.checks.map((c): Cell[] => {
+      const st = STATUS_STYLE[c.status];
+      return [c.title, c.value, c.limit, { text: st.text, style: { bold: true, color: st.color, fill: st.fill } }, c.source || "—"];
+    }),
+  );
+}
+
+function justifications(ctx: SheetContext, view: SheetResultView): void {
+  const list = ctx.input.justifications;
+  const open = view.checks.filter((c) => c.status === "warn" || c.status === "fail");
+  if (open.length === 0 && list.length === 0) return;
+  heading(ctx, "Justifications", "approved reasons for accepting a warn or fail");
+  const titles = new Map(view.checks.map((c) => [c.id, c.title]));
+  const rows: Cell[][] = list.map((j) => [titles.get(j.checkId) ?? j.checkId, { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } }, j.text, `${j.by}, ${j.at.slice(0, 10)}`]);
+  for (const c of open) if (!list.some((j) => j.checkId === c.id)) rows.push([c.title, { text: STATUS_STYLE[c.status].text, style: { bold: true, color: STATUS_STYLE[c.status].color } }, "No approved justification.", "—"]);
+  drawTable(ctx, [{ header: "Check", width: 2, wrap: true }, { header: "Status", width: 0.6 }, { header: "Justification", width: 4, wrap: true }, { header: "Accepted by", width: 1.4, wrap: true }], rows);
+}
+
+function profileChart(ctx: SheetContext, view: SheetResultView, rows: BoltRow[]): void {
+  if (!view.profile) return;
+  ctx.ensure(210);
+  heading(ctx, "Gasket stress along the path", view.profile.caseLabel);
+  const box = { x: ctx.content.x0, y: ctx.y, w: ctx.content.x1 - ctx.content.x0, h: 180 };
+  drawProfileChart(ctx, box, view.profile, rows);
+  ctx.y += box.h + 10;
+}
+
+function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[]): void {
+  const { doc, u, content } = ctx;
+  heading(ctx, "Assembly plan", "tighten in passes, each pass in the sequence below");
+  if (view.passes.length > 0) {
+    drawTable(
+      ctx,
+      [{ header: "Pass", width: 1.2 }, { header: "Share of final", width: 1, align: "right", mono: true }, { header: `Torque ${u.torque}`, width: 1, align: "right", mono: true }, { header: "Pattern", width: 4, wrap: true }],
+      view.passes.map((p) => [p.label, p.fraction === null ? "—" : `${Math.round(p.fraction * 100)} %`, u.torque1(p.torqueNmm), p.pattern || "in sequence"]),
+    );
+  } else {
+    doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result has no pass plan.", content.x0, ctx.y);
+    ctx.y += 14;
+  }
+  if (view.sequenceIds.length > 0) {
+    const numberOf = new Map(rows.map((r) => [r.id, r.number]));
+    const seq = view.sequenceIds.map((id) => String(numberOf.get(id) ?? id)).join(" – ");
+    const w = content.x1 - content.x0;
+    doc.font("mono").fontSize(7.2);
+    const h = doc.heightOfString(seq, { width: w }) + 11;
+    ctx.ensure(h + 6);
+    doc.font("sansBold").fontSize(7.2).fillColor(C.ink900).text("Tightening sequence (bolt numbers)", content.x0, ctx.y, { lineBreak: false });
+    doc.font("mono").fontSize(7.2).fillColor(C.ink900).text(seq, content.x0, ctx.y + 11, { width: w });
+    ctx.y += h + 10;
+  }
+}
+
+function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
+  const { doc, content } = ctx;
+  const w = content.x1 - content.x0;
+  doc.font("sans").fontSize(7.2);
+  const text = CAUTIONS.map((c) => `•  ${c}`).join("\n");
+  const h = doc.heightOfString(text, { width: w - 16 }) + 26;
+  ctx.ensure(h + 8);
+  doc.rect(content.x0, ctx.y, w, h).fillAndStroke(C.brass50, C.brass300);
+  doc.font("sansBold").fontSize(8).fillColor(C.brass700).text("Cautions — before you rely on these numbers", content.x0 + 8, ctx.y + 7, { lineBreak: false });
+  doc.font("sans").fontSize(7.2).fillColor(C.ink900).text(text, content.x0 + 8, ctx.y + 19, { width: w - 16 });
+  ctx.y += h + 10;
+  heading(ctx, "Tables and editions used", view.coreVersion ? `calculation core ${view.coreVersion}` : undefined);
+  if (view.editions.length === 0) {
+    doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result lists no tables.", content.x0, ctx.y);
+    ctx.y += 14;
+  } else {
+    drawTable(ctx, [{ header: "Data", width: 2, wrap: true }, { header: "Source", width: 3, wrap: true }, { header: "Edition", width: 2.4, wrap: true }, { header: "Tag", width: 0.6 }], view.editions.map((e) => [e.what, e.source, e.edition, e.confidence]));
+  }
+  if (view.warnings.length > 0) {
+    heading(ctx, "Notes from the analysis");
+    for (const wtext of view.warnings) {
+      doc.font("sans").fontSize(7.2).fillColor(C.ink900);
+      const hh = doc.heightOfString(`•  ${wtext}`, { width: w });
+      ctx.ensure(hh + 2);
+      doc.text(`•  ${wtext}`, content.x0, ctx.y, { width: w });
+      ctx.y += hh + 2;
+    }
+  }
+}
+
+/**
+ * Renders the bolt-spacing sheet of one stored revision. Deterministic: the same input (with the
+ * same `createdAt`) gives the same bytes; another `createdAt` changes only the two date strings.
+ * Example: `await renderSpacingSheet({ ...input, paper: "a4", units: "SI" })` → a PDF Buffer.
+ */
+export async function renderSpacingSheet(input: SheetInput, options: RenderOptions = {}): Promise<Buffer> {
+  const fonts = getSheetFonts();
+  const [w, h] = PAPER_SIZES[input.paper];
+  const title = `${input.design.equipmentTag ? `${input.design.equipmentTag} ` : ""}${input.design.name} rev ${input.revision.number} bolt-spacing sheet`;
+  const doc = new PDFDocument({
+    size: [w, h],
+    margin: 0,
+    bufferPages: true,
+    autoFirstPage: false,
+    // No default font: pdfkit would otherwise load its bundled Helvetica metrics from disk (which
+    // a bundled server build does not have); every text call below names one of our fonts.
+    font: null as unknown as string,
+    info: {
+      Title: title,
+      Author: input.revision.designer,
+      Subject: `Revision ${input.revision.number} (${input.revision.status})`,
+      Keywords: input.revision.contentHash ?? "",
+      Creator: "Sealpitch",
+      Producer: "Sealpitch",
+      CreationDate: input.createdAt,
+      ModDate: input.createdAt,
+    },
+  });
+  (doc as unknown as { _id: Buffer })._id = fileId(input);
+  for (const [name, font] of Object.entries(fonts)) doc.registerFont(name, font as unknown as string);
+  const chunks: Buffer[] = [];
+  doc.on("data", (c: Buffer) => chunks.push(c));
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on("end", () => resolve(Buffer.concat(chunks)));
+    doc.on("error", reject);
+  });
+
+  const u = sheetUnits(input.units);
+  const view = readResultView(input.result, u);
+  const rows = buildBoltRows(input.document, view.sequenceIds);
+  const ctx = createContext(doc, input, u);
+  const progress = async (f: number) => options.onProgress?.(f);
+  ctx.newPage();
+  pageOne(ctx, rows, view);
+  await progress(0.2);
+  boltTable(ctx, rows);
+  await progress(0.5);
+  checkTable(ctx, view);
+  justifications(ctx, view);
+  profileChart(ctx, view, rows);
+  await progress(0.7);
+  assemblyPlan(ctx, view, rows);
+  cautionsAndEditions(ctx, view);
+  await progress(0.9);
+
+  const range = doc.bufferedPageRange();
+  for (let i = range.start; i < range.start + range.count; i++) {
+    doc.switchToPage(i);
+    drawTitleBlock(ctx, i - range.start, range.count);
+    drawNotApprovedMark(ctx, i - range.start);
+  }
+  doc.end();
+  const buf = await done;
+  await progress(1);
+  return buf;
+}

@@ -1,0 +1,44 @@
+import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
+
+export type SheetPaper = "a4" | "letter";
+export type SheetRevisionStatus = "draft" | "in_review" | "returned" | "approved";
+
+/** An approved justification of a warn or fail check, shown under the check table. */
+export interface SheetJustification {
+  checkId: string;
+  status: "warn" | "fail";
+  text: string;
+  /** Display name of the approver who accepted it. */
+  by: string;
+  /** ISO 8601. */
+  at: string;
+}
+
+/**
+ * Everything the spacing sheet shows. The route (or the background worker) reads it from the
+ * stored revision: `result` is the stored JointAnalysis and is drawn as stored, never recomputed.
+ */
+export interface SheetInput {
+  design: { name: string; equipmentTag: string };
+  revision: {
+    number: number;
+    status: SheetRevisionStatus;
+    designer: string;
+    approver: string | null;
+    /** ISO 8601. */
+    approvedAt: string | null;
+    contentHash: string | null;
+  };
+  document: JointDesign;
+  result: unknown;
+  justifications: SheetJustification[];
+  paper: SheetPaper;
+  units: UnitSystem;
+  /** Written as the PDF creation and modification date: the only bytes that differ between downloads. */
+  createdAt: Date;
+}
+
+export interface RenderOptions {
+  /** Called with 0…1 as pages are laid out (the background job stores it as progress). */
+  onProgress?: (fraction: number) => void | Promise<void>;
+}
