@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { sql } from "kysely";
 import { getTestDb } from "../../setup/test-db";
 
 // Each test file makes its own organisation and people (unique slugs and e-mails), so it never
@@ -18,7 +19,14 @@ export async function createOrgWithUsers(label: string) {
 export async function dropOrg(organizationId: string) {
   const db = getTestDb();
   const members = await db.selectFrom("memberships").select("user_id").where("organization_id", "=", organizationId).execute();
-  await db.deleteFrom("design_attachments").where("organization_id", "=", organizationId).execute();
-  await db.deleteFrom("organizations").where("id", "=", organizationId).execute();
+  // An approved revision refuses DELETE (by design); the test's own data is removed with that
+  // trigger off inside one transaction, so nobody else ever sees it disabled.
+  await db.transaction().execute(async (trx) => {
+    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(trx);
+    await trx.deleteFrom("design_attachments").where("organization_id", "=", organizationId).execute();
+    await trx.deleteFrom("design_revisions").where("organization_id", "=", organizationId).execute();
+    await trx.deleteFrom("organizations").where("id", "=", organizationId).execute();
+    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
+  });
   if (members.length) await db.deleteFrom("users").where("id", "in", members.map((m) => m.user_id)).execute();
 }
