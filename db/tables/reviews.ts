@@ -1,0 +1,65 @@
+import type { ColumnType, Generated } from "kysely";
+
+// Tables of review and approval (migrations/2026_12_01_000600_create_reviews.ts). All four are
+// append-only: the database refuses UPDATE and direct DELETE, so there are no Updateable types.
+// Not Generated<…>: Kysely 0.28 does not unwrap a ColumnType inside Generated.
+type CreatedAt = ColumnType<Date, Date | string | undefined, never>;
+
+export type CommentTargetKind = "bolt" | "check";
+export type DecisionKind = "approved" | "returned";
+export type ActivityKind = "created" | "saved" | "submitted" | "returned" | "approved" | "new-revision" | "commented" | "exported";
+
+export interface RevisionCommentsTable {
+  id: Generated<string>;
+  revision_id: string;
+  organization_id: string;
+  author_id: string;
+  body: string;
+  target_kind: CommentTargetKind | null;
+  /** A bolt id of the revision's document ("b3") or a check id of its result. */
+  target_id: string | null;
+  created_at: CreatedAt;
+}
+
+export interface RevisionDecisionsTable {
+  id: Generated<string>;
+  revision_id: string;
+  organization_id: string;
+  kind: DecisionKind;
+  actor_id: string;
+  /** Required (non-blank) for a return; optional note for an approval. */
+  comment: Generated<string>;
+  /** The snapshot hash the decision was made on. */
+  content_hash: string;
+  created_at: CreatedAt;
+}
+
+export interface RevisionJustificationsTable {
+  id: Generated<string>;
+  revision_id: string;
+  organization_id: string;
+  check_id: string;
+  /** The status the check had when it was justified. */
+  check_status: "warn" | "fail";
+  text: string;
+  author_id: string;
+  created_at: CreatedAt;
+}
+
+export interface DesignActivityTable {
+  id: Generated<string>;
+  organization_id: string;
+  design_id: string;
+  revision_id: string | null;
+  actor_id: string;
+  kind: ActivityKind;
+  detail: Generated<string>;
+  created_at: CreatedAt;
+}
+
+export interface ReviewTables {
+  revision_comments: RevisionCommentsTable;
+  revision_decisions: RevisionDecisionsTable;
+  revision_justifications: RevisionJustificationsTable;
+  design_activity: DesignActivityTable;
+}

@@ -1,0 +1,73 @@
+// Reads the checks out of a stored JointAnalysis. The result is JSON from the core
+// (features/analysis/core/analyze.ts: each check `{id, title, value, limit, unit, status, source,
+// note}`); it is read defensively because a frozen snapshot may come from an older core version.
+export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable";
+
+export interface ReviewCheck {
+  id: string;
+  title: string;
+  status: CheckStatus;
+  value: number | string | null;
+  limit: number | string | null;
+  unit: string;
+  source: string;
+  note: string;
+  /** Bolt ids the check is about (the core names them in `subject`). */
+  boltIds: string[];
+}
+
+export const CHECK_STATUS_LABELS: Record<CheckStatus, string> = {
+  pass: "Pass",
+  warn: "Warn",
+  fail: "Fail",
+  "not-applicable": "Not applicable",
+};
+
+function normaliseStatus(raw: unknown): CheckStatus {
+  if (raw === "pass" || raw === "warn" || raw === "fail" || raw === "not-applicable") return raw;
+  if (raw === "na" || raw === "n/a") return "not-applicable";
+  // An unknown status is treated as a failure so it can never slip through an approval.
+  return "fail";
+}
+
+const scalar = (v: unknown): number | string | null => (typeof v === "number" || typeof v === "string" ? v : null);
+const text = (v: unknown): string => (typeof v === "string" ? v : "");
+
+function boltIdsOf(check: Record<string, unknown>): string[] {
+  for (const key of ["subject", "boltIds", "bolts"]) {
+    const list = check[key];
+    if (Array.isArray(list)) return list.filter((x): x is string => typeof x === "string");
+  }
+  if (typeof check.boltId === "string") return [check.boltId];
+  return [];
+}
+
+export function readChecks(result: unknown): ReviewCheck[] {
+  const list = (result as { checks?: unknown } | null)?.checks;
+  if (!Array.isArray(list)) return [];
+  return list
+    .filter((c): c is Record<string, unknown> => typeof c === "object" && c !== null && typeof (c as { id?: unknown }).id === "string")
+    .map((c) => ({
+      id: c.id as string,
+      title: text(c.title) || (c.id as string),
+      status: normaliseStatus(c.status),
+      value: scalar(c.value),
+      limit: scalar(c.limit),
+      unit: text(c.unit),
+      source: text(c.source),
+      note: text(c.note),
+      boltIds: boltIdsOf(c),
+    }));
+}
+
+/** Checks an approver must justify in writing before approving (every warn and fail). */
+export function checksNeedingJustification(checks: ReviewCheck[]): ReviewCheck[] {
+  return checks.filter((c) => c.status === "warn" || c.status === "fail");
+}
+
+/** Ids of the warn/fail checks that have no non-blank justification. */
+export function missingJustifications(checks: ReviewCheck[], justifications: Record<string, string>): string[] {
+  return checksNeedingJustification(checks)
+    .filter((c) => !(justifications[c.id] ?? "").trim())
+    .map((c) => c.id);
+}

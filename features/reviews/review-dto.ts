@@ -1,0 +1,108 @@
+// DTOs of the review feature (types only: safe to import from client components).
+import type { JointDesign } from "@/features/analysis/core/design";
+import type { SnapshotIntegrity } from "./model/content-hash";
+import type { ReviewStatus } from "./model/review-states";
+import type { ReviewCheck } from "./model/review-checks";
+import type { BoltMove, CheckChange, FieldChange } from "./model/compare-revisions";
+
+export interface CommentDto {
+  id: string;
+  authorName: string;
+  body: string;
+  targetKind: "bolt" | "check" | null;
+  targetId: string | null;
+  /** ISO 8601 */
+  at: string;
+}
+
+export interface JustificationDto {
+  checkId: string;
+  checkStatus: "warn" | "fail";
+  text: string;
+  authorName: string;
+  at: string;
+}
+
+export interface DecisionDto {
+  kind: "approved" | "returned";
+  actorName: string;
+  comment: string;
+  at: string;
+}
+
+export interface RevisionPermissions {
+  canSubmit: boolean;
+  canApprove: boolean;
+  canReturn: boolean;
+  canStartNew: boolean;
+  canComment: boolean;
+  canEdit: boolean;
+}
+
+export interface RevisionReviewDto {
+  designId: string;
+  designName: string;
+  equipmentTag: string;
+  revisionId: string;
+  number: number;
+  status: ReviewStatus;
+  version: number;
+  document: JointDesign;
+  /** The JointAnalysis (frozen for In review / Approved; the last save's result otherwise). */
+  result: Record<string, unknown> | null;
+  coreVersion: string | null;
+  integrity: SnapshotIntegrity;
+  checks: ReviewCheck[];
+  createdByName: string;
+  lastEditedByName: string;
+  submittedByName: string | null;
+  submittedAt: string | null;
+  decidedByName: string | null;
+  decidedAt: string | null;
+  isWorking: boolean;
+  /** Every revision number of the design, ascending (for the comparison picker). */
+  revisionNumbers: number[];
+  comments: CommentDto[];
+  justifications: JustificationDto[];
+  decisions: DecisionDto[];
+  permissions: RevisionPermissions;
+}
+
+export interface RevisionSummaryDto {
+  number: number;
+  status: ReviewStatus;
+  contentHash: string | null;
+  submittedAt: string | null;
+  decidedAt: string | null;
+  updatedAt: string;
+}
+
+export interface DeskItemDto {
+  designId: string;
+  designName: string;
+  equipmentTag: string;
+  number: number;
+  /** Who submitted (waiting list) or who returned it (returned list). */
+  personName: string;
+  at: string;
+  href: string;
+  /** The return comment (returned list only). */
+  comment: string;
+}
+
+export interface DeskListsDto {
+  isApprover: boolean;
+  waitingForMyReview: DeskItemDto[];
+  returnedToMe: DeskItemDto[];
+}
+
+export interface RevisionComparisonDto {
+  designId: string;
+  designName: string;
+  from: { number: number; status: ReviewStatus };
+  to: { number: number; status: ReviewStatus };
+  fieldChanges: FieldChange[];
+  boltMoves: BoltMove[];
+  checkChanges: CheckChange[];
+  revisionNumbers: number[];
+}

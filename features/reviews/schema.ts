@@ -1,0 +1,49 @@
+import { z } from "zod";
+
+// Inputs of the review actions. The forms use them for quick feedback; the actions are the authority.
+const revisionRef = {
+  designId: z.uuid({ error: "Unknown design." }),
+  number: z.coerce.number().int().min(1, "Unknown revision."),
+};
+
+export const submitRevisionSchema = z.object({
+  ...revisionRef,
+  /** The version the designer saw; a newer save since then refuses the submit. */
+  baseVersion: z.coerce.number().int().min(1).optional(),
+});
+export type SubmitRevisionInput = z.infer<typeof submitRevisionSchema>;
+
+export const returnRevisionSchema = z.object({
+  ...revisionRef,
+  comment: z.string().trim().min(1, "Say what needs to change: a returned revision needs a comment.").max(5000, "Keep the comment under 5000 characters."),
+});
+export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
+
+export const approveRevisionSchema = z.object({
+  ...revisionRef,
+  comment: z.string().trim().max(5000, "Keep the comment under 5000 characters.").default(""),
+  /** check id → written justification, for every check that is warn or fail. */
+  justifications: z.record(z.string().min(1).max(200), z.string().trim().max(5000, "Keep each justification under 5000 characters.")).default({}),
+});
+export type ApproveRevisionInput = z.infer<typeof approveRevisionSchema>;
+
+export const startNewRevisionSchema = z.object(revisionRef);
+export type StartNewRevisionInput = z.infer<typeof startNewRevisionSchema>;
+
+export const addCommentSchema = z
+  .object({
+    ...revisionRef,
+    body: z.string().trim().min(1, "Write a comment first.").max(5000, "Keep the comment under 5000 characters."),
+    targetKind: z.enum(["bolt", "check"]).nullable().default(null),
+    targetId: z.string().trim().max(200).nullable().default(null),
+  })
+  .refine((v) => (v.targetKind === null) === (v.targetId === null || v.targetId === ""), {
+    error: "Choose what the comment points at, or nothing.",
+    path: ["targetId"],
+  });
+export type AddCommentInput = z.infer<typeof addCommentSchema>;
+
+export const compareRevisionsSchema = z.object({
+  from: z.coerce.number().int().min(1, "Choose a revision."),
+  to: z.coerce.number().int().min(1, "Choose a revision."),
+});
