@@ -1,0 +1,63 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+import { getDb } from "@/db/index";
+import { requireViewer } from "@/server/auth/guard";
+import type { ActionResult } from "@/server/action-result";
+import type { UnitSystem } from "@/features/analysis/core/design";
+import {
+  createDesignFromForm, duplicateDesignForViewer, saveWorkingRevisionForViewer, setDesignArchivedForViewer, setUnitSystemForViewer,
+  type CommandResult,
+} from "./commands";
+import { formDataToObject } from "./field-errors";
+import type { SaveWorkingRevisionInput, SaveWorkingRevisionResult } from "./workspace-contract";
+
+// Server actions of the designs feature: authenticate, then hand over to commands.ts, which
+// parses, authorises and delegates; then revalidate. `reason` stays server-side.
+
+function toActionResult<T>(result: CommandResult<T>): ActionResult<T> {
+  if (result.ok) return result;
+  return result.fieldErrors ? { ok: false, message: result.message, fieldErrors: result.fieldErrors } : { ok: false, message: result.message };
+}
+
+/** New-design form (useActionState); on success goes straight to the editor. */
+export async function createDesignAction(_previous: ActionResult<{ designId: string }> | null, formData: FormData): Promise<ActionResult<{ designId: string }>> {
+  const viewer = await requireViewer();
+  const result = await createDesignFromForm(getDb(), viewer, formDataToObject(formData));
+  if (!result.ok) return toActionResult(result);
+  revalidatePath("/designs");
+  redirect(`/designs/${result.data.designId}`);
+}
+
+export async function saveWorkingRevisionAction(input: SaveWorkingRevisionInput): Promise<SaveWorkingRevisionResult> {
+  const viewer = await requireViewer();
+  const result = await saveWorkingRevisionForViewer(getDb(), viewer, input);
+  if (!result.ok) {
+    const failure = toActionResult(result) as Extract<SaveWorkingRevisionResult, { ok: false }>;
+    return result.conflict ? { ...failure, conflict: true } : failure;
+  }
+  revalidatePath("/designs");
+  return result;
+}
+
+export async function duplicateDesignAction(_previous: ActionResult<{ designId: string }> | null, formData: FormData): Promise<ActionResult<{ designId: string }>> {
+  const viewer = await requireViewer();
+  const result = await duplicateDesignForViewer(getDb(), viewer, formData.get("designId"));
+  if (result.ok) revalidatePath("/designs");
+  return toActionResult(result);
+}
+
+export async function setDesignArchivedAction(_previous: ActionResult<{ archived: boolean }> | null, formData: FormData): Promise<ActionResult<{ archived: boolean }>> {
+  const viewer = await requireViewer();
+  const result = await setDesignArchivedForViewer(getDb(), viewer, formData.get("designId"), formData.get("archived") === "true");
+  if (result.ok) revalidatePath("/designs");
+  return toActionResult(result);
+}
+
+/** Remembers the viewer's unit system (users.unit_system) for every screen. */
+export async function setUnitSystemAction(unitSystem: UnitSystem): Promise<ActionResult<{ unitSystem: UnitSystem }>> {
+  const viewer = await requireViewer();
+  const result = await setUnitSystemForViewer(getDb(), viewer, unitSystem);
+  if (result.ok) revalidatePath("/", "layout");
+  return toActionResult(result);
+}
