@@ -81,8 +81,7 @@ export async function saveWorkingRevisionForViewer(
   const outcome = await saveWorkingRevision(db, { ...input, organizationId: viewer.organizationId, userId: viewer.userId });
   switch (outcome.kind) {
     case "saved":
-      // The contract promises a result; until the core's analyzeJoint is wired it may be empty.
-      return { ok: true, data: { version: outcome.version, result: (outcome.result ?? {}) as JointAnalysis, savedAt: outcome.savedAt } };
+      return { ok: true, data: { version: outcome.version, result: outcome.result, savedAt: outcome.savedAt } };
     case "not-found":
       return refuse("not-found", NOT_FOUND);
     case "frozen":

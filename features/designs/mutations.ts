@@ -49,7 +49,7 @@ export async function createDesign(db: Kysely<Database>, input: CreateDesignInpu
       .insertInto("design_revisions")
       .values({
         design_id: design.id, organization_id: input.organizationId, number: 1, status: "draft", document: JSON.stringify(document),
-        result: result === null ? null : JSON.stringify(result), core_version: coreVersion, content_hash: hashDocument(document),
+        result: JSON.stringify(result), core_version: coreVersion, content_hash: hashDocument(document),
         created_by: input.ownerId, last_edited_by: input.ownerId,
       })
       .returning("version")
@@ -69,7 +69,7 @@ export interface SaveWorkingRevisionCommand {
 }
 
 export type SaveOutcome =
-  | { kind: "saved"; version: number; savedAt: string; result: JointAnalysis | null }
+  | { kind: "saved"; version: number; savedAt: string; result: JointAnalysis }
   | { kind: "not-found" }
   | { kind: "stale"; version: number; savedByName: string; savedAt: string }
   | { kind: "frozen"; status: WorkingRevisionStatus };
@@ -87,7 +87,7 @@ export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWor
     const updated = await trx
       .updateTable("design_revisions")
       .set({
-        document: JSON.stringify(document), result: result === null ? null : JSON.stringify(result), core_version: coreVersion,
+        document: JSON.stringify(document), result: JSON.stringify(result), core_version: coreVersion,
         content_hash: hashDocument(document), version: sql`version + 1`, last_edited_by: command.userId, updated_at: sql`now()`,
       })
       .where("id", "=", workingRevisionId(trx, command.designId))

@@ -1,12 +1,11 @@
 // The interface between the designs data side (features/designs) and the editor canvas
 // (features/editor). The design page loads a WorkspaceDesignDto and hands it, with the save and
 // unit-system actions, to <DesignWorkspace />. Types only: importable from client and server.
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { ActionResult } from "@/server/action-result";
 
-// The core's result type lives in features/analysis/core/analyze.ts, which the core engineer is
-// still writing. Until it lands this stands in for it (same name, so nothing else changes).
-export type JointAnalysis = Record<string, any>;
+export type { JointAnalysis };
 
 export type WorkingRevisionStatus = "draft" | "in_review" | "returned" | "approved";
 

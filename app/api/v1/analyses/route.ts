@@ -1,0 +1,19 @@
+import { issuesToFieldErrors } from "@/features/designs/field-errors";
+import { NO_STORE, readJsonBody } from "@/features/designs/http";
+import { runAnalysis } from "@/features/designs/run-analysis";
+import { analysisRequestSchema } from "@/features/designs/schema";
+import { authorizeApi, jsonError } from "@/server/auth/guard";
+
+// Stateless analysis: a design document in (bare, or as `{ document }`), the core's JointAnalysis
+// out. Nothing is stored. Bad input is a 422 naming each field path.
+export async function POST(request: Request): Promise<Response> {
+  const auth = await authorizeApi(request);
+  if (!auth.ok) return auth.response;
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  const raw = body.body as Record<string, unknown> | null;
+  const wrapped = raw && typeof raw === "object" && !Array.isArray(raw) && "document" in raw && !("schemaVersion" in raw) ? raw : { document: raw };
+  const parsed = analysisRequestSchema.safeParse(wrapped);
+  if (!parsed.success) return jsonError(422, "The design document is not valid.", issuesToFieldErrors(parsed.error));
+  return Response.json(runAnalysis(parsed.data.document).result, { headers: NO_STORE });
+}

@@ -1,0 +1,36 @@
+import { getDb } from "@/db/index";
+import { deleteDesignForViewer, saveWorkingRevisionForViewer } from "@/features/designs/commands";
+import { NO_STORE, commandResponse, readJsonBody, toApiDesign } from "@/features/designs/http";
+import { findDesign } from "@/features/designs/queries";
+import { designIdSchema } from "@/features/designs/schema";
+import { authorizeApi, jsonError } from "@/server/auth/guard";
+
+type Context = { params: Promise<{ designId: string }> };
+
+// One design. PUT saves its working revision: the body carries `baseVersion`, and a save based on
+// an older version is refused with 409 (nothing written). DELETE only for never-submitted drafts.
+export async function GET(request: Request, { params }: Context): Promise<Response> {
+  const auth = await authorizeApi(request);
+  if (!auth.ok) return auth.response;
+  const design = await findDesign(getDb(), auth.viewer.organizationId, (await params).designId);
+  if (!design) return jsonError(404, "This design does not exist in your organisation.");
+  return Response.json(toApiDesign(design), { headers: NO_STORE });
+}
+
+export async function PUT(request: Request, { params }: Context): Promise<Response> {
+  const auth = await authorizeApi(request, { role: "designer" });
+  if (!auth.ok) return auth.response;
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  const designId = (await params).designId;
+  if (!designIdSchema.safeParse(designId).success) return jsonError(404, "This design does not exist in your organisation.");
+  const fields = body.body && typeof body.body === "object" && !Array.isArray(body.body) ? body.body : {};
+  return commandResponse(await saveWorkingRevisionForViewer(getDb(), auth.viewer, { ...fields, designId }));
+}
+
+export async function DELETE(request: Request, { params }: Context): Promise<Response> {
+  const auth = await authorizeApi(request);
+  if (!auth.ok) return auth.response;
+  const result = await deleteDesignForViewer(getDb(), auth.viewer, (await params).designId);
+  return result.ok ? new Response(null, { status: 204 }) : commandResponse(result);
+}
