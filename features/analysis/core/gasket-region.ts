@@ -34,18 +34,21 @@ export interface GasketRegion {
   bounds: { xMinMm: number; xMaxMm: number; yMinMm: number; yMaxMm: number };
 }
 
-/** True when the point lies on gasket material (inside the gasket, outside bore and bolt holes). */
+/**
+ * True when the point lies on gasket material (inside the gasket, outside bore and bolt holes).
+ * Ring gaskets need no hole test: validation guarantees that no bolt hole overlaps them.
+ */
 export function isOnGasket(region: GasketRegion, x: number, y: number): boolean {
   if (region.kind === "annulus") {
-    const r = Math.hypot(x, y);
-    if (r < region.innerRadiusMm || r > region.outerRadiusMm) return false;
-  } else if (region.kind === "band") {
-    const d = -signedDistanceToShape(region.outline, x, y);
-    if (Math.abs(d - region.bandCentreOffsetMm) > region.bandWidthMm / 2) return false;
-  } else {
-    if (signedDistanceToShape(region.outline, x, y) > 0) return false;
-    if (region.bore && signedDistanceToShape(region.bore, x, y) < 0) return false;
+    const r2 = x * x + y * y;
+    return r2 >= region.innerRadiusMm * region.innerRadiusMm && r2 <= region.outerRadiusMm * region.outerRadiusMm;
   }
+  if (region.kind === "band") {
+    const d = -signedDistanceToShape(region.outline, x, y);
+    return Math.abs(d - region.bandCentreOffsetMm) <= region.bandWidthMm / 2;
+  }
+  if (signedDistanceToShape(region.outline, x, y) > 0) return false;
+  if (region.bore && signedDistanceToShape(region.bore, x, y) < 0) return false;
   return !hasPointNear(region.holeHash, x, y, region.holeRadiusMm);
 }
 

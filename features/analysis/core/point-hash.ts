@@ -1,45 +1,61 @@
 /**
- * Uniform-grid spatial hash over a fixed set of points, so that "which bolts are within r of
- * this point" costs a few bucket lookups instead of a loop over every bolt. Cell size should be
- * at least the largest query radius.
+ * Uniform-grid spatial index over a fixed set of points (compressed rows in typed arrays), so
+ * that "which bolts are within r of this point" costs a few array reads instead of a loop over
+ * every bolt. The cell size must be at least the largest query radius.
  */
 export interface PointHash {
   cellMm: number;
+  x0: number;
+  y0: number;
+  nx: number;
+  ny: number;
+  /** cellStart[c] … cellStart[c + 1] index into `items`. */
+  cellStart: Int32Array;
+  items: Int32Array;
   xs: Float64Array;
   ys: Float64Array;
-  buckets: Map<number, number[]>;
 }
 
-function key(ix: number, iy: number): number {
-  return (ix + 32768) * 65536 + (iy + 32768);
-}
+const MAX_CELLS_PER_AXIS = 1024;
 
 export function buildPointHash(xs: ArrayLike<number>, ys: ArrayLike<number>, cellMm: number): PointHash {
-  const cell = Math.max(cellMm, 1e-6);
-  const buckets = new Map<number, number[]>();
-  for (let i = 0; i < xs.length; i++) {
-    const k = key(Math.floor(xs[i] / cell), Math.floor(ys[i] / cell));
-    const b = buckets.get(k);
-    if (b) b.push(i);
-    else buckets.set(k, [i]);
+  const n = xs.length;
+  let xMin = Infinity, xMax = -Infinity, yMin = Infinity, yMax = -Infinity;
+  for (let i = 0; i < n; i++) {
+    xMin = Math.min(xMin, xs[i]); xMax = Math.max(xMax, xs[i]);
+    yMin = Math.min(yMin, ys[i]); yMax = Math.max(yMax, ys[i]);
   }
-  return { cellMm: cell, xs: Float64Array.from(xs), ys: Float64Array.from(ys), buckets };
+  if (n === 0) { xMin = xMax = yMin = yMax = 0; }
+  let cell = Math.max(cellMm, 1e-6);
+  cell = Math.max(cell, (xMax - xMin) / MAX_CELLS_PER_AXIS, (yMax - yMin) / MAX_CELLS_PER_AXIS);
+  const x0 = xMin - cell;
+  const y0 = yMin - cell;
+  const nx = Math.floor((xMax - x0) / cell) + 2;
+  const ny = Math.floor((yMax - y0) / cell) + 2;
+  const counts = new Int32Array(nx * ny + 1);
+  const cellOf = new Int32Array(n);
+  for (let i = 0; i < n; i++) {
+    const c = Math.floor((ys[i] - y0) / cell) * nx + Math.floor((xs[i] - x0) / cell);
+    cellOf[i] = c;
+    counts[c + 1]++;
+  }
+  for (let c = 0; c < nx * ny; c++) counts[c + 1] += counts[c];
+  const fill = counts.slice(0, nx * ny);
+  const items = new Int32Array(n);
+  for (let i = 0; i < n; i++) items[fill[cellOf[i]]++] = i;
+  return { cellMm: cell, x0, y0, nx, ny, cellStart: counts, items, xs: Float64Array.from(xs), ys: Float64Array.from(ys) };
 }
 
-/**
- * Calls `visit(index, distanceSquared)` for every point within `radiusMm` of (x, y).
- * `radiusMm` must not exceed the cell size.
- */
+/** Calls `visit(index, distanceSquared)` for every point within `radiusMm` of (x, y). */
 export function forEachNear(hash: PointHash, x: number, y: number, radiusMm: number, visit: (i: number, d2: number) => void): void {
-  const ix = Math.floor(x / hash.cellMm);
-  const iy = Math.floor(y / hash.cellMm);
+  const cx = Math.floor((x - hash.x0) / hash.cellMm);
+  const cy = Math.floor((y - hash.y0) / hash.cellMm);
   const r2 = radiusMm * radiusMm;
-  for (let dx = -1; dx <= 1; dx++) {
-    for (let dy = -1; dy <= 1; dy++) {
-      const b = hash.buckets.get(key(ix + dx, iy + dy));
-      if (!b) continue;
-      for (let j = 0; j < b.length; j++) {
-        const i = b[j];
+  for (let iy = Math.max(cy - 1, 0); iy <= Math.min(cy + 1, hash.ny - 1); iy++) {
+    for (let ix = Math.max(cx - 1, 0); ix <= Math.min(cx + 1, hash.nx - 1); ix++) {
+      const c = iy * hash.nx + ix;
+      for (let k = hash.cellStart[c]; k < hash.cellStart[c + 1]; k++) {
+        const i = hash.items[k];
         const ex = hash.xs[i] - x;
         const ey = hash.ys[i] - y;
         const d2 = ex * ex + ey * ey;
@@ -49,18 +65,18 @@ export function forEachNear(hash: PointHash, x: number, y: number, radiusMm: num
   }
 }
 
-/** True when any point lies within `radiusMm` of (x, y). */
+/** True when any point lies strictly within `radiusMm` of (x, y). */
 export function hasPointNear(hash: PointHash, x: number, y: number, radiusMm: number): boolean {
-  const ix = Math.floor(x / hash.cellMm);
-  const iy = Math.floor(y / hash.cellMm);
+  const cx = Math.floor((x - hash.x0) / hash.cellMm);
+  const cy = Math.floor((y - hash.y0) / hash.cellMm);
   const r2 = radiusMm * radiusMm;
-  for (let dx = -1; dx <= 1; dx++) {
-    for (let dy = -1; dy <= 1; dy++) {
-      const b = hash.buckets.get(key(ix + dx, iy + dy));
-      if (!b) continue;
-      for (let j = 0; j < b.length; j++) {
-        const ex = hash.xs[b[j]] - x;
-        const ey = hash.ys[b[j]] - y;
+  for (let iy = Math.max(cy - 1, 0); iy <= Math.min(cy + 1, hash.ny - 1); iy++) {
+    for (let ix = Math.max(cx - 1, 0); ix <= Math.min(cx + 1, hash.nx - 1); ix++) {
+      const c = iy * hash.nx + ix;
+      for (let k = hash.cellStart[c]; k < hash.cellStart[c + 1]; k++) {
+        const i = hash.items[k];
+        const ex = hash.xs[i] - x;
+        const ey = hash.ys[i] - y;
         if (ex * ex + ey * ey < r2) return true;
       }
     }

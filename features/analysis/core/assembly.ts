@@ -1,0 +1,119 @@
+/**
+ * Assembly plan: cross-pattern ("star") tightening sequence and the passes of the ASME PCC-1
+ * legacy method [pub2]: snug (≤ 20 %), about 30 %, about 70 % and 100 % of target torque in the
+ * cross pattern, then circular passes at 100 % until the nuts stop turning. Torques in N·mm
+ * internally, shown in N·m and ft·lb.
+ */
+import type { PointMm } from "./design";
+import { torqueFromPreloadNmm } from "./torque";
+import { nmmToFtLb, nmmToNm } from "./units";
+
+/** Bit reversal of 0…n−1 for n = 2^k. Example: n = 8 → 0, 4, 2, 6, 1, 5, 3, 7 (labels 1-5-3-7-2-6-4-8). */
+export function bitReversalOrder(n: number): number[] {
+  const bits = Math.round(Math.log2(n));
+  return Array.from({ length: n }, (_, i) => {
+    let r = 0;
+    for (let b = 0; b < bits; b++) if (i & (1 << b)) r |= 1 << (bits - 1 - b);
+    return r;
+  });
+}
+
+export function isPowerOfTwo(n: number): boolean {
+  return n > 0 && (n & (n - 1)) === 0;
+}
+
+/**
+ * Farthest-first order: start at the first bolt, then always take the bolt whose distance to the
+ * nearest already-tightened bolt is largest; ties go to the bolt farthest from the last one
+ * tightened, then to the lowest label. Points must be in clockwise label order.
+ */
+export function farthestFirstOrder(points: PointMm[]): number[] {
+  const n = points.length;
+  if (n === 0) return [];
+  const scale = Math.max(1e-9, ...points.map((p) => Math.hypot(p.x, p.y)));
+  const tol = 1e-9 * scale;
+  const done = new Uint8Array(n);
+  const minDist = new Float64Array(n).fill(Infinity);
+  const order = [0];
+  done[0] = 1;
+  let last = 0;
+  const dist = (a: number, b: number) => Math.hypot(points[a].x - points[b].x, points[a].y - points[b].y);
+  for (let i = 0; i < n; i++) minDist[i] = dist(i, 0);
+  for (let step = 1; step < n; step++) {
+    let best = -1;
+    for (let i = 0; i < n; i++) {
+      if (done[i]) continue;
+      if (best < 0) { best = i; continue; }
+      if (minDist[i] > minDist[best] + tol) best = i;
+      else if (Math.abs(minDist[i] - minDist[best]) <= tol && dist(i, last) > dist(best, last) + tol) best = i;
+    }
+    done[best] = 1;
+    order.push(best);
+    last = best;
+    for (let i = 0; i < n; i++) if (!done[i]) minDist[i] = Math.min(minDist[i], dist(i, best));
+  }
+  return order;
+}
+
+/** Cross-pattern order (indices into `points`, which must be in clockwise label order). */
+export function crossPatternOrder(points: PointMm[]): number[] {
+  return isPowerOfTwo(points.length) && points.length > 2 ? bitReversalOrder(points.length) : farthestFirstOrder(points);
+}
+
+export interface AssemblyPass {
+  pass: number;
+  name: string;
+  pattern: "cross" | "circular";
+  fractionOfTarget: number;
+  torqueNm: number;
+  torqueFtLb: number;
+  note: string;
+}
+
+export interface AssemblyPlan {
+  /** Bolt ids in tightening order. */
+  sequence: string[];
+  sequenceRule: "bit-reversal" | "farthest-first";
+  targetPreloadN: number;
+  targetTorqueNm: number;
+  targetTorqueFtLb: number;
+  nutFactor: number;
+  nutFactorSource: string;
+  passes: AssemblyPass[];
+  source: string;
+}
+
+const PASSES: [string, "cross" | "circular", number, string][] = [
+  ["snug", "cross", 0.2, "Snug the nuts; do not exceed 20 % of target torque."],
+  ["pass 1", "cross", 0.3, "About 20–30 % of target; check the gasket gap is even."],
+  ["pass 2", "cross", 0.7, "About 50–70 % of target."],
+  ["pass 3", "cross", 1.0, "100 % of target in the cross pattern."],
+  ["circular", "circular", 1.0, "Clockwise, bolt after bolt, at 100 %; repeat until the nuts stop turning."],
+];
+
+/**
+ * Example: 8 bolts 3/4 in, K = 0.2, Fi = 67.1 kN → target 255.7 N·m (188.6 ft·lb), passes at
+ * 20/30/70/100 % and a circular pass.
+ */
+export function buildAssemblyPlan(input: {
+  boltIds: string[];
+  points: PointMm[];
+  targetPreloadN: number;
+  nutFactor: number;
+  nutFactorSource: string;
+  nominalDiameterMm: number;
+}): AssemblyPlan {
+  const order = crossPatternOrder(input.points);
+  const tNmm = torqueFromPreloadNmm(input.nutFactor, input.targetPreloadN, input.nominalDiameterMm);
+  return {
+    sequence: order.map((i) => input.boltIds[i]),
+    sequenceRule: isPowerOfTwo(input.points.length) && input.points.length > 2 ? "bit-reversal" : "farthest-first",
+    targetPreloadN: input.targetPreloadN,
+    targetTorqueNm: nmmToNm(tNmm),
+    targetTorqueFtLb: nmmToFtLb(tNmm),
+    nutFactor: input.nutFactor,
+    nutFactorSource: input.nutFactorSource,
+    passes: PASSES.map(([name, pattern, f, note], i) => ({ pass: i + 1, name, pattern, fractionOfTarget: f, torqueNm: nmmToNm(tNmm * f), torqueFtLb: nmmToFtLb(tNmm * f), note })),
+    source: "ASME PCC-1 legacy cross-pattern method (pass fractions as reproduced) [pub2]; T = K·F·d",
+  };
+}

@@ -1,0 +1,37 @@
+/**
+ * One check result. `id` is stable (e.g. "spacing.max-pitch:b3-b4") so the editor can point at
+ * the bolts or the field concerned; pair and bolt checks name their bolts in `subject`. Values
+ * are in the core's units (mm, N, MPa, mm²) or dimensionless, as `unit` says.
+ */
+export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable";
+
+export interface CheckRecord {
+  id: string;
+  title: string;
+  value: number | null;
+  limit: number | null;
+  unit: string;
+  status: CheckStatus;
+  source: string;
+  note: string;
+  subject?: string[];
+}
+
+/** Finite number or null: results must never carry NaN or Infinity. */
+export function finiteOrNull(v: number | null | undefined): number | null {
+  return v === null || v === undefined || !Number.isFinite(v) ? null : v;
+}
+
+export function makeCheck(c: CheckRecord): CheckRecord {
+  return { ...c, value: finiteOrNull(c.value), limit: finiteOrNull(c.limit) };
+}
+
+/** Pass when value ≥ limit (optionally warn within `warnBand` below it). */
+export function statusAtLeast(value: number, limit: number): CheckStatus {
+  return value >= limit ? "pass" : "fail";
+}
+
+/** Pass when value ≤ limit. */
+export function statusAtMost(value: number, limit: number): CheckStatus {
+  return value <= limit ? "pass" : "fail";
+}
