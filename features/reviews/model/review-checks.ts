@@ -12,7 +12,7 @@ export interface ReviewCheck {
   unit: string;
   source: string;
   note: string;
-  /** Bolt ids the check is about (the core names them in `subject`). */
+  /** Bolt ids the check is about (the core lists them in `boltIds`; older results in `subject`). */
   boltIds: string[];
 }
 
@@ -34,7 +34,7 @@ const scalar = (v: unknown): number | string | null => (typeof v === "number" ||
 const text = (v: unknown): string => (typeof v === "string" ? v : "");
 
 function boltIdsOf(check: Record<string, unknown>): string[] {
-  for (const key of ["subject", "boltIds", "bolts"]) {
+  for (const key of ["boltIds", "subject", "bolts"]) {
     const list = check[key];
     if (Array.isArray(list)) return list.filter((x): x is string => typeof x === "string");
   }
