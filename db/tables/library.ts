@@ -2,6 +2,7 @@ import type { ColumnType, Generated, Selectable } from "kysely";
 
 // Stockroom tables (organisation library rows, hidden built-ins) and design attachments with
 // their blobs: migrations/2026_12_01_000700_create_library_and_attachments.ts.
+// Insert may omit these (database default now()); reads are Dates.
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
 
@@ -21,8 +22,8 @@ export type AttachmentKind = "pdf" | "png" | "jpeg" | "dxf";
 
 interface Stamped {
   created_by: string | null;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
 }
 
 export interface LibraryGasketsTable extends Stamped {
@@ -74,7 +75,7 @@ export interface LibraryHiddenBuiltinsTable {
   kind: LibraryKind;
   builtin_id: string;
   hidden_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export interface BlobsTable {
@@ -83,7 +84,7 @@ export interface BlobsTable {
   bytes: Buffer;
   size_bytes: number;
   sha256: string;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export interface DesignAttachmentsTable {
@@ -97,7 +98,7 @@ export interface DesignAttachmentsTable {
   size_bytes: number;
   sha256: string;
   uploaded_by: string;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export type LibraryGasketRow = Selectable<LibraryGasketsTable>;

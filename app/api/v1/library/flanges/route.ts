@@ -1,0 +1,6 @@
+import { getChoices } from "@/features/library/route-handlers";
+
+// The organisation's flanges for pickers: built-in rows minus hidden ones, plus its own rows.
+export function GET(request: Request) {
+  return getChoices(request, "flange");
+}

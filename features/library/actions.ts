@@ -1,0 +1,101 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { getDb } from "@/db/index";
+import type { LibraryKind } from "@/db/tables/library";
+import type { ActionResult } from "@/server/action-result";
+import { requireViewer } from "@/server/auth/guard";
+import { createBolting, createFlangeTemplate, createGasket, deleteLibraryRow, setBuiltinHidden, updateGasket } from "./mutations";
+import { canEditLibrary } from "./policies";
+import { boltingInputSchema, deleteRowSchema, flangeInputSchema, gasketInputSchema, hideBuiltinSchema } from "./schema";
+
+// Stockroom entry points: authenticate, parse, authorise (admin), delegate, revalidate.
+const PATHS: Record<LibraryKind, string> = { gasket: "/library/gaskets", bolting: "/library/bolting", flange: "/library/flanges" };
+const NOT_ADMIN = "Only an admin of this organisation can change the Stockroom.";
+
+function fields(formData: FormData): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [k, v] of formData.entries()) if (typeof v === "string" && !k.startsWith("$ACTION")) out[k] = v;
+  return out;
+}
+
+function invalid(error: z.ZodError): ActionResult<never> {
+  return { ok: false, message: "Some values need attention.", fieldErrors: z.flattenError(error).fieldErrors as Record<string, string[]> };
+}
+
+async function editor() {
+  const viewer = await requireViewer();
+  return canEditLibrary(viewer) ? viewer : null;
+}
+
+export async function saveGasketAction(_prev: ActionResult<{ id: string }> | null, formData: FormData): Promise<ActionResult<{ id: string }>> {
+  const viewer = await editor();
+  if (!viewer) return { ok: false, message: NOT_ADMIN };
+  const raw = fields(formData);
+  const parsed = gasketInputSchema.safeParse(raw);
+  if (!parsed.success) return invalid(parsed.error);
+  const rowId = z.uuid().safeParse(raw.rowId);
+  const db = getDb();
+  const result = rowId.success
+    ? await updateGasket(db, viewer.organizationId, rowId.data, parsed.data)
+    : await createGasket(db, viewer.organizationId, viewer.userId, parsed.data);
+  if (!result.ok) return result;
+  if (!result.data) return { ok: false, message: "That row no longer exists." };
+  revalidatePath(PATHS.gasket);
+  return { ok: true, data: { id: result.data.id } };
+}
+
+/** One material with up to three size ranges: fields `<name>_1`, `<name>_2`, `<name>_3`; empty ranges are skipped. */
+export async function createBoltingAction(_prev: ActionResult<{ id: string }> | null, formData: FormData): Promise<ActionResult<{ id: string }>> {
+  const viewer = await editor();
+  if (!viewer) return { ok: false, message: NOT_ADMIN };
+  const raw = fields(formData);
+  const common = { name: raw.name, modulus_mpa: raw.modulus_mpa, source: raw.source, edition: raw.edition };
+  const rangeKeys = ["max_diameter_mm", "proof_mpa", "yield_mpa", "tensile_mpa", "allowable_mpa"] as const;
+  const inputs = [];
+  const fieldErrors: Record<string, string[]> = {};
+  for (const i of [1, 2, 3]) {
+    const range = Object.fromEntries(rangeKeys.map((k) => [k, raw[`${k}_${i}`] ?? ""]));
+    if (i > 1 && Object.values(range).every((v) => v.trim() === "")) continue;
+    const parsed = boltingInputSchema.safeParse({ ...common, ...range });
+    if (parsed.success) inputs.push(parsed.data);
+    else {
+      for (const [k, msgs] of Object.entries(z.flattenError(parsed.error).fieldErrors as Record<string, string[]>)) {
+        fieldErrors[(rangeKeys as readonly string[]).includes(k) ? `${k}_${i}` : k] = msgs;
+      }
+    }
+  }
+  if (Object.keys(fieldErrors).length > 0) return { ok: false, message: "Some values need attention.", fieldErrors };
+  const result = await createBolting(getDb(), viewer.organizationId, viewer.userId, inputs);
+  if (!result.ok) return result;
+  revalidatePath(PATHS.bolting);
+  return { ok: true, data: { id: result.data.id } };
+}
+
+export async function createFlangeTemplateAction(_prev: ActionResult<{ id: string }> | null, formData: FormData): Promise<ActionResult<{ id: string }>> {
+  const viewer = await editor();
+  if (!viewer) return { ok: false, message: NOT_ADMIN };
+  const parsed = flangeInputSchema.safeParse(fields(formData));
+  if (!parsed.success) return invalid(parsed.error);
+  const result = await createFlangeTemplate(getDb(), viewer.organizationId, viewer.userId, parsed.data);
+  if (!result.ok) return result;
+  revalidatePath(PATHS.flange);
+  return { ok: true, data: { id: result.data.id } };
+}
+
+export async function deleteLibraryRowAction(formData: FormData): Promise<void> {
+  const viewer = await editor();
+  const parsed = deleteRowSchema.safeParse(fields(formData));
+  if (!viewer || !parsed.success) return;
+  await deleteLibraryRow(getDb(), viewer.organizationId, parsed.data.kind, parsed.data.id);
+  revalidatePath(PATHS[parsed.data.kind]);
+}
+
+export async function setBuiltinHiddenAction(formData: FormData): Promise<void> {
+  const viewer = await editor();
+  const parsed = hideBuiltinSchema.safeParse(fields(formData));
+  if (!viewer || !parsed.success) return;
+  await setBuiltinHidden(getDb(), viewer.organizationId, viewer.userId, parsed.data.kind, parsed.data.builtinId, parsed.data.hidden);
+  revalidatePath(PATHS[parsed.data.kind]);
+}
