@@ -22,6 +22,7 @@ export function drawProfileChart(ctx: SheetContext, box: Box, profile: SheetProf
   const bottom = box.y + box.h - 24;
   const L = profile.pathLengthMm;
   const vals = profile.stressMpa.map(u.stressValue);
+  // Samples off the gasket (inside a bolt hole on a full-face path) are stored as 0 and drawn so.
   const limits = [profile.seatingMpa, profile.crushMpa].filter((v): v is number => v !== null).map(u.stressValue);
   const yMax = Math.max(...vals, ...limits) * 1.08 || 1;
   const yMin = Math.min(0, ...vals);
@@ -66,19 +67,32 @@ export function drawProfileChart(ctx: SheetContext, box: Box, profile: SheetProf
     doc.lineWidth(0.8).strokeColor(color).dash(4, { space: 2 }).moveTo(left, y).lineTo(right, y).stroke().undash();
     doc.font("sansBold").fontSize(6.2).fillColor(color).text(`${label} ${u.stress1(v)} ${u.stress}`, left + 4, y - 8, { lineBreak: false });
   };
-  limit(profile.seatingMpa, profile.seatingLabel, C.warn);
-  limit(profile.crushMpa, profile.crushLabel, C.fail);
+  limit(profile.seatingMpa, "seating", C.warn);
+  limit(profile.crushMpa, "crush limit", C.fail);
 
-  // The curve.
-  doc.lineWidth(1).strokeColor(C.ink900);
-  profile.sMm.forEach((s, i) => {
-    const x = X(s);
-    const y = Y(vals[i]);
-    if (i === 0) doc.moveTo(x, y);
-    else doc.lineTo(x, y);
-  });
-  doc.stroke();
+  // The stored curve at target preload, and the same curve at minimum preload (× minN/targetN).
+  const curve = (factor: number, width: number, color: string) => {
+    doc.lineWidth(width).strokeColor(color);
+    profile.sMm.forEach((s, i) => {
+      const x = X(s);
+      const y = Y(vals[i] * factor);
+      if (i === 0) doc.moveTo(x, y);
+      else doc.lineTo(x, y);
+    });
+    doc.stroke();
+  };
+  if (profile.minFactor < 0.999) curve(profile.minFactor, 0.6, C.ink300);
+  curve(1, 1, C.ink900);
   doc.lineWidth(0.5).strokeColor(C.ink700).rect(left, top, right - left, bottom - top).stroke();
-  if (profile.caseLabel) doc.font("sans").fontSize(6.3).fillColor(C.ink500).text(profile.caseLabel, right - 200, top + 6, { width: 196, align: "right", lineBreak: false });
+  // Legend.
+  const lx = right - 190;
+  const ly = top + 7;
+  doc.rect(lx - 4, ly - 3, 190, profile.minFactor < 0.999 ? 21 : 12).fill("#ffffff");
+  doc.lineWidth(1).strokeColor(C.ink900).moveTo(lx, ly + 3).lineTo(lx + 14, ly + 3).stroke();
+  doc.font("sans").fontSize(6.2).fillColor(C.ink700).text("at target preload (stored result)", lx + 18, ly, { lineBreak: false });
+  if (profile.minFactor < 0.999) {
+    doc.lineWidth(0.6).strokeColor(C.ink300).moveTo(lx, ly + 12).lineTo(lx + 14, ly + 12).stroke();
+    doc.text(`at minimum preload (× ${profile.minFactor.toFixed(2)})`, lx + 18, ly + 9, { lineBreak: false });
+  }
   doc.restore();
 }

@@ -120,7 +120,7 @@ function justifications(ctx: SheetContext, view: SheetResultView): void {
 function profileChart(ctx: SheetContext, view: SheetResultView, rows: BoltRow[]): void {
   if (!view.profile) return;
   ctx.ensure(210);
-  heading(ctx, "Gasket stress along the path", view.profile.caseLabel);
+  heading(ctx, "Gasket stress along the path", `${view.profile.pathLabel} · governing estimate: ${view.profile.estimator}`);
   const box = { x: ctx.content.x0, y: ctx.y, w: ctx.content.x1 - ctx.content.x0, h: 180 };
   drawProfileChart(ctx, box, view.profile, rows);
   ctx.y += box.h + 10;
@@ -128,12 +128,12 @@ function profileChart(ctx: SheetContext, view: SheetResultView, rows: BoltRow[])
 
 function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[]): void {
   const { doc, u, content } = ctx;
-  heading(ctx, "Assembly plan", "tighten in passes, each pass in the sequence below");
+  heading(ctx, "Assembly plan", view.planSource || "tighten in passes, each pass in the sequence below");
   if (view.passes.length > 0) {
     drawTable(
       ctx,
-      [{ header: "Pass", width: 1.2 }, { header: "Share of final", width: 1, align: "right", mono: true }, { header: `Torque ${u.torque}`, width: 1, align: "right", mono: true }, { header: "Pattern", width: 4, wrap: true }],
-      view.passes.map((p) => [p.label, p.fraction === null ? "—" : `${Math.round(p.fraction * 100)} %`, u.torque1(p.torqueNmm), p.pattern || "in sequence"]),
+      [{ header: "Pass", width: 1.1 }, { header: "Share of target", width: 1, align: "right", mono: true }, { header: `Torque ${u.torque}`, width: 1, align: "right", mono: true }, { header: "Pattern and note", width: 4.4, wrap: true }],
+      view.passes.map((p) => [p.label, `${Math.round(p.fraction * 100)} %`, u.torque1(p.torqueNmm), p.pattern]),
     );
   } else {
     doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result has no pass plan.", content.x0, ctx.y);
@@ -146,7 +146,7 @@ function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[])
     doc.font("mono").fontSize(7.2);
     const h = doc.heightOfString(seq, { width: w }) + 11;
     ctx.ensure(h + 6);
-    doc.font("sansBold").fontSize(7.2).fillColor(C.ink900).text("Tightening sequence (bolt numbers)", content.x0, ctx.y, { lineBreak: false });
+    doc.font("sansBold").fontSize(7.2).fillColor(C.ink900).text(`Tightening sequence (bolt numbers, ${view.sequenceNote})`, content.x0, ctx.y, { lineBreak: false });
     doc.font("mono").fontSize(7.2).fillColor(C.ink900).text(seq, content.x0, ctx.y + 11, { width: w });
     ctx.y += h + 10;
   }
@@ -169,6 +169,13 @@ function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
     ctx.y += 14;
   } else {
     drawTable(ctx, [{ header: "Data", width: 2, wrap: true }, { header: "Source", width: 3, wrap: true }, { header: "Edition", width: 2.4, wrap: true }, { header: "Tag", width: 0.6 }], view.editions.map((e) => [e.what, e.source, e.edition, e.confidence]));
+  }
+  const integrity = ctx.input.revision.integrityNote;
+  if (integrity) {
+    doc.font("sans").fontSize(7.2).fillColor(integrity.includes("mismatch") ? C.fail : C.ink700);
+    ctx.ensure(14);
+    doc.text(integrity, content.x0, ctx.y, { width: w });
+    ctx.y += doc.heightOfString(integrity, { width: w }) + 6;
   }
   if (view.warnings.length > 0) {
     heading(ctx, "Notes from the analysis");
@@ -221,7 +228,7 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
 
   const u = sheetUnits(input.units);
   const view = readResultView(input.result, u);
-  const rows = buildBoltRows(input.document, view.sequenceIds);
+  const rows = buildBoltRows(input.document, view.sequenceIds, view.boltPoints);
   const ctx = createContext(doc, input, u);
   const progress = async (f: number) => options.onProgress?.(f);
   ctx.newPage();

@@ -1,9 +1,12 @@
 import "server-only";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
+import { mm2ToIn2 } from "@/features/analysis/core/units";
 import type { SheetUnits } from "./format";
 
 /**
  * Reads what the sheet shows out of the stored JointAnalysis. The sheet draws the stored result
- * as it is; this module only picks fields and formats them, it computes nothing.
+ * as it is; this module only picks fields and formats them, it computes nothing (the one scaling,
+ * the minimum-preload curve, is the one the result itself prescribes: stress × minN/targetN).
  */
 export type SheetStatus = "pass" | "warn" | "fail" | "na";
 
@@ -18,22 +21,21 @@ export interface SheetCheck {
 
 export interface SheetProfile {
   sMm: number[];
+  /** At target preload, as stored. */
   stressMpa: number[];
+  /** minN / targetN of the stored preload window (1 when unknown). */
+  minFactor: number;
   pathLengthMm: number;
+  pathLabel: string;
   seatingMpa: number | null;
-  seatingLabel: string;
   crushMpa: number | null;
-  crushLabel: string;
-  /** Which preload case the curve shows, e.g. "minimum preload (target − scatter)". */
-  caseLabel: string;
-  /** Bolt positions projected onto the gasket path (the chart's s), mm; null if not stored. */
+  estimator: string;
   boltSMm: number[] | null;
 }
 
 export interface SheetPass {
   label: string;
-  /** Fraction of the final torque, 0…1 (null when the pass is a check pass at full torque). */
-  fraction: number | null;
+  fraction: number;
   torqueNmm: number;
   pattern: string;
 }
@@ -50,158 +52,113 @@ export interface SheetResultView {
   profile: SheetProfile | null;
   passes: SheetPass[];
   sequenceIds: string[];
+  sequenceNote: string;
+  planSource: string;
   editions: SheetEdition[];
   keyValues: { label: string; value: string }[];
   warnings: string[];
   coreVersion: string | null;
+  /** Bolt centres as stored in the result (mm), by bolt id. */
+  boltPoints: Map<string, { xMm: number; yMm: number }>;
+}
+
+// The embedded Plex "latin" subsets have no ≥ ≤ ⌀ → ≈; stored text is shown with plain stand-ins.
+const GLYPH_STAND_INS: [RegExp, string][] = [[/≥/g, ">="], [/≤/g, "<="], [/⌀/g, "Ø"], [/→/g, "->"], [/≈/g, "~"], [/√/g, "sqrt"]];
+export function plainText(s: string): string {
+  return GLYPH_STAND_INS.reduce((acc, [re, to]) => acc.replace(re, to), s);
 }
 
 type Obj = Record<string, unknown>;
 const isObj = (v: unknown): v is Obj => typeof v === "object" && v !== null && !Array.isArray(v);
-// The embedded Plex "latin" subsets have no ≥ ≤ ⌀ →; the stored text is shown with plain stand-ins.
-const GLYPH_STAND_INS: [RegExp, string][] = [[/≥/g, ">="], [/≤/g, "<="], [/⌀/g, "Ø"], [/→/g, "->"], [/≈/g, "~"], [/±/g, "±"]];
-export function plainText(s: string): string {
-  return GLYPH_STAND_INS.reduce((acc, [re, to]) => acc.replace(re, to), s);
-}
-const str = (v: unknown): string => (typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "");
-const numOrNull = (v: unknown): number | null => (typeof v === "number" && Number.isFinite(v) ? v : null);
-
-function pick(o: Obj, ...keys: string[]): unknown {
-  for (const k of keys) if (o[k] !== undefined && o[k] !== null) return o[k];
-  return undefined;
-}
+const text = (v: unknown): string => (typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "");
 
 export function normaliseStatus(v: unknown): SheetStatus {
-  const s = str(v).toLowerCase();
-  if (s === "pass" || s === "ok") return "pass";
-  if (s === "warn" || s === "warning") return "warn";
-  if (s === "fail" || s === "error") return "fail";
-  return "na";
+  return v === "pass" || v === "warn" || v === "fail" ? v : "na";
 }
 
-/** A check value with its quantity kind ("length", "stress", "force", "torque", "ratio", …). */
-function formatQuantity(v: unknown, quantity: string, u: SheetUnits): string {
-  if (typeof v === "string") return v;
-  const n = numOrNull(v);
-  if (n === null) return "—";
-  switch (quantity) {
-    case "length":
-      return `${u.len(n)} ${u.length}`;
-    case "stress":
-      return `${u.stress1(n)} ${u.stress}`;
-    case "force":
-      return `${u.force1(n)} ${u.force}`;
-    case "torque":
-      return `${u.torque1(n)} ${u.torque}`;
-    case "percent":
-      return `${(n * 100).toFixed(1)} %`;
+function plainNumber(n: number): string {
+  const a = Math.abs(n);
+  return a >= 1000 ? n.toFixed(0) : a >= 10 ? n.toFixed(1) : a >= 1 ? n.toFixed(2) : n.toFixed(3);
+}
+
+/** A check value in its core unit ("MPa", "mm", "N", "mm²", or a plain count/ratio unit). */
+export function formatCheckValue(v: number | null, unit: string, u: SheetUnits): string {
+  if (v === null) return "—";
+  switch (unit) {
+    case "MPa":
+      return `${u.stress1(v)} ${u.stress}`;
+    case "mm":
+      return `${u.len(v)} ${u.length}`;
+    case "N":
+      return `${u.force1(v)} ${u.force}`;
+    case "mm²":
+      return u.system === "US" ? `${mm2ToIn2(v).toFixed(4)} in²` : `${v.toFixed(0)} mm²`;
     default:
-      return Math.abs(n) >= 100 ? n.toFixed(0) : Math.abs(n) >= 1 ? n.toFixed(2) : n.toFixed(3);
+      return `${plainNumber(v)}${unit ? ` ${plainText(unit)}` : ""}`;
   }
 }
 
-function readChecks(result: Obj, u: SheetUnits): SheetCheck[] {
-  const list = pick(result, "checks");
-  if (!Array.isArray(list)) return [];
-  return list.filter(isObj).map((c, i) => {
-    const quantity = str(pick(c, "quantity", "unitKind", "kind"));
-    const limitObj = pick(c, "limit");
-    let limit = "—";
-    if (isObj(limitObj)) {
-      const op = str(pick(limitObj, "op", "comparison"));
-      limit = `${op ? `${op} ` : ""}${formatQuantity(pick(limitObj, "value"), quantity, u)}`;
-    } else if (limitObj !== undefined) limit = formatQuantity(limitObj, quantity, u);
-    const src = pick(c, "source");
-    return {
-      id: str(pick(c, "id")) || `check-${i + 1}`,
-      title: str(pick(c, "title", "label", "name")) || str(pick(c, "id")),
-      value: formatQuantity(pick(c, "value"), quantity, u),
-      limit,
-      status: normaliseStatus(pick(c, "status", "verdict")),
-      source: isObj(src) ? [str(src.source), str(src.edition)].filter(Boolean).join(", ") : str(src),
-    };
-  });
-}
-
-function readProfile(result: Obj): SheetProfile | null {
-  const p = pick(result, "gasketStressProfile", "gasketProfile", "profile", "gasketStress");
-  if (!isObj(p)) return null;
-  let sMm: number[] = [];
-  let stressMpa: number[] = [];
-  const samples = pick(p, "samples", "points");
-  if (Array.isArray(samples)) {
-    for (const q of samples) {
-      if (!isObj(q)) continue;
-      const s = numOrNull(pick(q, "sMm", "s"));
-      const v = numOrNull(pick(q, "stressMpa", "minStressMpa", "value"));
-      if (s !== null && v !== null) {
-        sMm.push(s);
-        stressMpa.push(v);
-      }
-    }
-  } else {
-    const s = pick(p, "sMm");
-    const v = pick(p, "stressMpa", "minStressMpa");
-    if (Array.isArray(s) && Array.isArray(v)) {
-      sMm = s as number[];
-      stressMpa = v as number[];
-    }
-  }
-  if (sMm.length < 2) return null;
-  return {
-    sMm,
-    stressMpa,
-    pathLengthMm: numOrNull(pick(p, "pathLengthMm", "lengthMm")) ?? sMm[sMm.length - 1],
-    seatingMpa: numOrNull(pick(p, "seatingMpa", "requiredSeatingMpa", "yMpa")),
-    seatingLabel: str(pick(p, "seatingLabel")) || "seating stress",
-    crushMpa: numOrNull(pick(p, "crushMpa", "maxAllowedMpa", "qsMaxMpa")),
-    crushLabel: str(pick(p, "crushLabel")) || "crush limit",
-    caseLabel: str(pick(p, "caseLabel", "case")) || "",
-    boltSMm: Array.isArray(pick(p, "boltSOnPathMm", "boltSMm")) ? (pick(p, "boltSOnPathMm", "boltSMm") as number[]) : null,
-  };
-}
-
-function readAssembly(result: Obj): { passes: SheetPass[]; sequenceIds: string[] } {
-  const a = pick(result, "assemblyPlan", "assembly", "tightening");
-  if (!isObj(a)) return { passes: [], sequenceIds: [] };
-  const passesRaw = pick(a, "passes");
-  const passes: SheetPass[] = Array.isArray(passesRaw)
-    ? passesRaw.filter(isObj).map((p, i) => ({
-        label: str(pick(p, "label", "name")) || `Pass ${i + 1}`,
-        fraction: numOrNull(pick(p, "fraction", "fractionOfFinal")) ?? (numOrNull(pick(p, "percent")) !== null ? (pick(p, "percent") as number) / 100 : null),
-        torqueNmm: numOrNull(pick(p, "torqueNmm")) ?? 0,
-        pattern: str(pick(p, "pattern", "order", "note")),
-      }))
-    : [];
-  const seq = pick(a, "sequence", "sequenceIds", "order");
-  const sequenceIds = Array.isArray(seq) ? seq.map((x) => (isObj(x) ? str(pick(x, "id", "boltId")) : str(x))).filter(Boolean) : [];
-  return { passes, sequenceIds };
-}
-
-function readEditions(result: Obj): SheetEdition[] {
-  const e = pick(result, "editions", "sources", "provenance", "tablesUsed");
-  if (!Array.isArray(e)) return [];
-  return e.filter(isObj).map((r) => ({
-    what: str(pick(r, "what", "table", "name", "id")),
-    source: str(pick(r, "source")),
-    edition: str(pick(r, "edition")),
-    confidence: str(pick(r, "confidence")),
+export function readResultView(stored: unknown, u: SheetUnits): SheetResultView {
+  const r = (isObj(stored) ? stored : {}) as Partial<JointAnalysis>;
+  const checks: SheetCheck[] = (r.checks ?? []).map((c) => ({
+    id: c.id,
+    title: c.boltIds && c.boltIds.length > 0 ? `${text(c.title)} (${c.boltIds.join(", ")})` : text(c.title),
+    value: formatCheckValue(c.value, c.unit, u),
+    limit: formatCheckValue(c.limit, c.unit, u),
+    status: normaliseStatus(c.status),
+    source: text(c.source),
   }));
-}
-
-export function readResultView(result: unknown, u: SheetUnits): SheetResultView {
-  const r = isObj(result) ? result : {};
-  const { passes, sequenceIds } = readAssembly(r);
-  const warnings = pick(r, "warnings");
-  const kv = pick(r, "summary");
+  const gs = r.gasketStress;
+  const pre = r.preload;
+  const profile: SheetProfile | null =
+    gs && gs.profile && gs.profile.sMm.length > 1
+      ? {
+          sMm: gs.profile.sMm,
+          stressMpa: gs.profile.stressMpa,
+          minFactor: pre && pre.targetN > 0 ? pre.minN / pre.targetN : 1,
+          pathLengthMm: gs.pathLengthMm,
+          pathLabel: gs.pathKind === "bolt-path" ? "along the bolt path (full-face gasket)" : "along the gasket centre line",
+          seatingMpa: gs.seatingMpa ?? null,
+          crushMpa: gs.crushMpa ?? null,
+          estimator: gs.governing === "beam" ? "flange as a beam on an elastic foundation" : "cone superposition",
+          boltSMm: gs.boltSOnPathMm ?? null,
+        }
+      : null;
+  const plan = r.assemblyPlan;
+  const passes: SheetPass[] = (plan?.passes ?? []).map((p) => ({
+    label: `${p.pass}. ${p.name}`,
+    fraction: p.fractionOfTarget,
+    torqueNmm: p.torqueNm * 1000,
+    pattern: `${p.pattern === "cross" ? "Cross pattern" : "Circular"}: ${text(p.note)}`,
+  }));
+  const editions: SheetEdition[] = (r.catalogueEditions ?? []).map((e) => ({
+    what: `${text(e.table)}: ${text(e.rowId)}`,
+    source: text(e.source),
+    edition: text(e.edition),
+    confidence: text(e.confidence),
+  }));
+  const keyValues: { label: string; value: string }[] = [];
+  if (pre) {
+    keyValues.push(
+      { label: "Target preload", value: `${u.force1(pre.targetN)} ${u.force} (${u.stress1(pre.targetStressMpa)} ${u.stress})` },
+      { label: "Preload window", value: `${u.force1(pre.minN)} … ${u.force1(pre.maxN)} ${u.force} (±${Math.round(pre.scatter * 100)} %)` },
+      { label: "Target torque", value: `${u.torque1(pre.targetTorqueNmm)} ${u.torque} (K ${pre.nutFactor})` },
+    );
+  }
+  if (gs) keyValues.push({ label: "Gasket stress (target)", value: `${u.stress1(gs.minMpa)} … ${u.stress1(gs.maxMpa)} ${u.stress}` });
+  if (r.summary) keyValues.push({ label: "Checks", value: `${r.summary.passCount} pass · ${r.summary.warnCount} warn · ${r.summary.failCount} fail` });
+  const boltPoints = new Map((r.bolts ?? []).map((b) => [b.id, { xMm: b.xMm, yMm: b.yMm }]));
   return {
-    checks: readChecks(r, u),
-    profile: readProfile(r),
+    checks,
+    profile,
     passes,
-    sequenceIds,
-    editions: readEditions(r),
-    keyValues: Array.isArray(kv) ? kv.filter(isObj).map((x) => ({ label: str(x.label), value: str(x.value) })) : [],
-    warnings: Array.isArray(warnings) ? warnings.map((w) => (isObj(w) ? str(pick(w, "message", "text")) : str(w))).filter(Boolean) : [],
-    coreVersion: str(pick(r, "coreVersion")) || null,
+    sequenceIds: plan?.sequence ?? [],
+    sequenceNote: plan ? (plan.sequenceRule === "bit-reversal" ? "cross pattern (bit reversal)" : "cross pattern (farthest first)") : "",
+    planSource: text(plan?.source ?? ""),
+    editions,
+    keyValues,
+    warnings: (r.warnings ?? []).map(text),
+    coreVersion: r.coreVersion ?? null,
+    boltPoints,
   };
 }

@@ -28,6 +28,8 @@ export interface SheetInput {
     /** ISO 8601. */
     approvedAt: string | null;
     contentHash: string | null;
+    /** One sentence on the snapshot's hash check (printed under the editions), if known. */
+    integrityNote?: string;
   };
   document: JointDesign;
   result: unknown;

@@ -3,8 +3,9 @@ import { getBoltPath, getBoltPoint } from "@/features/analysis/core/geometry";
 
 /**
  * One row per bolt, shared by the PDF sheet, the hole list (CSV) and the drilling template (DXF)
- * so the three can never disagree. Positions come from the core's own geometry helper applied to
- * the stored document (the same code the analysis used), in mm from the flange centre, y up.
+ * so the three can never disagree. Positions are the stored result's bolt centres when given
+ * (`storedPoints`, by id), else the core's own geometry helper applied to the stored document
+ * (the code the analysis itself uses). mm from the flange centre, y up.
  */
 export interface BoltRow {
   /** 1-based position in the document's bolt list (the number stamped on the sheet). */
@@ -33,6 +34,7 @@ export function clockwiseAngleDeg(xMm: number, yMm: number): number {
 export function buildBoltRows(
   design: Pick<JointDesign, "outline" | "boltPath" | "bolts">,
   tighteningSequenceIds: readonly string[] = [],
+  storedPoints?: ReadonlyMap<string, { xMm: number; yMm: number }>,
 ): BoltRow[] {
   const path = getBoltPath(design.outline, design.boltPath);
   const L = path.lengthMm;
@@ -41,7 +43,8 @@ export function buildBoltRows(
     if (!order.has(id)) order.set(id, i + 1);
   });
   const rows: BoltRow[] = design.bolts.map((b, i) => {
-    const p = getBoltPoint(path, b);
+    const stored = storedPoints?.get(b.id);
+    const p = stored ? { x: stored.xMm, y: stored.yMm } : getBoltPoint(path, b);
     return {
       number: i + 1,
       id: b.id,

@@ -1,0 +1,34 @@
+import type { ColumnType, Generated } from "kysely";
+
+// Tables of migrations/2026_12_01_000800_create_export_files.ts.
+type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+
+export type ExportFileStatus = "queued" | "running" | "done" | "failed";
+
+export interface ExportFilesTable {
+  /** Also the pg-boss job id and the id in /api/v1/jobs/[jobId]. */
+  id: Generated<string>;
+  organization_id: string;
+  design_id: string;
+  revision_id: string;
+  /** "spacing-sheet" (the only background export so far). */
+  kind: string;
+  /** Render options, e.g. { paper: "a4", units: "SI" }. */
+  options: ColumnType<unknown, string | undefined, string>;
+  status: Generated<ExportFileStatus>;
+  /** 0…100. */
+  progress: Generated<number>;
+  file_name: string;
+  content_type: string;
+  bytes: Buffer | null;
+  byte_size: number | null;
+  error: string | null;
+  requested_by: string | null;
+  created_at: Generated<Timestamp>;
+  updated_at: Generated<Timestamp>;
+  finished_at: Timestamp | null;
+}
+
+export interface ExportTables {
+  export_files: ExportFilesTable;
+}

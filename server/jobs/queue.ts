@@ -1,0 +1,60 @@
+import "server-only";
+import PgBoss from "pg-boss";
+import { getEnv } from "@/server/env";
+
+// The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss", which
+// pg-boss installs and migrates itself on start). Started lazily, the first time a route needs
+// the queue, so `next build` and pages that never export touch nothing. Kept on globalThis so
+// that development hot reloads do not start a second instance.
+const globalForBoss = globalThis as unknown as { sealpitchBoss?: Promise<PgBoss>; sealpitchWorkers?: Set<string> };
+
+export const SHEET_QUEUE = "spacing-sheet";
+
+async function startBoss(): Promise<PgBoss> {
+  const boss = new PgBoss({
+    connectionString: getEnv().DATABASE_URL,
+    max: 3,
+    application_name: "sealpitch-jobs",
+    // No cron schedules; maintenance (expiry, archiving) stays on.
+    schedule: false,
+  });
+  boss.on("error", (error: Error) => console.error(`[jobs] ${error.message}`));
+  await boss.start();
+  await boss.createQueue(SHEET_QUEUE, { name: SHEET_QUEUE, retryLimit: 0, expireInSeconds: 300, retentionMinutes: 24 * 60 });
+  return boss;
+}
+
+/** The started queue (a failed start is forgotten, so the next call tries again). */
+export function getQueue(): Promise<PgBoss> {
+  if (!globalForBoss.sealpitchBoss) {
+    globalForBoss.sealpitchBoss = startBoss().catch((error) => {
+      globalForBoss.sealpitchBoss = undefined;
+      throw error;
+    });
+  }
+  return globalForBoss.sealpitchBoss;
+}
+
+/** Registers a worker for `name` once per process. */
+export async function ensureWorker<T extends object>(name: string, handler: (data: T) => Promise<void>): Promise<void> {
+  const workers = (globalForBoss.sealpitchWorkers ??= new Set());
+  if (workers.has(name)) return;
+  workers.add(name);
+  try {
+    const boss = await getQueue();
+    await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async (jobs) => {
+      for (const job of jobs) await handler(job.data);
+    });
+  } catch (error) {
+    workers.delete(name);
+    throw error;
+  }
+}
+
+/** Stops the queue of this process (tests and scripts; the server keeps it for its lifetime). */
+export async function stopQueue(): Promise<void> {
+  const pending = globalForBoss.sealpitchBoss;
+  globalForBoss.sealpitchBoss = undefined;
+  globalForBoss.sealpitchWorkers = undefined;
+  if (pending) await (await pending).stop({ graceful: true, wait: true, timeout: 5000 });
+}
