@@ -1,0 +1,71 @@
+/**
+ * What the readout (results panel) and the canvas overlays need from the core's JointAnalysis,
+ * in one flat shape. Internal units (mm, N, MPa, N·mm). The profile is stored at target preload;
+ * the readout shows it at minimum preload too (the solution is linear in the bolt forces, see
+ * core/gasket-stress.ts), because seating is judged at minimum preload.
+ */
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
+import type { CheckStatus } from "@/features/analysis/core/checks/check-record";
+
+export type { CheckStatus };
+
+export interface CheckView {
+  id: string;
+  title: string;
+  value: number | null;
+  limit: number | null;
+  unit: string;
+  status: CheckStatus;
+  source: string;
+  note: string;
+  /** Bolts the check concerns: one (a ring on the canvas), two (a bracket) or none (whole joint). */
+  boltIds: string[];
+}
+
+export interface ProfileView {
+  pathLengthMm: number;
+  sMm: number[];
+  /** At target preload, MPa (NaN-free; samples off the gasket are dropped). */
+  stressMpa: number[];
+  /** Factor that turns target-preload stress into minimum-preload stress. */
+  minFactor: number;
+  minMpa: number;
+  maxMpa: number;
+  meanMpa: number;
+  boltSOnPathMm: number[];
+}
+
+export interface ReadoutView {
+  checks: CheckView[];
+  profile: ProfileView;
+  seatingMpa: number;
+  crushMpa: number | null;
+  analysis: JointAnalysis;
+}
+
+export function toReadoutView(result: JointAnalysis): ReadoutView {
+  const gs = result.gasketStress;
+  const s: number[] = [];
+  const v: number[] = [];
+  gs.profile.sMm.forEach((x, i) => {
+    if (gs.profile.onGasket[i]) {
+      s.push(x);
+      v.push(gs.profile.stressMpa[i]);
+    }
+  });
+  const minFactor = result.preload.targetN > 0 ? result.preload.minN / result.preload.targetN : 1;
+  return {
+    checks: result.checks.map((c) => ({ ...c, boltIds: c.boltIds ?? c.subject ?? [] })),
+    profile: { pathLengthMm: gs.pathLengthMm, sMm: s, stressMpa: v, minFactor, minMpa: gs.minMpa, maxMpa: gs.maxMpa, meanMpa: gs.meanMpa, boltSOnPathMm: gs.boltSOnPathMm },
+    seatingMpa: gs.seatingMpa,
+    crushMpa: gs.crushMpa,
+    analysis: result,
+  };
+}
+
+/** Bolt ids a check concerns, or those given directly (highlight from the review screen). */
+export function highlightedBolts(view: ReadoutView | null, highlight?: { boltIds?: string[]; checkId?: string }): string[] {
+  if (!highlight) return [];
+  const fromCheck = highlight.checkId && view ? view.checks.find((c) => c.id === highlight.checkId)?.boltIds ?? [] : [];
+  return [...new Set([...(highlight.boltIds ?? []), ...fromCheck])];
+}
