@@ -1,17 +1,20 @@
 import Link from "next/link";
+import { getDb } from "@/db/index";
+import { DeskReviewLists } from "@/features/reviews/components/desk-review-lists";
+import { getDeskLists } from "@/features/reviews/queries";
 import type { Viewer } from "@/server/auth/guard";
 
 /**
- * The desk's work lists. Placeholder owned by the review engineer, who replaces this file with
- * the real lists (awaiting my review, returned to me, recently approved); keep the props.
+ * The desk's work lists: the review lists are server-rendered first (fallback) and then kept
+ * fresh by SWR from /api/v1/desk, so a submission or return shows up without a reload.
  */
 export async function DeskLists({ viewer }: { viewer: Viewer }) {
+  const lists = await getDeskLists(getDb(), viewer);
   return (
-    <section aria-labelledby="desk-lists" className="rounded-plate bg-white p-5 shadow-plate">
-      <h2 id="desk-lists" className="text-lead font-semibold">Your work</h2>
-      <p className="mt-2 text-ink-700">
-        Nothing waits for you in {viewer.organizationName} yet. Open the <Link href="/designs" className="underline">Joint register</Link> to
-        start a design.
+    <section aria-label="Your work" className="flex flex-col gap-3">
+      <DeskReviewLists fallback={lists} />
+      <p className="text-table text-ink-600">
+        All designs of {viewer.organizationName} are in the <Link href="/designs" className="underline">Joint register</Link>.
       </p>
     </section>
   );

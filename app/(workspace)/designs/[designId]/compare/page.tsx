@@ -1,0 +1,37 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { z } from "zod";
+import { getDb } from "@/db/index";
+import { RevisionComparison } from "@/features/reviews/components/revision-comparison";
+import { compareRevisions, listRevisionSummaries } from "@/features/reviews/queries";
+import { CautionPanel } from "@/features/ui/caution-panel";
+import { requireViewer } from "@/server/auth/guard";
+
+export const metadata: Metadata = { title: "Revision comparison" };
+
+const optionalNumber = z.coerce.number().int().min(1).max(100_000).optional().catch(undefined);
+
+export default async function CompareRevisionsPage(props: { params: Promise<{ designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const viewer = await requireViewer();
+  const { designId } = await props.params;
+  if (!z.uuid().safeParse(designId).success) notFound();
+  const search = await props.searchParams;
+  const db = getDb();
+  const numbers = (await listRevisionSummaries(db, viewer.organizationId, designId)).map((r) => r.number);
+  if (numbers.length === 0) notFound();
+  // Without a choice: the working revision against the one before it.
+  const to = optionalNumber.parse(search.to) ?? numbers.at(-1)!;
+  const from = optionalNumber.parse(search.from) ?? numbers.filter((n) => n < to).at(-1) ?? to;
+  const comparison = await compareRevisions(db, viewer.organizationId, designId, from, to);
+  if (!comparison) notFound();
+  return (
+    <div className="flex flex-col gap-6">
+      <header>
+        <p className="text-table uppercase tracking-wider text-brass-600">Revision comparison</p>
+        <h1 className="mt-1 text-display font-semibold">{comparison.designName}</h1>
+      </header>
+      <RevisionComparison comparison={comparison} />
+      <CautionPanel compact />
+    </div>
+  );
+}

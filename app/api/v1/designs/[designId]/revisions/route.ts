@@ -1,0 +1,15 @@
+import { z } from "zod";
+import { getDb } from "@/db/index";
+import { listRevisionSummaries } from "@/features/reviews/queries";
+import { authorizeApi, jsonError } from "@/server/auth/guard";
+
+// Every revision of a design: number, status, content hash and times (no documents).
+export async function GET(request: Request, context: { params: Promise<{ designId: string }> }): Promise<Response> {
+  const auth = await authorizeApi(request);
+  if (!auth.ok) return auth.response;
+  const { designId } = await context.params;
+  if (!z.uuid().safeParse(designId).success) return jsonError(404, "No such design.");
+  const revisions = await listRevisionSummaries(getDb(), auth.viewer.organizationId, designId);
+  if (revisions.length === 0) return jsonError(404, "No such design.");
+  return Response.json({ revisions }, { headers: { "cache-control": "no-store" } });
+}

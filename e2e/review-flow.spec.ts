@@ -1,0 +1,177 @@
+import { randomUUID } from "node:crypto";
+import { expect, test, type APIRequestContext, type Browser, type Page } from "@playwright/test";
+import { buildCircularFlange } from "@/features/designs/model/templates";
+import { signIn } from "./helpers/sign-in";
+
+// The whole review loop with two people at two browsers: Dana designs and submits, Arlo gets the
+// mail, comments on a bolt and returns it, Dana fixes and resubmits, Arlo approves. Both desks stay
+// open the whole time and must change without a reload. The design is this spec's own.
+const DANA = "dana.designer@kestrel-ridge.example";
+const ARLO = "arlo.approver@kestrel-ridge.example";
+const APP_URL = process.env.APP_URL ?? "http://127.0.0.1:3100";
+const OUTBOX_URL = process.env.OUTBOX_URL ?? "http://127.0.0.1:2590";
+
+interface OutboxMessage { id: string; to: string[] | string; subject: string; text: string }
+
+async function waitForMail(request: APIRequestContext, to: string, subjectPart: string): Promise<OutboxMessage> {
+  let found: OutboxMessage | undefined;
+  await expect
+    .poll(async () => {
+      const response = await request.get(`${OUTBOX_URL}/api/messages?to=${encodeURIComponent(to)}`);
+      const messages = (await response.json()) as OutboxMessage[];
+      found = messages.find((m) => m.subject.includes(subjectPart));
+      return Boolean(found);
+    }, { timeout: 15_000, message: `mail to ${to} about ${subjectPart}` })
+    .toBe(true);
+  return found!;
+}
+
+async function mailsTo(request: APIRequestContext, to: string, subjectPart: string): Promise<number> {
+  const response = await request.get(`${OUTBOX_URL}/api/messages?to=${encodeURIComponent(to)}`);
+  return ((await response.json()) as OutboxMessage[]).filter((m) => m.subject.includes(subjectPart)).length;
+}
+
+async function signedInPage(browser: Browser, email: string): Promise<Page> {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, email);
+  return page;
+}
+
+test("submit → mail → comment on a bolt → return → fix → resubmit → approve, desks updating live", async ({ browser, request }) => {
+  test.setTimeout(120_000);
+  const name = `Review loop E-2107 ${randomUUID().slice(0, 6)}`;
+  const dana = await signedInPage(browser, DANA);
+  const arlo = await signedInPage(browser, ARLO);
+  // Both desks stay open; only SWR polling may change them.
+  const danaDesk = await dana.context().newPage();
+  await danaDesk.goto("/desk");
+  const arloDesk = await arlo.context().newPage();
+  await arloDesk.goto("/desk");
+  await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name);
+
+  const document = buildCircularFlange(
+    { name, equipmentTag: "E-2107", units: "SI" },
+    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+  );
+  const created = await dana.request.post("/api/v1/designs", { data: { name, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  expect(created.status(), await created.text()).toBe(201);
+  const { designId } = (await created.json()) as { designId: string };
+  const reviewPath = `/designs/${designId}/revisions/1`;
+
+  // Dana submits.
+  await dana.goto(reviewPath);
+  await expect(dana.getByTestId("revision-status")).toHaveText("Draft");
+  await dana.getByRole("button", { name: "Submit for review" }).click();
+  await expect(dana.getByTestId("revision-status")).toHaveText("In review");
+  await expect(dana.getByTestId("snapshot-integrity")).toContainText("Snapshot integrity: verified");
+
+  // Arlo's open desk picks it up; the mail carries the review link; the submitter gets none.
+  await expect(arloDesk.getByTestId("desk-waiting")).toContainText(name, { timeout: 15_000 });
+  const requested = await waitForMail(request, ARLO, name);
+  expect(requested.subject).toBe(`Review requested: ${name} revision 1`);
+  const link = requested.text.match(/https?:\/\/\S+\/designs\/[0-9a-f-]+\/revisions\/\d+/)?.[0];
+  expect(link).toBe(`${APP_URL}${reviewPath}`);
+  expect(await mailsTo(request, DANA, `Review requested: ${name}`)).toBe(0);
+
+  // Arlo opens the link, comments on bolt b3, shows it on the drawing, returns the revision.
+  await arlo.goto(link!);
+  await expect(arlo.getByTestId("revision-status")).toHaveText("In review");
+  const commentForm = arlo.getByRole("form", { name: "Add a comment" });
+  await commentForm.getByLabel("Points at").selectOption({ label: "Bolt b3" });
+  await commentForm.getByLabel("Comment").fill("b3 sits too close to the nozzle reinforcement; move it clockwise.");
+  await commentForm.getByRole("button", { name: "Post comment" }).click();
+  const comment = arlo.getByTestId("comment").filter({ hasText: "move it clockwise" });
+  await expect(comment).toBeVisible();
+  await comment.getByRole("button", { name: "Show Bolt b3 on the drawing" }).click();
+  await expect(arlo.getByTestId("highlight-status")).toHaveText("Highlighted on the drawing: bolt b3");
+  await expect(arlo.getByTestId("review-drawing")).toHaveAttribute("data-highlight-bolts", "b3");
+
+  const returnForm = arlo.getByRole("form", { name: "Return to designer" });
+  await returnForm.getByLabel("What needs to change").fill("Move b3 away from the nozzle, then resubmit.");
+  await returnForm.getByRole("button", { name: "Return to designer" }).click();
+  await expect(arlo.getByTestId("revision-status")).toHaveText("Returned");
+
+  await expect(danaDesk.getByTestId("desk-returned")).toContainText(name, { timeout: 15_000 });
+  await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name, { timeout: 15_000 });
+  const returnedMail = await waitForMail(request, DANA, `Returned: ${name}`);
+  expect(returnedMail.text).toContain("Move b3 away from the nozzle, then resubmit.");
+  expect(returnedMail.text).toContain(`${APP_URL}${reviewPath}`);
+
+  // Dana fixes it through the designs API (a returned revision is editable) and resubmits.
+  const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { workingRevision: { version: number; document: typeof document } };
+  const fixed = { ...current.workingRevision.document, bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b3" ? { ...b, sMm: b.sMm + 4 } : b)) };
+  const saved = await dana.request.put(`/api/v1/designs/${designId}`, { data: { baseVersion: current.workingRevision.version, document: fixed }, headers: { origin: APP_URL } });
+  expect(saved.status(), await saved.text()).toBe(200);
+  await dana.goto(reviewPath);
+  await expect(dana.getByTestId("revision-status")).toHaveText("Returned");
+  await dana.getByRole("button", { name: "Resubmit for review" }).click();
+  await expect(dana.getByTestId("revision-status")).toHaveText("In review");
+  await expect(danaDesk.getByTestId("desk-returned")).not.toContainText(name, { timeout: 15_000 });
+  await expect(arloDesk.getByTestId("desk-waiting")).toContainText(name, { timeout: 15_000 });
+
+  // Arlo approves, justifying every warning.
+  await arlo.goto(reviewPath);
+  const approveForm = arlo.getByRole("form", { name: "Approve" });
+  const justifications = approveForm.getByRole("textbox", { name: /^Justification for/ });
+  const count = await justifications.count();
+  for (let i = 0; i < count; i++) await justifications.nth(i).fill("Accepted: pitch checked against the gasket maker's data sheet.");
+  await approveForm.getByRole("button", { name: "Approve revision" }).click();
+  await expect(arlo.getByTestId("revision-status")).toHaveText("Approved");
+  if (count > 0) await expect(arlo.getByTestId("justification").first()).toContainText("Accepted: pitch checked");
+  await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name, { timeout: 15_000 });
+  const approvedMail = await waitForMail(request, DANA, `Approved: ${name}`);
+  expect(approvedMail.text).toContain(`${APP_URL}${reviewPath}`);
+
+  // The approved revision refuses the designs save path.
+  const refused = await dana.request.put(`/api/v1/designs/${designId}`, { data: { baseVersion: current.workingRevision.version + 10, document: fixed }, headers: { origin: APP_URL } });
+  expect(refused.ok()).toBe(false);
+
+  // The activity log on the review screen tells the story.
+  const activity = arlo.getByRole("list", { name: "Activity entries" });
+  await expect(activity).toContainText("approved");
+  await expect(activity).toContainText("returned");
+
+  await dana.context().close();
+  await arlo.context().close();
+});
+
+test("an approved revision starts the next one, and the comparison shows what changed", async ({ browser }) => {
+  const name = `Compare E-2107 ${randomUUID().slice(0, 6)}`;
+  const dana = await signedInPage(browser, DANA);
+  const arlo = await signedInPage(browser, ARLO);
+  const document = buildCircularFlange(
+    { name, equipmentTag: "E-2107", units: "SI" },
+    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+  );
+  const created = await dana.request.post("/api/v1/designs", { data: { name, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  const { designId } = (await created.json()) as { designId: string };
+  await dana.goto(`/designs/${designId}/revisions/1`);
+  await dana.getByRole("button", { name: "Submit for review" }).click();
+  await expect(dana.getByTestId("revision-status")).toHaveText("In review");
+
+  await arlo.goto(`/designs/${designId}/revisions/1`);
+  const approveForm = arlo.getByRole("form", { name: "Approve" });
+  const justifications = approveForm.getByRole("textbox", { name: /^Justification for/ });
+  for (let i = 0; i < (await justifications.count()); i++) await justifications.nth(i).fill("Accepted for the hydrotest only.");
+  await approveForm.getByRole("button", { name: "Approve revision" }).click();
+  await expect(arlo.getByTestId("revision-status")).toHaveText("Approved");
+
+  await dana.reload();
+  await dana.getByRole("button", { name: "Start revision 2" }).click();
+  await expect(dana).toHaveURL(new RegExp(`/designs/${designId}/revisions/2$`));
+  await expect(dana.getByTestId("revision-status")).toHaveText("Draft");
+
+  const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { workingRevision: { version: number; document: typeof document } };
+  const moved = { ...current.workingRevision.document, bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b5" ? { ...b, sMm: b.sMm + 6 } : b)) };
+  const saved = await dana.request.put(`/api/v1/designs/${designId}`, { data: { baseVersion: current.workingRevision.version, document: moved }, headers: { origin: APP_URL } });
+  expect(saved.status(), await saved.text()).toBe(200);
+
+  await dana.goto(`/designs/${designId}/compare?from=1&to=2`);
+  await expect(dana.getByRole("table", { name: "Inputs that changed" })).toContainText("bolts[b5].sMm");
+  const bolts = dana.getByRole("table", { name: "Bolts moved" });
+  await expect(bolts).toContainText("b5");
+  await expect(bolts).toContainText("+6 mm");
+  await dana.context().close();
+  await arlo.context().close();
+});
