@@ -1,0 +1,68 @@
+import { getDb } from "@/db/index";
+import { recordActivity } from "@/features/activity/queries";
+import { CONTENT_TYPES, exportFileName } from "@/features/exports/file-names";
+import { fileResponse, parseExportPath, parseSheetOptions } from "@/features/exports/http";
+import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { enqueueSheetJob } from "@/server/jobs/sheet-job";
+import { loadSheetInput } from "@/server/pdf/load-sheet-input";
+import { renderSpacingSheet } from "@/server/pdf/render-sheet";
+
+type Context = { params: Promise<{ designId: string; number: string }> };
+
+// The bolt-spacing sheet of one stored revision. GET renders it in the request (any size; the
+// export buttons use it below 64 bolts); POST queues it as a background job and answers 202 with
+// the job to poll at /api/v1/jobs/[jobId]. Any member of the organisation may export.
+async function prepare(request: Request, params: Context["params"]) {
+  const auth = await authorizeApi(request);
+  if (!auth.ok) return { response: auth.response } as const;
+  const path = parseExportPath(await params);
+  if (!path) return { response: jsonError(404, "This revision does not exist.") } as const;
+  const options = parseSheetOptions(new URL(request.url));
+  if (!options.ok) return { response: jsonError(400, options.message, options.fieldErrors) } as const;
+  const viewer = auth.viewer;
+  const paper = options.data.paper;
+  const units = options.data.units ?? viewer.unitSystem;
+  const db = getDb();
+  const loaded = await loadSheetInput(db, viewer.organizationId, path.designId, path.number, { paper, units, createdAt: new Date() });
+  if (!loaded) return { response: jsonError(404, "This revision does not exist.") } as const;
+  if (!loaded.revision.result) return { response: jsonError(409, "This revision has no stored result to print; save it again to analyse it.") } as const;
+  return { viewer, db, loaded, paper, units } as const;
+}
+
+async function logExport(db: ReturnType<typeof getDb>, viewer: { organizationId: string; userId: string }, designId: string, revisionId: string, detail: string) {
+  try {
+    await recordActivity(db, { organizationId: viewer.organizationId, designId, revisionId, actorId: viewer.userId, kind: "exported", detail });
+  } catch (error) {
+    console.error(`[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`);
+  }
+}
+
+export async function GET(request: Request, { params }: Context) {
+  const p = await prepare(request, params);
+  if ("response" in p) return p.response;
+  const { revision, input } = p.loaded;
+  const bytes = await renderSpacingSheet(input);
+  const fileName = exportFileName(revision, revision.number, "spacing-sheet");
+  await logExport(p.db, p.viewer, revision.designId, revision.revisionId, `${fileName} (${p.paper.toUpperCase()}, ${p.units})`);
+  return fileResponse(bytes, fileName, CONTENT_TYPES["spacing-sheet"]);
+}
+
+export async function POST(request: Request, { params }: Context) {
+  const p = await prepare(request, params);
+  if ("response" in p) return p.response;
+  const { revision } = p.loaded;
+  const jobId = await enqueueSheetJob(p.db, {
+    organizationId: p.viewer.organizationId,
+    designId: revision.designId,
+    revisionId: revision.revisionId,
+    designName: revision.designName,
+    equipmentTag: revision.equipmentTag,
+    requestedBy: p.viewer.userId,
+    revisionNumber: revision.number,
+    paper: p.paper,
+    units: p.units,
+  });
+  const fileName = exportFileName(revision, revision.number, "spacing-sheet");
+  await logExport(p.db, p.viewer, revision.designId, revision.revisionId, `${fileName} (${p.paper.toUpperCase()}, ${p.units}, queued)`);
+  return Response.json({ jobId, statusUrl: `/api/v1/jobs/${jobId}` }, { status: 202, headers: { location: `/api/v1/jobs/${jobId}`, "cache-control": "no-store" } });
+}
