@@ -20,11 +20,15 @@ function toActionResult<T>(result: CommandResult<T>): ActionResult<T> {
   return result.fieldErrors ? { ok: false, message: result.message, fieldErrors: result.fieldErrors } : { ok: false, message: result.message };
 }
 
+type CreateDesignState = (ActionResult<{ designId: string }> & { values?: Record<string, string> }) | null;
+
 /** New-design form (useActionState); on success goes straight to the editor. */
-export async function createDesignAction(_previous: ActionResult<{ designId: string }> | null, formData: FormData): Promise<ActionResult<{ designId: string }>> {
+export async function createDesignAction(_previous: CreateDesignState, formData: FormData): Promise<CreateDesignState> {
   const viewer = await requireViewer();
-  const result = await createDesignFromForm(getDb(), viewer, formDataToObject(formData));
-  if (!result.ok) return toActionResult(result);
+  const values = formDataToObject(formData);
+  const result = await createDesignFromForm(getDb(), viewer, values);
+  // Typed values go back so the form can show them again (React resets it after an action).
+  if (!result.ok) return { ...toActionResult(result), values };
   revalidatePath("/designs");
   redirect(`/designs/${result.data.designId}`);
 }

@@ -7,6 +7,7 @@ import type { UnitSystem } from "@/features/analysis/core/design";
 import { issuesToFieldErrors } from "./field-errors";
 import { findDesign } from "./queries";
 import { createDesign, deleteDesign, duplicateDesign, saveWorkingRevision, setDesignArchived, setUserUnitSystem } from "./mutations";
+import { formatUtcMinute } from "./model/labels";
 import { buildDesignFromTemplate, type TemplateInput } from "./model/templates";
 import { canArchiveDesign, canCreateDesign, canDeleteDesign, canEditDesign, isEditableStatus } from "./policies";
 import { createDesignApiSchema, designIdSchema, saveWorkingRevisionSchema, unitSystemSchema } from "./schema";
@@ -33,17 +34,12 @@ function refuse(reason: CommandFailureReason, message: string): CommandResult<ne
   return { ok: false, reason, message };
 }
 
-/** "2026-12-01 14:05 UTC": the same text on every machine, whatever its time zone. */
-export function formatSavedAt(iso: string): string {
-  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
-}
-
 export function frozenMessage(status: string): string {
   return `This revision is ${status === "approved" ? "approved" : "in review"} and cannot be edited.`;
 }
 
 export function conflictMessage(savedByName: string, savedAtIso: string, version: number): string {
-  return `This design was changed by ${savedByName} at ${formatSavedAt(savedAtIso)} (version ${version}). Your edits are kept here; reload to see theirs, or copy your changes.`;
+  return `This design was changed by ${savedByName} at ${formatUtcMinute(savedAtIso)} (version ${version}). Your edits are kept here; reload to see theirs, or copy your changes.`;
 }
 
 export async function createDesignFromForm(db: Kysely<Database>, viewer: Viewer, raw: Record<string, unknown>): Promise<CommandResult<{ designId: string }>> {

@@ -1,0 +1,20 @@
+import type { Metadata } from "next";
+import { createDesignAction } from "@/features/designs/actions";
+import { NewDesignForm } from "@/features/designs/components/new-design-form";
+import { requireViewer } from "@/server/auth/guard";
+
+export const metadata: Metadata = { title: "New design" };
+
+export default async function NewDesignPage() {
+  await requireViewer({ role: "designer" });
+  return (
+    <div className="flex flex-col gap-6">
+      <header>
+        <p className="text-table uppercase tracking-wider text-brass-600">Joint register</p>
+        <h1 className="mt-1 text-display font-semibold">New design</h1>
+        <p className="mt-2 text-body text-ink-700">Pick a starting shape and its main dimensions in millimetres; everything else is set in the editor.</p>
+      </header>
+      <NewDesignForm createDesignAction={createDesignAction} />
+    </div>
+  );
+}

@@ -1,0 +1,28 @@
+// Words the register shows for stored codes (statuses in plain words, outline kinds, templates).
+import type { WorkingRevisionStatus } from "../workspace-contract";
+
+export const STATUS_LABELS: Record<WorkingRevisionStatus, string> = {
+  draft: "Draft",
+  in_review: "In review",
+  returned: "Returned",
+  approved: "Approved",
+};
+
+export const OUTLINE_LABELS: Record<string, string> = {
+  circle: "Circular",
+  rectangle: "Rectangular",
+  obround: "Obround",
+  polygon: "Polygon",
+};
+
+export const UPDATED_LABELS: Record<string, string> = {
+  "1": "In the last day",
+  "7": "In the last 7 days",
+  "30": "In the last 30 days",
+  "365": "In the last year",
+};
+
+/** "2026-12-01 14:05 UTC": the same text on the server and in every browser, whatever its zone. */
+export function formatUtcMinute(iso: string): string {
+  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
+}
