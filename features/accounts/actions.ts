@@ -9,8 +9,9 @@ import { getViewerContext } from "@/server/auth/guard";
 import { clientAddressKey } from "@/server/auth/rate-limit";
 import { endAllSessions, endSession, startSession, switchSessionOrganization } from "@/server/auth/session";
 import { authenticate } from "./credentials";
+import { createOrganizationWithFounder } from "./organizations";
 import { formFields, invalid } from "./form-data";
-import { safeNextPath, signInSchema, switchOrganizationSchema } from "./schema";
+import { safeNextPath, signInSchema, signUpSchema, switchOrganizationSchema } from "./schema";
 
 // Session entry points. Each action parses its own input and never trusts the form for who
 // the user is: that comes from the session cookie.
@@ -23,6 +24,15 @@ export async function signInAction(_previous: ActionResult | null, formData: For
   if (!outcome.ok) return { ok: false, message: outcome.message };
   await startSession(outcome.userId, outcome.organizationId);
   redirect(safeNextPath(parsed.data.next));
+}
+
+export async function signUpAction(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
+  const parsed = signUpSchema.safeParse(formFields(formData));
+  if (!parsed.success) return invalid(parsed.error);
+  const outcome = await createOrganizationWithFounder(getDb(), parsed.data);
+  if (!outcome.ok) return { ok: false, message: outcome.message, fieldErrors: { [outcome.field]: [outcome.message] } };
+  await startSession(outcome.userId, outcome.organizationId);
+  redirect("/desk");
 }
 
 export async function signOutAction(): Promise<void> {

@@ -1,0 +1,22 @@
+import { changeMemberRolesCommand, removeMemberCommand } from "@/features/accounts/team-commands";
+import { authorizeApi, jsonError } from "@/server/auth/guard";
+
+type Context = { params: Promise<{ userId: string }> };
+
+/** Change a member's roles: { roles }. */
+export async function PATCH(request: Request, context: Context): Promise<Response> {
+  const auth = await authorizeApi(request, { role: "admin" });
+  if (!auth.ok) return auth.response;
+  const { userId } = await context.params;
+  const body = (await request.json().catch(() => null)) as { roles?: unknown } | null;
+  const result = await changeMemberRolesCommand(auth.viewer, { userId, roles: body?.roles });
+  return result.ok ? new Response(null, { status: 204 }) : jsonError(result.status, result.message, result.fieldErrors);
+}
+
+export async function DELETE(request: Request, context: Context): Promise<Response> {
+  const auth = await authorizeApi(request, { role: "admin" });
+  if (!auth.ok) return auth.response;
+  const { userId } = await context.params;
+  const result = await removeMemberCommand(auth.viewer, { userId });
+  return result.ok ? new Response(null, { status: 204 }) : jsonError(result.status, result.message, result.fieldErrors);
+}

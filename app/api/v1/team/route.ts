@@ -1,0 +1,20 @@
+import { getDb } from "@/db/index";
+import { getTeam } from "@/features/accounts/team";
+import { inviteMemberCommand } from "@/features/accounts/team-commands";
+import { authorizeApi, jsonError } from "@/server/auth/guard";
+
+// The Crew (members and open invitations) of the viewer's organisation. Admin only.
+export async function GET(request: Request): Promise<Response> {
+  const auth = await authorizeApi(request, { role: "admin" });
+  if (!auth.ok) return auth.response;
+  return Response.json(await getTeam(getDb(), auth.viewer.organizationId), { headers: { "cache-control": "private, no-store" } });
+}
+
+/** Invite: { email, roles }. */
+export async function POST(request: Request): Promise<Response> {
+  const auth = await authorizeApi(request, { role: "admin" });
+  if (!auth.ok) return auth.response;
+  const body = await request.json().catch(() => null);
+  const result = await inviteMemberCommand(auth.viewer, body);
+  return result.ok ? Response.json(result.data, { status: 201 }) : jsonError(result.status, result.message, result.fieldErrors);
+}
