@@ -7,7 +7,7 @@
  */
 import type { JointDesign } from "./design";
 import type { JointModel } from "./joint-model";
-import { pointAtArcLength, projectOntoPath } from "./path";
+import { projectOntoPath, samplePathUniform } from "./path";
 import { isOnGasket } from "./gasket-region";
 import { solveBeamOnFoundation } from "./beam-foundation";
 import { buildConeField, coneMissesGasket, conePressureAtMpa, type ConeField } from "./cone-superposition";
@@ -89,10 +89,10 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
   const sMm = new Float64Array(N), xMm = new Float64Array(N), yMm = new Float64Array(N);
   const onGasket = new Uint8Array(N);
   const fullFace = region.kind === "full-face";
+  samplePathUniform(path, N, xMm, yMm);
   for (let j = 0; j < N; j++) {
-    const q = pointAtArcLength(path, j * step);
-    sMm[j] = j * step; xMm[j] = q.x; yMm[j] = q.y;
-    onGasket[j] = fullFace ? (isOnGasket(region, q.x, q.y) ? 1 : 0) : 1;
+    sMm[j] = j * step;
+    onGasket[j] = fullFace ? (isOnGasket(region, xMm[j], yMm[j]) ? 1 : 0) : 1;
   }
 
   // Beam on elastic foundation along the path, solved on a grid fine enough for λ·h ≤ 0.05.

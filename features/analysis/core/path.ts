@@ -178,3 +178,29 @@ export function pathToPolyline(path: ClosedPath, maxStepMm = 2): PointMm[] {
   }
   return out;
 }
+
+/** Fills xs/ys with N points at s = j·L/N (j = 0…N−1), walking the segments once (no search). */
+export function samplePathUniform(path: ClosedPath, count: number, xs: Float64Array, ys: Float64Array): void {
+  const L = path.lengthMm;
+  const step = L / count;
+  let seg = segmentIndexAt(path, wrap(path.shiftMm, L));
+  for (let j = 0; j < count; j++) {
+    const u = wrap(j * step + path.shiftMm, L);
+    // advance (with wrap-around) until u lies in the current segment
+    let guard = 0;
+    while (guard++ <= path.segments.length && !(u >= path.segmentStartMm[seg] && u < path.segmentStartMm[seg] + path.segments[seg].lengthMm + 1e-12)) {
+      seg = (seg + 1) % path.segments.length;
+    }
+    const s = path.segments[seg];
+    const local = u - path.segmentStartMm[seg];
+    if (s.kind === "line") {
+      const t = s.lengthMm > 0 ? local / s.lengthMm : 0;
+      xs[j] = s.x0 + (s.x1 - s.x0) * t;
+      ys[j] = s.y0 + (s.y1 - s.y0) * t;
+    } else {
+      const a = s.startRad + Math.sign(s.sweepRad) * (local / s.radiusMm);
+      xs[j] = s.cx + s.radiusMm * Math.cos(a);
+      ys[j] = s.cy + s.radiusMm * Math.sin(a);
+    }
+  }
+}

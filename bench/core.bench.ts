@@ -1,0 +1,23 @@
+/**
+ * Core benchmarks: the path estimate (both estimators) must stay well inside a 60 fps frame
+ * while a bolt is dragged (target ≤ 2 ms on the 2-core machine), the 256 × 256 heat map ≤ 30 ms.
+ */
+import { buildJointModel } from "@/features/analysis/core/joint-model";
+import { computeGasketStressProfiles } from "@/features/analysis/core/gasket-stress";
+import { computeGasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
+import { analyzeJoint } from "@/features/analysis/core/analyze";
+import { girthFlange96, rectangularCover } from "@/tests/features/analysis/core/fixtures";
+import { medianMs, printMedian } from "./measure";
+
+export async function run(): Promise<void> {
+  const girth = girthFlange96();
+  const rect = rectangularCover({ boltCount: 48, widthMm: 1200, heightMm: 800 });
+  const cases: [string, () => unknown, number][] = [
+    ["96-bolt circle path (both estimators, 64/pitch)", () => computeGasketStressProfiles(buildJointModel(girth)), 200],
+    ["96-bolt circle 256×256 grid", () => computeGasketStressGrid(girth, 256, 256), 50],
+    ["48-bolt rectangular cover path (both, 64/pitch)", () => computeGasketStressProfiles(buildJointModel(rect)), 200],
+    ["48-bolt rectangular cover 256×256 grid (cone)", () => computeGasketStressGrid(rect, 256, 256, { estimator: "cone" }), 50],
+    ["96-bolt circle analyzeJoint (everything)", () => analyzeJoint(girth), 30],
+  ];
+  for (const [label, fn, n] of cases) printMedian("core", label, medianMs(fn, n), n);
+}
