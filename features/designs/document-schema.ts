@@ -1,18 +1,11 @@
 import { z } from "zod";
+import { jointDesignSchema } from "@/features/analysis/schema";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { validateJointDesign } from "@/features/analysis/core/validate";
 
-// The design document as accepted by saves, creates and the stateless analysis endpoint.
-// features/analysis/schema.ts (`jointDesignSchema`, the core's own) is not in the tree yet; until
-// it is, the core's validator is the authority and this adds a shape guard and a size bound.
-// TODO(designs): switch to jointDesignSchema when the core publishes it.
-
-/** Lengths are named …Mm in the document; anything beyond 100 m is a typo, not a flange. */
+// The design document as accepted by saves, creates and the stateless analysis endpoint: the
+// core's schema (types, ranges and its geometric validator) plus an upper bound on lengths,
+// which the core leaves open: lengths are named …Mm, and anything beyond 100 m is a typo.
 const MAX_LENGTH_MM = 100_000;
-
-function pathSegments(path: string): (string | number)[] {
-  return path.split(/[.[\]]+/).filter(Boolean).map((s) => (/^\d+$/.test(s) ? Number(s) : s));
-}
 
 function findAbsurdLengths(value: unknown, path: (string | number)[], out: (string | number)[][]): void {
   if (Array.isArray(value)) value.forEach((v, i) => findAbsurdLengths(v, [...path, i], out));
@@ -25,18 +18,11 @@ function findAbsurdLengths(value: unknown, path: (string | number)[], out: (stri
 }
 
 export const designDocumentSchema = z
-  .custom<JointDesign>((v) => typeof v === "object" && v !== null && !Array.isArray(v), { error: "Must be a design document (a JSON object)" })
+  .unknown()
   .superRefine((doc, ctx) => {
     const absurd: (string | number)[][] = [];
     findAbsurdLengths(doc, [], absurd);
     for (const path of absurd) ctx.addIssue({ code: "custom", message: `must be at most ${MAX_LENGTH_MM} mm`, path });
-    if (absurd.length > 0) return;
-    let issues;
-    try {
-      issues = validateJointDesign(doc);
-    } catch {
-      ctx.addIssue({ code: "custom", message: "is not a complete design document (see GET /api/v1/schema/design)" });
-      return;
-    }
-    for (const issue of issues) ctx.addIssue({ code: "custom", message: issue.message, path: pathSegments(issue.path) });
-  });
+  })
+  .pipe(jointDesignSchema)
+  .transform((doc) => doc as JointDesign);
