@@ -26,8 +26,8 @@ export function coneFootprintIntegralMm2(innerRadiusMm: number, outerRadiusMm: n
   return (Math.PI * (outerRadiusMm - innerRadiusMm) * (outerRadiusMm + 2 * innerRadiusMm)) / 3;
 }
 
-const NR = 16;
-const NT = 48;
+const NR = 20;
+const NT = 96;
 
 function clippedFraction(region: GasketRegion, x: number, y: number, ri: number, rc: number): number {
   let full = 0;

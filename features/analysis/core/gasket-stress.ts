@@ -97,7 +97,9 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
 
   // Beam on elastic foundation along the path, solved on a grid fine enough for λ·h ≤ 0.05.
   const boltSOnPathMm = model.boltPoints.map((p) => projectOntoPath(path, p).sMm);
-  const solverNodes = Math.min(N, Math.max(8 * n, 16, Math.ceil((model.lambdaPerMm * L) / 0.05)));
+  // A whole number of solver nodes per bolt keeps a regular pattern exactly periodic.
+  const perBolt = Math.min(design.estimator.samplesPerPitch, Math.max(8, Math.ceil((model.lambdaPerMm * L) / 0.05 / n)));
+  const solverNodes = Math.max(perBolt * n, 16);
   const sol = solveBeamOnFoundation({
     pathLengthMm: L, nodes: solverNodes, loads: boltSOnPathMm.map((s, i) => ({ sMm: s, forceN: forces[i] })),
     flexuralRigidityNmm2: model.flexuralRigidityNmm2, foundationModulusMpa: model.foundationModulusMpa,
