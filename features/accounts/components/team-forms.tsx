@@ -5,6 +5,7 @@ import type { Role } from "@/db/tables/core";
 import type { ActionResult } from "@/server/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { TextField } from "@/features/ui/text-field";
+import { useRememberedValues } from "@/features/ui/use-remembered-values";
 
 type TeamAction = (prev: ActionResult<string> | null, data: FormData) => Promise<ActionResult<string>>;
 
@@ -38,9 +39,10 @@ function RoleChoices({ name, selected, legend }: { name: string; selected: Role[
 export function InviteMemberForm({ inviteMemberAction }: { inviteMemberAction: TeamAction }) {
   const [state, formAction, pending] = useActionState(inviteMemberAction, null);
   const errors = state && !state.ok ? state.fieldErrors : undefined;
+  const { values, remember } = useRememberedValues();
   return (
-    <form action={formAction} className="flex flex-col gap-3" noValidate aria-label="Invite a member">
-      <TextField label="E-mail" name="email" type="email" required errors={errors?.email} />
+    <form action={remember(formAction)} className="flex flex-col gap-3" noValidate aria-label="Invite a member">
+      <TextField label="E-mail" name="email" type="email" required errors={errors?.email} defaultValue={state?.ok ? "" : values.email} />
       <RoleChoices name="roles" selected={["designer"]} legend="Roles of the new member" />
       {errors?.roles ? <p className="text-table text-verdict-fail">{errors.roles[0]}</p> : null}
       <div className="flex items-center gap-3">
