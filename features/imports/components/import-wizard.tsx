@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState, useMemo, useState } from "react";
+import { startTransition, useActionState, useMemo, useState } from "react";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
@@ -23,7 +23,9 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
   );
   const e = state && !state.ok ? state.fieldErrors ?? {} : {};
   return (
-    <form action={action} className="grid gap-6 lg:grid-cols-[22rem_1fr]">
+    // Submitted through onSubmit, not the action prop: React resets a form after an action, which
+    // would wipe what the user typed when the server refuses a field.
+    <form onSubmit={(ev) => { ev.preventDefault(); const data = new FormData(ev.currentTarget); startTransition(() => action(data)); }} className="grid gap-6 lg:grid-cols-[22rem_1fr]">
       <div className="flex flex-col gap-4">
         <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
           DXF drawing (outline and holes)

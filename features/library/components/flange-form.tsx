@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState, useEffect, useRef } from "react";
+import { startTransition, useActionState, useEffect, useRef } from "react";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
@@ -15,7 +15,9 @@ export function FlangeForm() {
   }, [state]);
   const e = state && !state.ok ? state.fieldErrors ?? {} : {};
   return (
-    <form ref={form} action={action} className="flex flex-col gap-4 rounded-plate border border-ink-100 bg-white p-panel shadow-plate" aria-label="Add a flange template">
+    // Submitted through onSubmit, not the action prop: React resets a form after an action, which
+    // would wipe what the user typed when the server refuses a field.
+    <form ref={form} onSubmit={(ev) => { ev.preventDefault(); const data = new FormData(ev.currentTarget); startTransition(() => action(data)); }} className="flex flex-col gap-4 rounded-plate border border-ink-100 bg-white p-panel shadow-plate" aria-label="Add a flange template">
       <h2 className="text-lead font-semibold">Add a flange template</h2>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <TextField label="Standard" name="standard" required errors={e.standard} hint="e.g. EN 1092-1" />

@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState, useEffect, useRef } from "react";
+import { startTransition, useActionState, useEffect, useRef } from "react";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
@@ -24,7 +24,9 @@ export function GasketForm({ editing, onDone }: { editing?: GasketChoiceDto | nu
   const g = editing;
   const t = g?.tightness ?? {};
   return (
-    <form ref={form} action={action} className="flex flex-col gap-4 rounded-plate border border-ink-100 bg-white p-panel shadow-plate" aria-label={g ? `Edit ${g.name}` : "Add a gasket"}>
+    // Submitted through onSubmit, not the action prop: React resets a form after an action, which
+    // would wipe what the user typed when the server refuses a field.
+    <form ref={form} onSubmit={(ev) => { ev.preventDefault(); const data = new FormData(ev.currentTarget); startTransition(() => action(data)); }} className="flex flex-col gap-4 rounded-plate border border-ink-100 bg-white p-panel shadow-plate" aria-label={g ? `Edit ${g.name}` : "Add a gasket"}>
       <h2 className="text-lead font-semibold">{g ? `Edit ${g.name}` : "Add a gasket"}</h2>
       {g ? <input type="hidden" name="rowId" value={g.rowId} /> : null}
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
