@@ -137,6 +137,7 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
 });
 
 test("an approved revision starts the next one, and the comparison shows what changed", async ({ browser }) => {
+  test.setTimeout(120_000);
   const name = `Compare E-2107 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
   const arlo = await signedInPage(browser, ARLO);
