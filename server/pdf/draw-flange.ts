@@ -73,14 +73,18 @@ function extent(o: Outline): { hw: number; hh: number } {
  * lines, numbered holes, overall and bolt-path dimensions, and one pitch/chord callout.
  * Returns the reduction n of the scale 1:n (true when the sheet is printed at 100 %).
  */
+/** Where the flange centre lands on the page and how many points one model mm is (pure). */
+export function flangeTransform(box: Box, outline: Outline): { cx: number; cy: number; ptPerMm: number; reduction: number } {
+  const { hw, hh } = extent(outline);
+  const pad = 40;
+  const n = chooseScale(2 * hw, 2 * hh, box.w - 2 * pad, box.h - 2 * pad - 10);
+  return { cx: box.x + box.w / 2, cy: box.y + box.h / 2 - 4, ptPerMm: PT_PER_MM / n, reduction: n };
+}
+
 export function drawFlange(ctx: SheetContext, box: Box, design: JointDesign, rows: readonly BoltRow[]): number {
   const { doc, u } = ctx;
   const { hw, hh } = extent(design.outline);
-  const pad = 40;
-  const n = chooseScale(2 * hw, 2 * hh, box.w - 2 * pad, box.h - 2 * pad - 10);
-  const s = PT_PER_MM / n;
-  const cx = box.x + box.w / 2;
-  const cy = box.y + box.h / 2 - 4;
+  const { cx, cy, ptPerMm: s, reduction: n } = flangeTransform(box, design.outline);
   const xf: Xf = (p) => [cx + p.x * s, cy - p.y * s];
 
   doc.save();

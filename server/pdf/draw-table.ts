@@ -1,4 +1,5 @@
 import "server-only";
+import { plainText } from "./plain-text";
 import { C, type SheetContext } from "./sheet-context";
 
 export interface Column {
@@ -55,7 +56,7 @@ export function drawTable(ctx: SheetContext, cols: Column[], rows: Cell[][], opt
       cols.forEach((c, i) => {
         if (!c.wrap) return;
         const cell = row[i];
-        const text = typeof cell === "string" ? cell : cell.text;
+        const text = plainText(typeof cell === "string" ? cell : cell.text);
         doc.font(c.mono ? "mono" : "sans").fontSize(FONT);
         h = Math.max(h, doc.heightOfString(text, { width: widths[i] - 2 * PAD }) + 4);
       });
@@ -68,7 +69,7 @@ export function drawTable(ctx: SheetContext, cols: Column[], rows: Cell[][], opt
     let x = x0;
     cols.forEach((c, i) => {
       const cell = row[i];
-      const text = typeof cell === "string" ? cell : cell.text;
+      const text = plainText(typeof cell === "string" ? cell : cell.text);
       const style = typeof cell === "string" ? {} : cell.style;
       if (style.fill) doc.rect(x + 1, ctx.y + 1, widths[i] - 2, h - 2).fill(style.fill);
       doc
@@ -88,7 +89,8 @@ export function drawTable(ctx: SheetContext, cols: Column[], rows: Cell[][], opt
 export function drawKeyValues(ctx: SheetContext, x: number, width: number, items: { label: string; value: string }[]): number {
   const { doc } = ctx;
   let y = ctx.y;
-  for (const it of items) {
+  for (const raw of items) {
+    const it = { label: plainText(raw.label), value: plainText(raw.value) };
     doc.font("sans").fontSize(6.6).fillColor(C.ink500).text(it.label, x, y, { width: width * 0.45, lineBreak: false });
     doc.font("mono").fontSize(6.8).fillColor(C.ink900);
     const h = doc.heightOfString(it.value, { width: width * 0.55 });

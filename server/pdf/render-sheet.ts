@@ -10,7 +10,7 @@ import { drawProfileChart } from "./draw-profile-chart";
 import { drawKeyValues, drawTable, type Cell } from "./draw-table";
 import { jointDataItems } from "./joint-data";
 import { readResultView, type SheetResultView, type SheetStatus } from "./result-view";
-import { C, PAPER_SIZES, createContext, heading, type SheetContext } from "./sheet-context";
+import { C, MARGIN, PAPER_SIZES, TITLE_BLOCK_H, createContext, heading, type SheetContext } from "./sheet-context";
 import type { RenderOptions, SheetInput } from "./sheet-input";
 import { drawNotApprovedMark, drawTitleBlock } from "./title-block";
 
@@ -31,15 +31,25 @@ function fileId(input: SheetInput): Buffer {
   return createHash("sha256").update(`sealpitch-sheet|${basis}|${input.paper}|${input.units}`).digest().subarray(0, 16);
 }
 
+/** The drawing's frame on page 1 (pure, so tests can find the flange on the rendered page). */
+export function drawingBox(paper: SheetInput["paper"]): { x: number; y: number; w: number; h: number } {
+  const [w, h] = PAPER_SIZES[paper];
+  const x0 = MARGIN + 10;
+  const x1 = w - MARGIN - 10;
+  const y0 = MARGIN + 10;
+  const y1 = h - MARGIN - TITLE_BLOCK_H - 8;
+  return { x: x0, y: y0 + 36, w: (x1 - x0) * 0.64, h: Math.min(390, (y1 - y0) * 0.55) };
+}
+
 function pageOne(ctx: SheetContext, rows: BoltRow[], view: SheetResultView): void {
   const { doc, input, content, u } = ctx;
   const { design, revision } = input;
   doc.font("sansBold").fontSize(15).fillColor(C.ink900).text("Bolt-spacing sheet", content.x0, ctx.y, { lineBreak: false });
   doc.font("sans").fontSize(9).fillColor(C.ink700).text(`${design.equipmentTag ? `${design.equipmentTag} · ` : ""}${design.name} · revision ${revision.number}`, content.x0, ctx.y + 19, { lineBreak: false });
   ctx.y += 36;
-  const drawW = (content.x1 - content.x0) * 0.64;
-  const drawH = Math.min(390, (content.y1 - content.y0) * 0.55);
-  const box = { x: content.x0, y: ctx.y, w: drawW, h: drawH };
+  const box = drawingBox(input.paper);
+  const drawW = box.w;
+  const drawH = box.h;
   doc.lineWidth(0.5).strokeColor(C.ink300).rect(box.x, box.y, box.w, box.h).stroke();
   drawFlange(ctx, box, input.document, rows);
   const sideX = content.x0 + drawW + 12;

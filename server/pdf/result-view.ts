@@ -62,11 +62,8 @@ export interface SheetResultView {
   boltPoints: Map<string, { xMm: number; yMm: number }>;
 }
 
-// The embedded Plex "latin" subsets have no ≥ ≤ ⌀ → ≈; stored text is shown with plain stand-ins.
-const GLYPH_STAND_INS: [RegExp, string][] = [[/≥/g, ">="], [/≤/g, "<="], [/⌀/g, "Ø"], [/→/g, "->"], [/≈/g, "~"], [/√/g, "sqrt"]];
-export function plainText(s: string): string {
-  return GLYPH_STAND_INS.reduce((acc, [re, to]) => acc.replace(re, to), s);
-}
+export { plainText } from "./plain-text";
+import { plainText } from "./plain-text";
 
 type Obj = Record<string, unknown>;
 const isObj = (v: unknown): v is Obj => typeof v === "object" && v !== null && !Array.isArray(v);

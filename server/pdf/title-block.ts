@@ -1,4 +1,5 @@
 import "server-only";
+import { plainText } from "./plain-text";
 import { C, MARGIN, TITLE_BLOCK_H, type SheetContext } from "./sheet-context";
 
 const STATUS_TEXT = { draft: "DRAFT", in_review: "IN REVIEW", returned: "RETURNED", approved: "APPROVED" } as const;
@@ -11,7 +12,7 @@ function cell(ctx: SheetContext, x: number, y: number, w: number, h: number, lab
     .font(opts.mono ? "mono" : "sansBold")
     .fontSize(opts.size ?? 8.2)
     .fillColor(opts.color ?? C.ink900)
-    .text(value, x + 3.5, y + 11.5, { width: w - 7, height: h - 12, lineBreak: true, ellipsis: true });
+    .text(plainText(value), x + 3.5, y + 11.5, { width: w - 7, height: h - 12, lineBreak: true, ellipsis: true });
 }
 
 function date(iso: string | null): string {
@@ -44,7 +45,8 @@ export function drawTitleBlock(ctx: SheetContext, pageIndex: number, pageCount: 
     ["Design", design.name],
     ["Equipment tag", design.equipmentTag || "—"],
     ["Revision", String(revision.number)],
-    ["Status", STATUS_TEXT[revision.status], { color: revision.status === "approved" ? C.pass : C.fail }],
+    // Also printed in words in the strip: text extractors drop the diagonal mark.
+    ["Status", revision.status === "approved" ? STATUS_TEXT.approved : `${STATUS_TEXT[revision.status]} · NOT APPROVED`, { color: revision.status === "approved" ? C.pass : C.fail }],
   ];
   const row2: [string, string, object?][] = [
     ["Designer", revision.designer],

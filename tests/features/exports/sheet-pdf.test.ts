@@ -1,0 +1,161 @@
+import { describe, expect, it } from "vitest";
+import type { JointDesign } from "@/features/analysis/core/design";
+import { getBoltPath, getBoltPoints, getNeighbourSpacings, pointAtArcLength } from "@/features/analysis/core/geometry";
+import { flangeTransform } from "@/server/pdf/draw-flange";
+import { drawingBox, renderSpacingSheet } from "@/server/pdf/render-sheet";
+import type { SheetInput } from "@/server/pdf/sheet-input";
+import { analyse, loadExample, manyBoltFlange, pdfPageCount, pdfToText, pdfWords, renderFirstPagePng, sheetInputFor, type Raster } from "./fixtures";
+
+// The bolt-spacing sheet read back the way a person or a script would: text extraction
+// (pdftotext), the first page as a 50 dpi PNG (pdftoppm), and the raw bytes.
+
+/** Share of 48 samples on the hole's rim (at the scale of page 1) that carry ink. */
+function rimInk(raster: Raster, input: SheetInput, xMm: number, yMm: number, dpi: number): number {
+  const t = flangeTransform(drawingBox(input.paper), input.document.outline);
+  const k = dpi / 72;
+  const r = (input.document.fastener.holeDiameterMm / 2) * t.ptPerMm * k;
+  const cx = (t.cx + xMm * t.ptPerMm) * k;
+  const cy = (t.cy - yMm * t.ptPerMm) * k;
+  let ink = 0;
+  for (let i = 0; i < 48; i++) {
+    const a = (i / 48) * 2 * Math.PI;
+    const x = Math.round(cx + r * Math.cos(a));
+    const y = Math.round(cy + r * Math.sin(a));
+    if (raster.gray[y * raster.width + x] < 215) ink++;
+  }
+  return ink / 48;
+}
+
+/** How many of the design's bolt positions show a drawn hole on page 1 (and how many gaps do). */
+function countDrawnHoles(pdf: Buffer, input: SheetInput, expected: JointDesign): { holes: number; gaps: number; blank: boolean } {
+  const { raster } = renderFirstPagePng(pdf, 50);
+  const blank = raster.gray.every((v) => v > 250);
+  const holes = getBoltPoints(expected).filter((p) => rimInk(raster, input, p.x, p.y, 50) >= 0.5).length;
+  // Midway between neighbours along the path (skipping the first pair, which carries the pitch callout).
+  const path = getBoltPath(expected.outline, expected.boltPath);
+  const spacing = getNeighbourSpacings(expected);
+  const gaps = expected.bolts.slice(1).filter((b) => {
+    const s = spacing.find((x) => x.fromId === b.id);
+    if (!s) return false;
+    const q = pointAtArcLength(path, b.sMm + s.pitchMm / 2);
+    return rimInk(raster, input, q.x, q.y, 50) >= 0.5;
+  }).length;
+  return { holes, gaps, blank };
+}
+
+describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
+  it("names the revision, shows every bolt number and the stored check statuses", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    const input = sheetInputFor(design);
+    const pdf = await renderSpacingSheet(input);
+    expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
+    const text = pdfToText(pdf);
+    expect(text).toContain("Bolt-spacing sheet");
+    expect(text).toMatch(/revision 7/);
+    expect(text).toContain(input.revision.contentHash!.slice(0, 40));
+    expect(text).toContain("Dana Designer");
+    expect(text).toContain("Arlo Approver");
+    expect(text).toContain("2026-11-30");
+    expect(text).not.toContain("NOT APPROVED");
+    // Every bolt is a row of the bolt table: "<number> b<number>" at the start of a line.
+    for (let i = 1; i <= design.bolts.length; i++) expect(text).toMatch(new RegExp(`^${i}\\s+${design.bolts[i - 1].id}\\b`, "m"));
+    const result = input.result as ReturnType<typeof analyse>;
+    const expected = { pass: "PASS", warn: "WARN", fail: "FAIL", "not-applicable": "N/A" } as const;
+    const statuses = new Set(result.checks.map((c) => expected[c.status]));
+    for (const s of statuses) expect(text).toContain(s);
+    // Stored counts appear as stored (no recomputation): "<p> pass · <w> warn · <f> fail".
+    expect(text.replace(/\s+/g, " ")).toContain(`${result.summary.passCount} pass · ${result.summary.warnCount} warn · ${result.summary.failCount} fail`);
+    for (const caution of ["engineering estimates", "governing code", "gasket manufacturer", "licensed"]) expect(text).toContain(caution);
+    expect(text).toContain("TABLES AND EDITIONS USED");
+    expect(text).toContain("ASSEMBLY PLAN");
+    expect(text).toContain("GASKET STRESS ALONG THE PATH");
+  });
+
+  it("marks a sheet that is not approved, on every page", async () => {
+    for (const status of ["draft", "in_review", "returned"] as const) {
+      const pdf = await renderSpacingSheet(sheetInputFor(loadExample("obround-manway"), { status }));
+      const pages = pdfPageCount(pdf);
+      expect(pages).toBeGreaterThan(1);
+      for (let p = 1; p <= pages; p++) expect(pdfToText(pdf, { first: p, last: p })).toContain("NOT APPROVED");
+    }
+  });
+
+  it("draws a hole at every bolt position of page 1 (50 dpi PNG), and the measure misses a removed bolt", async () => {
+    for (const design of [loadExample("pipe-flange-nps6-spiral-wound"), loadExample("obround-manway"), loadExample("rectangular-cover-full-face")]) {
+      const input = sheetInputFor(design);
+      const full = countDrawnHoles(await renderSpacingSheet(input), input, design);
+      expect(full.blank).toBe(false);
+      expect(full.holes).toBe(design.bolts.length);
+      expect(full.gaps).toBe(0);
+      // The same sheet with the third bolt taken out of the document: one hole fewer is found.
+      const fewer = { ...design, bolts: design.bolts.filter((_, i) => i !== 2) };
+      const inputFewer = sheetInputFor(fewer);
+      expect(countDrawnHoles(await renderSpacingSheet(inputFewer), inputFewer, design).holes).toBe(design.bolts.length - 1);
+    }
+  });
+
+  it("lays a 96-bolt flange over several pages: every bolt labelled in the drawing and listed, title strip on each page", async () => {
+    const design = manyBoltFlange(96);
+    const input = sheetInputFor(design, { status: "in_review" });
+    const pdf = await renderSpacingSheet(input);
+    const pages = pdfPageCount(pdf);
+    expect(pages).toBeGreaterThanOrEqual(3);
+    for (let p = 1; p <= pages; p++) {
+      const pageText = pdfToText(pdf, { first: p, last: p });
+      expect(pageText).toContain(`${p} of ${pages}`);
+      expect(pageText).toContain("Girth flange, 96 bolts");
+    }
+    // Page 1: the numbers 1…96 inside the drawing frame (the hole labels), each exactly once
+    // (the scale note along the frame's foot is left out).
+    const box = drawingBox("a4");
+    const { words } = pdfWords(pdf, 1);
+    const labels = words
+      .filter((w) => /^\d+$/.test(w.text) && w.xMin >= box.x && w.xMax <= box.x + box.w && w.yMin >= box.y && w.yMax <= box.y + box.h - 12)
+      .map((w) => Number(w.text))
+      .sort((a, b) => a - b);
+    expect(labels).toEqual(Array.from({ length: 96 }, (_, i) => i + 1));
+    const text = pdfToText(pdf);
+    for (let i = 1; i <= 96; i++) expect(text).toMatch(new RegExp(`^${i}\\s+b${i}\\b`, "m"));
+  });
+
+  it("is byte-stable for an approved revision apart from the two date strings", async () => {
+    const input = sheetInputFor(loadExample("pipe-flange-nps6-spiral-wound"));
+    const a = await renderSpacingSheet(input);
+    const b = await renderSpacingSheet({ ...input });
+    expect(Buffer.compare(a, b)).toBe(0);
+    const c = await renderSpacingSheet({ ...input, createdAt: new Date("2027-03-04T05:06:07.000Z") });
+    expect(c.length).toBe(a.length);
+    const dateA = "D:20261201080000Z";
+    const dateC = "D:20270304050607Z";
+    expect(a.toString("latin1").split(dateA).length - 1).toBe(2); // CreationDate and ModDate
+    expect(Buffer.compare(Buffer.from(c.toString("latin1").replaceAll(dateC, dateA), "latin1"), a)).toBe(0);
+  });
+
+  it("follows the paper and unit choice", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    const letter = await renderSpacingSheet(sheetInputFor(design, { paper: "letter", units: "US" }));
+    expect(pdfWords(letter, 1).width).toBeCloseTo(612, 0);
+    expect(pdfWords(letter, 1).height).toBeCloseTo(792, 0);
+    const us = pdfToText(letter);
+    expect(us).toContain("x in");
+    expect(us).toContain("ft·lb");
+    const a4 = await renderSpacingSheet(sheetInputFor(design, { paper: "a4", units: "SI" }));
+    expect(pdfWords(a4, 1).width).toBeCloseTo(595.28, 0);
+    const si = pdfToText(a4);
+    expect(si).toContain("x mm");
+    expect(si).toContain("N·m");
+  });
+
+  it("prints approved justifications beside their check", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    const result = analyse(design);
+    const open = result.checks.find((c) => c.status === "warn" || c.status === "fail");
+    if (!open) return; // the example passes everything: nothing to justify
+    const input = sheetInputFor(design, {
+      result,
+      justifications: [{ checkId: open.id, status: open.status as "warn" | "fail", text: "Accepted by the shop: studs replaced by B16 stock.", by: "Arlo Approver", at: "2026-11-30T09:00:00.000Z" }],
+    });
+    const text = pdfToText(await renderSpacingSheet(input)).replace(/\s+/g, " ");
+    expect(text).toContain("Accepted by the shop: studs replaced by B16 stock.");
+  });
+});

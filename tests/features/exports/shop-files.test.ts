@@ -1,0 +1,80 @@
+import { parse } from "csv-parse/sync";
+import DxfParser from "dxf-parser";
+import { describe, expect, it } from "vitest";
+import type { JointDesign } from "@/features/analysis/core/design";
+import { getBoltPoints } from "@/features/analysis/core/geometry";
+import { MM_PER_IN } from "@/features/analysis/core/units";
+import { exportFileName } from "@/features/exports/file-names";
+import { drillingTemplateFor, holeListFor } from "@/features/exports/shop-files";
+import { analyse, loadExample, manyBoltFlange } from "./fixtures";
+
+// The hole list (CSV) and the drilling template (DXF) parsed back with the well-kept readers,
+// every hole compared with the core's own bolt positions to 0.001 mm.
+const TOL_MM = 0.001;
+
+const cases: [string, JointDesign][] = [
+  ["NPS 6 pipe flange (US units, inches)", loadExample("pipe-flange-nps6-spiral-wound")],
+  ["obround manway (mm)", loadExample("obround-manway")],
+  ["full-face rectangular cover (mm)", loadExample("rectangular-cover-full-face")],
+  ["96-bolt girth flange (mm)", manyBoltFlange(96)],
+];
+
+describe.each(cases)("shop files of the %s", (_label, design) => {
+  const result = analyse(design);
+  const expected = getBoltPoints(design);
+  const inches = design.units === "US";
+  const k = inches ? MM_PER_IN : 1;
+  const unit = inches ? "in" : "mm";
+
+  it("hole list: a header naming the unit and every hole at its coordinates", () => {
+    const csv = holeListFor(design, result);
+    const rows = parse(csv, { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+    expect(Object.keys(rows[0])).toEqual(["number", "id", "angle_deg_cw_from_top", `x_${unit}`, `y_${unit}`, `hole_diameter_${unit}`, "bolt_size", "tightening_order"]);
+    expect(rows).toHaveLength(design.bolts.length);
+    rows.forEach((row, i) => {
+      expect(row.number).toBe(String(i + 1));
+      expect(row.id).toBe(design.bolts[i].id);
+      expect(Math.abs(Number(row[`x_${unit}`]) * k - expected[i].x)).toBeLessThan(TOL_MM);
+      expect(Math.abs(Number(row[`y_${unit}`]) * k - expected[i].y)).toBeLessThan(TOL_MM);
+      expect(Math.abs(Number(row[`hole_diameter_${unit}`]) * k - design.fastener.holeDiameterMm)).toBeLessThan(TOL_MM);
+      expect(row.bolt_size).toBe(design.fastener.designation);
+    });
+    // The tightening order is the stored plan's sequence, each position used once.
+    const order = rows.map((r) => Number(r.tightening_order)).sort((a, b) => a - b);
+    expect(order).toEqual(Array.from({ length: design.bolts.length }, (_, i) => i + 1));
+    expect(rows.find((r) => r.tightening_order === "1")?.id).toBe(result.assemblyPlan.sequence[0]);
+  });
+
+  it("drilling template: named layers, $INSUNITS, one circle per hole at its coordinates and diameter", () => {
+    const dxf = new DxfParser().parseSync(drillingTemplateFor(design, result));
+    expect(dxf).not.toBeNull();
+    const header = dxf!.header as Record<string, unknown>;
+    expect(header.$INSUNITS).toBe(inches ? 1 : 4);
+    const layers = Object.keys((dxf!.tables as { layer: { layers: Record<string, unknown> } }).layer.layers);
+    for (const name of ["OUTLINE", "BORE", "HOLES", "CENTRE-MARKS", "BOLT-PATH", "GASKET"]) {
+      if (name === "BORE" && !design.bore) continue;
+      if (name === "GASKET" && design.gasket.kind !== "ring") continue;
+      expect(layers).toContain(name);
+    }
+    const entities = dxf!.entities as { type: string; layer: string; center?: { x: number; y: number }; radius?: number }[];
+    const holes = entities.filter((e) => e.type === "CIRCLE" && e.layer === "HOLES");
+    expect(holes).toHaveLength(design.bolts.length);
+    for (const p of expected) {
+      const hit = holes.filter((h) => Math.hypot(h.center!.x * k - p.x, h.center!.y * k - p.y) < TOL_MM);
+      expect(hit).toHaveLength(1);
+      expect(Math.abs(hit[0].radius! * k * 2 - design.fastener.holeDiameterMm)).toBeLessThan(TOL_MM);
+    }
+    expect(entities.filter((e) => e.type === "LINE" && e.layer === "CENTRE-MARKS")).toHaveLength(2 * design.bolts.length);
+    expect(entities.some((e) => e.layer === "OUTLINE")).toBe(true);
+    expect(entities.some((e) => e.layer === "BOLT-PATH")).toBe(true);
+  });
+});
+
+describe("export file names", () => {
+  it("use the equipment tag, else the design name, with the revision and the kind", () => {
+    expect(exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "spacing-sheet")).toBe("e-2107-rev3-spacing-sheet.pdf");
+    expect(exportFileName({ equipmentTag: " ", designName: "Manway M1 / north" }, 12, "hole-list")).toBe("manway-m1-north-rev12-hole-list.csv");
+    expect(exportFileName({ equipmentTag: "", designName: "Flänge ½" }, 1, "drilling-template")).toBe("flange-1-2-rev1-drilling-template.dxf");
+    expect(exportFileName({ equipmentTag: "", designName: "Ø" }, 2, "hole-list")).toBe("design-rev2-hole-list.csv");
+  });
+});
