@@ -111,6 +111,23 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
   expect(downloaded.status()).toBe(200);
   expect(downloaded.headers()["content-type"]).toBe("application/pdf");
   expect(Buffer.compare(await downloaded.body(), pdf)).toBe(0);
+
+  // Someone from another organisation, holding both ids, gets a 404 and not a byte.
+  const outsider = await (await browser.newContext()).newPage();
+  await outsider.goto("/sign-up");
+  await outsider.getByLabel("Your name").fill("Olu Outsider");
+  await outsider.getByLabel("E-mail").fill(`olu.${suffix}@other-works.example`);
+  await outsider.getByLabel("Organisation").fill(`Other Works ${suffix}`);
+  await outsider.getByLabel("Password", { exact: true }).fill("another-plant-2026");
+  await outsider.getByLabel("Repeat the password").fill("another-plant-2026");
+  await outsider.getByRole("button", { name: "Start the organisation" }).click();
+  await expect(outsider).toHaveURL(/\/desk$/);
+  const stolen = await outsider.request.get(`${base}/${item!.id}`);
+  expect(stolen.status()).toBe(404);
+  expect(await stolen.text()).not.toContain("Kestrel Ridge gasket datasheet");
+  expect((await outsider.request.get(base)).status()).toBe(404);
+  const wiped = await outsider.request.delete(`${base}/${item!.id}`, { headers: { origin: APP_URL } });
+  expect(wiped.status()).toBe(404);
 });
 
 test("a DXF outline with bolt holes imports into a new design after a preview", async ({ browser }) => {

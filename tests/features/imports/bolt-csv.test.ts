@@ -1,5 +1,8 @@
 import { describe, expect, it } from "vitest";
+import Drawing from "dxf-writer";
+import { getBoltPoints } from "@/features/analysis/core/geometry";
 import { parseBoltCsv } from "@/features/imports/model/parse-bolt-csv";
+import { prepareImport } from "@/features/imports/model/prepare-import";
 
 describe("bolt positions from CSV", () => {
   it("reads x, y and d columns in mm, or inches when asked", () => {
@@ -22,5 +25,23 @@ describe("bolt positions from CSV", () => {
 
   it("refuses a file without x and y columns", () => {
     expect(parseBoltCsv("a,b\n1,2\n")).toMatchObject({ ok: false, message: expect.stringMatching(/columns x and y/) });
+  });
+
+  it("in the intake, CSV bolt positions replace the DXF holes and keep their exact coordinates", () => {
+    const d = new Drawing();
+    d.drawCircle(0, 0, 200);
+    for (const [x, y] of [[150, 0], [-150, 0]]) d.drawCircle(x, y, 9);
+    const rows = Array.from({ length: 6 }, (_, i) => {
+      const a = (i * Math.PI) / 3;
+      return [Math.round(160 * Math.cos(a) * 1000) / 1000, Math.round(160 * Math.sin(a) * 1000) / 1000];
+    });
+    const csv = ["x,y,d", ...rows.map(([x, y]) => `${x},${y},18`)].join("\n");
+    const r = prepareImport({ dxfText: d.toDxfString(), csvText: csv, name: "CSV pattern", units: "SI" });
+    if (!r.ok) throw new Error(r.message);
+    expect(r.summary).toMatchObject({ boltsFrom: "csv", holeCount: 6, holeDiameterMm: 18 });
+    const pts = getBoltPoints(r.built.design);
+    for (const [x, y] of rows) expect(Math.min(...pts.map((p) => Math.hypot(p.x - x, p.y - y)))).toBeLessThan(1e-3);
+    const bad = prepareImport({ dxfText: d.toDxfString(), csvText: "x,y\n1,2\n3,oops\n", name: "x", units: "SI" });
+    expect(bad).toMatchObject({ ok: false, field: "csv", message: 'row 3: y "oops" is not a number' });
   });
 });

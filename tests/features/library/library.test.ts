@@ -5,6 +5,7 @@ import { toGasketMaterial } from "@/features/library/model/gasket-material";
 import { createGasket, importLibraryCsv, setBuiltinHidden, updateGasket } from "@/features/library/mutations";
 import { listBoltingChoices, listFlangeTemplateChoices, listGasketChoices, listGasketListing, listOwnGaskets } from "@/features/library/queries";
 import { gasketInputSchema } from "@/features/library/schema";
+import { gasketsToCsv } from "@/features/library/model/library-csv";
 import { getTestDb } from "../../setup/test-db";
 import { createOrgWithUsers, dropOrg } from "./helpers";
 
@@ -112,6 +113,15 @@ describe("Stockroom (real PostgreSQL)", () => {
     const good = await importLibraryCsv(db, org.organizationId, org.adminId, "gasket", csv.replace(",abc,", ",15,"));
     expect(good).toMatchObject({ ok: true, imported: 3 });
     expect((await listOwnGaskets(db, org.organizationId)).length).toBe(before + 3);
+  });
+
+  it("exports the organisation's own rows in the format the import reads (round trip into another organisation)", async () => {
+    const own = await listOwnGaskets(db, org.organizationId);
+    const csv = gasketsToCsv(own);
+    expect(csv.split("\n")[0]).toBe("name,gasket_type,m,y_mpa,qmin_l1,qsmin_l1,qmin_l01,qsmin_l01,qmin_l001,qsmin_l001,qsmax_mpa,pqr,eg_mpa,modulus_mpa,thickness_mm,source,edition");
+    expect(await importLibraryCsv(db, other.organizationId, other.adminId, "gasket", csv)).toMatchObject({ ok: true, imported: own.length });
+    const strip = (rows: Awaited<ReturnType<typeof listOwnGaskets>>) => rows.map(({ id: _i, rowId: _r, ...rest }) => rest);
+    expect(strip(await listOwnGaskets(db, other.organizationId))).toEqual(strip(own));
   });
 
   it("imports bolting lines of one name as one material with its size ranges, and flange templates", async () => {
