@@ -1,0 +1,162 @@
+"use client";
+import { useCallback, useMemo, useRef, useState, useTransition } from "react";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
+import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
+import type { SaveWorkingRevisionAction, WorkspaceDesignDto } from "@/features/designs/workspace-contract";
+import type { ActionResult } from "@/server/action-result";
+import { nextBoltId } from "../model/bolt-path";
+import type { DesignAction } from "../model/editor-action";
+import { highlightedBolts, toReadoutView } from "../model/readout-view";
+import { renumberBolts } from "../model/renumber-bolts";
+import { degreesToArcMm } from "../model/rotate-pattern";
+import { useDocumentErrors } from "../hooks/use-document-errors";
+import { useDragLoop } from "../hooks/use-drag-loop";
+import { useEditorHistory } from "../hooks/use-editor-history";
+import { useEditorShortcuts } from "../hooks/use-editor-shortcuts";
+import { useHeatMap } from "../hooks/use-heat-map";
+import { useLeaveGuard } from "../hooks/use-leave-guard";
+import { useLiveAnalysis } from "../hooks/use-live-analysis";
+import { useResultAgreement } from "../hooks/use-result-agreement";
+import { useSave } from "../hooks/use-save";
+import { JointCanvas } from "./joint-canvas";
+import { JointForm } from "./joint-form";
+import { PatternToolbar } from "./pattern-toolbar";
+import { ReadoutPanel } from "./readout-panel";
+import { SaveBar } from "./save-bar";
+import { StressLegend } from "./stress-legend";
+import { UnitSwitch } from "./unit-switch";
+
+export interface DesignWorkspaceProps {
+  design: WorkspaceDesignDto;
+  saveAction: SaveWorkingRevisionAction;
+  unitSystem: UnitSystem;
+  setUnitSystemAction: (u: UnitSystem) => Promise<ActionResult<unknown>>;
+  readOnly?: boolean;
+}
+
+/** The "Layout desk": drawing, pattern bench, joint data, readout and saving for one working revision. */
+export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSystemAction, readOnly }: DesignWorkspaceProps) {
+  const ro = readOnly ?? !dto.canEdit;
+  const editor = useEditorHistory(dto.document);
+  const { design, dispatch } = editor;
+  const [meta, setMeta] = useState({ name: dto.name, equipmentTag: dto.equipmentTag });
+  const [units, setUnits] = useState<UnitSystem>(unitSystem);
+  const [unitMessage, setUnitMessage] = useState<string | null>(null);
+  const [unitPending, startUnits] = useTransition();
+  const [stored, setStored] = useState<{ document: JointDesign; result: JointAnalysis } | null>(
+    dto.result ? { document: dto.document, result: dto.result as unknown as JointAnalysis } : null,
+  );
+  const [selected, setSelected] = useState<string | null>(null);
+  const [activeCheck, setActiveCheck] = useState<string | null>(null);
+  const [fitToken, setFitToken] = useState(0);
+  const [invalid, setInvalidState] = useState<Record<string, true>>({});
+  const discarding = useRef(false);
+
+  const live = useLiveAnalysis(design, stored);
+  useResultAgreement(stored);
+  const view = useMemo(() => (live.result ? toReadoutView(live.result) : null), [live.result]);
+  const lastView = useRef(view);
+  if (view) lastView.current = view;
+  const heat = useHeatMap(design, view, editor.dragging);
+
+  const setInvalid = useCallback((path: string, bad: boolean) => {
+    setInvalidState((cur) => {
+      if (bad === !!cur[path]) return cur;
+      const next = { ...cur };
+      if (bad) next[path] = true;
+      else delete next[path];
+      return next;
+    });
+  }, []);
+
+  const onSaved = useCallback((result: JointAnalysis, doc: JointDesign) => setStored({ document: doc, result }), []);
+  const invalidCount = Object.keys(invalid).length;
+  const docErrors = useDocumentErrors(design, editor.dragging, null);
+  const blockedReason = invalidCount > 0
+    ? "Fix the marked fields before saving; nothing with a refused value is written."
+    : docErrors.schemaErrorCount > 0 ? `Not saved: ${docErrors.schemaMessages.slice(0, 3).join("; ")}` : null;
+  const save = useSave({
+    designId: dto.designId, initialVersion: dto.version, initialDocument: dto.document, document: design, meta,
+    saveAction, blocked: !!blockedReason || editor.dragging, enabled: !ro, onSaved,
+  });
+  const serverErrors = useDocumentErrors(design, true, save.fieldErrors);
+  const errorFor = useCallback((p: string) => docErrors.errorFor(p) ?? serverErrors.errorFor(p), [docErrors, serverErrors]);
+  useLeaveGuard(save.dirty, discarding);
+
+  const act = useCallback((a: DesignAction) => dispatch(a), [dispatch]);
+  const drag = useDragLoop(design, dispatch);
+
+  const reloadTheirs = () => {
+    if (!window.confirm("Discard your unsaved edits and load the version someone else saved?")) return;
+    discarding.current = true;
+    window.location.reload();
+  };
+  const deleteBolt = (id: string) => {
+    if (design.bolts.length <= 1) return;
+    act({ type: "delete-bolts", boltIds: [id] });
+    setSelected(null);
+  };
+  useEditorShortcuts({
+    undo: editor.undo, redo: editor.redo, save: () => void save.save(), fit: () => setFitToken((t) => t + 1),
+    deleteSelected: () => selected && deleteBolt(selected),
+    nudge: (steps) => selected && act({ type: "nudge-bolt", boltId: selected, deltaMm: steps * (units === "US" ? 25.4 / 16 : 1) }),
+  }, !ro);
+
+  const changeUnits = (u: UnitSystem) => {
+    setUnits(u);
+    setUnitMessage(null);
+    startUnits(async () => {
+      const r = await setUnitSystemAction(u);
+      if (!r.ok) setUnitMessage(`The units are switched here but could not be remembered: ${r.message}`);
+    });
+  };
+
+  const checks = (view ?? lastView.current)?.checks ?? [];
+  const highlight = highlightedBolts(view, { checkId: activeCheck ?? undefined });
+  const ctx = { design, units, readOnly: ro, dispatch: act, setInvalid, errorFor };
+
+  return (
+    <div className="space-y-3" data-testid="design-workspace">
+      <header className="flex flex-wrap items-center justify-between gap-3">
+        <div>
+          <h1 className="text-heading font-semibold text-ink-900">{meta.name}</h1>
+          <p className="text-table text-ink-600">
+            {meta.equipmentTag && <span className="num">{meta.equipmentTag} · </span>}revision {dto.revisionNumber} · {dto.status.replace("_", " ")} · {dto.ownerName}
+            {ro && <span className="ml-2 rounded bg-ink-100 px-1.5 text-micro">read only</span>}
+          </p>
+        </div>
+        <div className="flex flex-col items-end gap-1">
+          <UnitSwitch units={units} onChange={changeUnits} pending={unitPending} />
+          {unitMessage && <p role="alert" className="text-micro text-verdict-warn">{unitMessage}</p>}
+        </div>
+        <div className="w-full max-w-xl">
+          <SaveBar state={save.saveState} version={save.version} message={save.message} blockedReason={save.dirty ? blockedReason : null} readOnly={ro}
+            onSave={() => void save.save()} onReloadTheirs={reloadTheirs} />
+        </div>
+      </header>
+      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
+        <div className="min-w-0 space-y-3">
+          <div className="overflow-hidden rounded-plate bg-white shadow-plate">
+            <PatternToolbar boltCount={design.bolts.length} readOnly={ro} canUndo={editor.canUndo} canRedo={editor.canRedo}
+              onPlace={(n, onCentre) => { act({ type: "place-equally", count: n, options: { phase: onCentre ? 0 : 0.5 } }); setSelected(null); }}
+              onRotate={(deg) => act({ type: "rotate-pattern", deltaMm: degreesToArcMm(design, deg) })}
+              onRenumber={() => { const { idMap } = renumberBolts(design); act({ type: "renumber" }); setSelected((s) => (s ? idMap[s] ?? null : null)); }}
+              onUndo={editor.undo} onRedo={editor.redo} onFit={() => setFitToken((t) => t + 1)} />
+            <div className="relative h-[560px]">
+              <JointCanvas design={design} checks={checks} heat={heat.stage} units={units} selectedId={selected} highlightBoltIds={highlight}
+                readOnly={ro} fitToken={fitToken} onSelect={setSelected} onDragStart={drag.onDragStart} onDragMove={drag.onDragMove}
+                onDragEnd={drag.onDragEnd} onDrawn={drag.onDrawn}
+                onAddBolt={(s) => { const id = nextBoltId(design); act({ type: "add-bolt", sMm: s }); setSelected(id); }} />
+              {heat.scale && <StressLegend scale={heat.scale} units={units} basis="minimum preload" />}
+            </div>
+          </div>
+          <ReadoutPanel view={view} issues={live.issues} units={units} activeCheckId={activeCheck} onPickCheck={setActiveCheck} onPickBolt={setSelected}
+            basis={live.stored ? "stored" : "preview"} />
+        </div>
+        <aside aria-label="Joint data" className="space-y-4 rounded-plate bg-white p-3 shadow-plate">
+          <JointForm ctx={ctx} meta={meta} onMeta={setMeta} selectedBoltId={selected} onDeleteBolt={deleteBolt} />
+        </aside>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,16 @@
+import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
+import type { DesignAction } from "../model/editor-action";
+
+/** What every section of the joint data form needs. */
+export interface FormContext {
+  design: JointDesign;
+  units: UnitSystem;
+  readOnly: boolean;
+  dispatch: (a: DesignAction) => void;
+  /** Reports whether a field currently holds a value that was refused (blocks saving). */
+  setInvalid: (path: string, invalid: boolean) => void;
+  /** Messages from the server's or the schema's validation, by design path ("loads.designPressureMpa"). */
+  errorFor: (path: string) => string | undefined;
+}
+
+export const fieldDomId = (path: string): string => `field-${path.replace(/[^A-Za-z0-9]/g, "-")}`;

@@ -1,0 +1,79 @@
+"use client";
+import { useEffect, useState } from "react";
+import { parseNumberField, type NumberFieldSpec } from "../model/field-specs";
+import { formatInputNumber, toDisplay, unitLabel } from "../model/quantities";
+import { fieldDomId, type FormContext } from "./form-context";
+
+interface Props {
+  ctx: FormContext;
+  spec: NumberFieldSpec;
+  value: number;
+  /** Default: set the value at spec.path. */
+  onCommit?: (internal: number) => void;
+}
+
+/**
+ * A numeric field in display units. What is typed stays in the box; only a value that parses and
+ * lies within the field's bounds is committed (on blur or Enter), so a refused value never
+ * reaches the document. The message sits under the field and is tied to it by aria-describedby.
+ */
+export function NumberField({ ctx, spec, value, onCommit }: Props) {
+  const { units } = ctx;
+  const shown = spec.quantity === "count" ? String(value) : formatInputNumber(toDisplay(spec.quantity, value, units));
+  const [raw, setRaw] = useState(shown);
+  const [error, setError] = useState<string | null>(null);
+  const [focused, setFocused] = useState(false);
+  useEffect(() => {
+    // The document changed from elsewhere (undo, unit switch, a drag): show it, unless the user is typing here.
+    if (!focused) {
+      setRaw(shown);
+      setError(null);
+      ctx.setInvalid(spec.path, false);
+    }
+  }, [shown]); // eslint-disable-line react-hooks/exhaustive-deps
+  const id = fieldDomId(spec.path);
+  const serverError = ctx.errorFor(spec.path);
+  const message = error ?? serverError;
+  const commit = () => {
+    const r = parseNumberField(spec, raw, units);
+    if (!r.ok) {
+      setError(r.message);
+      ctx.setInvalid(spec.path, true);
+      return;
+    }
+    setError(null);
+    ctx.setInvalid(spec.path, false);
+    if (r.value !== value) (onCommit ?? ((v: number) => ctx.dispatch({ type: "set-field", path: spec.path, value: v })))(r.value);
+    else setRaw(shown);
+  };
+  const unit = unitLabel(spec.quantity, units);
+  return (
+    <div className="flex flex-col gap-0.5">
+      <label htmlFor={id} className="text-micro text-ink-600">{spec.label}{unit ? ` (${unit})` : ""}</label>
+      <input
+        id={id}
+        inputMode="decimal"
+        className={`num rounded border px-2 py-1 text-table ${message ? "border-verdict-fail bg-verdict-fail-bg" : "border-ink-200"}`}
+        value={raw}
+        disabled={ctx.readOnly}
+        aria-invalid={message ? true : undefined}
+        aria-describedby={message ? `${id}-error` : undefined}
+        onFocus={() => setFocused(true)}
+        onChange={(e) => {
+          setRaw(e.target.value);
+          const r = parseNumberField(spec, e.target.value, units);
+          setError(r.ok ? null : r.message);
+          ctx.setInvalid(spec.path, !r.ok);
+        }}
+        onBlur={() => {
+          setFocused(false);
+          commit();
+        }}
+        onKeyDown={(e) => {
+          if (e.key === "Enter") commit();
+        }}
+      />
+      {message && <p id={`${id}-error`} role="alert" className="text-micro text-verdict-fail">{message}</p>}
+    </div>
+  );
+}

@@ -1,0 +1,59 @@
+"use client";
+import { useCallback, useEffect, useRef } from "react";
+import { flushSync } from "react-dom";
+import type { JointDesign, PointMm } from "@/features/analysis/core/design";
+import type { HistoryAction } from "../model/editor-action";
+import { resolveMoveTarget } from "../model/move-bolt";
+
+export interface FrameTiming { reactMs: number; drawMs: number; totalMs: number }
+
+declare global {
+  interface Window { __sealpitchPerf?: { frames: FrameTiming[] } }
+}
+
+interface Move { id: string; point: PointMm; free: boolean; snapMm: number }
+
+/**
+ * Turns pointer moves into at most one document change per animation frame. Each frame is
+ * rendered synchronously (flushSync) so the recompute + React work can be timed, and the Konva
+ * draw that follows is added to it: `window.__sealpitchPerf.frames` (read by bench/editor-drag).
+ */
+export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) => void) {
+  const designRef = useRef(design);
+  designRef.current = design;
+  const pending = useRef<Move | null>(null);
+  const raf = useRef(0);
+  const frame = useRef<{ reactMs: number } | null>(null);
+
+  const flush = useCallback(() => {
+    raf.current = 0;
+    const m = pending.current;
+    pending.current = null;
+    if (!m) return;
+    const t0 = performance.now();
+    const t = resolveMoveTarget(designRef.current, m.id, m.point, { free: m.free, snapMm: m.snapMm });
+    flushSync(() => dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm }));
+    frame.current = { reactMs: performance.now() - t0 };
+  }, [dispatch]);
+
+  const onDragStart = useCallback(() => dispatch({ type: "drag-start" }), [dispatch]);
+  const onDragMove = useCallback((id: string, point: PointMm, free: boolean, snapMm: number) => {
+    pending.current = { id, point, free, snapMm };
+    if (!raf.current) raf.current = requestAnimationFrame(flush);
+  }, [flush]);
+  const onDragEnd = useCallback(() => {
+    if (raf.current) cancelAnimationFrame(raf.current);
+    flush();
+    dispatch({ type: "drag-end" });
+  }, [dispatch, flush]);
+  const onDrawn = useCallback((drawMs: number) => {
+    const f = frame.current;
+    if (!f) return;
+    frame.current = null;
+    const perf = (window.__sealpitchPerf ??= { frames: [] });
+    perf.frames.push({ reactMs: f.reactMs, drawMs, totalMs: f.reactMs + drawMs });
+    if (perf.frames.length > 5000) perf.frames.splice(0, perf.frames.length - 5000);
+  }, []);
+  useEffect(() => () => { if (raf.current) cancelAnimationFrame(raf.current); }, []);
+  return { onDragStart, onDragMove, onDragEnd, onDrawn };
+}
