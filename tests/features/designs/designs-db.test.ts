@@ -221,7 +221,7 @@ describe("the register query", () => {
       expect((await q({ owner: org.users.a.userId })).total).toBe(2);
       expect((await q({ outline: "obround" })).items.map((d) => d.name)).toEqual(["Alpha manway 100%"]);
       expect((await q({ updatedWithinDays: "1" })).total).toBe(3);
-      await db.updateTable("designs").set({ updated_at: new Date(Date.now() - 10 * 86_400_000) }).where("id", "=", charlie).execute();
+      await db.updateTable("designs").set({ updated_at: sql`now() - interval '10 days'` }).where("id", "=", charlie).execute();
       expect((await q({ updatedWithinDays: "7" })).total).toBe(2);
       expect((await q({ status: "bogus", page: "-3", sort: "nope" })).total).toBe(3);
       const paged = await q({ page: "99" });
