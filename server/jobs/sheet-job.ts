@@ -8,7 +8,7 @@ import { claimExportFile, createExportFile, failExportFile, finishExportFile, se
 import { SHEET_QUEUE, ensureWorker, getQueue } from "./queue";
 
 /** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
-export const BACKGROUND_SHEET_MIN_BOLTS = 64;
+export { BACKGROUND_SHEET_MIN_BOLTS } from "@/features/exports/cache-keys";
 
 interface SheetJobData {
   exportFileId: string;

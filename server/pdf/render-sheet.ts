@@ -9,7 +9,7 @@ import { drawFlange } from "./draw-flange";
 import { drawProfileChart } from "./draw-profile-chart";
 import { drawKeyValues, drawTable, type Cell } from "./draw-table";
 import { jointDataItems } from "./joint-data";
-import { readResultView, type SheetResultView, type SheetStatus } from "./result-view";
+import { groupChecks, readResultView, type SheetCheckGroup, type SheetResultView, type SheetStatus } from "./result-view";
 import { C, MARGIN, PAPER_SIZES, TITLE_BLOCK_H, createContext, heading, type SheetContext } from "./sheet-context";
 import type { RenderOptions, SheetInput } from "./sheet-input";
 import { drawNotApprovedMark, drawTitleBlock } from "./title-block";
@@ -93,8 +93,22 @@ function boltTable(ctx: SheetContext, rows: BoltRow[]): void {
   );
 }
 
+function subjectsNote(g: SheetCheckGroup, limit = 14): string {
+  if (g.count === 1) return g.boltIds.length ? ` (${g.boltIds.join(", ")})` : "";
+  const tally = (["fail", "warn", "pass", "na"] as const)
+    .map((st) => [st, g.statusCounts[st]] as const)
+    .filter(([, k]) => k > 0)
+    .map(([st, k]) => `${k} ${STATUS_STYLE[st].text.toLowerCase()}`)
+    .join(", ");
+  const label = STATUS_STYLE[g.status].text.toLowerCase();
+  const shown = g.worstSubjects.slice(0, limit).join(", ");
+  const more = g.worstSubjects.length > limit ? ` and ${g.worstSubjects.length - limit} more` : "";
+  const which = g.worstSubjects.length === g.count ? "" : ` ${label}: ${shown}${more};`;
+  return ` — ${g.count} checks: ${tally};${which} values of the first ${label}`;
+}
+
 function checkTable(ctx: SheetContext, view: SheetResultView): void {
-  heading(ctx, "Checks", "as stored with the revision");
+  heading(ctx, "Checks", "as stored with the revision; per-pair and per-bolt checks of one kind share a row");
   if (view.checks.length === 0) {
     ctx.doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result has no checks.", ctx.content.x0, ctx.y);
     ctx.y += 16;
@@ -103,28 +117,38 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
   drawTable(
     ctx,
     [
-      { header: "Check", width: 2.6, wrap: true },
-      { header: "Value", width: 1.2, align: "right", mono: true },
-      { header: "Limit", width: 1.2, align: "right", mono: true },
-      { header: "Status", width: 0.7, align: "center" },
-      { header: "Source", width: 2.6, wrap: true },
+      { header: "Check", width: 3, wrap: true },
+      { header: "Value", width: 1.1, align: "right", mono: true },
+      { header: "Limit", width: 1.1, align: "right", mono: true },
+      { header: "Status", width: 0.65, align: "center" },
+      { header: "Source", width: 2.4, wrap: true },
     ],
-    view.checks.map((c): Cell[] => {
-      const st = STATUS_STYLE[c.status];
-      return [c.title, c.value, c.limit, { text: st.text, style: { bold: true, color: st.color, fill: st.fill } }, c.source || "—"];
+    groupChecks(view.checks).map((g): Cell[] => {
+      const st = STATUS_STYLE[g.status];
+      return [`${g.title}${subjectsNote(g)}`, g.value, g.limit, { text: st.text, style: { bold: true, color: st.color, fill: st.fill } }, g.source || "—"];
     }),
   );
 }
 
 function justifications(ctx: SheetContext, view: SheetResultView): void {
   const list = ctx.input.justifications;
-  const open = view.checks.filter((c) => c.status === "warn" || c.status === "fail");
+  const open = groupChecks(view.checks.filter((c) => c.status === "warn" || c.status === "fail"));
   if (open.length === 0 && list.length === 0) return;
   heading(ctx, "Justifications", "approved reasons for accepting a warn or fail");
-  const titles = new Map(view.checks.map((c) => [c.id, c.title]));
-  const rows: Cell[][] = list.map((j) => [titles.get(j.checkId) ?? j.checkId, { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } }, j.text, `${j.by}, ${j.at.slice(0, 10)}`]);
-  for (const c of open) if (!list.some((j) => j.checkId === c.id)) rows.push([c.title, { text: STATUS_STYLE[c.status].text, style: { bold: true, color: STATUS_STYLE[c.status].color } }, "No approved justification.", "—"]);
-  drawTable(ctx, [{ header: "Check", width: 2, wrap: true }, { header: "Status", width: 0.6 }, { header: "Justification", width: 4, wrap: true }, { header: "Accepted by", width: 1.4, wrap: true }], rows);
+  const byId = new Map(view.checks.map((c) => [c.id, c]));
+  const rows: Cell[][] = list.map((j) => {
+    const c = byId.get(j.checkId);
+    const title = c ? `${c.title}${c.boltIds.length ? ` (${c.boltIds.join(", ")})` : ""}` : j.checkId;
+    return [title, { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } }, j.text, `${j.by}, ${j.at.slice(0, 10)}`];
+  });
+  const justified = new Set(list.map((j) => j.checkId));
+  for (const g of open) {
+    const missing = g.worstIds.filter((id) => !justified.has(id));
+    if (missing.length === 0) continue;
+    const note = g.count === 1 ? subjectsNote(g) : ` — ${missing.length} of ${g.count} without a justification`;
+    rows.push([`${g.title}${note}`, { text: STATUS_STYLE[g.status].text, style: { bold: true, color: STATUS_STYLE[g.status].color } }, "No approved justification.", "—"]);
+  }
+  drawTable(ctx, [{ header: "Check", width: 2.4, wrap: true }, { header: "Status", width: 0.6 }, { header: "Justification", width: 3.6, wrap: true }, { header: "Accepted by", width: 1.4, wrap: true }], rows);
 }
 
 function profileChart(ctx: SheetContext, view: SheetResultView, rows: BoltRow[]): void {

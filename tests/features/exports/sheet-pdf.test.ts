@@ -60,9 +60,21 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     // Every bolt is a row of the bolt table: "<number> b<number>" at the start of a line.
     for (let i = 1; i <= design.bolts.length; i++) expect(text).toMatch(new RegExp(`^${i}\\s+${design.bolts[i - 1].id}\\b`, "m"));
     const result = input.result as ReturnType<typeof analyse>;
-    const expected = { pass: "PASS", warn: "WARN", fail: "FAIL", "not-applicable": "N/A" } as const;
-    const statuses = new Set(result.checks.map((c) => expected[c.status]));
-    for (const s of statuses) expect(text).toContain(s);
+    // One row per check kind (pair and per-bolt checks grouped): each row shows the worst stored
+    // status of its kind, and its tally names every stored status of the kind.
+    const flat = text.replace(/\s+/g, " ");
+    const word = { pass: "PASS", warn: "WARN", fail: "FAIL", "not-applicable": "N/A" } as const;
+    const kinds = new Map<string, typeof result.checks>();
+    for (const c of result.checks) {
+      const kind = c.id.split(":")[0];
+      kinds.set(kind, [...(kinds.get(kind) ?? []), c]);
+    }
+    const rank = { fail: 3, warn: 2, pass: 1, "not-applicable": 0 } as const;
+    for (const list of kinds.values()) {
+      const worst = list.reduce((w, c) => (rank[c.status] > rank[w.status] ? c : w));
+      expect(flat).toContain(word[worst.status]);
+      if (list.length > 1) expect(flat).toContain(`${list.length} checks:`);
+    }
     // Stored counts appear as stored (no recomputation): "<p> pass · <w> warn · <f> fail".
     expect(text.replace(/\s+/g, " ")).toContain(`${result.summary.passCount} pass · ${result.summary.warnCount} warn · ${result.summary.failCount} fail`);
     for (const caution of ["engineering estimates", "governing code", "gasket manufacturer", "licensed"]) expect(text).toContain(caution);

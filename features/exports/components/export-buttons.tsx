@@ -1,0 +1,117 @@
+"use client";
+
+import { useState } from "react";
+import useSWR from "swr";
+import { buttonStyles } from "@/features/ui/button-styles";
+import { BACKGROUND_SHEET_MIN_BOLTS, JOB_POLL_MS, drillingTemplateUrl, holeListUrl, jobStatusKey, sheetPdfUrl } from "../cache-keys";
+
+export interface ExportButtonsProps {
+  designId: string;
+  revisionNumber: number;
+  /** Bolts in the revision's document: from BACKGROUND_SHEET_MIN_BOLTS (64) the sheet is queued. */
+  boltCount: number;
+  /** The viewer's unit system (users.unit_system); the sheet's default. */
+  unitSystem: "SI" | "US";
+  /** False when the revision has no stored result (the buttons are shown disabled). */
+  hasResult?: boolean;
+}
+
+interface JobStatus {
+  jobId: string;
+  status: "queued" | "running" | "done" | "failed";
+  progress: number;
+  fileName: string;
+  downloadUrl: string | null;
+  error: string | null;
+}
+
+const fetchJson = async (url: string): Promise<JobStatus> => {
+  const res = await fetch(url, { cache: "no-store" });
+  if (!res.ok) throw new Error(((await res.json().catch(() => null)) as { error?: { message?: string } } | null)?.error?.message ?? `HTTP ${res.status}`);
+  return res.json() as Promise<JobStatus>;
+};
+
+/** Sheet (PDF), hole list (CSV) and drilling template (DXF) of one stored revision. */
+export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem, hasResult = true }: ExportButtonsProps) {
+  const [paper, setPaper] = useState<"a4" | "letter">("a4");
+  const [units, setUnits] = useState<"SI" | "US">(unitSystem);
+  const [jobId, setJobId] = useState<string | null>(null);
+  const [queueError, setQueueError] = useState<string | null>(null);
+  const [queueing, setQueueing] = useState(false);
+  const queued = boltCount >= BACKGROUND_SHEET_MIN_BOLTS;
+  const { data: job, error: pollError } = useSWR<JobStatus>(jobId ? jobStatusKey(jobId) : null, fetchJson, {
+    refreshInterval: (latest) => (latest && (latest.status === "done" || latest.status === "failed") ? 0 : JOB_POLL_MS),
+  });
+  const pdfUrl = sheetPdfUrl(designId, revisionNumber, paper, units);
+
+  async function prepareSheet() {
+    setQueueing(true);
+    setQueueError(null);
+    setJobId(null);
+    try {
+      const res = await fetch(pdfUrl, { method: "POST" });
+      const body = (await res.json()) as { jobId?: string; error?: { message?: string } };
+      if (res.status !== 202 || !body.jobId) throw new Error(body.error?.message ?? `The sheet could not be queued (HTTP ${res.status}).`);
+      setJobId(body.jobId);
+    } catch (e) {
+      setQueueError(e instanceof Error ? e.message : String(e));
+    } finally {
+      setQueueing(false);
+    }
+  }
+
+  const disabled = !hasResult;
+  const linkClass = (style: string) => `${style}${disabled ? " pointer-events-none opacity-50" : ""}`;
+  const message = queueError ?? pollError?.message ?? (job?.status === "failed" ? job.error ?? "The sheet could not be made." : null);
+
+  return (
+    <section aria-label="Shop files" className="flex flex-col gap-2 rounded-plate border border-ink-200 bg-white p-3 shadow-plate">
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="flex flex-col text-micro text-ink-600">
+          Paper
+          <select className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900" value={paper} onChange={(e) => setPaper(e.target.value as "a4" | "letter")}>
+            <option value="a4">A4</option>
+            <option value="letter">Letter</option>
+          </select>
+        </label>
+        <label className="flex flex-col text-micro text-ink-600">
+          Units
+          <select className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900" value={units} onChange={(e) => setUnits(e.target.value as "SI" | "US")}>
+            <option value="SI">SI (mm, MPa, N·m)</option>
+            <option value="US">US (in, psi, ft·lb)</option>
+          </select>
+        </label>
+        {queued ? (
+          <button type="button" className={buttonStyles.primary} disabled={disabled || queueing || job?.status === "queued" || job?.status === "running"} onClick={prepareSheet}>
+            {queueing ? "Queuing…" : "Prepare spacing sheet (PDF)"}
+          </button>
+        ) : (
+          <a className={linkClass(buttonStyles.primary)} href={pdfUrl} aria-disabled={disabled} download>
+            Spacing sheet (PDF)
+          </a>
+        )}
+        <a className={linkClass(buttonStyles.secondary)} href={holeListUrl(designId, revisionNumber)} aria-disabled={disabled} download>
+          Hole list (CSV)
+        </a>
+        <a className={linkClass(buttonStyles.secondary)} href={drillingTemplateUrl(designId, revisionNumber)} aria-disabled={disabled} download>
+          Drilling template (DXF)
+        </a>
+      </div>
+      <div aria-live="polite" className="text-table text-ink-700">
+        {queued && !jobId && !message ? <p>{boltCount} bolts: the sheet is prepared in the background.</p> : null}
+        {job && (job.status === "queued" || job.status === "running") ? (
+          <div className="flex items-center gap-2">
+            <progress className="h-2 w-48" max={100} value={job.progress} aria-label="Sheet progress" />
+            <span className="num">{job.status === "queued" ? "Waiting in the queue…" : `Rendering ${job.progress} %`}</span>
+          </div>
+        ) : null}
+        {job?.status === "done" && job.downloadUrl ? (
+          <a className={buttonStyles.quiet} href={job.downloadUrl} download>
+            Download {job.fileName}
+          </a>
+        ) : null}
+        {message ? <p className="text-verdict-fail">{message}</p> : null}
+      </div>
+    </section>
+  );
+}
