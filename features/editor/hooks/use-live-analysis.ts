@@ -26,14 +26,19 @@ export function useLiveAnalysis(design: JointDesign, stored: { document: JointDe
       return { result: stored.result, issues: [], computeMs: 0, stored: true };
     }
     const t0 = performance.now();
-    const issues = validateJointDesign(design);
-    if (issues.length > 0) return { result: null, issues, computeMs: performance.now() - t0, stored: false };
     try {
+      // analyzeJoint validates first; the issues are listed only when it refuses (no second pass per frame).
       const result = analyzeJoint(design);
       last.current = result;
       return { result, issues: [], computeMs: performance.now() - t0, stored: false };
     } catch (err) {
-      return { result: null, issues: [{ path: "design", message: err instanceof Error ? err.message : String(err) }], computeMs: performance.now() - t0, stored: false };
+      const issues = validateJointDesign(design);
+      return {
+        result: null,
+        issues: issues.length > 0 ? issues : [{ path: "design", message: err instanceof Error ? err.message : String(err) }],
+        computeMs: performance.now() - t0,
+        stored: false,
+      };
     }
   }, [design, stored]);
 }
