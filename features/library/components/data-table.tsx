@@ -39,6 +39,8 @@ export function DataTable<T extends { id: string; origin: string; hidden: boolea
     globalFilterFn: containsText, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(), getPaginationRowModel: getPaginationRowModel(),
     initialState: { pagination: { pageSize } }, getRowId: (r) => r.id, autoResetPageIndex: true,
+    // Every column sorts ascending on the first click (TanStack starts numbers descending by default).
+    sortDescFirst: false,
   });
   const { pageIndex } = table.getState().pagination;
   const count = table.getFilteredRowModel().rows.length;
