@@ -47,7 +47,7 @@ export function ReviewCheckList(props: {
                 <button type="button" className="text-left text-ink-800 hover:underline" aria-pressed={active} onClick={() => props.onPick(active ? null : c)}>
                   {c.title}
                 </button>
-                <span className="ml-1 text-micro text-ink-400">{c.id}</span>
+                <span className="ml-1 break-all text-micro text-ink-400">{c.id}</span>
                 {c.note ? <p className="text-micro text-ink-500">{c.note}</p> : null}
                 {c.source ? <p className="text-micro text-ink-400">Source: {c.source}</p> : null}
                 {justification ? (

@@ -39,15 +39,15 @@ export function ReviewWorkspace(props: {
   const activeCommentId = highlight?.source.startsWith("comment:") ? highlight.source.slice("comment:".length) : null;
 
   return (
-    <div className="flex flex-col gap-gutter">
-      <div className="rounded-plate bg-white p-2 shadow-plate" data-testid="review-drawing" data-highlight-bolts={(highlight?.value.boltIds ?? []).join(" ")} data-highlight-check={highlight?.value.checkId ?? ""}>
+    <div className="flex min-w-0 flex-col gap-gutter">
+      <div className="min-w-0 overflow-x-auto rounded-plate bg-white p-2 shadow-plate" data-testid="review-drawing" data-highlight-bolts={(highlight?.value.boltIds ?? []).join(" ")} data-highlight-check={highlight?.value.checkId ?? ""}>
         {props.renderDrawing(highlight?.value)}
         <p role="status" aria-live="polite" className="min-h-5 px-1 text-table text-brass-700" data-testid="highlight-status">
           {highlight ? `Highlighted on the drawing: ${highlight.label}` : ""}
         </p>
       </div>
       <div className="grid gap-gutter lg:grid-cols-[minmax(0,1fr)_24rem]">
-        <section aria-labelledby="checks-heading" className="min-w-0 rounded-plate bg-white p-panel shadow-plate">
+        <section aria-labelledby="checks-heading" className="min-w-0 overflow-x-auto rounded-plate bg-white p-panel shadow-plate">
           <h2 id="checks-heading" className="text-lead font-semibold text-ink-900">Checks and justifications</h2>
           <ReviewCheckList
             checks={review.checks}
