@@ -65,6 +65,37 @@ function quickFraction(region: GasketRegion, x: number, y: number, ri: number, r
 }
 
 /**
+ * Memo of clipped footprint fractions. The fraction is a pure function of the bolt position, the
+ * footprint radii, the gasket region's boundaries and the holes that can reach the footprint, so
+ * while one bolt is dragged every other bolt's fraction is reused bit for bit. Without it a bolt
+ * moved off a regular circular pattern (no shared fraction any more) cost 96 × 1920 region tests.
+ */
+const fractionMemo = new Map<string, number>();
+const MEMO_LIMIT = 8192;
+const regionKeys = new WeakMap<GasketRegion, string>();
+
+function regionKey(region: GasketRegion): string {
+  let k = regionKeys.get(region);
+  if (k === undefined) {
+    k = JSON.stringify([region.kind, region.innerRadiusMm, region.outerRadiusMm, region.bandCentreOffsetMm, region.bandWidthMm, region.outline, region.bore, region.holeRadiusMm]);
+    regionKeys.set(region, k);
+  }
+  return k;
+}
+
+function memoClippedFraction(region: GasketRegion, x: number, y: number, ri: number, rc: number, hash: PointHash, self: number): number {
+  let key = `${regionKey(region)}|${x}|${y}|${ri}|${rc}`;
+  // Full-face regions exclude bolt holes: any hole within rc + hole radius can change the result.
+  if (region.kind === "full-face") forEachNear(hash, x, y, rc + region.holeRadiusMm, (j) => { if (j !== self) key += `|${hash.xs[j]},${hash.ys[j]}`; });
+  const hit = fractionMemo.get(key);
+  if (hit !== undefined) return hit;
+  const v = clippedFraction(region, x, y, ri, rc);
+  if (fractionMemo.size >= MEMO_LIMIT) fractionMemo.clear();
+  fractionMemo.set(key, v);
+  return v;
+}
+
+/**
  * Prepares the superposition for given bolt forces. Regular circular patterns reuse one
  * clipping integral for every bolt (`regular`).
  */
@@ -80,7 +111,7 @@ export function buildConeField(region: GasketRegion, forcesN: ArrayLike<number>,
     if (regular && i > 0) frac[i] = frac[0];
     else {
       const q = quickFraction(region, p.x, p.y, innerRadiusMm, rc, hash, i);
-      frac[i] = q >= 0 ? q : clippedFraction(region, p.x, p.y, innerRadiusMm, rc);
+      frac[i] = q >= 0 ? q : memoClippedFraction(region, p.x, p.y, innerRadiusMm, rc, hash, i);
     }
     peak[i] = frac[i] > 1e-9 ? forcesN[i] / (full * frac[i]) : 0;
   }
