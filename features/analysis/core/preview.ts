@@ -49,19 +49,26 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
   const profiles = computeGasketStressProfiles(model);
   const gov = governingProfile(profiles);
   const withIds = (c: CheckRecord): PreviewCheck => ({ ...c, boltIds: c.subject ?? [] });
-  const arr = (a: ArrayLike<number>) => Array.from(a);
+  // Plain arrays with non-finite values as null: what toFiniteJson gives analyzeJoint, in one pass.
+  const arr = (a: ArrayLike<number>): number[] => {
+    const out = new Array<number>(a.length);
+    for (let i = 0; i < a.length; i++) { const v = a[i]; out[i] = Number.isFinite(v) ? v : (null as unknown as number); }
+    return out;
+  };
   const preview: JointPreview = {
     coreVersion: CORE_VERSION,
     governingEstimator: gov.estimator,
-    summary: { minGasketStressMpa: gov.summary.minMpa, maxGasketStressMpa: gov.summary.maxMpa, meanGasketStressMpa: gov.summary.meanMpa },
     profile: {
       sMm: arr(profiles.sMm), xMm: arr(profiles.xMm), yMm: arr(profiles.yMm), stressMpa: arr(gov.values),
       coneMpa: arr(profiles.coneMpa), beamMpa: arr(profiles.beamMpa), onGasket: Array.from(profiles.onGasket, (v) => v === 1),
     },
-    boltSOnPathMm: profiles.boltSOnPathMm,
-    seating: withIds(checkGasketStress(model, gov.summary, gov.estimator)[0]),
-    spacing: checkSpacing(model, gov.estimator === "cone").map(withIds),
+    boltSOnPathMm: arr(profiles.boltSOnPathMm),
+    // The records and the summary go through the same conversion analyzeJoint applies.
+    ...toFiniteJson({
+      summary: { minGasketStressMpa: gov.summary.minMpa, maxGasketStressMpa: gov.summary.maxMpa, meanGasketStressMpa: gov.summary.meanMpa },
+      seating: withIds(checkGasketStress(model, gov.summary, gov.estimator)[0]),
+      spacing: checkSpacing(model, gov.estimator === "cone").map(withIds),
+    }).value,
   };
-  // The same conversion analyzeJoint applies, so every number compares equal.
-  return toFiniteJson(preview).value;
+  return preview;
 }
