@@ -147,7 +147,7 @@ export default function JointStage(props: JointStageProps) {
         <Group x={view.ox} y={view.oy} scaleX={view.k} scaleY={-view.k}>
           <FlangeShapes outline={staticScene.outline} bore={staticScene.bore} gasketOuter={staticScene.gasketOuter} gasketInner={staticScene.gasketInner} />
           {props.heat?.grid ? <HeatGridNode picture={props.heat.grid} /> : props.heat?.quads ? <HeatLayerShape quads={props.heat.quads} colour={props.heat.colour} /> : null}
-          <Line id="bolt-path" points={pathPoints} closed stroke="#6b7c9c" strokeWidth={1} dash={[4, 4]} strokeScaleEnabled={false} listening={false} />
+          <Line id="path-of-bolts" points={pathPoints} closed stroke="#6b7c9c" strokeWidth={1} dash={[4, 4]} strokeScaleEnabled={false} listening={false} />
           <Line name="bolt-path-hit" points={pathPoints} closed stroke="transparent" strokeWidth={1} hitStrokeWidth={14} strokeScaleEnabled={false} />
           <BoltNodes bolts={boltScene.bolts} r={boltScene.holeRadiusMm} selectedId={props.selectedId} readOnly={readOnly} />
         </Group>
