@@ -24,8 +24,8 @@ export interface ExportFilesTable {
   byte_size: number | null;
   error: string | null;
   requested_by: string | null;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
   finished_at: Timestamp | null;
 }
 
