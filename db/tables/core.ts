@@ -1,7 +1,8 @@
 import type { ColumnType, Generated } from "kysely";
 
 // Tables of the foundation: schema bookkeeping, accounts, organisations, sessions.
-// Nullable columns are `T | null`; columns with database defaults are Generated<T>.
+// Nullable columns are `T | null`; columns with database defaults are Generated<T>. Timestamp
+// already allows leaving the value out on insert (database default now()), so it is not wrapped.
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
 export type Role = "designer" | "approver" | "admin";
@@ -10,7 +11,7 @@ export type UnitSystem = "SI" | "US";
 export interface AppMetaTable {
   id: Generated<number>;
   schema_version: string;
-  updated_at: Generated<Timestamp>;
+  updated_at: Timestamp;
 }
 
 export interface UsersTable {
@@ -19,7 +20,7 @@ export interface UsersTable {
   display_name: string;
   password_hash: string | null;
   unit_system: Generated<UnitSystem>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
   disabled_at: Timestamp | null;
 }
 
@@ -27,14 +28,14 @@ export interface OrganizationsTable {
   id: Generated<string>;
   name: string;
   slug: string;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export interface MembershipsTable {
   organization_id: string;
   user_id: string;
   roles: ColumnType<Role[], Role[] | undefined, Role[]>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export interface SessionsTable {
@@ -42,7 +43,7 @@ export interface SessionsTable {
   user_id: string;
   expires_at: Timestamp;
   active_organization_id: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export interface CoreTables {

@@ -12,8 +12,8 @@ export interface DesignsTable {
   /** Copied from the working revision's outline kind for listing and filtering. */
   outline_kind: string;
   owner_id: string;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
   archived_at: Timestamp | null;
 }
 
@@ -37,8 +37,8 @@ export interface DesignRevisionsTable {
   submitted_at: Timestamp | null;
   decided_by: string | null;
   decided_at: Timestamp | null;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
 }
 
 export interface DesignTables {
