@@ -26,7 +26,11 @@ const INVALID = "Check the highlighted fields; nothing was saved.";
 const NOT_FOUND = "This design does not exist in your organisation.";
 
 function invalid(error: z.ZodError, flat = false): CommandResult<never> {
-  const fieldErrors = flat ? (z.flattenError(error).fieldErrors as Record<string, string[]>) : issuesToFieldErrors(error);
+  let fieldErrors: Record<string, string[]>;
+  if (flat) {
+    const flattened = z.flattenError(error);
+    fieldErrors = { ...(flattened.fieldErrors as Record<string, string[]>), ...(flattened.formErrors.length ? { form: flattened.formErrors } : {}) };
+  } else fieldErrors = issuesToFieldErrors(error);
   return { ok: false, reason: "invalid", message: INVALID, fieldErrors };
 }
 

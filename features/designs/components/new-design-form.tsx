@@ -54,14 +54,20 @@ export function NewDesignForm({ createDesignAction, initialKind }: {
   const valuesKey = JSON.stringify(values);
   const choice = TEMPLATE_CHOICES.find((c) => c.kind === kind) ?? TEMPLATE_CHOICES[0];
   const errors = state && !state.ok ? state.fieldErrors ?? {} : {};
+  // Messages for inputs this template does not show (should not happen; never hide one).
+  const shown = new Set(["kind", "name", "equipmentTag", ...choice.fields.map((f) => f.name)]);
+  const unplaced = Object.entries(errors).filter(([key]) => !shown.has(key)).map(([key, list]) => `${key}: ${list[0]}`);
   return (
     <form action={formAction} className="flex flex-col gap-6" noValidate>
-      <fieldset className="flex flex-col gap-2">
+      {/* React resets a form after its action, which would snap the radios back to their first
+          rendering; the chosen template is therefore sent from state, and the group remounts. */}
+      <input type="hidden" name="kind" value={kind} />
+      <fieldset key={`kind${valuesKey}`} className="flex flex-col gap-2">
         <legend className="mb-2 text-lead font-semibold">Template</legend>
         <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
           {TEMPLATE_CHOICES.map((c) => (
             <label key={c.kind} className="flex cursor-pointer gap-2 rounded-plate border border-ink-200 bg-white p-3 has-[:checked]:border-brass-500 has-[:checked]:bg-brass-50">
-              <input type="radio" name="kind" value={c.kind} checked={kind === c.kind} onChange={() => setKind(c.kind)} />
+              <input type="radio" name="templateChoice" value={c.kind} checked={kind === c.kind} onChange={() => setKind(c.kind)} />
               <span>
                 <span className="block font-medium text-ink-900">{c.label}</span>
                 <span className="block text-table text-ink-600">{c.description}</span>
@@ -82,6 +88,7 @@ export function NewDesignForm({ createDesignAction, initialKind }: {
       <div className="flex items-center gap-4">
         <button type="submit" className={buttonStyles.primary} disabled={pending}>{pending ? "Creating…" : "Create design"}</button>
         <FormStatus state={state} />
+        {unplaced.length > 0 ? <p className="text-table text-verdict-fail">{unplaced.join("; ")}</p> : null}
       </div>
     </form>
   );
