@@ -82,7 +82,8 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await commentForm.getByLabel("Comment").fill("b3 sits too close to the nozzle reinforcement; move it clockwise.");
   await commentForm.getByRole("button", { name: "Post comment" }).click();
   const comment = arlo.getByTestId("comment").filter({ hasText: "move it clockwise" });
-  await expect(comment).toBeVisible();
+  // Posting re-renders the whole sign-off sheet on the server; give a busy machine time.
+  await expect(comment).toBeVisible({ timeout: 30_000 });
   await comment.getByRole("button", { name: "Show Bolt b3 on the drawing" }).click();
   await expect(arlo.getByTestId("highlight-status")).toHaveText("Highlighted on the drawing: bolt b3");
   await expect(arlo.getByTestId("review-drawing")).toHaveAttribute("data-highlight-bolts", "b3");
