@@ -5,20 +5,12 @@
  * core/gasket-stress.ts), because seating is judged at minimum preload.
  */
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
-import type { CheckStatus } from "@/features/analysis/core/checks/check-record";
+import type { CheckRecord, CheckStatus } from "@/features/analysis/core/checks/check-record";
 
 export type { CheckStatus };
 
-export interface CheckView {
-  id: string;
-  title: string;
-  value: number | null;
-  limit: number | null;
-  unit: string;
-  status: CheckStatus;
-  source: string;
-  note: string;
-  /** Bolts the check concerns: one (a ring on the canvas), two (a bracket) or none (whole joint). */
+/** A core check record with the bolts it concerns: one (a ring on the canvas), two (a bracket) or none (whole joint). */
+export interface CheckView extends Omit<CheckRecord, "subject"> {
   boltIds: string[];
 }
 
