@@ -20,3 +20,36 @@ export function toFiniteJson<T>(value: T): { value: T; replaced: number } {
   };
   return { value: walk(value) as T, replaced };
 }
+
+/**
+ * `toFiniteJson` for a list of flat records (fields that are numbers, strings, booleans, null or
+ * arrays of those), as check records are: the same result without the general walk, for the
+ * editor's per-frame preview. Nested objects fall back to `toFiniteJson`.
+ *
+ * Example: `toFiniteRecords([{ value: NaN, subject: ["b1"] }]).value` → `[{ value: null, subject: ["b1"] }]`.
+ */
+export function toFiniteRecords<T extends object>(records: readonly T[]): { value: T[]; replaced: number } {
+  let replaced = 0;
+  const num = (x: number) => {
+    if (Number.isFinite(x)) return x;
+    replaced++;
+    return null;
+  };
+  const value = records.map((r) => {
+    const out: Record<string, unknown> = {};
+    for (const k in r) {
+      const x = (r as Record<string, unknown>)[k];
+      if (x === undefined) continue;
+      if (typeof x === "number") out[k] = num(x);
+      else if (x === null || typeof x !== "object") out[k] = x;
+      else if (Array.isArray(x) && x.every((e) => e === null || typeof e !== "object")) out[k] = x.map((e) => (typeof e === "number" ? num(e) : e));
+      else {
+        const deep = toFiniteJson(x);
+        replaced += deep.replaced;
+        out[k] = deep.value;
+      }
+    }
+    return out as T;
+  });
+  return { value, replaced };
+}

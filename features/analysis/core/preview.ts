@@ -1,7 +1,8 @@
 /**
  * The light entry point for live editing (a bolt being dragged at 60 frames a second):
  * `previewJoint(design)` computes only the gasket-stress profile, its summary, the governing
- * estimator, the per-pair spacing checks and the seating check. Every value equals the
+ * estimator, the per-pair spacing checks and the gasket-stress checks (seating, crush, operating).
+ * Every value equals the
  * corresponding part of `analyzeJoint(design)` exactly (same code path, same JSON conversion),
  * so the editor can show the preview and later swap in the full result without a jump.
  * Units: mm, N, MPa. Deterministic, JSON-serialisable.
@@ -17,7 +18,7 @@ import { checkGasketStress } from "./checks/gasket-stress-checks";
 import { checkSpacing } from "./checks/spacing";
 import type { CheckRecord } from "./checks/check-record";
 import type { JointAnalysis } from "./analyze";
-import { toFiniteJson } from "./finite-json";
+import { toFiniteJson, toFiniteRecords } from "./finite-json";
 
 export type PreviewCheck = CheckRecord & { boltIds: string[] };
 
@@ -32,6 +33,8 @@ export interface JointPreview {
   boltSOnPathMm: number[];
   /** The "gasket.seating" record of `JointAnalysis.checks`. */
   seating: PreviewCheck;
+  /** All "gasket.*" stress records (seating first, then crush and the operating checks), in order. */
+  gasket: PreviewCheck[];
   /** The per-pair "spacing.*" records of `JointAnalysis.checks`, in the same order. */
   spacing: PreviewCheck[];
 }
@@ -51,11 +54,14 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
   const withIds = (c: CheckRecord): PreviewCheck => ({ ...c, boltIds: c.subject ?? [] });
   // Plain arrays with non-finite values as null: what toFiniteJson gives analyzeJoint, in one pass.
   const arr = (a: ArrayLike<number>): number[] => {
-    const out = new Array<number>(a.length);
-    for (let i = 0; i < a.length; i++) { const v = a[i]; out[i] = Number.isFinite(v) ? v : (null as unknown as number); }
+    let finite = true;
+    for (let i = 0; i < a.length && finite; i++) finite = Number.isFinite(a[i]);
+    if (finite) return Array.from(a); // the usual case: one fast copy
+    const out: number[] = [];
+    for (let i = 0; i < a.length; i++) { const v = a[i]; out.push(Number.isFinite(v) ? v : (null as unknown as number)); }
     return out;
   };
-  const preview: JointPreview = {
+  const preview: Omit<JointPreview, "seating"> = {
     coreVersion: CORE_VERSION,
     governingEstimator: gov.estimator,
     profile: {
@@ -63,12 +69,10 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
       coneMpa: arr(profiles.coneMpa), beamMpa: arr(profiles.beamMpa), onGasket: Array.from(profiles.onGasket, (v) => v === 1),
     },
     boltSOnPathMm: arr(profiles.boltSOnPathMm),
-    // The records and the summary go through the same conversion analyzeJoint applies.
-    ...toFiniteJson({
-      summary: { minGasketStressMpa: gov.summary.minMpa, maxGasketStressMpa: gov.summary.maxMpa, meanGasketStressMpa: gov.summary.meanMpa },
-      seating: withIds(checkGasketStress(model, gov.summary, gov.estimator)[0]),
-      spacing: checkSpacing(model, gov.estimator === "cone").map(withIds),
-    }).value,
+    // The records and the summary get the conversion analyzeJoint applies (flat records: the short form).
+    summary: toFiniteJson({ minGasketStressMpa: gov.summary.minMpa, maxGasketStressMpa: gov.summary.maxMpa, meanGasketStressMpa: gov.summary.meanMpa }).value,
+    gasket: toFiniteRecords(checkGasketStress(model, gov.summary, gov.estimator).map(withIds)).value,
+    spacing: toFiniteRecords(checkSpacing(model, gov.estimator === "cone").map(withIds)).value,
   };
-  return preview;
+  return { ...preview, seating: preview.gasket[0] };
 }

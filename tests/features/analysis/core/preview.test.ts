@@ -35,6 +35,7 @@ describe("previewJoint equals the corresponding parts of analyzeJoint exactly", 
       expect(preview.profile).toStrictEqual(full.gasketStress.profile);
       expect(preview.boltSOnPathMm).toStrictEqual(full.gasketStress.boltSOnPathMm);
       expect(preview.seating).toStrictEqual(full.checks.find((c) => c.id === "gasket.seating"));
+      expect(preview.gasket).toStrictEqual(full.checks.filter((c) => c.id.startsWith("gasket.")));
       const spacing = full.checks.filter((c) => c.id.startsWith("spacing."));
       expect(spacing.length).toBe(4 * design.bolts.length);
       expect(preview.spacing).toStrictEqual(spacing);
