@@ -54,8 +54,13 @@ test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, sw
     await page.waitForTimeout(40);
     failed = (await violationIds(page, "violation-spacing-min-pitch-b1-b2")).length > 0;
   }
+  // While the bolt is held the drawing and the drag gauge follow the core's light preview; the
+  // Readout keeps what it showed at the drag start and catches up on release.
+  await expect(page.getByTestId("readout-basis")).toHaveText(/held while you drag/);
+  await expect(page.getByRole("status", { name: "Drag gauge" })).toContainText(/spacing: \d+ pairs? fail/);
   await page.mouse.up();
   expect(failed).toBe(true);
+  await expect(page.getByRole("status", { name: "Drag gauge" })).toHaveCount(0);
   await expect(page.getByTestId("save-state")).toHaveText("Unsaved changes");
   const row = page.locator('tr[data-check-id="spacing.min-pitch:b1-b2"]');
   await expect(row).toHaveAttribute("data-status", "fail");

@@ -18,6 +18,7 @@ import { useLeaveGuard } from "../hooks/use-leave-guard";
 import { useLiveAnalysis } from "../hooks/use-live-analysis";
 import { useResultAgreement } from "../hooks/use-result-agreement";
 import { useSave } from "../hooks/use-save";
+import { DragGauge } from "./drag-gauge";
 import { JointCanvas } from "./joint-canvas";
 import { JointForm } from "./joint-form";
 import { PatternToolbar } from "./pattern-toolbar";
@@ -52,12 +53,18 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   const [invalid, setInvalidState] = useState<Record<string, true>>({});
   const discarding = useRef(false);
 
-  const live = useLiveAnalysis(design, stored);
+  const live = useLiveAnalysis(design, stored, editor.dragging);
   useResultAgreement(stored);
   const view = useMemo(() => (live.result ? toReadoutView(live.result) : null), [live.result]);
   const lastView = useRef(view);
   if (view) lastView.current = view;
-  const heat = useHeatMap(design, view, editor.dragging);
+  // While a bolt is dragged the Readout and the joint data sections hold what they showed at the
+  // drag start (their tables are the costly part of a frame); the canvas and the drag gauge stay live.
+  const heldView = useRef(view);
+  const heldIssues = useRef(live.issues);
+  if (!editor.dragging) { heldView.current = view; heldIssues.current = live.issues; }
+  // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
+  const heat = useHeatMap(design, editor.dragging ? view ?? lastView.current : view, editor.dragging);
 
   const setInvalid = useCallback((path: string, bad: boolean) => {
     setInvalidState((cur) => {
@@ -84,18 +91,23 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   useLeaveGuard(save.dirty, discarding);
 
   const act = useCallback((a: DesignAction) => dispatch(a), [dispatch]);
-  const drag = useDragLoop(design, dispatch);
+  // The core's share of a drag frame, for the drag benchmark (written during render, read after it).
+  const computeMs = useRef(0);
+  computeMs.current = live.computeMs;
+  const drag = useDragLoop(design, dispatch, computeMs);
 
   const reloadTheirs = () => {
     if (!window.confirm("Discard your unsaved edits and load the version someone else saved?")) return;
     discarding.current = true;
     window.location.reload();
   };
-  const deleteBolt = (id: string) => {
-    if (design.bolts.length <= 1) return;
+  const boltCount = useRef(design.bolts.length);
+  boltCount.current = design.bolts.length;
+  const deleteBolt = useCallback((id: string) => {
+    if (boltCount.current <= 1) return;
     act({ type: "delete-bolts", boltIds: [id] });
     setSelected(null);
-  };
+  }, [act]);
   useEditorShortcuts({
     undo: editor.undo, redo: editor.redo, save: () => void save.save(), fit: () => setFitToken((t) => t + 1),
     deleteSelected: () => selected && deleteBolt(selected),
@@ -113,7 +125,9 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
 
   const checks = (view ?? lastView.current)?.checks ?? [];
   const highlight = highlightedBolts(view, { checkId: activeCheck ?? undefined });
-  const ctx = { design, units, readOnly: ro, dispatch: act, setInvalid, errorFor };
+  const ctx = useMemo(() => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }), [design, units, ro, act, setInvalid, errorFor]);
+  const heldCtx = useRef(ctx);
+  if (!editor.dragging) heldCtx.current = ctx;
 
   return (
     <div className="space-y-3" data-testid="design-workspace">
@@ -148,13 +162,14 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
                 onDragEnd={drag.onDragEnd} onDrawn={drag.onDrawn}
                 onAddBolt={(s) => { const id = nextBoltId(design); act({ type: "add-bolt", sMm: s }); setSelected(id); }} />
               {heat.scale && <StressLegend scale={heat.scale} units={units} basis="minimum preload" />}
+              {editor.dragging && <DragGauge view={view} issues={live.issues} units={units} />}
             </div>
           </div>
-          <ReadoutPanel view={view} issues={live.issues} units={units} activeCheckId={activeCheck} onPickCheck={setActiveCheck} onPickBolt={setSelected}
-            basis={live.stored ? "stored" : "preview"} />
+          <ReadoutPanel view={editor.dragging ? heldView.current : view} issues={editor.dragging ? heldIssues.current : live.issues} units={units} activeCheckId={activeCheck} onPickCheck={setActiveCheck}
+            onPickBolt={setSelected} basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"} />
         </div>
         <aside aria-label="Joint data" className="space-y-4 rounded-plate bg-white p-3 shadow-plate">
-          <JointForm ctx={ctx} meta={meta} onMeta={setMeta} selectedBoltId={selected} onDeleteBolt={deleteBolt} />
+          <JointForm ctx={ctx} sectionsCtx={heldCtx.current} meta={meta} onMeta={setMeta} selectedBoltId={selected} onDeleteBolt={deleteBolt} />
         </aside>
       </div>
     </div>

@@ -1,3 +1,4 @@
+import { memo } from "react";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import type { DesignIssue } from "@/features/analysis/core/validate";
 import { CautionPanel } from "@/features/ui/caution-panel";
@@ -15,8 +16,11 @@ interface Props {
   activeCheckId: string | null;
   onPickCheck?: (id: string | null) => void;
   onPickBolt?: (id: string) => void;
-  /** "preview" while the document differs from the stored one, "stored" when it is the saved result. */
-  basis: "preview" | "stored";
+  /**
+   * "preview" while the document differs from the stored one, "stored" when it is the saved
+   * result, "held" while a bolt is dragged (the view is the one from the drag start).
+   */
+  basis: "preview" | "stored" | "held";
 }
 
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
@@ -28,14 +32,16 @@ function Section({ title, children }: { title: string; children: React.ReactNode
   );
 }
 
-/** The "Readout": everything the core says about the joint, beside the drawing. */
-export function ReadoutPanel({ view, issues, units, activeCheckId, onPickCheck, onPickBolt, basis }: Props) {
+const BASIS_TEXT = { stored: "stored result", preview: "live preview", held: "held while you drag; updates on release" } as const;
+
+/** The "Readout": everything the core says about the joint, beside the drawing. Memoised: held views cost nothing per frame. */
+export const ReadoutPanel = memo(function ReadoutPanel({ view, issues, units, activeCheckId, onPickCheck, onPickBolt, basis }: Props) {
   const s = view?.analysis.summary;
   return (
     <div className="space-y-3" aria-label="Readout" role="region">
       <div className="flex items-baseline justify-between">
         <h2 className="text-lead font-semibold text-ink-900">Readout</h2>
-        <span className="text-micro text-ink-500" data-testid="readout-basis">{basis === "stored" ? "stored result" : "live preview"}</span>
+        <span className="text-micro text-ink-500" data-testid="readout-basis">{BASIS_TEXT[basis]}</span>
       </div>
       {issues.length > 0 && (
         <div role="alert" className="rounded-plate border border-verdict-fail bg-verdict-fail-bg p-2 text-table text-verdict-fail">
@@ -59,4 +65,4 @@ export function ReadoutPanel({ view, issues, units, activeCheckId, onPickCheck, 
       <CautionPanel compact />
     </div>
   );
-}
+});

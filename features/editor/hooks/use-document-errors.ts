@@ -29,7 +29,10 @@ export function useDocumentErrors(design: JointDesign, skip: boolean, serverErro
     for (const [k, v] of Object.entries(serverErrors ?? {})) if (v[0]) out[normalisePath(k)] = v[0];
     return out;
   }, [serverErrors]);
-  const errorFor = (path: string) => schemaErrors?.[path] ?? server[path];
-  const count = schemaErrors ? Object.keys(schemaErrors).length : 0;
-  return { errorFor, schemaErrorCount: count, schemaMessages: schemaErrors ? Object.entries(schemaErrors).map(([k, v]) => `${k}: ${v}`) : [] };
+  // One object per change of its inputs, so components handed `errorFor` can be memoised.
+  return useMemo(() => {
+    const errorFor = (path: string) => schemaErrors?.[path] ?? server[path];
+    const count = schemaErrors ? Object.keys(schemaErrors).length : 0;
+    return { errorFor, schemaErrorCount: count, schemaMessages: schemaErrors ? Object.entries(schemaErrors).map(([k, v]) => `${k}: ${v}`) : [] };
+  }, [schemaErrors, server]);
 }

@@ -5,10 +5,11 @@ import type { JointDesign, PointMm } from "@/features/analysis/core/design";
 import type { HistoryAction } from "../model/editor-action";
 import { resolveMoveTarget } from "../model/move-bolt";
 
-export interface FrameTiming { reactMs: number; drawMs: number; totalMs: number }
+/** One drag frame: the synchronous update (of which `computeMs` in the core), Konva's draw, and their sum, ms. */
+export interface FrameTiming { reactMs: number; computeMs: number; drawMs: number; totalMs: number }
 
 declare global {
-  interface Window { __sealpitchPerf?: { frames: FrameTiming[] } }
+  interface Window { __sealpitchPerf?: { frames: FrameTiming[]; releases?: number[] } }
 }
 
 interface Move { id: string; point: PointMm; free: boolean; snapMm: number }
@@ -18,12 +19,12 @@ interface Move { id: string; point: PointMm; free: boolean; snapMm: number }
  * rendered synchronously (flushSync) so the recompute + React work can be timed, and the Konva
  * draw that follows is added to it: `window.__sealpitchPerf.frames` (read by bench/editor-drag).
  */
-export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) => void) {
+export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) => void, computeMs: { current: number }) {
   const designRef = useRef(design);
   designRef.current = design;
   const pending = useRef<Move | null>(null);
   const raf = useRef(0);
-  const frame = useRef<{ reactMs: number } | null>(null);
+  const frame = useRef<{ reactMs: number; computeMs: number } | null>(null);
 
   const flush = useCallback(() => {
     raf.current = 0;
@@ -33,25 +34,29 @@ export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) =>
     const t0 = performance.now();
     const t = resolveMoveTarget(designRef.current, m.id, m.point, { free: m.free, snapMm: m.snapMm });
     flushSync(() => dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm }));
-    frame.current = { reactMs: performance.now() - t0 };
-  }, [dispatch]);
+    frame.current = { reactMs: performance.now() - t0, computeMs: computeMs.current };
+  }, [dispatch, computeMs]);
 
   const onDragStart = useCallback(() => dispatch({ type: "drag-start" }), [dispatch]);
   const onDragMove = useCallback((id: string, point: PointMm, free: boolean, snapMm: number) => {
     pending.current = { id, point, free, snapMm };
     if (!raf.current) raf.current = requestAnimationFrame(flush);
   }, [flush]);
+  // Release: the full analysis and the Readout catch up in one synchronous update, timed too.
   const onDragEnd = useCallback(() => {
     if (raf.current) cancelAnimationFrame(raf.current);
     flush();
-    dispatch({ type: "drag-end" });
+    const t0 = performance.now();
+    flushSync(() => dispatch({ type: "drag-end" }));
+    const perf = (window.__sealpitchPerf ??= { frames: [] });
+    (perf.releases ??= []).push(performance.now() - t0);
   }, [dispatch, flush]);
   const onDrawn = useCallback((drawMs: number) => {
     const f = frame.current;
     if (!f) return;
     frame.current = null;
     const perf = (window.__sealpitchPerf ??= { frames: [] });
-    perf.frames.push({ reactMs: f.reactMs, drawMs, totalMs: f.reactMs + drawMs });
+    perf.frames.push({ reactMs: f.reactMs, computeMs: f.computeMs, drawMs, totalMs: f.reactMs + drawMs });
     if (perf.frames.length > 5000) perf.frames.splice(0, perf.frames.length - 5000);
   }, []);
   useEffect(() => () => { if (raf.current) cancelAnimationFrame(raf.current); }, []);
