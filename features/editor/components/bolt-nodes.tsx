@@ -6,6 +6,13 @@ import { boltNodeId } from "./canvas-ids";
 
 export interface BoltDot { id: string; p: PointMm; offPath: boolean }
 
+type HoleProps = { bolt: BoltDot; r: number; selected: boolean; draggable: boolean };
+
+/** Same hole, same place: the scene rebuilds its bolt objects every move, so compare the values. */
+const sameHole = (a: HoleProps, b: HoleProps) =>
+  a.r === b.r && a.selected === b.selected && a.draggable === b.draggable &&
+  a.bolt.id === b.bolt.id && a.bolt.p.x === b.bolt.p.x && a.bolt.p.y === b.bolt.p.y && a.bolt.offPath === b.bolt.offPath;
+
 /** One bolt hole to scale, in model coordinates. */
 const BoltHole = memo(function BoltHole({ bolt, r, selected, draggable }: { bolt: BoltDot; r: number; selected: boolean; draggable: boolean }) {
   return (
@@ -26,7 +33,7 @@ const BoltHole = memo(function BoltHole({ bolt, r, selected, draggable }: { bolt
       shadowForStrokeEnabled={false}
     />
   );
-});
+}, sameHole);
 
 export function BoltNodes({ bolts, r, selectedId, readOnly }: { bolts: BoltDot[]; r: number; selectedId: string | null; readOnly: boolean }) {
   return (

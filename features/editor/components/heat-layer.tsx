@@ -3,7 +3,11 @@ import { memo } from "react";
 import { Shape } from "react-konva";
 import type { HeatQuad } from "../model/heat-band";
 
-/** The stress strip along the gasket path, drawn in model coordinates (the parent group scales). */
+/**
+ * The stress strip along the gasket path, drawn in model coordinates (the parent group scales).
+ * Filled only: the strips overlap a little (model/heat-band.ts), so no stroke is needed, and a
+ * fill is the cheap operation for the software rasteriser of a headless or GPU-less browser.
+ */
 export const HeatLayerShape = memo(function HeatLayerShape({ quads, colour }: { quads: HeatQuad[]; colour: (mpa: number) => string }) {
   return (
     <Shape
@@ -11,19 +15,15 @@ export const HeatLayerShape = memo(function HeatLayerShape({ quads, colour }: { 
       listening={false}
       perfectDrawEnabled={false}
       sceneFunc={(context) => {
-        // The native context: thousands of small quads, Konva's wrappers add nothing here.
+        // The native context: Konva's wrappers add nothing for plain filled paths.
         const ctx = (context as unknown as { _context: CanvasRenderingContext2D })._context;
         for (const q of quads) {
           ctx.beginPath();
           ctx.moveTo(q.x[0], q.y[0]);
           for (let i = 1; i < 4; i++) ctx.lineTo(q.x[i], q.y[i]);
           ctx.closePath();
-          const c = colour(q.stressMpa);
-          ctx.fillStyle = c;
-          ctx.strokeStyle = c;
-          ctx.lineWidth = 0.3;
+          ctx.fillStyle = colour(q.stressMpa);
           ctx.fill();
-          ctx.stroke();
         }
       }}
     />

@@ -1,5 +1,6 @@
 import { scaleLinear } from "d3-scale";
 import type { UnitSystem } from "@/features/analysis/core/design";
+import { decimateMinMax } from "../model/decimate";
 import type { ProfileView } from "../model/readout-view";
 import { formatQuantity, toDisplay, unitLabel } from "../model/quantities";
 
@@ -13,7 +14,9 @@ export function StressProfileChart({ profile, seatingMpa, crushMpa, units }: { p
   const top = Math.max(profile.maxMpa, seatingMpa, crushMpa ?? 0) * 1.08 || 1;
   const x = scaleLinear().domain([0, profile.pathLengthMm]).range([M.l, W - M.r]);
   const y = scaleLinear().domain([0, top]).range([H - M.b, M.t]);
-  const line = (f: number) => profile.sMm.map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(profile.stressMpa[i] * f).toFixed(1)}`).join("");
+  // Two points per pixel column at most (every peak and trough kept): thousands of samples otherwise.
+  const trace = decimateMinMax(profile.sMm, profile.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r);
+  const line = (f: number) => trace.xs.map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(trace.ys[i] * f).toFixed(1)}`).join("");
   const yTicks = y.ticks(4);
   const unit = unitLabel("stress", units);
   const minAtMin = profile.minMpa * profile.minFactor;

@@ -20,7 +20,7 @@ export function useHeatMap(design: JointDesign, view: ReadoutView | null, draggi
     if (!view) return null;
     return buildHeatScale(view.profile.maxMpa * view.profile.minFactor, view.seatingMpa, view.crushMpa);
   }, [view]);
-  const quads = useMemo(() => (view ? buildHeatQuads(design, view.profile.sMm, view.profile.stressMpa.map((v) => v * view.profile.minFactor)) : null), [design, view]);
+  const quads = useMemo(() => (view ? buildHeatQuads(design, view.profile.sMm, view.profile.stressMpa, view.profile.minFactor) : null), [design, view]);
   const [grid, setGrid] = useState<{ design: JointDesign; picture: HeatGridPicture } | null>(null);
   useEffect(() => {
     if (dragging || !view || !scale) return;

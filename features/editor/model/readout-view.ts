@@ -39,15 +39,17 @@ export function toReadoutView(result: JointAnalysis): ReadoutView {
   const gs = result.gasketStress;
   const s: number[] = [];
   const v: number[] = [];
-  gs.profile.sMm.forEach((x, i) => {
-    if (gs.profile.onGasket[i]) {
-      s.push(x);
-      v.push(gs.profile.stressMpa[i]);
+  const { sMm, stressMpa, onGasket } = gs.profile;
+  for (let i = 0; i < sMm.length; i++) {
+    if (onGasket[i]) {
+      s.push(sMm[i]);
+      v.push(stressMpa[i]);
     }
-  });
+  }
   const minFactor = result.preload.targetN > 0 ? result.preload.minN / result.preload.targetN : 1;
   return {
-    checks: result.checks.map((c) => ({ ...c, boltIds: c.boltIds ?? c.subject ?? [] })),
+    // Results carry boltIds already (the core adds them); older stored ones get them from subject.
+    checks: result.checks.map((c) => (c.boltIds ? c : { ...c, boltIds: c.subject ?? [] })),
     profile: { pathLengthMm: gs.pathLengthMm, sMm: s, stressMpa: v, minFactor, minMpa: gs.minMpa, maxMpa: gs.maxMpa, meanMpa: gs.meanMpa, boltSOnPathMm: gs.boltSOnPathMm },
     seatingMpa: gs.seatingMpa,
     crushMpa: gs.crushMpa,
