@@ -65,7 +65,8 @@ const config: Config = {
         // Named layout steps on top of Tailwind's default 4 px scale.
         gutter: "1.5rem",
         rail: "15rem",
-        panel: "22rem",
+        // Inner padding of a panel (p-panel).
+        panel: "1rem",
       },
       borderRadius: {
         plate: "0.375rem",

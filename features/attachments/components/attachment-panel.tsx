@@ -93,11 +93,11 @@ export function AttachmentPanel({ designId, canUpload, canDeleteAny, viewerId }:
         </div>
       ) : null}
       {pending.length > 0 ? (
-        <ul className="flex flex-col gap-2">
+        <ul className="flex w-full flex-col gap-2">
           {pending.map((p) => (
-            <li key={p.key} className="text-table">
+            <li key={p.key} className="w-full text-table">
               <div className="flex justify-between gap-2"><span>{p.name}</span>{p.error ? <span className="text-verdict-fail">{p.error}</span> : <span className="num">{Math.round(p.progress * 100)} %</span>}</div>
-              {!p.error ? <progress max={1} value={p.progress} aria-label={`Uploading ${p.name}`} className="h-1.5 w-full accent-brass-500" /> : (
+              {!p.error ? <progress max={1} value={p.progress} aria-label={`Uploading ${p.name}`} className="block h-1.5 w-full accent-brass-500" /> : (
                 <button type="button" className="text-micro underline" onClick={() => setPending((all) => all.filter((x) => x.key !== p.key))}>Dismiss</button>
               )}
             </li>
