@@ -21,7 +21,7 @@ async function signedInPage(browser: Browser, email: string): Promise<Page> {
   return page;
 }
 
-test("an admin adds a gasket to the Stockroom and a designer sees it (screen and picker API)", async ({ browser }) => {
+test("an admin adds a gasket to the Stockroom and a designer picks it in a design", async ({ browser }) => {
   const name = `Halden Creek graphite sheet ${suffix}`;
   const ines = await signedInPage(browser, INES);
   await ines.goto("/library/gaskets");
@@ -61,6 +61,31 @@ test("an admin adds a gasket to the Stockroom and a designer sees it (screen and
   expect(choices.status()).toBe(200);
   const { rows } = (await choices.json()) as { rows: { name: string; origin: string; yMpa: number }[] };
   expect(rows.find((r) => r.name === name)).toMatchObject({ origin: "organization", yMpa: 15 });
+
+  // In the Layout desk the gasket picker offers the organisation's row; picking it copies its
+  // values (with the Qmin of the chosen tightness class) into the design, which saves them.
+  const title = `Stockroom gasket pick E-2107 ${suffix}`;
+  const document = buildCircularFlange(
+    { name: title, equipmentTag: "E-2107", units: "SI" },
+    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+  );
+  const created = await dana.request.post("/api/v1/designs", { data: { name: title, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  expect(created.status(), await created.text()).toBe(201);
+  const { designId } = (await created.json()) as { designId: string };
+  await dana.goto(`/designs/${designId}`);
+  const picker = dana.getByLabel("Gasket material");
+  await expect(picker.locator("optgroup[label='Our Stockroom'] option", { hasText: name })).toHaveCount(1);
+  await picker.selectOption({ label: name });
+  const factors = dana.getByTestId("gasket-factors");
+  await expect(factors).toContainText("m = 2, y = 15 MPa, Qmin = 12 MPa");
+  await expect(factors).toContainText("Supplier test report KR-G-2026");
+  await expect(dana.getByLabel("Tightness class for Qmin and QSmin")).toHaveValue("L0.1");
+  await dana.getByRole("button", { name: "Save", exact: true }).click();
+  await expect(dana.getByTestId("save-state")).toHaveText("Saved");
+  const stored = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { workingRevision: { document: { gasket: { material: Record<string, unknown> } } } };
+  expect(stored.workingRevision.document.gasket.material).toMatchObject({ name, m: 2, yMpa: 15, qMinMpa: 12, catalogueId: expect.stringMatching(/^org:/) });
+  // The seating check now judges against the copied Qmin, as the Readout says.
+  await expect(dana.locator('tr[data-check-id="gasket.seating"]')).toContainText(/Qmin|12/);
 });
 
 test("a designer attaches a datasheet PDF and downloads it byte-identical; a renamed program is refused", async ({ browser }) => {
@@ -88,22 +113,54 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
   const page = await dana.context().newPage();
   await page.goto(`/designs/${designId}`);
   const drawer = page.getByRole("region", { name: "Drawing drawer" });
-  if (await drawer.isVisible().catch(() => false)) {
-    // The design page carries the attachment panel: upload through it (file chooser, progress, list).
-    const dir = mkdtempSync(path.join(tmpdir(), "sealpitch-e2e-"));
-    const file = path.join(dir, "gasket-datasheet.pdf");
-    writeFileSync(file, pdf);
-    await drawer.getByLabel("Attach files").setInputFiles(file);
-    await expect(drawer.getByRole("status")).toHaveText("Attached gasket-datasheet.pdf.");
-    const download = page.waitForEvent("download");
-    await drawer.getByRole("link", { name: "gasket-datasheet.pdf" }).click();
-    const saved = await (await download).path();
-    expect(Buffer.compare(readFileSync(saved!), pdf)).toBe(0);
-  } else {
-    // The panel is not placed on the design page yet: the same upload the panel sends.
-    const up = await dana.request.post(base, { data: pdf, headers: { "x-file-name": encodeURIComponent("gasket-datasheet.pdf"), "content-type": "application/octet-stream", origin: APP_URL } });
-    expect(up.status(), await up.text()).toBe(201);
-  }
+  await expect(drawer).toBeVisible();
+  const dir = mkdtempSync(path.join(tmpdir(), "sealpitch-e2e-"));
+
+  // Chosen through the file input: the upload is held at the server door for a moment, so the
+  // progress bar is seen, then the file is listed and downloads byte-identical.
+  let release: () => void = () => {};
+  const held = new Promise<void>((r) => { release = r; });
+  await page.route(`**${base}`, async (route) => {
+    if (route.request().method() !== "POST") return route.continue();
+    await held;
+    await route.continue();
+  });
+  const file = path.join(dir, "gasket-datasheet.pdf");
+  writeFileSync(file, pdf);
+  await drawer.getByLabel("Attach files").setInputFiles(file);
+  await expect(drawer.getByRole("progressbar", { name: "Uploading gasket-datasheet.pdf" })).toBeVisible();
+  release();
+  await expect(drawer.getByRole("status")).toHaveText("Attached gasket-datasheet.pdf.");
+  await expect(drawer.getByRole("progressbar")).toHaveCount(0);
+  await page.unroute(`**${base}`);
+  const download = page.waitForEvent("download");
+  await drawer.getByRole("link", { name: "gasket-datasheet.pdf" }).click();
+  const saved = await (await download).path();
+  expect(Buffer.compare(readFileSync(saved!), pdf)).toBe(0);
+  await expect(drawer.getByRole("row", { name: /gasket-datasheet\.pdf/ })).toContainText("Dana");
+
+  // Dropped onto the drawer: a PNG photo goes in; a file over the limit is refused before sending.
+  const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.from(Array.from({ length: 2048 }, (_, i) => (i * 7) % 256))]);
+  const drop = async (files: { name: string; type: string; bytes: number[] | null; size?: number }[]) => {
+    const transfer = await page.evaluateHandle((list) => {
+      const dt = new DataTransfer();
+      for (const f of list) {
+        const body = f.bytes ? new Uint8Array(f.bytes) : new Uint8Array(f.size ?? 0);
+        dt.items.add(new File([body], f.name, { type: f.type }));
+      }
+      return dt;
+    }, files);
+    const zone = drawer.getByTestId("attachment-drop-zone");
+    await zone.dispatchEvent("dragover", { dataTransfer: transfer });
+    await zone.dispatchEvent("drop", { dataTransfer: transfer });
+  };
+  await drop([{ name: "flange-face-photo.png", type: "image/png", bytes: [...png] }]);
+  await expect(drawer.getByRole("status")).toHaveText("Attached flange-face-photo.png.");
+  await expect(drawer.getByRole("link", { name: "flange-face-photo.png" })).toBeVisible();
+  await drop([{ name: "scan-too-big.pdf", type: "application/pdf", bytes: null, size: 21 * 1024 * 1024 }]);
+  await expect(drawer.getByText("larger than 20 MB")).toBeVisible();
+  await expect(drawer.getByRole("link", { name: "scan-too-big.pdf" })).toHaveCount(0);
+
   const list = (await (await dana.request.get(base)).json()) as { attachments: { id: string; fileName: string; kind: string; uploadedByName: string }[] };
   const item = list.attachments.find((a) => a.fileName === "gasket-datasheet.pdf");
   expect(item).toMatchObject({ kind: "pdf" });

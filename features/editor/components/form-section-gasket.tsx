@@ -1,36 +1,73 @@
 "use client";
-import { GASKET_TYPES, getGasketTypeById } from "@/features/analysis/core/catalogue/gaskets";
 import type { Gasket } from "@/features/analysis/core/design";
+import { choiceIdOfMaterial, useGasketChoices } from "@/features/library/hooks/use-gasket-choices";
+import { LEAKAGE_CLASSES, type GasketChoiceDto, type LeakageClass } from "@/features/library/model/dto";
+import { toGasketMaterial } from "@/features/library/model/gasket-material";
 import { FIELD_SPECS } from "../model/field-specs";
 import { formatQuantity } from "../model/quantities";
-import type { FormContext } from "./form-context";
+import { fieldDomId, type FormContext } from "./form-context";
 import { NumberField } from "./number-field";
-import { SelectField } from "./select-field";
 
 const CUSTOM = "custom";
 
-/** Gasket type from the catalogue (m, y and source shown), its dimensions and stiffness data. */
+/** The tightness class whose Qmin/QSmin the design's copy carries (L0.1 when none matches). */
+function copiedClass(row: GasketChoiceDto | undefined, qMinMpa: number | undefined): LeakageClass {
+  if (!row || qMinMpa === undefined) return "L0.1";
+  return LEAKAGE_CLASSES.find((c) => row.tightness[c]?.qMinMpa === qMinMpa) ?? "L0.1";
+}
+
+/**
+ * Gasket material picked from the organisation's Stockroom (its own rows first, then the
+ * built-in generic rows it did not hide), its dimensions and stiffness data. Picking copies the
+ * row's values into the design; later Stockroom edits do not reach a saved revision.
+ */
 export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
   const g = ctx.design.gasket;
   const mat = g.material;
-  const row = mat.catalogueId ? getGasketTypeById(mat.catalogueId) : undefined;
-  const choose = (id: string) => {
-    const r = getGasketTypeById(id);
-    if (!r) return;
-    const material = { name: r.name, catalogueId: r.id, m: r.m, yMpa: r.yMpa, modulusMpa: r.typicalModulusMpa, thicknessMm: r.typicalThicknessMm, source: `${r.source}; ${r.edition}` };
-    ctx.dispatch({ type: "set-field", path: "gasket", value: { ...g, material } as Gasket });
-  };
-  const options = [...(row ? [] : [{ value: CUSTOM, label: `${mat.name} (own data)` }]), ...GASKET_TYPES.map((t) => ({ value: t.id, label: t.name }))];
+  const choices = useGasketChoices(!ctx.readOnly);
+  const currentId = choiceIdOfMaterial(mat.catalogueId);
+  const row = currentId ? choices.rows.find((r) => r.id === currentId) : undefined;
+  const hasTightness = !!row && LEAKAGE_CLASSES.some((c) => row.tightness[c]?.qMinMpa != null);
+  const leakage = copiedClass(row, mat.qMinMpa);
+  const pick = (r: GasketChoiceDto, cls: LeakageClass) =>
+    ctx.dispatch({ type: "set-field", path: "gasket", value: { ...g, material: toGasketMaterial(r, cls) } as Gasket });
+  const own = choices.rows.filter((r) => r.origin === "organization");
+  const builtin = choices.rows.filter((r) => r.origin === "builtin");
+  const id = fieldDomId("gasket.material.catalogueId");
   return (
     <fieldset className="grid grid-cols-2 gap-2">
       <legend className="mb-1 text-table font-semibold text-ink-800">Gasket</legend>
-      <div className="col-span-2">
-        <SelectField path="gasket.material.catalogueId" label="Gasket type" value={row ? row.id : CUSTOM} options={options} disabled={ctx.readOnly} onChange={choose} />
+      <div className="col-span-2 flex flex-col gap-0.5">
+        <label htmlFor={id} className="text-micro text-ink-600">Gasket material</label>
+        <select id={id} className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table" value={row ? row.id : CUSTOM} disabled={ctx.readOnly}
+          onChange={(e) => { const r = choices.rows.find((x) => x.id === e.target.value); if (r) pick(r, "L0.1"); }}>
+          {!row && <option value={CUSTOM}>{mat.name} (copied into this design)</option>}
+          {own.length > 0 && (
+            <optgroup label="Our Stockroom">
+              {own.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
+            </optgroup>
+          )}
+          <optgroup label="Built-in generic values">
+            {builtin.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
+          </optgroup>
+        </select>
+        {choices.error && <p className="text-micro text-verdict-warn">{choices.error} The built-in rows are listed meanwhile.</p>}
         <p className="num mt-0.5 text-micro text-ink-600" data-testid="gasket-factors">
           m = {mat.m}, y = {formatQuantity("stress", mat.yMpa, ctx.units)}{mat.qMinMpa !== undefined ? `, Qmin = ${formatQuantity("stress", mat.qMinMpa, ctx.units)}` : ""}
+          {mat.qsMinMpa !== undefined ? `, QSmin = ${formatQuantity("stress", mat.qsMinMpa, ctx.units)}` : ""}
           {mat.qsMaxMpa !== undefined ? `, Qsmax = ${formatQuantity("stress", mat.qsMaxMpa, ctx.units)}` : ""} — {mat.source}
         </p>
+        <p className="text-micro text-ink-500">Generic values are design values only; the gasket maker&apos;s data supersede them.</p>
       </div>
+      {hasTightness && row && (
+        <div className="col-span-2 flex flex-col gap-0.5">
+          <label htmlFor={fieldDomId("gasket.material.tightnessClass")} className="text-micro text-ink-600">Tightness class for Qmin and QSmin</label>
+          <select id={fieldDomId("gasket.material.tightnessClass")} className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table" value={leakage} disabled={ctx.readOnly}
+            onChange={(e) => pick(row, e.target.value as LeakageClass)}>
+            {LEAKAGE_CLASSES.filter((c) => row.tightness[c]?.qMinMpa != null).map((c) => <option key={c} value={c}>{c} mg/(s·m)</option>)}
+          </select>
+        </div>
+      )}
       <p className="col-span-2 text-micro text-ink-500">{g.kind === "full-face" ? "Full-face gasket: covers the face inside the outline, less the bore and the holes." : g.geometry.kind === "annulus" ? "Ring gasket (circular)." : "Ring gasket band along the outline."}</p>
       {g.kind === "ring" && g.geometry.kind === "annulus" && (
         <>

@@ -5,13 +5,15 @@ import type { GasketChoiceDto, LeakageClass } from "./dto";
 
 /**
  * Example: `toGasketMaterial(choice, "L0.1")` copies m, y, modulus, thickness and the L0.1
- * Qmin/QSmin (if the row has them) with the row's source and edition.
+ * Qmin/QSmin (if the row has them) with the row's source and edition. A built-in row keeps the
+ * core catalogue's own id (so the analysis lists its catalogue edition); an organisation's row
+ * keeps its "org:<uuid>" id, which names where the copy came from.
  */
 export function toGasketMaterial(choice: GasketChoiceDto, leakageClass: LeakageClass = "L0.1"): GasketMaterial {
   const t = choice.tightness[leakageClass];
   return {
     name: choice.name,
-    catalogueId: choice.id,
+    catalogueId: choice.origin === "builtin" ? choice.rowId : choice.id,
     m: choice.m,
     yMpa: choice.yMpa,
     ...(t?.qMinMpa != null ? { qMinMpa: t.qMinMpa } : {}),
