@@ -4,6 +4,7 @@ import { sql, type Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { UnitSystem } from "@/db/tables/core";
 import type { JointDesign } from "@/features/analysis/core/design";
+import { recordActivity } from "@/features/activity/queries";
 import { toIso } from "./queries";
 import { runAnalysis } from "./run-analysis";
 import type { JointAnalysis, WorkingRevisionStatus } from "./workspace-contract";
@@ -52,8 +53,9 @@ export async function createDesign(db: Kysely<Database>, input: CreateDesignInpu
         result: JSON.stringify(result), core_version: coreVersion, content_hash: hashDocument(document),
         created_by: input.ownerId, last_edited_by: input.ownerId,
       })
-      .returning("version")
+      .returning(["id", "version"])
       .executeTakeFirstOrThrow();
+    await recordActivity(trx, { organizationId: input.organizationId, designId: design.id, revisionId: revision.id, actorId: input.ownerId, kind: "created", detail: input.name });
     return { designId: design.id, version: revision.version };
   });
 }
@@ -94,9 +96,10 @@ export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWor
       .where("organization_id", "=", command.organizationId)
       .where("version", "=", command.baseVersion)
       .where("status", "in", ["draft", "returned"])
-      .returning(["version", "updated_at"])
+      .returning(["id", "version", "updated_at"])
       .executeTakeFirst();
     if (updated) {
+      await recordSave(trx, command, updated.id, updated.version);
       await trx
         .updateTable("designs")
         .set({
@@ -119,6 +122,23 @@ export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWor
     if (current.status !== "draft" && current.status !== "returned") return { kind: "frozen", status: current.status };
     return { kind: "stale", version: current.version, savedByName: current.display_name, savedAt: toIso(current.updated_at) };
   });
+}
+
+/** A burst of saves by one person (autosave every pause) is one "saved" entry in the activity log. */
+export const SAVE_ENTRY_QUIET_MINUTES = 15;
+
+async function recordSave(trx: Kysely<Database>, command: SaveWorkingRevisionCommand, revisionId: string, version: number): Promise<void> {
+  const last = await trx
+    .selectFrom("design_activity")
+    .select(["kind", "actor_id", "revision_id"])
+    .select(sql<boolean>`created_at > now() - make_interval(mins => ${SAVE_ENTRY_QUIET_MINUTES})`.as("recent"))
+    .where("design_id", "=", command.designId)
+    .where("organization_id", "=", command.organizationId)
+    .orderBy("created_at", "desc")
+    .limit(1)
+    .executeTakeFirst();
+  if (last && last.kind === "saved" && last.actor_id === command.userId && last.revision_id === revisionId && last.recent) return;
+  await recordActivity(trx, { organizationId: command.organizationId, designId: command.designId, revisionId, actorId: command.userId, kind: "saved", detail: `version ${version}` });
 }
 
 /** A new design (revision 1, draft) holding a copy of the working document of another. */

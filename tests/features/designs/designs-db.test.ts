@@ -8,6 +8,7 @@ import {
 import { buildDesignFromTemplate } from "@/features/designs/model/templates";
 import { TEMPLATE_CHOICES } from "@/features/designs/model/template-fields";
 import { findDesign, listDesigns } from "@/features/designs/queries";
+import { listActivity } from "@/features/activity/queries";
 import { listDesignsQuerySchema } from "@/features/designs/schema";
 import { createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";
@@ -103,6 +104,28 @@ describe("saving the working revision", () => {
     expect(after).toMatchObject({ version: 2, name: "Save cover, moved", equipmentTag: "E-2108" });
     expect(after.document.bolts[0].sMm).toBeCloseTo(design.document.bolts[0].sMm + 5, 9);
     expect(after.result).toEqual(saved.ok ? saved.data.result : null);
+  });
+
+  it("the activity log gets one 'created' entry and one 'saved' entry per burst of saves by one person", async () => {
+    const id = await createCover("Logged cover");
+    const kinds = async () => (await listActivity(db, home.organizationId, id)).map((e) => `${e.kind}:${e.actorName}:${e.detail}`).reverse();
+    expect(await kinds()).toEqual([`created:${home.users.dana.displayName}:Logged cover`]);
+    let version = 1;
+    const base = (await findDesign(db, home.organizationId, id))!.document;
+    // Three autosaves in a row by Dana: one entry, naming the version of the first.
+    for (const p of [1.1, 1.2, 1.3]) {
+      const r = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), { designId: id, baseVersion: version, document: { ...base, loads: { ...base.loads, designPressureMpa: p } } });
+      if (!r.ok) throw new Error(r.message);
+      version = r.data.version;
+    }
+    expect(await kinds()).toEqual([`created:${home.users.dana.displayName}:Logged cover`, `saved:${home.users.dana.displayName}:version 2`]);
+    // Someone else's save is its own entry; a refused (stale) save writes none.
+    const piet = await saveWorkingRevisionForViewer(db, viewerOf(home, "piet"), { designId: id, baseVersion: version, document: base });
+    expect(piet.ok).toBe(true);
+    expect((await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), { designId: id, baseVersion: version, document: base })).ok).toBe(false);
+    expect(await kinds()).toEqual([
+      `created:${home.users.dana.displayName}:Logged cover`, `saved:${home.users.dana.displayName}:version 2`, `saved:${home.users.piet.displayName}:version 5`,
+    ]);
   });
 
   it("a stale save is refused with the conflict message naming who saved last, and the stored document is unchanged", async () => {
