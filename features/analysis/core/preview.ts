@@ -54,11 +54,8 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
   const withIds = (c: CheckRecord): PreviewCheck => ({ ...c, boltIds: c.subject ?? [] });
   // Plain arrays with non-finite values as null: what toFiniteJson gives analyzeJoint, in one pass.
   const arr = (a: ArrayLike<number>): number[] => {
-    let finite = true;
-    for (let i = 0; i < a.length && finite; i++) finite = Number.isFinite(a[i]);
-    if (finite) return Array.from(a); // the usual case: one fast copy
-    const out: number[] = [];
-    for (let i = 0; i < a.length; i++) { const v = a[i]; out.push(Number.isFinite(v) ? v : (null as unknown as number)); }
+    const out = new Array<number>(a.length);
+    for (let i = 0; i < a.length; i++) { const v = a[i]; out[i] = Number.isFinite(v) ? v : (null as unknown as number); }
     return out;
   };
   const preview: Omit<JointPreview, "seating"> = {
