@@ -55,7 +55,7 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   const discarding = useRef(false);
 
   const live = useLiveAnalysis(design, stored, editor.dragging);
-  useCoreWarmup(design, !ro);
+  useCoreWarmup(design, live.result, !ro);
   useResultAgreement(stored);
   const view = useMemo(() => (live.result ? toReadoutView(live.result) : null), [live.result]);
   const lastView = useRef(view);
