@@ -2,6 +2,7 @@
 import { useEffect } from "react";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { analyzeJoint, type JointAnalysis } from "@/features/analysis/core/analyze";
+import { CORE_VERSION } from "@/features/analysis/core/version";
 import { firstDifference } from "../model/results-agree";
 
 export interface AgreementRecord { checkedAt: number; agree: boolean; difference: string | null }
@@ -13,11 +14,13 @@ declare global {
 /**
  * Development and test assertion: the browser's core must reproduce the stored server result
  * exactly. Runs once per stored result (after load and after every save); records the outcome on
- * `window.__sealpitchAgreement` (read by the end-to-end test) and logs a mismatch loudly.
+ * `window.__sealpitchAgreement` (read by the end-to-end test) and logs a mismatch loudly. A result
+ * stored by another core version is not compared: it may differ by design until the next save.
  */
 export function useResultAgreement(stored: { document: JointDesign; result: JointAnalysis } | null) {
   useEffect(() => {
     if (!stored) return;
+    if (stored.result.coreVersion !== CORE_VERSION) return;
     const id = window.setTimeout(() => {
       let difference: string | null;
       try {

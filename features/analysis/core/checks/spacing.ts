@@ -7,9 +7,12 @@
  * - pitch between 3 and 6 bolt diameters [practice] (a warning band, not a code limit);
  * - sealing by cone overlap for full-face and metal-to-metal joints: chord ≤ D + 2h·tanα [calc/practice].
  * Pitch is measured along the bolt path, clearance as the chord. Units: mm.
+ * On a standard flange (a design from a catalogue flange template) the maximum-pitch note says
+ * that such a flange is accepted by its pressure–temperature rating; the status is still the rule's.
  */
 import type { JointModel } from "../joint-model";
 import { getNeighbourSpacings } from "../geometry";
+import { getFlangeTemplateById } from "../catalogue/flange-templates";
 import { getTighteningMethodById } from "../catalogue/tightening-methods";
 import { findWrenchClearance } from "../catalogue/wrench-clearance";
 import { makeCheck, type CheckRecord } from "./check-record";
@@ -40,6 +43,10 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
   const tema = findWrenchClearance(model.thread.designation);
   const overlapApplies = design.gasket.kind === "full-face" || coneGoverns;
   const coneDiameter = 2 * model.coneRadiusMm;
+  const standard = design.templateId ? getFlangeTemplateById(design.templateId) : undefined;
+  const ratedNote = standard
+    ? ` ${standard.standard} Class ${standard.pressureClass} NPS ${standard.nps}: a standard flange used within its pressure–temperature rating is accepted by that rating (ASME VIII-1 UG-44 [mem]); this rule is for flanges designed by rule.`
+    : "";
   const out: CheckRecord[] = [];
   for (const s of spacings) {
     const pair = `${s.fromId}-${s.toId}`;
@@ -49,7 +56,7 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
       id: `spacing.max-pitch:${pair}`, title: "Maximum bolt pitch for gasket tightness", value: s.pitchMm, limit: bsMax, unit: "mm",
       status: s.pitchMm > bsMax ? "fail" : s.pitchMm > bsMoment ? "warn" : "pass", subject,
       source: "ASME VIII-2 4.16.11 (Bs,max = 2a + 6t/(m + 0.5)) [pub]",
-      note: factor > 1 ? `Pitch above 2a + t = ${bsMoment.toFixed(1)} mm: flange moment multiplied by √(Bs/(2a + t)) = ${factor.toFixed(3)}.` : `t = ${t.toFixed(1)} mm (thinnest plate), m = ${m}.`,
+      note: (factor > 1 ? `Pitch above 2a + t = ${bsMoment.toFixed(1)} mm: flange moment multiplied by √(Bs/(2a + t)) = ${factor.toFixed(3)}.` : `t = ${t.toFixed(1)} mm (thinnest plate), m = ${m}.`) + ratedNote,
     }));
     out.push(makeCheck({
       id: `spacing.min-pitch:${pair}`, title: "Minimum bolt spacing for wrench clearance", value: s.chordMm, limit: minChord, unit: "mm",

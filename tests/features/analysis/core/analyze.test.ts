@@ -46,7 +46,7 @@ describe("analyzeJoint on the three example designs", () => {
       expect(r.assumptions.some((a) => a.includes("Cone half-angle"))).toBe(true);
     });
   }
-  it("core version is 1.0.0", () => expect(CORE_VERSION).toBe("1.0.0"));
+  it("core version is 1.1.0", () => expect(CORE_VERSION).toBe("1.1.0"));
 });
 
 describe("check records", () => {
@@ -78,6 +78,15 @@ describe("check records", () => {
   it("max pitch Bs,max = 2a + 6t/(m + 0.5) (ASME VIII-2 4.16.11 [pub])", () => {
     const c = r.checks.find((x) => x.id === "spacing.max-pitch:b1-b2")!;
     expect(c.limit!).toBeCloseTo(2 * 19.05 + (6 * 25.4) / 3.5, 6);
+    expect(c.note).not.toMatch(/rating/);
+  });
+  it("on a standard B16.5 flange the max-pitch note says it is accepted by its rating; the status stays the rule's", () => {
+    const nps6 = JSON.parse(readFileSync("examples/pipe-flange-nps6-spiral-wound.json", "utf8")) as JointDesign;
+    const c = analyzeJoint(nps6).checks.find((x) => x.id.startsWith("spacing.max-pitch:"))!;
+    expect(c.note).toMatch(/ASME B16\.5 Class 150 NPS 6: a standard flange used within its pressure–temperature rating is accepted by that rating \(ASME VIII-1 UG-44 \[mem\]\)/);
+    // The NPS 6 pattern's pitch (about 94.8 mm) is above Bs,max (about 81.6 mm): still a fail, for the approver to justify.
+    expect(c.value!).toBeGreaterThan(c.limit!);
+    expect(c.status).toBe("fail");
   });
   it("seating uses the minimum preload, crush the maximum (scatter of the tightening method)", () => {
     const seat = r.checks.find((c) => c.id === "gasket.seating")!;
