@@ -52,7 +52,8 @@ stack_app_up() {
     die "next build failed"
   fi
   if [ "$OFFSET" != 0 ]; then cp "$WORK/tsconfig.json.orig" tsconfig.json; fi
-  grep -E "^(Route|┌|├|└|○|ƒ|●|\+ First Load)" "$WORK/build.log" | head -80 || true
+  # Next 16 prints no route sizes; the build's own diagnostics file has them (bench/route-size.bench.ts).
+  npx tsx bench/run.ts route-size || true
 
   npx tsx --conditions=react-server scripts/seed.ts --e2e >"$WORK/seed.log" 2>&1 || { cat "$WORK/seed.log" >&2; die "seeding the test database failed"; }
   setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$WORK/app.log" 2>&1 &
