@@ -119,8 +119,13 @@ function toPath(path: string): (string | number)[] {
 }
 
 export const jointDesignSchema = jointDesignBaseSchema.superRefine((design, ctx) => {
+  // A field the schema above already refused (a negative length, say) is not reported again by
+  // the core's own range check: one message per field.
+  const refused = new Set(ctx.issues.map((i) => (i.path ?? []).map(String).join(".")));
   for (const issue of validateJointDesign(design as JointDesign)) {
-    ctx.addIssue({ code: "custom", path: toPath(issue.path), message: `${issue.path}: ${issue.message}` });
+    const path = toPath(issue.path);
+    if (refused.has(path.map(String).join("."))) continue;
+    ctx.addIssue({ code: "custom", path, message: `${issue.path}: ${issue.message}` });
   }
 });
 

@@ -18,6 +18,9 @@ describe("jointDesignSchema rejects bad designs with messages that name the fiel
     const n = circularFlange();
     n.layers[0] = { role: "flange", thicknessMm: -3, materialName: "x", modulusMpa: 200_000 };
     expect(errors(n).some((e) => e.startsWith("layers[0].thicknessMm:"))).toBe(true);
+    // One message per refused field: the core's own range check does not repeat zod's.
+    expect(errors(n).filter((e) => e.startsWith("layers[0].thicknessMm:"))).toHaveLength(1);
+    expect(errors(d).filter((e) => e.startsWith("outline.diameterMm:"))).toHaveLength(1);
   });
   it("NaN and Infinity", () => {
     const d = circularFlange();
