@@ -94,9 +94,9 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
 
   const act = useCallback((a: DesignAction) => dispatch(a), [dispatch]);
   // The core's share of a drag frame, for the drag benchmark (written during render, read after it).
-  const computeMs = useRef(0);
-  computeMs.current = live.computeMs;
-  const drag = useDragLoop(design, dispatch, computeMs);
+  const frameCompute = useRef({ computeMs: 0, analysed: true });
+  frameCompute.current = { computeMs: live.computeMs, analysed: live.result !== null };
+  const drag = useDragLoop(design, dispatch, frameCompute);
 
   const reloadTheirs = () => {
     if (!window.confirm("Discard your unsaved edits and load the version someone else saved?")) return;

@@ -15,10 +15,9 @@ export const WARMUP_RUNS = 24;
  * Computes what a drag frame computes (the core's preview laid over the full result, the
  * Readout view, the heat strip) a few times while the browser is idle after the page opens, one
  * run per idle slice, results discarded. The page shows the stored result, so without this the
- * first drag runs that code cold: on a 96-bolt flange the first drag's frames took 10–60 ms in
- * the core against 2–3 ms once the JavaScript engine had compiled it. Every other run moves the
- * first bolt a little, along and off the path, through the editor's own moveBolt, so the engine
- * also sees the bolt objects a drag produces.
+ * first drag would run that code cold, before the JavaScript engine has compiled it. Every other
+ * run moves the first bolt a little, along and off the path, through the editor's own moveBolt,
+ * so the engine also sees the bolt objects a drag produces.
  */
 export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, enabled: boolean): void {
   const latest = useRef({ design, base });

@@ -5,8 +5,15 @@ import type { JointDesign, PointMm } from "@/features/analysis/core/design";
 import type { HistoryAction } from "../model/editor-action";
 import { resolveMoveTarget } from "../model/move-bolt";
 
-/** One drag frame: the synchronous update (of which `computeMs` in the core), Konva's draw, and their sum, ms. */
-export interface FrameTiming { reactMs: number; computeMs: number; drawMs: number; totalMs: number }
+/**
+ * One drag frame: the synchronous update (of which `computeMs` in the core), Konva's draw, and
+ * their sum, ms; `analysed` is false when the core refused the layout (a hole over a neighbour's
+ * or over the gasket), which makes a frame cheap and must not count as a fast one.
+ */
+export interface FrameTiming { reactMs: number; computeMs: number; drawMs: number; totalMs: number; analysed: boolean }
+
+/** What the workspace reports of the frame it just rendered. */
+export interface FrameCompute { computeMs: number; analysed: boolean }
 
 declare global {
   interface Window { __sealpitchPerf?: { frames: FrameTiming[]; releases?: number[] } }
@@ -19,12 +26,12 @@ interface Move { id: string; point: PointMm; free: boolean; snapMm: number }
  * rendered synchronously (flushSync) so the recompute + React work can be timed, and the Konva
  * draw that follows is added to it: `window.__sealpitchPerf.frames` (read by bench/editor-drag).
  */
-export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) => void, computeMs: { current: number }) {
+export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) => void, compute: { current: FrameCompute }) {
   const designRef = useRef(design);
   designRef.current = design;
   const pending = useRef<Move | null>(null);
   const raf = useRef(0);
-  const frame = useRef<{ reactMs: number; computeMs: number } | null>(null);
+  const frame = useRef<{ reactMs: number } & FrameCompute | null>(null);
 
   const flush = useCallback(() => {
     raf.current = 0;
@@ -34,8 +41,8 @@ export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) =>
     const t0 = performance.now();
     const t = resolveMoveTarget(designRef.current, m.id, m.point, { free: m.free, snapMm: m.snapMm });
     flushSync(() => dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm }));
-    frame.current = { reactMs: performance.now() - t0, computeMs: computeMs.current };
-  }, [dispatch, computeMs]);
+    frame.current = { reactMs: performance.now() - t0, ...compute.current };
+  }, [dispatch, compute]);
 
   const onDragStart = useCallback(() => dispatch({ type: "drag-start" }), [dispatch]);
   const onDragMove = useCallback((id: string, point: PointMm, free: boolean, snapMm: number) => {
@@ -56,7 +63,7 @@ export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) =>
     if (!f) return;
     frame.current = null;
     const perf = (window.__sealpitchPerf ??= { frames: [] });
-    perf.frames.push({ reactMs: f.reactMs, computeMs: f.computeMs, drawMs, totalMs: f.reactMs + drawMs });
+    perf.frames.push({ reactMs: f.reactMs, computeMs: f.computeMs, analysed: f.analysed, drawMs, totalMs: f.reactMs + drawMs });
     if (perf.frames.length > 5000) perf.frames.splice(0, perf.frames.length - 5000);
   }, []);
   useEffect(() => () => { if (raf.current) cancelAnimationFrame(raf.current); }, []);
