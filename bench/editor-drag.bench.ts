@@ -103,7 +103,7 @@ export async function run(): Promise<void> {
     line(`${boltCount}-bolt flange: recompute + React update`, react);
     line(`${boltCount}-bolt flange:   of which the core (preview)`, compute);
     line(`${boltCount}-bolt flange: Konva layer draw`, draw);
-    line(`${boltCount}-bolt flange: release (full analysis + Readout)`, releases);
+    line(`${boltCount}-bolt flange: release (full analysis + drawing)`, releases);
     if (refused > 0) console.log(`editor-drag: ${refused} frames left out: the core refused the dragged layout there (not a speed)`);
   } finally {
     await browser.close();

@@ -1,5 +1,5 @@
 "use client";
-import { useCallback, useMemo, useRef, useState, useTransition } from "react";
+import { useCallback, useDeferredValue, useMemo, useRef, useState, useTransition } from "react";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { SaveWorkingRevisionAction, WorkspaceDesignDto } from "@/features/designs/workspace-contract";
@@ -65,6 +65,10 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   const heldView = useRef(view);
   const heldIssues = useRef(live.issues);
   if (!editor.dragging) { heldView.current = view; heldIssues.current = live.issues; }
+  // The Readout's tables render after the drawing: on release the bolt lands and its marks update
+  // at once, and the Readout catches up in a background render React may interrupt.
+  const readoutView = useDeferredValue(editor.dragging ? heldView.current : view);
+  const readoutIssues = useDeferredValue(editor.dragging ? heldIssues.current : live.issues);
   // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
   const heat = useHeatMap(design, editor.dragging ? view ?? lastView.current : view, editor.dragging);
 
@@ -167,7 +171,7 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
               {editor.dragging && <DragGauge view={view} issues={live.issues} units={units} />}
             </div>
           </div>
-          <ReadoutPanel view={editor.dragging ? heldView.current : view} issues={editor.dragging ? heldIssues.current : live.issues} units={units} activeCheckId={activeCheck} onPickCheck={setActiveCheck}
+          <ReadoutPanel view={readoutView} issues={readoutIssues} units={units} activeCheckId={activeCheck} onPickCheck={setActiveCheck}
             onPickBolt={setSelected} basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"} />
         </div>
         <aside aria-label="Joint data" className="space-y-4 rounded-plate bg-white p-3 shadow-plate">

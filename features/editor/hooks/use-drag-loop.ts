@@ -49,7 +49,8 @@ export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) =>
     pending.current = { id, point, free, snapMm };
     if (!raf.current) raf.current = requestAnimationFrame(flush);
   }, [flush]);
-  // Release: the full analysis and the Readout catch up in one synchronous update, timed too.
+  // Release: the full analysis and the drawing catch up in one synchronous update, timed too (the
+  // Readout follows in a deferred render, see design-workspace.tsx).
   const onDragEnd = useCallback(() => {
     if (raf.current) cancelAnimationFrame(raf.current);
     flush();
