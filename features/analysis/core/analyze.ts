@@ -19,7 +19,7 @@ import { computeAsmeAppendix2, type AsmeAppendix2Result } from "./checks/asme-ap
 import { checkBolts } from "./checks/bolt-checks";
 import { checkSpacing } from "./checks/spacing";
 import { checkEdgesAndPattern } from "./checks/edge-and-pattern";
-import type { CheckRecord } from "./checks/check-record";
+import { countChecks, type CheckRecord } from "./checks/check-record";
 import { collectCatalogueEditions, type CatalogueEdition } from "./catalogue-editions";
 import { toFiniteJson } from "./finite-json";
 
@@ -191,12 +191,7 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     "Tensile stress area for bolt stress, preload and torque; root area for ASME Appendix 2 Ab.",
     "Results are engineering estimates: design to the governing code; gasket factors are design values, not assembly targets, and the gasket manufacturer's data supersede them; torque controls preload only indirectly; pressure-boundary joints need review by a competent engineer.",
   ];
-  const counts = { failCount: 0, warnCount: 0, passCount: 0 };
-  for (const c of checks) {
-    if (c.status === "fail") counts.failCount++;
-    else if (c.status === "warn") counts.warnCount++;
-    else if (c.status === "pass") counts.passCount++;
-  }
+  const counts = countChecks(checks);
   const arr = (a: ArrayLike<number>) => Array.from(a);
   const L = model.boltPath.lengthMm;
   const byLabel = design.bolts

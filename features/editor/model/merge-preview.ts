@@ -5,22 +5,12 @@
  * edge checks) is the last full result's and is refreshed when the bolt is released.
  */
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
+import { countChecks } from "@/features/analysis/core/checks/check-record";
 import type { JointPreview } from "@/features/analysis/core/preview";
 
 type Check = JointAnalysis["checks"][number];
 
 const isSpacing = (c: Check) => c.id.startsWith("spacing.");
-
-/** Counts of fail, warn and pass records, as `analyzeJoint` sums them. */
-export function countChecks(checks: readonly Check[]): { failCount: number; warnCount: number; passCount: number } {
-  const counts = { failCount: 0, warnCount: 0, passCount: 0 };
-  for (const c of checks) {
-    if (c.status === "fail") counts.failCount++;
-    else if (c.status === "warn") counts.warnCount++;
-    else if (c.status === "pass") counts.passCount++;
-  }
-  return counts;
-}
 
 /**
  * The full result `base` with the preview's profile, summary, gasket-stress and spacing records

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { analyzeJoint } from "@/features/analysis/core/analyze";
 import { previewJoint } from "@/features/analysis/core/preview";
-import { countChecks, mergePreview } from "@/features/editor/model/merge-preview";
+import { countChecks } from "@/features/analysis/core/checks/check-record";
+import { mergePreview } from "@/features/editor/model/merge-preview";
 import { moveBolt } from "@/features/editor/model/move-bolt";
 import { firstDifference } from "@/features/editor/model/results-agree";
 import { makeCircle, makeCover } from "./fixtures";

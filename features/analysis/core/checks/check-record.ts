@@ -26,6 +26,17 @@ export function makeCheck(c: CheckRecord): CheckRecord {
   return { ...c, value: finiteOrNull(c.value), limit: finiteOrNull(c.limit) };
 }
 
+/** Counts of fail, warn and pass records (not-applicable ones are not counted). */
+export function countChecks(checks: readonly { status: CheckStatus }[]): { failCount: number; warnCount: number; passCount: number } {
+  const counts = { failCount: 0, warnCount: 0, passCount: 0 };
+  for (const c of checks) {
+    if (c.status === "fail") counts.failCount++;
+    else if (c.status === "warn") counts.warnCount++;
+    else if (c.status === "pass") counts.passCount++;
+  }
+  return counts;
+}
+
 /** Pass when value ≥ limit (optionally warn within `warnBand` below it). */
 export function statusAtLeast(value: number, limit: number): CheckStatus {
   return value >= limit ? "pass" : "fail";
