@@ -14,6 +14,7 @@ import { useDocumentErrors } from "../hooks/use-document-errors";
 import { useDragLoop } from "../hooks/use-drag-loop";
 import { useEditorHistory } from "../hooks/use-editor-history";
 import { useEditorShortcuts } from "../hooks/use-editor-shortcuts";
+import { useHeldWhile } from "../hooks/use-held-while";
 import { useHeatMap } from "../hooks/use-heat-map";
 import { useLeaveGuard } from "../hooks/use-leave-guard";
 import { useLiveAnalysis } from "../hooks/use-live-analysis";
@@ -62,13 +63,10 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   if (view) lastView.current = view;
   // While a bolt is dragged the Readout and the joint data sections hold what they showed at the
   // drag start (their tables are the costly part of a frame); the canvas and the drag gauge stay live.
-  const heldView = useRef(view);
-  const heldIssues = useRef(live.issues);
-  if (!editor.dragging) { heldView.current = view; heldIssues.current = live.issues; }
   // The Readout's tables render after the drawing: on release the bolt lands and its marks update
   // at once, and the Readout catches up in a background render React may interrupt.
-  const readoutView = useDeferredValue(editor.dragging ? heldView.current : view);
-  const readoutIssues = useDeferredValue(editor.dragging ? heldIssues.current : live.issues);
+  const readoutView = useDeferredValue(useHeldWhile(view, editor.dragging));
+  const readoutIssues = useDeferredValue(useHeldWhile(live.issues, editor.dragging));
   // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
   const heat = useHeatMap(design, editor.dragging ? view ?? lastView.current : view, editor.dragging);
 
@@ -132,8 +130,7 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   const checks = (view ?? lastView.current)?.checks ?? [];
   const highlight = highlightedBolts(view, { checkId: activeCheck ?? undefined });
   const ctx = useMemo(() => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }), [design, units, ro, act, setInvalid, errorFor]);
-  const heldCtx = useRef(ctx);
-  if (!editor.dragging) heldCtx.current = ctx;
+  const sectionsCtx = useHeldWhile(ctx, editor.dragging);
 
   return (
     <div className="space-y-3" data-testid="design-workspace">
@@ -175,7 +172,7 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
             onPickBolt={setSelected} basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"} />
         </div>
         <aside aria-label="Joint data" className="space-y-4 rounded-plate bg-white p-3 shadow-plate">
-          <JointForm ctx={ctx} sectionsCtx={heldCtx.current} meta={meta} onMeta={setMeta} selectedBoltId={selected} onDeleteBolt={deleteBolt} />
+          <JointForm ctx={ctx} sectionsCtx={sectionsCtx} meta={meta} onMeta={setMeta} selectedBoltId={selected} onDeleteBolt={deleteBolt} />
         </aside>
       </div>
     </div>

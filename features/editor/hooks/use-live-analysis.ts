@@ -16,38 +16,33 @@ export interface LiveAnalysis {
   computeMs: number;
   /** True when `result` is the stored server result rather than the browser's preview. */
   stored: boolean;
-  /**
-   * True while a bolt is dragged and `result` is the light preview laid over the last full
-   * result (model/merge-preview.ts): profile, summary, gasket and spacing checks are current,
-   * the bolt table, torque and the other checks are refreshed on release.
-   */
-  partial: boolean;
 }
 
 /**
  * Runs the core on every document change (the drag loop throttles changes to one per frame).
  * When the document is exactly the one the server stored, the stored result is shown instead:
  * it is the authoritative one, and the two must agree (see use-result-agreement.ts). While
- * dragging, the core's `previewJoint` (about half the work of `analyzeJoint`) runs instead; the
- * full analysis runs again as soon as the drag ends.
+ * dragging, the core's `previewJoint` (about half the work of `analyzeJoint`) runs instead and is
+ * laid over the last full result (model/merge-preview.ts); the full analysis runs again as soon
+ * as the drag ends.
  */
 export function useLiveAnalysis(design: JointDesign, stored: { document: JointDesign; result: JointAnalysis } | null, dragging = false): LiveAnalysis {
   const lastFull = useRef<JointAnalysis | null>(null);
   return useMemo(() => {
     if (stored && stored.document === design) {
       lastFull.current = stored.result;
-      return { result: stored.result, issues: NO_ISSUES, computeMs: 0, stored: true, partial: false };
+      return { result: stored.result, issues: NO_ISSUES, computeMs: 0, stored: true };
     }
     const t0 = performance.now();
     try {
       if (dragging && lastFull.current) {
         const result = mergePreview(lastFull.current, previewJoint(design));
-        return { result, issues: NO_ISSUES, computeMs: performance.now() - t0, stored: false, partial: true };
+        return { result, issues: NO_ISSUES, computeMs: performance.now() - t0, stored: false };
       }
       // analyzeJoint validates first; the issues are listed only when it refuses (no second pass per frame).
       const result = analyzeJoint(design);
       lastFull.current = result;
-      return { result, issues: NO_ISSUES, computeMs: performance.now() - t0, stored: false, partial: false };
+      return { result, issues: NO_ISSUES, computeMs: performance.now() - t0, stored: false };
     } catch (err) {
       const issues = validateJointDesign(design);
       return {
@@ -55,7 +50,6 @@ export function useLiveAnalysis(design: JointDesign, stored: { document: JointDe
         issues: issues.length > 0 ? issues : [{ path: "design", message: err instanceof Error ? err.message : String(err) }],
         computeMs: performance.now() - t0,
         stored: false,
-        partial: false,
       };
     }
   }, [design, stored, dragging]);
