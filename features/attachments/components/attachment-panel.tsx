@@ -3,6 +3,7 @@
 import { useState, type DragEvent } from "react";
 import useSWR from "swr";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { fetchJson } from "@/features/ui/fetch-json";
 import { attachmentsKey, attachmentUrl } from "../cache-keys";
 import { ACCEPTED_KINDS_TEXT, MAX_ATTACHMENT_BYTES, type AttachmentListDto } from "../model/dto";
 import { uploadFile } from "./upload-file";
@@ -23,11 +24,7 @@ interface Pending {
   error?: string;
 }
 
-const fetcher = async (url: string): Promise<AttachmentListDto> => {
-  const res = await fetch(url, { cache: "no-store" });
-  if (!res.ok) throw new Error((await res.json().catch(() => null))?.error?.message ?? "The attachments could not be loaded.");
-  return res.json();
-};
+const fetcher = (url: string) => fetchJson<AttachmentListDto>(url, "The attachments could not be loaded.");
 
 function size(bytes: number): string {
   return bytes >= 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} kB`;

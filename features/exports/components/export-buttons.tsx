@@ -3,6 +3,7 @@
 import { useState } from "react";
 import useSWR from "swr";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { fetchJson } from "@/features/ui/fetch-json";
 import { BACKGROUND_SHEET_MIN_BOLTS, JOB_POLL_MS, drillingTemplateUrl, holeListUrl, jobStatusKey, sheetPdfUrl } from "../cache-keys";
 
 export interface ExportButtonsProps {
@@ -25,11 +26,7 @@ interface JobStatus {
   error: string | null;
 }
 
-const fetchJson = async (url: string): Promise<JobStatus> => {
-  const res = await fetch(url, { cache: "no-store" });
-  if (!res.ok) throw new Error(((await res.json().catch(() => null)) as { error?: { message?: string } } | null)?.error?.message ?? `HTTP ${res.status}`);
-  return res.json() as Promise<JobStatus>;
-};
+const fetchJob = (url: string) => fetchJson<JobStatus>(url, (status) => `HTTP ${status}`);
 
 /** Sheet (PDF), hole list (CSV) and drilling template (DXF) of one stored revision. */
 export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem, hasResult = true }: ExportButtonsProps) {
@@ -39,7 +36,7 @@ export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem,
   const [queueError, setQueueError] = useState<string | null>(null);
   const [queueing, setQueueing] = useState(false);
   const queued = boltCount >= BACKGROUND_SHEET_MIN_BOLTS;
-  const { data: job, error: pollError } = useSWR<JobStatus>(jobId ? jobStatusKey(jobId) : null, fetchJson, {
+  const { data: job, error: pollError } = useSWR<JobStatus>(jobId ? jobStatusKey(jobId) : null, fetchJob, {
     refreshInterval: (latest) => (latest && (latest.status === "done" || latest.status === "failed") ? 0 : JOB_POLL_MS),
   });
   const pdfUrl = sheetPdfUrl(designId, revisionNumber, paper, units);

@@ -1,5 +1,6 @@
 "use client";
 import useSWR from "swr";
+import { fetchJson } from "@/features/ui/fetch-json";
 import { builtinGaskets } from "../model/builtin-rows";
 import type { GasketChoiceDto } from "../model/dto";
 
@@ -8,9 +9,7 @@ export const GASKET_CHOICES_KEY = "/api/v1/library/gaskets";
 const BUILTIN = builtinGaskets();
 
 async function fetchChoices(url: string): Promise<GasketChoiceDto[]> {
-  const res = await fetch(url, { cache: "no-store" });
-  if (!res.ok) throw new Error((await res.json().catch(() => null))?.error?.message ?? "The Stockroom gaskets could not be loaded.");
-  return ((await res.json()) as { rows: GasketChoiceDto[] }).rows;
+  return (await fetchJson<{ rows: GasketChoiceDto[] }>(url, "The Stockroom gaskets could not be loaded.")).rows;
 }
 
 /**
