@@ -7,6 +7,7 @@ import { FIELD_SPECS } from "../model/field-specs";
 import { formatQuantity } from "../model/quantities";
 import { fieldDomId, type FormContext } from "./form-context";
 import { NumberField } from "./number-field";
+import { SelectField } from "./select-field";
 
 const CUSTOM = "custom";
 
@@ -60,12 +61,10 @@ export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
         <p className="text-micro text-ink-500">Generic values are design values only; the gasket maker&apos;s data supersede them.</p>
       </div>
       {hasTightness && row && (
-        <div className="col-span-2 flex flex-col gap-0.5">
-          <label htmlFor={fieldDomId("gasket.material.tightnessClass")} className="text-micro text-ink-600">Tightness class for Qmin and QSmin</label>
-          <select id={fieldDomId("gasket.material.tightnessClass")} className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table" value={leakage} disabled={ctx.readOnly}
-            onChange={(e) => pick(row, e.target.value as LeakageClass)}>
-            {LEAKAGE_CLASSES.filter((c) => row.tightness[c]?.qMinMpa != null).map((c) => <option key={c} value={c}>{c} mg/(s·m)</option>)}
-          </select>
+        <div className="col-span-2">
+          <SelectField path="gasket.material.tightnessClass" label="Tightness class for Qmin and QSmin" value={leakage} disabled={ctx.readOnly}
+            options={LEAKAGE_CLASSES.filter((c) => row.tightness[c]?.qMinMpa != null).map((c) => ({ value: c, label: `${c} mg/(s·m)` }))}
+            onChange={(c) => pick(row, c)} />
         </div>
       )}
       <p className="col-span-2 text-micro text-ink-500">{g.kind === "full-face" ? "Full-face gasket: covers the face inside the outline, less the bore and the holes." : g.geometry.kind === "annulus" ? "Ring gasket (circular)." : "Ring gasket band along the outline."}</p>
