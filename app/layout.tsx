@@ -5,7 +5,8 @@ import "./globals.css";
 
 export const metadata: Metadata = {
   title: { default: "Sealpitch", template: "%s · Sealpitch" },
-  description: "Plan bolt patterns on gasketed flanges and check that the gasket is seated everywhere along its path.",
+  description:
+    "Plan bolt patterns on gasketed flanges and check that the gasket is seated everywhere along its path.",
   icons: { icon: "/sealpitch-mark.svg" },
 };
 

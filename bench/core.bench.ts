@@ -22,10 +22,22 @@ export async function run(): Promise<void> {
   });
   let f = 0;
   const cases: [string, () => unknown, number][] = [
-    ["96-bolt circle path (both estimators, 64/pitch)", () => computeGasketStressProfiles(buildJointModel(girth)), 200],
+    [
+      "96-bolt circle path (both estimators, 64/pitch)",
+      () => computeGasketStressProfiles(buildJointModel(girth)),
+      200,
+    ],
     ["96-bolt circle 256×256 grid", () => computeGasketStressGrid(girth, 256, 256), 50],
-    ["48-bolt rectangular cover path (both, 64/pitch)", () => computeGasketStressProfiles(buildJointModel(rect)), 200],
-    ["48-bolt rectangular cover 256×256 grid (cone)", () => computeGasketStressGrid(rect, 256, 256, { estimator: "cone" }), 50],
+    [
+      "48-bolt rectangular cover path (both, 64/pitch)",
+      () => computeGasketStressProfiles(buildJointModel(rect)),
+      200,
+    ],
+    [
+      "48-bolt rectangular cover 256×256 grid (cone)",
+      () => computeGasketStressGrid(rect, 256, 256, { estimator: "cone" }),
+      50,
+    ],
     ["96-bolt circle analyzeJoint (everything)", () => analyzeJoint(girth), 30],
     ["96-bolt circle previewJoint (drag preview)", () => previewJoint(girth), 200],
     ["96-bolt circle previewJoint, one bolt dragged", () => previewJoint(frames[f++ % frames.length]), 200],

@@ -9,7 +9,15 @@
  */
 import { chromium } from "@playwright/test";
 
-const CHROMIUM_ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const CHROMIUM_ARGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
 const DESIGNER = "dana.designer@kestrel-ridge.example";
 const PASSWORD = "halden-creek-2026";
 
@@ -31,7 +39,9 @@ export async function run(): Promise<void> {
   // A script outside the app: it reads its one setting directly (the app's env.ts is server code).
   const appUrl = process.env.APP_URL ?? "http://127.0.0.1:3100";
   if (!(await reachable(appUrl))) {
-    console.log(`editor-drag: no app at ${appUrl}; run it via \`npm run bench\`, which starts the app, or set APP_URL`);
+    console.log(
+      `editor-drag: no app at ${appUrl}; run it via \`npm run bench\`, which starts the app, or set APP_URL`,
+    );
     return;
   }
   const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_ARGS });
@@ -52,7 +62,9 @@ export async function run(): Promise<void> {
     await page.getByLabel("Flange thickness (mm)").fill("40");
     await page.getByRole("button", { name: "Create design" }).click();
     await page.waitForURL(/\/designs\/[0-9a-f-]{36}$/);
-    await page.waitForFunction(() => (window.__sealpitchStage?.ids("bolt-").length ?? 0) === 96, undefined, { timeout: 30_000 });
+    await page.waitForFunction(() => (window.__sealpitchStage?.ids("bolt-").length ?? 0) === 96, undefined, {
+      timeout: 30_000,
+    });
     const boltCount = await page.evaluate(() => window.__sealpitchStage!.ids("bolt-").length);
     // A person looks at the drawing before dragging; the Layout desk uses that idle time to let
     // the browser compile the core (features/editor/hooks/use-core-warmup.ts).
@@ -64,15 +76,24 @@ export async function run(): Promise<void> {
     const releases: number[] = [];
     let refused = 0;
     const draw: number[] = [];
-    for (const [id, prev, next] of [["b1", "b96", "b2"], ["b25", "b24", "b26"], ["b49", "b48", "b50"], ["b73", "b72", "b74"]]) {
-      await page.evaluate(() => { window.__sealpitchPerf = { frames: [] }; });
+    for (const [id, prev, next] of [
+      ["b1", "b96", "b2"],
+      ["b25", "b24", "b26"],
+      ["b49", "b48", "b50"],
+      ["b73", "b72", "b74"],
+    ]) {
+      await page.evaluate(() => {
+        window.__sealpitchPerf = { frames: [] };
+      });
       const at = (b: string) => page.evaluate((x) => window.__sealpitchStage!.boltClientPoint(x), b);
       const p = (await at(id))!;
-      const a = (await at(prev))!, b = (await at(next))!;
+      const a = (await at(prev))!,
+        b = (await at(next))!;
       // Along the bolt path (the tangent from one neighbour to the other), up to ±0.35 of a pitch:
       // the holes never overlap and stay clear of the gasket, as when a designer evens out a pattern.
       // (Moving across the path soon puts a hole over the ring gasket, a layout the core refuses.)
-      const tx = (b.x - a.x) / 2, ty = (b.y - a.y) / 2;
+      const tx = (b.x - a.x) / 2,
+        ty = (b.y - a.y) / 2;
       await page.mouse.move(p.x, p.y);
       // Shift: free placement, no snapping to equal pitch, so every step changes the layout.
       await page.keyboard.down("Shift");
@@ -92,19 +113,30 @@ export async function run(): Promise<void> {
       const got = await page.evaluate(() => window.__sealpitchPerf?.frames ?? []);
       releases.push(...(await page.evaluate(() => window.__sealpitchPerf?.releases ?? [])));
       for (const f of got) {
-        if (!f.analysed) { refused++; continue; }
-        frames.push(f.totalMs); react.push(f.reactMs); compute.push(f.computeMs); draw.push(f.drawMs);
+        if (!f.analysed) {
+          refused++;
+          continue;
+        }
+        frames.push(f.totalMs);
+        react.push(f.reactMs);
+        compute.push(f.computeMs);
+        draw.push(f.drawMs);
       }
     }
     for (const a of [frames, react, compute, draw, releases]) a.sort((x, y) => x - y);
     const line = (label: string, a: number[]) =>
-      console.log(`editor-drag: ${label.padEnd(52)} median ${quantile(a, 0.5).toFixed(2)} ms  p95 ${quantile(a, 0.95).toFixed(2)} ms  (n=${a.length})`);
+      console.log(
+        `editor-drag: ${label.padEnd(52)} median ${quantile(a, 0.5).toFixed(2)} ms  p95 ${quantile(a, 0.95).toFixed(2)} ms  (n=${a.length})`,
+      );
     line(`${boltCount}-bolt flange: recompute + redraw per frame`, frames);
     line(`${boltCount}-bolt flange: recompute + React update`, react);
     line(`${boltCount}-bolt flange:   of which the core (preview)`, compute);
     line(`${boltCount}-bolt flange: Konva layer draw`, draw);
     line(`${boltCount}-bolt flange: release (full analysis + drawing)`, releases);
-    if (refused > 0) console.log(`editor-drag: ${refused} frames left out: the core refused the dragged layout there (not a speed)`);
+    if (refused > 0)
+      console.log(
+        `editor-drag: ${refused} frames left out: the core refused the dragged layout there (not a speed)`,
+      );
   } finally {
     await browser.close();
   }

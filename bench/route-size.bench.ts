@@ -9,9 +9,20 @@ import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
 
-interface RouteStats { route: string; firstLoadUncompressedJsBytes: number; firstLoadChunkPaths: string[] }
+interface RouteStats {
+  route: string;
+  firstLoadUncompressedJsBytes: number;
+  firstLoadChunkPaths: string[];
+}
 
-const ROUTES = ["/designs/[designId]", "/designs/[designId]/revisions/[number]", "/designs", "/desk", "/library/gaskets", "/sign-in"];
+const ROUTES = [
+  "/designs/[designId]",
+  "/designs/[designId]/revisions/[number]",
+  "/designs",
+  "/desk",
+  "/library/gaskets",
+  "/sign-in",
+];
 
 const kb = (b: number) => `${(b / 1024).toFixed(1)} kB`;
 
@@ -34,6 +45,8 @@ export async function run(): Promise<void> {
     const s = stats.find((x) => x.route === route);
     if (!s) continue;
     const gzip = s.firstLoadChunkPaths.reduce((a, p) => a + gzipOf(p), 0);
-    console.log(`route-size: ${route.padEnd(44)} first-load JS ${kb(s.firstLoadUncompressedJsBytes).padStart(9)}  gzip ${kb(gzip).padStart(8)}  (${s.firstLoadChunkPaths.length} chunks)`);
+    console.log(
+      `route-size: ${route.padEnd(44)} first-load JS ${kb(s.firstLoadUncompressedJsBytes).padStart(9)}  gzip ${kb(gzip).padStart(8)}  (${s.firstLoadChunkPaths.length} chunks)`,
+    );
   }
 }

@@ -11,7 +11,9 @@ const here = dirname(fileURLToPath(import.meta.url));
 
 async function main(): Promise<void> {
   const filter = process.argv.slice(2).filter((a) => a !== "--");
-  const files = readdirSync(here).filter((f) => f.endsWith(".bench.ts")).sort();
+  const files = readdirSync(here)
+    .filter((f) => f.endsWith(".bench.ts"))
+    .sort();
   for (const f of files) {
     if (filter.length > 0 && !filter.some((x) => f.includes(x))) continue;
     const mod = (await import(pathToFileURL(join(here, f)).href)) as { run?: () => Promise<void> };

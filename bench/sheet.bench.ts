@@ -10,7 +10,11 @@ import { medianMs, printMedian } from "./measure";
 
 // Wall time is what a user waits; CPU time (user + system of this process) is printed beside it
 // because a shared 2-core machine under load inflates wall time several-fold.
-async function medianAsyncMs(fn: () => Promise<unknown>, n: number, warmup = 3): Promise<{ wall: number; cpu: number }> {
+async function medianAsyncMs(
+  fn: () => Promise<unknown>,
+  n: number,
+  warmup = 3,
+): Promise<{ wall: number; cpu: number }> {
   for (let i = 0; i < warmup; i++) await fn();
   const wall: number[] = [];
   const cpu: number[] = [];
@@ -39,6 +43,16 @@ export async function run(): Promise<void> {
   const n = 10;
   await printSheet("96-bolt spacing sheet PDF (A4, SI, approved)", () => renderSpacingSheet(approved), n);
   await printSheet("96-bolt spacing sheet PDF (Letter, US, draft)", () => renderSpacingSheet(draft), n);
-  printMedian("sheet", "96-bolt hole list CSV", medianMs(() => holeListFor(design, approved.result), 50), 50);
-  printMedian("sheet", "96-bolt drilling template DXF", medianMs(() => drillingTemplateFor(design, approved.result), 50), 50);
+  printMedian(
+    "sheet",
+    "96-bolt hole list CSV",
+    medianMs(() => holeListFor(design, approved.result), 50),
+    50,
+  );
+  printMedian(
+    "sheet",
+    "96-bolt drilling template DXF",
+    medianMs(() => drillingTemplateFor(design, approved.result), 50),
+    50,
+  );
 }

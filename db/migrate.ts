@@ -7,7 +7,9 @@ import { migrateToLatest } from "./migrate-to-latest";
 
 async function main(): Promise<void> {
   const { DATABASE_URL } = parseEnvKeys(["DATABASE_URL"]);
-  const db = new Kysely<any>({ dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: DATABASE_URL, max: 1 }) }) });
+  const db = new Kysely<any>({
+    dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: DATABASE_URL, max: 1 }) }),
+  });
   try {
     const report = await migrateToLatest(db);
     for (const name of report.applied) console.log(`migrated: ${name}`);

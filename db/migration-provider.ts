@@ -3,7 +3,6 @@ import { pathToFileURL } from "node:url";
 import type { Migration, MigrationProvider } from "kysely";
 import { listMigrationNames, MIGRATIONS_DIR } from "./migration-names";
 
-
 /**
  * Kysely's FileMigrationProvider imports `.ts` files with a bare dynamic import that fails under
  * vitest; this one imports each file through a file URL, which works under tsx, vitest and Node.

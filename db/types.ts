@@ -7,4 +7,5 @@ import type { ReviewTables } from "./tables/reviews";
 
 // The typed schema of the whole database. Each area keeps its tables' interfaces in
 // db/tables/<area>.ts next to the migrations that create them; this interface joins them.
-export interface Database extends CoreTables, DesignTables, AuthTables, LibraryTables, ReviewTables, ExportTables {}
+export interface Database
+  extends CoreTables, DesignTables, AuthTables, LibraryTables, ReviewTables, ExportTables {}

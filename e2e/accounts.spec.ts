@@ -49,7 +49,9 @@ async function latestLink(address: string, path: string): Promise<string> {
   for (let attempt = 0; attempt < 40; attempt += 1) {
     const response = await fetch(`${OUTBOX}/api/messages?to=${encodeURIComponent(address)}`);
     const messages = (await response.json()) as { text: string }[];
-    const match = messages.length ? new RegExp(`https?://[^\\s"<>]+${path}/[A-Za-z0-9_-]+`).exec(messages.at(-1)!.text) : null;
+    const match = messages.length
+      ? new RegExp(`https?://[^\\s"<>]+${path}/[A-Za-z0-9_-]+`).exec(messages.at(-1)!.text)
+      : null;
     if (match) return new URL(match[0]).pathname;
     await new Promise((resolve) => setTimeout(resolve, 250));
   }
@@ -60,7 +62,13 @@ function uniqueEmail(prefix: string): string {
   return `${prefix}-${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}@halden-creek.example`;
 }
 
-async function signUp(page: import("@playwright/test").Page, email: string, password: string, name: string, organization: string) {
+async function signUp(
+  page: import("@playwright/test").Page,
+  email: string,
+  password: string,
+  name: string,
+  organization: string,
+) {
   await page.goto("/sign-up");
   await page.getByLabel("Your name").fill(name);
   await page.getByLabel("E-mail").fill(email);
@@ -71,11 +79,15 @@ async function signUp(page: import("@playwright/test").Page, email: string, pass
   await expect(page).toHaveURL(/\/desk$/);
 }
 
-test("an admin invites a member who accepts by e-mail, lands in the organisation and signs in again", async ({ page }) => {
+test("an admin invites a member who accepts by e-mail, lands in the organisation and signs in again", async ({
+  page,
+}) => {
   const email = uniqueEmail("mara.invitee");
   await signIn(page, "ines.admin@kestrel-ridge.example");
   await page.getByRole("navigation", { name: "Workspace" }).getByRole("link", { name: "Crew" }).click();
-  await expect(page.getByRole("heading", { level: 1 })).toContainText("Who works in Kestrel Ridge Process Works");
+  await expect(page.getByRole("heading", { level: 1 })).toContainText(
+    "Who works in Kestrel Ridge Process Works",
+  );
   const form = page.getByRole("form", { name: "Invite a member" });
   await form.getByLabel("E-mail").fill(email);
   await form.getByLabel("Approver").check();
@@ -104,7 +116,9 @@ test("an admin invites a member who accepts by e-mail, lands in the organisation
   await expect(page.getByText("Kestrel Ridge Process Works").first()).toBeVisible();
 });
 
-test("forgot password → e-mail → reset → sign in with the new password (old one refused)", async ({ page }) => {
+test("forgot password → e-mail → reset → sign in with the new password (old one refused)", async ({
+  page,
+}) => {
   const email = uniqueEmail("oskar.reset");
   await signUp(page, email, "first-password-26", "Oskar Brandt", "Brandt Flange Services");
   await signOut(page);
@@ -114,7 +128,9 @@ test("forgot password → e-mail → reset → sign in with the new password (ol
   await expect(page).toHaveURL(/\/forgot-password$/);
   await page.getByLabel("E-mail").fill(email);
   await page.getByRole("button", { name: "Send the reset link" }).click();
-  await expect(page.getByRole("status")).toHaveText("If an account exists for that address, we have sent a link.");
+  await expect(page.getByRole("status")).toHaveText(
+    "If an account exists for that address, we have sent a link.",
+  );
 
   const link = await latestLink(email, "/reset-password");
   await page.goto(link);
@@ -135,9 +151,14 @@ test("forgot password → e-mail → reset → sign in with the new password (ol
   await expect(page.getByRole("alert").filter({ hasText: "already been used" })).toBeVisible();
 });
 
-test("bad sign-in input gets field messages; wrong passwords past the limit get the try-again message", async ({ page, context }) => {
+test("bad sign-in input gets field messages; wrong passwords past the limit get the try-again message", async ({
+  page,
+  context,
+}) => {
   // A dedicated account and client address, so the demo users and other specs are never locked out.
-  await context.setExtraHTTPHeaders({ "x-forwarded-for": `198.51.100.${Math.floor(Math.random() * 250) + 1}` });
+  await context.setExtraHTTPHeaders({
+    "x-forwarded-for": `198.51.100.${Math.floor(Math.random() * 250) + 1}`,
+  });
   const email = uniqueEmail("lena.lockout");
   await signUp(page, email, "correct-password-26", "Lena Voss", "Voss Pressure Parts");
   await signOut(page);
@@ -166,7 +187,10 @@ test("bad sign-in input gets field messages; wrong passwords past the limit get 
   await expect(page).toHaveURL(/\/sign-in/);
 });
 
-test("what the browser receives for the signed-in shell holds no password hash and no session secret", async ({ page, context }) => {
+test("what the browser receives for the signed-in shell holds no password hash and no session secret", async ({
+  page,
+  context,
+}) => {
   const bodies: { url: string; body: string }[] = [];
   page.on("response", async (response) => {
     const type = response.headers()["content-type"] ?? "";
@@ -184,7 +208,16 @@ test("what the browser receives for the signed-in shell holds no password hash a
   const me = await page.request.get("/api/v1/me");
   expect(me.status()).toBe(200);
   const meJson = (await me.json()) as Record<string, unknown>;
-  expect(Object.keys(meJson).sort()).toEqual(["displayName", "email", "organizationId", "organizationName", "organizationSlug", "roles", "unitSystem", "userId"]);
+  expect(Object.keys(meJson).sort()).toEqual([
+    "displayName",
+    "email",
+    "organizationId",
+    "organizationName",
+    "organizationSlug",
+    "roles",
+    "unitSystem",
+    "userId",
+  ]);
   bodies.push({ url: "/api/v1/me", body: JSON.stringify(meJson) });
   const rsc = await page.request.get("/desk", { headers: { rsc: "1" } });
   bodies.push({ url: "/desk (RSC)", body: await rsc.text() });

@@ -4,7 +4,11 @@ import { signIn } from "./helpers/sign-in";
 // The Joint register as the demo designer: the seeded examples, search, a filter, and a new
 // rectangular cover from its template, landing in the editor.
 const DESIGNER = "dana.designer@kestrel-ridge.example";
-const EXAMPLES = ["V-3304 obround manway M1", "E-2107 inlet nozzle N1, NPS 6 Class 150 RF", "E-2107 channel cover inspection hatch"];
+const EXAMPLES = [
+  "V-3304 obround manway M1",
+  "E-2107 inlet nozzle N1, NPS 6 Class 150 RF",
+  "E-2107 channel cover inspection hatch",
+];
 
 test("the register lists the demo designs, searches and filters them", async ({ page }) => {
   await signIn(page, DESIGNER);
@@ -31,7 +35,9 @@ test("the register lists the demo designs, searches and filters them", async ({ 
   await expect(page).toHaveURL(/sort=name/);
 });
 
-test("a rectangular cover from the template: a bad field is named, then it lands on its editor page", async ({ page }) => {
+test("a rectangular cover from the template: a bad field is named, then it lands on its editor page", async ({
+  page,
+}) => {
   await signIn(page, DESIGNER);
   await page.goto("/designs/new");
   await page.getByLabel("Rectangular cover").check();
@@ -47,5 +53,7 @@ test("a rectangular cover from the template: a bad field is named, then it lands
   await expect(page).toHaveURL(/\/designs\/[0-9a-f-]{36}$/);
 
   await page.goto(`/designs?q=${encodeURIComponent(name)}`);
-  await expect(page.getByRole("table", { name: "Joint register" }).getByRole("link", { name, exact: true })).toBeVisible();
+  await expect(
+    page.getByRole("table", { name: "Joint register" }).getByRole("link", { name, exact: true }),
+  ).toBeVisible();
 });

@@ -20,14 +20,18 @@ export async function waitForDrawing(page: Page): Promise<void> {
 }
 
 export const boltIds = (page: Page) => page.evaluate(() => window.__sealpitchStage!.ids("bolt-"));
-export const violationIds = (page: Page, prefix = "violation-") => page.evaluate((p) => window.__sealpitchStage!.ids(p), prefix);
-export const boltPoint = (page: Page, id: string) => page.evaluate((b) => window.__sealpitchStage!.boltClientPoint(b), id);
+export const violationIds = (page: Page, prefix = "violation-") =>
+  page.evaluate((p) => window.__sealpitchStage!.ids(p), prefix);
+export const boltPoint = (page: Page, id: string) =>
+  page.evaluate((b) => window.__sealpitchStage!.boltClientPoint(b), id);
 
 export async function expectSaved(page: Page): Promise<void> {
   await expect(page.getByTestId("save-state")).toHaveText("Saved", { timeout: 15_000 });
 }
 
-test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, switch units", async ({ page }) => {
+test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, switch units", async ({
+  page,
+}) => {
   await signIn(page, DESIGNER);
   const url = await createRectangularCover(page, `Editor e2e cover ${Date.now()}`);
 
@@ -65,7 +69,9 @@ test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, sw
   const row = page.locator('tr[data-check-id="spacing.min-pitch:b1-b2"]');
   await expect(row).toHaveAttribute("data-status", "fail");
   await row.getByRole("button").click();
-  await expect.poll(() => violationIds(page, "highlight-")).toEqual(expect.arrayContaining(["highlight-b1", "highlight-b2"]));
+  await expect
+    .poll(() => violationIds(page, "highlight-"))
+    .toEqual(expect.arrayContaining(["highlight-b1", "highlight-b2"]));
 
   // One drag is one history entry: a single undo puts b1 back.
   await page.keyboard.press("Control+z");
@@ -132,7 +138,9 @@ test("bad input is refused at the field and nothing is saved", async ({ page }) 
   const pressure = page.getByLabel("Design pressure (MPa)");
   await pressure.fill("-1");
   await pressure.press("Tab");
-  await expect(page.locator(`#${await pressure.getAttribute("aria-describedby")}`)).toHaveText(/at least 0 MPa/);
+  await expect(page.locator(`#${await pressure.getAttribute("aria-describedby")}`)).toHaveText(
+    /at least 0 MPa/,
+  );
   const count = page.getByLabel("Bolt count");
   await count.fill("10000");
   await count.press("Tab");
@@ -147,7 +155,9 @@ test("bad input is refused at the field and nothing is saved", async ({ page }) 
   expect((await boltIds(page)).length).toBe(16);
 });
 
-test("two sessions edit one design: the second save is refused and its edits stay on screen", async ({ browser }) => {
+test("two sessions edit one design: the second save is refused and its edits stay on screen", async ({
+  browser,
+}) => {
   const a = await browser.newContext();
   const b = await browser.newContext();
   const pa = await a.newPage();
@@ -168,7 +178,12 @@ test("two sessions edit one design: the second save is refused and its edits sta
   await temp.press("Tab");
   await pb.getByRole("button", { name: "Save", exact: true }).click();
   await expect(pb.getByTestId("save-state")).toHaveText("Conflict", { timeout: 15_000 });
-  await expect(pb.getByRole("alert").filter({ hasText: /changed|version/i }).first()).toBeVisible();
+  await expect(
+    pb
+      .getByRole("alert")
+      .filter({ hasText: /changed|version/i })
+      .first(),
+  ).toBeVisible();
   await expect(pb.getByRole("button", { name: "Reload theirs" })).toBeVisible();
   await expect(temp).toHaveValue("333");
   // Autosave does not retry into the conflict, and the local edit is still there.

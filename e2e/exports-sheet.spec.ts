@@ -4,14 +4,19 @@ import { signIn } from "./helpers/sign-in";
 // The shop files through the running production build: a signed-in member downloads the sheet,
 // hole list and drilling template of a seeded design, and a queued sheet finishes in the
 // server's own pg-boss worker.
-test("a member downloads the shop files of a seeded design and a queued sheet finishes", async ({ page, baseURL }) => {
+test("a member downloads the shop files of a seeded design and a queued sheet finishes", async ({
+  page,
+  baseURL,
+}) => {
   const anonymous = await page.request.get("/api/v1/jobs/00000000-0000-4000-8000-000000000000");
   expect(anonymous.status()).toBe(401);
 
   await signIn(page, "dana.designer@kestrel-ridge.example");
   const list = await page.request.get("/api/v1/designs");
   expect(list.ok()).toBe(true);
-  const { items } = (await list.json()) as { items: { designId: string; revisionNumber: number; equipmentTag: string }[] };
+  const { items } = (await list.json()) as {
+    items: { designId: string; revisionNumber: number; equipmentTag: string }[];
+  };
   expect(items.length).toBeGreaterThan(0);
   const design = items[0];
   const base = `/api/v1/designs/${design.designId}/revisions/${design.revisionNumber}`;
@@ -19,25 +24,34 @@ test("a member downloads the shop files of a seeded design and a queued sheet fi
   const pdf = await page.request.get(`${base}/sheet.pdf?paper=letter&units=US`);
   expect(pdf.status()).toBe(200);
   expect(pdf.headers()["content-type"]).toBe("application/pdf");
-  expect(pdf.headers()["content-disposition"]).toMatch(new RegExp(`-rev${design.revisionNumber}-spacing-sheet\\.pdf"$`));
+  expect(pdf.headers()["content-disposition"]).toMatch(
+    new RegExp(`-rev${design.revisionNumber}-spacing-sheet\\.pdf"$`),
+  );
   expect((await pdf.body()).subarray(0, 5).toString()).toBe("%PDF-");
 
   const csv = await page.request.get(`${base}/holes.csv`);
   expect(csv.status()).toBe(200);
-  expect((await csv.text()).split("\r\n")[0]).toMatch(/^number,id,angle_deg_cw_from_top,x_(mm|in),y_(mm|in),/);
+  expect((await csv.text()).split("\r\n")[0]).toMatch(
+    /^number,id,angle_deg_cw_from_top,x_(mm|in),y_(mm|in),/,
+  );
   const dxf = await page.request.get(`${base}/drilling.dxf`);
   expect(dxf.status()).toBe(200);
   expect(await dxf.text()).toContain("HOLES");
 
-  const queued = await page.request.post(`${base}/sheet.pdf?paper=a4&units=SI`, { headers: { origin: new URL(baseURL!).origin } });
+  const queued = await page.request.post(`${base}/sheet.pdf?paper=a4&units=SI`, {
+    headers: { origin: new URL(baseURL!).origin },
+  });
   expect(queued.status()).toBe(202);
   const { statusUrl } = (await queued.json()) as { statusUrl: string };
   let job = { status: "queued", downloadUrl: null as string | null, error: null as string | null };
   await expect
-    .poll(async () => {
-      job = (await (await page.request.get(statusUrl)).json()) as typeof job;
-      return job.status;
-    }, { timeout: 30_000, intervals: [250, 500, 1000] })
+    .poll(
+      async () => {
+        job = (await (await page.request.get(statusUrl)).json()) as typeof job;
+        return job.status;
+      },
+      { timeout: 30_000, intervals: [250, 500, 1000] },
+    )
     .toMatch(/done|failed/);
   expect(job.error).toBeNull();
   expect(job.status).toBe("done");

@@ -67,9 +67,19 @@ test("an admin adds a gasket to the Stockroom and a designer picks it in a desig
   const title = `Stockroom gasket pick E-2107 ${suffix}`;
   const document = buildCircularFlange(
     { name: title, equipmentTag: "E-2107", units: "SI" },
-    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+    {
+      outsideDiameterMm: 340,
+      boreDiameterMm: 170,
+      boltCircleDiameterMm: 290,
+      boltCount: 12,
+      boltSize: "M20",
+      flangeThicknessMm: 30,
+    },
   );
-  const created = await dana.request.post("/api/v1/designs", { data: { name: title, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  const created = await dana.request.post("/api/v1/designs", {
+    data: { name: title, equipmentTag: "E-2107", document },
+    headers: { origin: APP_URL },
+  });
   expect(created.status(), await created.text()).toBe(201);
   const { designId } = (await created.json()) as { designId: string };
   await dana.goto(`/designs/${designId}`);
@@ -82,33 +92,69 @@ test("an admin adds a gasket to the Stockroom and a designer picks it in a desig
   await expect(dana.getByLabel("Tightness class for Qmin and QSmin")).toHaveValue("L0.1");
   await dana.getByRole("button", { name: "Save", exact: true }).click();
   await expect(dana.getByTestId("save-state")).toHaveText("Saved");
-  const stored = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { workingRevision: { document: { gasket: { material: Record<string, unknown> } } } };
-  expect(stored.workingRevision.document.gasket.material).toMatchObject({ name, m: 2, yMpa: 15, qMinMpa: 12, catalogueId: expect.stringMatching(/^org:/) });
+  const stored = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
+    workingRevision: { document: { gasket: { material: Record<string, unknown> } } };
+  };
+  expect(stored.workingRevision.document.gasket.material).toMatchObject({
+    name,
+    m: 2,
+    yMpa: 15,
+    qMinMpa: 12,
+    catalogueId: expect.stringMatching(/^org:/),
+  });
   // The seating check now judges against the copied Qmin, as the Readout says.
   await expect(dana.locator('tr[data-check-id="gasket.seating"]')).toContainText(/Qmin|12/);
 });
 
-test("a designer attaches a datasheet PDF and downloads it byte-identical; a renamed program is refused", async ({ browser }) => {
+test("a designer attaches a datasheet PDF and downloads it byte-identical; a renamed program is refused", async ({
+  browser,
+}) => {
   const dana = await signedInPage(browser, DANA);
   const name = `Datasheet carrier E-2107 ${suffix}`;
   const document = buildCircularFlange(
     { name, equipmentTag: "E-2107", units: "SI" },
-    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+    {
+      outsideDiameterMm: 340,
+      boreDiameterMm: 170,
+      boltCircleDiameterMm: 290,
+      boltCount: 12,
+      boltSize: "M20",
+      flangeThicknessMm: 30,
+    },
   );
-  const created = await dana.request.post("/api/v1/designs", { data: { name, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  const created = await dana.request.post("/api/v1/designs", {
+    data: { name, equipmentTag: "E-2107", document },
+    headers: { origin: APP_URL },
+  });
   expect(created.status(), await created.text()).toBe(201);
   const { designId } = (await created.json()) as { designId: string };
 
-  const pdf = Buffer.concat([Buffer.from(`%PDF-1.4\n% Kestrel Ridge gasket datasheet ${suffix}\n`), Buffer.from(Array.from({ length: 4096 }, (_, i) => i % 256)), Buffer.from("\n%%EOF\n")]);
+  const pdf = Buffer.concat([
+    Buffer.from(`%PDF-1.4\n% Kestrel Ridge gasket datasheet ${suffix}\n`),
+    Buffer.from(Array.from({ length: 4096 }, (_, i) => i % 256)),
+    Buffer.from("\n%%EOF\n"),
+  ]);
   const base = `/api/v1/designs/${designId}/attachments`;
 
   // Without our Origin the upload is refused before anything is read.
-  const foreign = await dana.request.post(base, { data: pdf, headers: { "x-file-name": "datasheet.pdf", "content-type": "application/octet-stream", origin: "http://evil.example" } });
+  const foreign = await dana.request.post(base, {
+    data: pdf,
+    headers: {
+      "x-file-name": "datasheet.pdf",
+      "content-type": "application/octet-stream",
+      origin: "http://evil.example",
+    },
+  });
   expect(foreign.status()).toBe(403);
 
-  const exe = await dana.request.post(base, { data: Buffer.from("MZ\x90\x00\x03\x00\x00\x00"), headers: { "x-file-name": "datasheet.pdf", "content-type": "application/pdf", origin: APP_URL } });
+  const exe = await dana.request.post(base, {
+    data: Buffer.from("MZ\x90\x00\x03\x00\x00\x00"),
+    headers: { "x-file-name": "datasheet.pdf", "content-type": "application/pdf", origin: APP_URL },
+  });
   expect(exe.status()).toBe(415);
-  expect(((await exe.json()) as { error: { message: string } }).error.message).toMatch(/Only PDF, PNG, JPEG or DXF/);
+  expect(((await exe.json()) as { error: { message: string } }).error.message).toMatch(
+    /Only PDF, PNG, JPEG or DXF/,
+  );
 
   const page = await dana.context().newPage();
   await page.goto(`/designs/${designId}`);
@@ -119,7 +165,9 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
   // Chosen through the file input: the upload is held at the server door for a moment, so the
   // progress bar is seen, then the file is listed and downloads byte-identical.
   let release: () => void = () => {};
-  const held = new Promise<void>((r) => { release = r; });
+  const held = new Promise<void>((r) => {
+    release = r;
+  });
   await page.route(`**${base}`, async (route) => {
     if (route.request().method() !== "POST") return route.continue();
     await held;
@@ -140,7 +188,10 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
   await expect(drawer.getByRole("row", { name: /gasket-datasheet\.pdf/ })).toContainText("Dana");
 
   // Dropped onto the drawer: a PNG photo goes in; a file over the limit is refused before sending.
-  const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.from(Array.from({ length: 2048 }, (_, i) => (i * 7) % 256))]);
+  const png = Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    Buffer.from(Array.from({ length: 2048 }, (_, i) => (i * 7) % 256)),
+  ]);
   const drop = async (files: { name: string; type: string; bytes: number[] | null; size?: number }[]) => {
     const transfer = await page.evaluateHandle((list) => {
       const dt = new DataTransfer();
@@ -161,7 +212,9 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
   await expect(drawer.getByText("larger than 20 MB")).toBeVisible();
   await expect(drawer.getByRole("link", { name: "scan-too-big.pdf" })).toHaveCount(0);
 
-  const list = (await (await dana.request.get(base)).json()) as { attachments: { id: string; fileName: string; kind: string; uploadedByName: string }[] };
+  const list = (await (await dana.request.get(base)).json()) as {
+    attachments: { id: string; fileName: string; kind: string; uploadedByName: string }[];
+  };
   const item = list.attachments.find((a) => a.fileName === "gasket-datasheet.pdf");
   expect(item).toMatchObject({ kind: "pdf" });
   const downloaded = await dana.request.get(`${base}/${item!.id}`);
@@ -215,7 +268,16 @@ test("a DXF outline with bolt holes imports into a new design after a preview", 
   await dana.getByRole("button", { name: "Create design" }).click();
   await expect(dana).toHaveURL(/\/designs\/[0-9a-f-]{36}$/);
   const designId = dana.url().split("/").pop()!;
-  const stored = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { name: string; workingRevision: { document: { bolts: unknown[]; boltPath: { kind: string; diameterMm: number }; outline: { diameterMm: number } } } };
+  const stored = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
+    name: string;
+    workingRevision: {
+      document: {
+        bolts: unknown[];
+        boltPath: { kind: string; diameterMm: number };
+        outline: { diameterMm: number };
+      };
+    };
+  };
   expect(stored.name).toBe(name);
   expect(stored.workingRevision.document.bolts).toHaveLength(12);
   expect(stored.workingRevision.document.boltPath.kind).toBe("circle");

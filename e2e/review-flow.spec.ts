@@ -11,17 +11,29 @@ const ARLO = "arlo.approver@kestrel-ridge.example";
 const APP_URL = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const OUTBOX_URL = process.env.OUTBOX_URL ?? "http://127.0.0.1:2590";
 
-interface OutboxMessage { id: string; to: string[] | string; subject: string; text: string }
+interface OutboxMessage {
+  id: string;
+  to: string[] | string;
+  subject: string;
+  text: string;
+}
 
-async function waitForMail(request: APIRequestContext, to: string, subjectPart: string): Promise<OutboxMessage> {
+async function waitForMail(
+  request: APIRequestContext,
+  to: string,
+  subjectPart: string,
+): Promise<OutboxMessage> {
   let found: OutboxMessage | undefined;
   await expect
-    .poll(async () => {
-      const response = await request.get(`${OUTBOX_URL}/api/messages?to=${encodeURIComponent(to)}`);
-      const messages = (await response.json()) as OutboxMessage[];
-      found = messages.find((m) => m.subject.includes(subjectPart));
-      return Boolean(found);
-    }, { timeout: 15_000, message: `mail to ${to} about ${subjectPart}` })
+    .poll(
+      async () => {
+        const response = await request.get(`${OUTBOX_URL}/api/messages?to=${encodeURIComponent(to)}`);
+        const messages = (await response.json()) as OutboxMessage[];
+        found = messages.find((m) => m.subject.includes(subjectPart));
+        return Boolean(found);
+      },
+      { timeout: 15_000, message: `mail to ${to} about ${subjectPart}` },
+    )
     .toBe(true);
   return found!;
 }
@@ -38,7 +50,10 @@ async function signedInPage(browser: Browser, email: string): Promise<Page> {
   return page;
 }
 
-test("submit → mail → comment on a bolt → return → fix → resubmit → approve, desks updating live", async ({ browser, request }) => {
+test("submit → mail → comment on a bolt → return → fix → resubmit → approve, desks updating live", async ({
+  browser,
+  request,
+}) => {
   test.setTimeout(120_000);
   const name = `Review loop E-2107 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
@@ -52,9 +67,19 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
 
   const document = buildCircularFlange(
     { name, equipmentTag: "E-2107", units: "SI" },
-    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+    {
+      outsideDiameterMm: 340,
+      boreDiameterMm: 170,
+      boltCircleDiameterMm: 290,
+      boltCount: 12,
+      boltSize: "M20",
+      flangeThicknessMm: 30,
+    },
   );
-  const created = await dana.request.post("/api/v1/designs", { data: { name, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  const created = await dana.request.post("/api/v1/designs", {
+    data: { name, equipmentTag: "E-2107", document },
+    headers: { origin: APP_URL },
+  });
   expect(created.status(), await created.text()).toBe(201);
   const { designId } = (await created.json()) as { designId: string };
   const reviewPath = `/designs/${designId}/revisions/1`;
@@ -79,7 +104,9 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await expect(arlo.getByTestId("revision-status")).toHaveText("In review");
   const commentForm = arlo.getByRole("form", { name: "Add a comment" });
   await commentForm.getByLabel("Points at").selectOption({ label: "Bolt b3" });
-  await commentForm.getByLabel("Comment").fill("b3 sits too close to the nozzle reinforcement; move it clockwise.");
+  await commentForm
+    .getByLabel("Comment")
+    .fill("b3 sits too close to the nozzle reinforcement; move it clockwise.");
   await commentForm.getByRole("button", { name: "Post comment" }).click();
   const comment = arlo.getByTestId("comment").filter({ hasText: "move it clockwise" });
   // Posting re-renders the whole sign-off sheet on the server; give a busy machine time.
@@ -100,9 +127,17 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   expect(returnedMail.text).toContain(`${APP_URL}${reviewPath}`);
 
   // Dana fixes it through the designs API (a returned revision is editable) and resubmits.
-  const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { workingRevision: { version: number; document: typeof document } };
-  const fixed = { ...current.workingRevision.document, bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b3" ? { ...b, sMm: b.sMm + 4 } : b)) };
-  const saved = await dana.request.put(`/api/v1/designs/${designId}`, { data: { baseVersion: current.workingRevision.version, document: fixed }, headers: { origin: APP_URL } });
+  const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
+    workingRevision: { version: number; document: typeof document };
+  };
+  const fixed = {
+    ...current.workingRevision.document,
+    bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b3" ? { ...b, sMm: b.sMm + 4 } : b)),
+  };
+  const saved = await dana.request.put(`/api/v1/designs/${designId}`, {
+    data: { baseVersion: current.workingRevision.version, document: fixed },
+    headers: { origin: APP_URL },
+  });
   expect(saved.status(), await saved.text()).toBe(200);
   await dana.goto(reviewPath);
   await expect(dana.getByTestId("revision-status")).toHaveText("Returned");
@@ -116,16 +151,21 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   const approveForm = arlo.getByRole("form", { name: "Approve" });
   const justifications = approveForm.getByRole("textbox", { name: /^Justification for/ });
   const count = await justifications.count();
-  for (let i = 0; i < count; i++) await justifications.nth(i).fill("Accepted: pitch checked against the gasket maker's data sheet.");
+  for (let i = 0; i < count; i++)
+    await justifications.nth(i).fill("Accepted: pitch checked against the gasket maker's data sheet.");
   await approveForm.getByRole("button", { name: "Approve revision" }).click();
   await expect(arlo.getByTestId("revision-status")).toHaveText("Approved");
-  if (count > 0) await expect(arlo.getByTestId("justification").first()).toContainText("Accepted: pitch checked");
+  if (count > 0)
+    await expect(arlo.getByTestId("justification").first()).toContainText("Accepted: pitch checked");
   await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name, { timeout: 15_000 });
   const approvedMail = await waitForMail(request, DANA, `Approved: ${name}`);
   expect(approvedMail.text).toContain(`${APP_URL}${reviewPath}`);
 
   // The approved revision refuses the designs save path.
-  const refused = await dana.request.put(`/api/v1/designs/${designId}`, { data: { baseVersion: current.workingRevision.version + 10, document: fixed }, headers: { origin: APP_URL } });
+  const refused = await dana.request.put(`/api/v1/designs/${designId}`, {
+    data: { baseVersion: current.workingRevision.version + 10, document: fixed },
+    headers: { origin: APP_URL },
+  });
   expect(refused.ok()).toBe(false);
 
   // The activity log on the review screen tells the story.
@@ -137,16 +177,28 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await arlo.context().close();
 });
 
-test("an approved revision starts the next one, and the comparison shows what changed", async ({ browser }) => {
+test("an approved revision starts the next one, and the comparison shows what changed", async ({
+  browser,
+}) => {
   test.setTimeout(120_000);
   const name = `Compare E-2107 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
   const arlo = await signedInPage(browser, ARLO);
   const document = buildCircularFlange(
     { name, equipmentTag: "E-2107", units: "SI" },
-    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+    {
+      outsideDiameterMm: 340,
+      boreDiameterMm: 170,
+      boltCircleDiameterMm: 290,
+      boltCount: 12,
+      boltSize: "M20",
+      flangeThicknessMm: 30,
+    },
   );
-  const created = await dana.request.post("/api/v1/designs", { data: { name, equipmentTag: "E-2107", document }, headers: { origin: APP_URL } });
+  const created = await dana.request.post("/api/v1/designs", {
+    data: { name, equipmentTag: "E-2107", document },
+    headers: { origin: APP_URL },
+  });
   const { designId } = (await created.json()) as { designId: string };
   await dana.goto(`/designs/${designId}/revisions/1`);
   await dana.getByRole("button", { name: "Submit for review" }).click();
@@ -155,7 +207,8 @@ test("an approved revision starts the next one, and the comparison shows what ch
   await arlo.goto(`/designs/${designId}/revisions/1`);
   const approveForm = arlo.getByRole("form", { name: "Approve" });
   const justifications = approveForm.getByRole("textbox", { name: /^Justification for/ });
-  for (let i = 0; i < (await justifications.count()); i++) await justifications.nth(i).fill("Accepted for the hydrotest only.");
+  for (let i = 0; i < (await justifications.count()); i++)
+    await justifications.nth(i).fill("Accepted for the hydrotest only.");
   await approveForm.getByRole("button", { name: "Approve revision" }).click();
   await expect(arlo.getByTestId("revision-status")).toHaveText("Approved");
 
@@ -164,9 +217,17 @@ test("an approved revision starts the next one, and the comparison shows what ch
   await expect(dana).toHaveURL(new RegExp(`/designs/${designId}/revisions/2$`));
   await expect(dana.getByTestId("revision-status")).toHaveText("Draft");
 
-  const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as { workingRevision: { version: number; document: typeof document } };
-  const moved = { ...current.workingRevision.document, bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b5" ? { ...b, sMm: b.sMm + 6 } : b)) };
-  const saved = await dana.request.put(`/api/v1/designs/${designId}`, { data: { baseVersion: current.workingRevision.version, document: moved }, headers: { origin: APP_URL } });
+  const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
+    workingRevision: { version: number; document: typeof document };
+  };
+  const moved = {
+    ...current.workingRevision.document,
+    bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b5" ? { ...b, sMm: b.sMm + 6 } : b)),
+  };
+  const saved = await dana.request.put(`/api/v1/designs/${designId}`, {
+    data: { baseVersion: current.workingRevision.version, document: moved },
+    headers: { origin: APP_URL },
+  });
   expect(saved.status(), await saved.text()).toBe(200);
 
   await dana.goto(`/designs/${designId}/compare?from=1&to=2`);

@@ -10,7 +10,12 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn("email", "text", (col) => col.notNull())
     .addColumn("display_name", "text", (col) => col.notNull())
     .addColumn("password_hash", "text")
-    .addColumn("unit_system", "text", (col) => col.notNull().defaultTo("SI").check(sql`unit_system in ('SI', 'US')`))
+    .addColumn("unit_system", "text", (col) =>
+      col
+        .notNull()
+        .defaultTo("SI")
+        .check(sql`unit_system in ('SI', 'US')`),
+    )
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .addColumn("disabled_at", "timestamptz")
     .addCheckConstraint("users_email_lower", sql`email = lower(email)`)
@@ -27,12 +32,17 @@ export async function up(db: Kysely<any>): Promise<void> {
 
   await db.schema
     .createTable("memberships")
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("user_id", "uuid", (col) => col.notNull().references("users.id").onDelete("cascade"))
     .addColumn("roles", sql`text[]`, (col) => col.notNull().defaultTo(sql`'{}'::text[]`))
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .addPrimaryKeyConstraint("memberships_pkey", ["organization_id", "user_id"])
-    .addCheckConstraint("memberships_roles_known", sql`roles <@ array['designer', 'approver', 'admin']::text[]`)
+    .addCheckConstraint(
+      "memberships_roles_known",
+      sql`roles <@ array['designer', 'approver', 'admin']::text[]`,
+    )
     .execute();
   await db.schema.createIndex("memberships_user_idx").on("memberships").column("user_id").execute();
 
@@ -41,7 +51,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn("id", "text", (col) => col.primaryKey())
     .addColumn("user_id", "uuid", (col) => col.notNull().references("users.id").onDelete("cascade"))
     .addColumn("expires_at", "timestamptz", (col) => col.notNull())
-    .addColumn("active_organization_id", "uuid", (col) => col.references("organizations.id").onDelete("set null"))
+    .addColumn("active_organization_id", "uuid", (col) =>
+      col.references("organizations.id").onDelete("set null"),
+    )
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .execute();
   await db.schema.createIndex("sessions_user_idx").on("sessions").column("user_id").execute();

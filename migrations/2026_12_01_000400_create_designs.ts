@@ -8,7 +8,9 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable("designs")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("name", "text", (col) => col.notNull())
     .addColumn("equipment_tag", "text", (col) => col.notNull().defaultTo(""))
     .addColumn("outline_kind", "text", (col) => col.notNull())
@@ -17,13 +19,19 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn("updated_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .addColumn("archived_at", "timestamptz")
     .execute();
-  await db.schema.createIndex("designs_org_updated_idx").on("designs").columns(["organization_id", "updated_at"]).execute();
+  await db.schema
+    .createIndex("designs_org_updated_idx")
+    .on("designs")
+    .columns(["organization_id", "updated_at"])
+    .execute();
 
   await db.schema
     .createTable("design_revisions")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
     .addColumn("design_id", "uuid", (col) => col.notNull().references("designs.id").onDelete("cascade"))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("number", "integer", (col) => col.notNull())
     .addColumn("status", "text", (col) => col.notNull().defaultTo("draft"))
     .addColumn("document", "jsonb", (col) => col.notNull())
@@ -40,9 +48,16 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .addColumn("updated_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .addUniqueConstraint("design_revisions_number_key", ["design_id", "number"])
-    .addCheckConstraint("design_revisions_status_known", sql`status in ('draft', 'in_review', 'returned', 'approved')`)
+    .addCheckConstraint(
+      "design_revisions_status_known",
+      sql`status in ('draft', 'in_review', 'returned', 'approved')`,
+    )
     .execute();
-  await db.schema.createIndex("design_revisions_org_status_idx").on("design_revisions").columns(["organization_id", "status"]).execute();
+  await db.schema
+    .createIndex("design_revisions_org_status_idx")
+    .on("design_revisions")
+    .columns(["organization_id", "status"])
+    .execute();
 
   await sql`
     create function refuse_change_to_approved_revision() returns trigger language plpgsql as $$

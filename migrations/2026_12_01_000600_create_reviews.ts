@@ -21,8 +21,12 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable("revision_comments")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn("revision_id", "uuid", (col) => col.notNull().references("design_revisions.id").onDelete("cascade"))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("revision_id", "uuid", (col) =>
+      col.notNull().references("design_revisions.id").onDelete("cascade"),
+    )
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("author_id", "uuid", (col) => col.notNull().references("users.id"))
     .addColumn("body", "text", (col) => col.notNull())
     .addColumn("target_kind", "text")
@@ -34,27 +38,46 @@ export async function up(db: Kysely<any>): Promise<void> {
       sql`(target_kind is null and target_id is null) or (target_kind in ('bolt', 'check') and target_id is not null)`,
     )
     .execute();
-  await db.schema.createIndex("revision_comments_revision_idx").on("revision_comments").columns(["revision_id", "created_at"]).execute();
+  await db.schema
+    .createIndex("revision_comments_revision_idx")
+    .on("revision_comments")
+    .columns(["revision_id", "created_at"])
+    .execute();
 
   await db.schema
     .createTable("revision_decisions")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn("revision_id", "uuid", (col) => col.notNull().references("design_revisions.id").onDelete("cascade"))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("revision_id", "uuid", (col) =>
+      col.notNull().references("design_revisions.id").onDelete("cascade"),
+    )
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("kind", "text", (col) => col.notNull().check(sql`kind in ('approved', 'returned')`))
     .addColumn("actor_id", "uuid", (col) => col.notNull().references("users.id"))
     .addColumn("comment", "text", (col) => col.notNull().defaultTo(""))
     .addColumn("content_hash", "text", (col) => col.notNull())
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
-    .addCheckConstraint("revision_decisions_return_has_comment", sql`kind <> 'returned' or length(btrim(comment)) > 0`)
+    .addCheckConstraint(
+      "revision_decisions_return_has_comment",
+      sql`kind <> 'returned' or length(btrim(comment)) > 0`,
+    )
     .execute();
-  await db.schema.createIndex("revision_decisions_revision_idx").on("revision_decisions").columns(["revision_id", "created_at"]).execute();
+  await db.schema
+    .createIndex("revision_decisions_revision_idx")
+    .on("revision_decisions")
+    .columns(["revision_id", "created_at"])
+    .execute();
 
   await db.schema
     .createTable("revision_justifications")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn("revision_id", "uuid", (col) => col.notNull().references("design_revisions.id").onDelete("cascade"))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("revision_id", "uuid", (col) =>
+      col.notNull().references("design_revisions.id").onDelete("cascade"),
+    )
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("check_id", "text", (col) => col.notNull())
     .addColumn("check_status", "text", (col) => col.notNull().check(sql`check_status in ('warn', 'fail')`))
     .addColumn("text", "text", (col) => col.notNull())
@@ -67,19 +90,34 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable("design_activity")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("design_id", "uuid", (col) => col.notNull().references("designs.id").onDelete("cascade"))
     .addColumn("revision_id", "uuid", (col) => col.references("design_revisions.id").onDelete("cascade"))
     .addColumn("actor_id", "uuid", (col) => col.notNull().references("users.id"))
     .addColumn("kind", "text", (col) =>
-      col.notNull().check(sql`kind in ('created', 'saved', 'submitted', 'returned', 'approved', 'new-revision', 'commented', 'exported')`),
+      col
+        .notNull()
+        .check(
+          sql`kind in ('created', 'saved', 'submitted', 'returned', 'approved', 'new-revision', 'commented', 'exported')`,
+        ),
     )
     .addColumn("detail", "text", (col) => col.notNull().defaultTo(""))
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`clock_timestamp()`))
     .execute();
-  await db.schema.createIndex("design_activity_design_idx").on("design_activity").columns(["design_id", "created_at"]).execute();
+  await db.schema
+    .createIndex("design_activity_design_idx")
+    .on("design_activity")
+    .columns(["design_id", "created_at"])
+    .execute();
 
-  for (const table of ["revision_comments", "revision_decisions", "revision_justifications", "design_activity"]) {
+  for (const table of [
+    "revision_comments",
+    "revision_decisions",
+    "revision_justifications",
+    "design_activity",
+  ]) {
     await sql`
       create trigger ${sql.raw(`${table}_append_only`)}
       before update or delete on ${sql.table(table)}
@@ -116,7 +154,12 @@ export async function down(db: Kysely<any>): Promise<void> {
   await sql`alter table design_revisions drop constraint if exists design_revisions_four_eyes`.execute(db);
   await sql`drop trigger if exists design_revisions_review_steps on design_revisions`.execute(db);
   await sql`drop function if exists refuse_skipped_review_step()`.execute(db);
-  for (const table of ["design_activity", "revision_justifications", "revision_decisions", "revision_comments"]) {
+  for (const table of [
+    "design_activity",
+    "revision_justifications",
+    "revision_decisions",
+    "revision_comments",
+  ]) {
     await db.schema.dropTable(table).ifExists().execute();
   }
   await sql`drop function if exists refuse_change_to_history_row()`.execute(db);

@@ -32,7 +32,9 @@ export async function up(db: Kysely<any>): Promise<void> {
       .addColumn("source", "text", (col) => col.notNull())
       .addColumn("edition", "text", (col) => col.notNull().defaultTo("")),
   ).execute();
-  await sql`create unique index library_gaskets_org_name_key on library_gaskets (organization_id, lower(name))`.execute(db);
+  await sql`create unique index library_gaskets_org_name_key on library_gaskets (organization_id, lower(name))`.execute(
+    db,
+  );
 
   await timestamps(
     db.schema
@@ -46,7 +48,9 @@ export async function up(db: Kysely<any>): Promise<void> {
       .addColumn("source", "text", (col) => col.notNull())
       .addColumn("edition", "text", (col) => col.notNull().defaultTo("")),
   ).execute();
-  await sql`create unique index library_bolting_org_name_key on library_bolting (organization_id, lower(name))`.execute(db);
+  await sql`create unique index library_bolting_org_name_key on library_bolting (organization_id, lower(name))`.execute(
+    db,
+  );
 
   await timestamps(
     db.schema
@@ -65,9 +69,14 @@ export async function up(db: Kysely<any>): Promise<void> {
       .addColumn("hole_diameter_mm", "double precision", (col) => col.notNull())
       .addColumn("source", "text", (col) => col.notNull())
       .addColumn("edition", "text", (col) => col.notNull().defaultTo(""))
-      .addCheckConstraint("library_flange_templates_geometry", sql`bolt_count >= 2 and bolt_circle_diameter_mm < outside_diameter_mm`),
+      .addCheckConstraint(
+        "library_flange_templates_geometry",
+        sql`bolt_count >= 2 and bolt_circle_diameter_mm < outside_diameter_mm`,
+      ),
   ).execute();
-  await sql`create unique index library_flange_templates_key on library_flange_templates (organization_id, lower(standard), lower(pressure_class), lower(size))`.execute(db);
+  await sql`create unique index library_flange_templates_key on library_flange_templates (organization_id, lower(standard), lower(pressure_class), lower(size))`.execute(
+    db,
+  );
 
   await db.schema
     .createTable("library_hidden_builtins")
@@ -106,7 +115,11 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn("uploaded_by", "uuid", (col) => col.notNull().references("users.id"))
     .addColumn("created_at", "timestamptz", (col) => col.notNull().defaultTo(sql`now()`))
     .execute();
-  await db.schema.createIndex("design_attachments_design_idx").on("design_attachments").columns(["organization_id", "design_id", "created_at"]).execute();
+  await db.schema
+    .createIndex("design_attachments_design_idx")
+    .on("design_attachments")
+    .columns(["organization_id", "design_id", "created_at"])
+    .execute();
 }
 
 export async function down(db: Kysely<any>): Promise<void> {

@@ -7,9 +7,13 @@ export async function up(db: Kysely<any>): Promise<void> {
   await db.schema
     .createTable("export_files")
     .addColumn("id", "uuid", (col) => col.primaryKey().defaultTo(sql`gen_random_uuid()`))
-    .addColumn("organization_id", "uuid", (col) => col.notNull().references("organizations.id").onDelete("cascade"))
+    .addColumn("organization_id", "uuid", (col) =>
+      col.notNull().references("organizations.id").onDelete("cascade"),
+    )
     .addColumn("design_id", "uuid", (col) => col.notNull().references("designs.id").onDelete("cascade"))
-    .addColumn("revision_id", "uuid", (col) => col.notNull().references("design_revisions.id").onDelete("cascade"))
+    .addColumn("revision_id", "uuid", (col) =>
+      col.notNull().references("design_revisions.id").onDelete("cascade"),
+    )
     .addColumn("kind", "text", (col) => col.notNull())
     .addColumn("options", "jsonb", (col) => col.notNull().defaultTo(sql`'{}'::jsonb`))
     .addColumn("status", "text", (col) => col.notNull().defaultTo("queued"))
@@ -26,7 +30,11 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addCheckConstraint("export_files_status_known", sql`status in ('queued', 'running', 'done', 'failed')`)
     .addCheckConstraint("export_files_progress_range", sql`progress between 0 and 100`)
     .execute();
-  await db.schema.createIndex("export_files_org_created_idx").on("export_files").columns(["organization_id", "created_at"]).execute();
+  await db.schema
+    .createIndex("export_files_org_created_idx")
+    .on("export_files")
+    .columns(["organization_id", "created_at"])
+    .execute();
 }
 
 export async function down(db: Kysely<any>): Promise<void> {

@@ -35,7 +35,8 @@ function main(argv: string[]): void {
     fail([`${file}: not valid JSON (${(e as Error).message})`]);
   }
   const parsed = jointDesignSchema.safeParse(raw);
-  if (!parsed.success) fail([`${file}: invalid design`, ...formatDesignErrors(parsed.error).map((l) => `  ${l}`)]);
+  if (!parsed.success)
+    fail([`${file}: invalid design`, ...formatDesignErrors(parsed.error).map((l) => `  ${l}`)]);
   const result = analyzeJoint(parsed.data as JointDesign);
   process.stdout.write(`${JSON.stringify(result, null, 2)}\n`);
 }

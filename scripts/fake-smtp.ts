@@ -31,7 +31,8 @@ const smtpPort = Number(argument("smtp"));
 const httpPort = Number(argument("http"));
 const storePath = process.argv.includes("--store") ? argument("store") : null;
 
-let messages: StoredMessage[] = storePath && existsSync(storePath) ? (JSON.parse(readFileSync(storePath, "utf8")) as StoredMessage[]) : [];
+let messages: StoredMessage[] =
+  storePath && existsSync(storePath) ? (JSON.parse(readFileSync(storePath, "utf8")) as StoredMessage[]) : [];
 let nextId = messages.reduce((max, m) => Math.max(max, m.id), 0) + 1;
 
 function persist(): void {
@@ -71,7 +72,8 @@ function inboxPage(): string {
   const rows = [...messages]
     .reverse()
     .map(
-      (m) => `<article><header><b>${escapeHtml(m.subject)}</b><br><small>to ${escapeHtml(m.to.join(", "))} · ${m.receivedAt}</small></header><pre>${escapeHtml(m.text)}</pre></article>`,
+      (m) =>
+        `<article><header><b>${escapeHtml(m.subject)}</b><br><small>to ${escapeHtml(m.to.join(", "))} · ${m.receivedAt}</small></header><pre>${escapeHtml(m.text)}</pre></article>`,
     )
     .join("");
   return `<!doctype html><meta charset="utf-8"><title>Sealpitch local outbox</title><style>body{font:14px system-ui;margin:2rem;max-width:60rem}article{border:1px solid #ccd;border-radius:6px;padding:1rem;margin:0 0 1rem}pre{white-space:pre-wrap}</style><h1>Local outbox</h1><p>${messages.length} message(s) sent by Sealpitch on this machine. Nothing here leaves the machine.</p>${rows}`;
@@ -104,7 +106,9 @@ smtp.on("error", (error) => console.error(`fake-smtp: ${error.message}`));
 smtp.server.once("error", (error: NodeJS.ErrnoException) => fail(`SMTP on ${smtpPort}`, error));
 api.once("error", (error: NodeJS.ErrnoException) => fail(`HTTP on ${httpPort}`, error));
 smtp.listen(smtpPort, "127.0.0.1", () => {
-  api.listen(httpPort, "127.0.0.1", () => console.log(`fake-smtp: SMTP on 127.0.0.1:${smtpPort}, outbox at http://127.0.0.1:${httpPort}/`));
+  api.listen(httpPort, "127.0.0.1", () =>
+    console.log(`fake-smtp: SMTP on 127.0.0.1:${smtpPort}, outbox at http://127.0.0.1:${httpPort}/`),
+  );
 });
 
 for (const signal of ["SIGINT", "SIGTERM"] as const) {

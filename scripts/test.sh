@@ -11,6 +11,10 @@ source "$(dirname "$0")/lib/test-stack.sh"
 cd "$PROJECT_ROOT"
 STARTED_AT=$(date +%s)
 
+ensure_node_modules
+say "format check (prettier)"
+npx prettier --check . --log-level=warn || die "files are not formatted: run npm run format"
+
 stack_up
 
 say "unit and integration tests (vitest)"

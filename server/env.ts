@@ -4,9 +4,7 @@ import { z } from "zod";
 // Every server setting, parsed once. This is the only module that reads process.env (the
 // scripts under scripts/ set these variables; see .env.example). A bad or missing value stops
 // the process with one message that lists every problem at once.
-const booleanString = z
-  .enum(["true", "false", "1", "0"])
-  .transform((v) => v === "true" || v === "1");
+const booleanString = z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1");
 
 const envSchema = z.object({
   NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
@@ -38,7 +36,10 @@ export function parseEnv(source: Record<string, string | undefined>): ServerEnv 
 }
 
 /** Parses only the named settings; for command-line scripts that need a few of them. */
-export function parseEnvKeys<K extends keyof ServerEnv>(keys: K[], source: Record<string, string | undefined> = process.env): Pick<ServerEnv, K> {
+export function parseEnvKeys<K extends keyof ServerEnv>(
+  keys: K[],
+  source: Record<string, string | undefined> = process.env,
+): Pick<ServerEnv, K> {
   const mask = Object.fromEntries(keys.map((key) => [key, true])) as Record<K, true>;
   const result = envSchema.pick(mask as never).safeParse(source);
   if (result.success) return result.data as Pick<ServerEnv, K>;

@@ -1,7 +1,11 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { getDb } from "@/db/index";
-import { signOutAction, signOutEverywhereAction, switchOrganizationAction } from "@/features/accounts/actions";
+import {
+  signOutAction,
+  signOutEverywhereAction,
+  switchOrganizationAction,
+} from "@/features/accounts/actions";
 import { listUserOrganizations } from "@/features/accounts/queries";
 import { OrganizationSwitcher } from "@/features/shell/components/organization-switcher";
 import { UserMenu } from "@/features/shell/components/user-menu";
@@ -23,7 +27,11 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
           </Link>
           <WorkspaceNav roles={viewer.roles} />
           <div className="ml-auto flex items-center gap-3">
-            <OrganizationSwitcher organizations={organizations} activeId={viewer.organizationId} switchOrganizationAction={switchOrganizationAction} />
+            <OrganizationSwitcher
+              organizations={organizations}
+              activeId={viewer.organizationId}
+              switchOrganizationAction={switchOrganizationAction}
+            />
             <UserMenu
               displayName={viewer.displayName}
               email={viewer.email}

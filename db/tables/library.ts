@@ -7,7 +7,9 @@ type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
 
 export type LeakageClass = "L1.0" | "L0.1" | "L0.01";
-export type TightnessByClass = Partial<Record<LeakageClass, { qMinMpa: number | null; qsMinMpa: number | null }>>;
+export type TightnessByClass = Partial<
+  Record<LeakageClass, { qMinMpa: number | null; qsMinMpa: number | null }>
+>;
 
 export interface BoltingRangeJson {
   maxDiameterMm: number;

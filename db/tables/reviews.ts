@@ -7,7 +7,8 @@ type CreatedAt = ColumnType<Date, Date | string | undefined, never>;
 
 export type CommentTargetKind = "bolt" | "check";
 export type DecisionKind = "approved" | "returned";
-export type ActivityKind = "created" | "saved" | "submitted" | "returned" | "approved" | "new-revision" | "commented" | "exported";
+export type ActivityKind =
+  "created" | "saved" | "submitted" | "returned" | "approved" | "new-revision" | "commented" | "exported";
 
 export interface RevisionCommentsTable {
   id: Generated<string>;

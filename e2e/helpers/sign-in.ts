@@ -3,7 +3,12 @@ import { expect, type Page } from "@playwright/test";
 export const DEMO_PASSWORD = "halden-creek-2026";
 
 /** Signs in through the real form and waits for the desk (or the ?next= page). */
-export async function signIn(page: Page, email: string, password = DEMO_PASSWORD, next?: string): Promise<void> {
+export async function signIn(
+  page: Page,
+  email: string,
+  password = DEMO_PASSWORD,
+  next?: string,
+): Promise<void> {
   await page.goto(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);

@@ -16,21 +16,32 @@ import { safeNextPath, signInSchema, signUpSchema, switchOrganizationSchema } fr
 // Session entry points. Each action parses its own input and never trusts the form for who
 // the user is: that comes from the session cookie.
 
-export async function signInAction(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
+export async function signInAction(
+  _previous: ActionResult | null,
+  formData: FormData,
+): Promise<ActionResult> {
   const parsed = signInSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalid(parsed.error);
   const addressKey = clientAddressKey(await headers());
-  const outcome = await authenticate(getDb(), { email: parsed.data.email, password: parsed.data.password, addressKey });
+  const outcome = await authenticate(getDb(), {
+    email: parsed.data.email,
+    password: parsed.data.password,
+    addressKey,
+  });
   if (!outcome.ok) return { ok: false, message: outcome.message };
   await startSession(outcome.userId, outcome.organizationId);
   redirect(safeNextPath(parsed.data.next));
 }
 
-export async function signUpAction(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
+export async function signUpAction(
+  _previous: ActionResult | null,
+  formData: FormData,
+): Promise<ActionResult> {
   const parsed = signUpSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalid(parsed.error);
   const outcome = await createOrganizationWithFounder(getDb(), parsed.data);
-  if (!outcome.ok) return { ok: false, message: outcome.message, fieldErrors: { [outcome.field]: [outcome.message] } };
+  if (!outcome.ok)
+    return { ok: false, message: outcome.message, fieldErrors: { [outcome.field]: [outcome.message] } };
   await startSession(outcome.userId, outcome.organizationId);
   redirect("/desk");
 }
@@ -52,7 +63,8 @@ export async function switchOrganizationAction(formData: FormData): Promise<void
   if (!context) redirect("/sign-in");
   const parsed = switchOrganizationSchema.safeParse(formFields(formData));
   // Only organisations the user belongs to: the update itself checks the membership.
-  if (parsed.success) await switchSessionOrganization(context.sessionId, context.viewer.userId, parsed.data.organizationId);
+  if (parsed.success)
+    await switchSessionOrganization(context.sessionId, context.viewer.userId, parsed.data.organizationId);
   revalidatePath("/", "layout");
   redirect("/desk");
 }

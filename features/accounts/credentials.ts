@@ -2,7 +2,14 @@ import "server-only";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import { hashPassword, verifyPassword } from "@/server/auth/password";
-import { minutesUntilAllowedAll, pruneAttempts, RATE_LIMITS, recordAttempts, tooManyAttemptsMessage, type RateLimit } from "@/server/auth/rate-limit";
+import {
+  minutesUntilAllowedAll,
+  pruneAttempts,
+  RATE_LIMITS,
+  recordAttempts,
+  tooManyAttemptsMessage,
+  type RateLimit,
+} from "@/server/auth/rate-limit";
 import { findDefaultOrganizationId } from "./queries";
 
 // Checking an e-mail and password. The failure message is the same whether the address is
@@ -13,8 +20,7 @@ export const WRONG_CREDENTIALS = "E-mail or password is wrong.";
 let dummyHash: Promise<string> | undefined;
 
 export type SignInOutcome =
-  | { ok: true; userId: string; organizationId: string }
-  | { ok: false; message: string; limited: boolean };
+  { ok: true; userId: string; organizationId: string } | { ok: false; message: string; limited: boolean };
 
 export async function authenticate(
   db: Kysely<Database>,
@@ -35,7 +41,8 @@ export async function authenticate(
     .executeTakeFirst();
   dummyHash ??= hashPassword("sealpitch-timing-equaliser");
   const passwordOk = await verifyPassword(user?.password_hash ?? (await dummyHash), input.password);
-  const organizationId = user && passwordOk && !user.disabled_at ? await findDefaultOrganizationId(db, user.id) : null;
+  const organizationId =
+    user && passwordOk && !user.disabled_at ? await findDefaultOrganizationId(db, user.id) : null;
 
   if (!user || !passwordOk || user.disabled_at || !organizationId) {
     await recordAttempts(db, checks);

@@ -17,7 +17,8 @@ export interface IssuedInvitation {
   expiresAt: Date;
 }
 
-export type InviteOutcome = { ok: true; invitation: IssuedInvitation } | { ok: false; field?: "email"; message: string };
+export type InviteOutcome =
+  { ok: true; invitation: IssuedInvitation } | { ok: false; field?: "email"; message: string };
 
 function expiry(now: Date): Date {
   return new Date(now.getTime() + INVITATION_VALID_DAYS * 86_400_000);
@@ -42,7 +43,14 @@ export async function createInvitation(
   const expiresAt = expiry(now);
   const row = await db
     .insertInto("invitations")
-    .values({ organization_id: input.organizationId, email: input.email, roles, token_hash: tokenHash, invited_by: input.invitedBy, expires_at: expiresAt })
+    .values({
+      organization_id: input.organizationId,
+      email: input.email,
+      roles,
+      token_hash: tokenHash,
+      invited_by: input.invitedBy,
+      expires_at: expiresAt,
+    })
     .onConflict((oc) =>
       oc
         .columns(["organization_id", "email"])
@@ -56,7 +64,12 @@ export async function createInvitation(
 }
 
 /** A new link for an open invitation (the old link stops working); null when not found here. */
-export async function renewInvitation(db: Kysely<Database>, organizationId: string, invitationId: string, now = new Date()): Promise<IssuedInvitation | null> {
+export async function renewInvitation(
+  db: Kysely<Database>,
+  organizationId: string,
+  invitationId: string,
+  now = new Date(),
+): Promise<IssuedInvitation | null> {
   const { token, tokenHash } = createToken();
   const expiresAt = expiry(now);
   const row = await db
@@ -68,10 +81,17 @@ export async function renewInvitation(db: Kysely<Database>, organizationId: stri
     .where("revoked_at", "is", null)
     .returning(["id", "email", "roles"])
     .executeTakeFirst();
-  return row ? { invitationId: row.id, email: row.email, roles: sortRoles(row.roles), token, expiresAt } : null;
+  return row
+    ? { invitationId: row.id, email: row.email, roles: sortRoles(row.roles), token, expiresAt }
+    : null;
 }
 
-export async function revokeInvitation(db: Kysely<Database>, organizationId: string, invitationId: string, now = new Date()): Promise<boolean> {
+export async function revokeInvitation(
+  db: Kysely<Database>,
+  organizationId: string,
+  invitationId: string,
+  now = new Date(),
+): Promise<boolean> {
   const result = await db
     .updateTable("invitations")
     .set({ revoked_at: now })
@@ -93,18 +113,39 @@ export const INVITATION_MESSAGES = {
   unknown: "This invitation link is not valid. Ask your administrator for a new one.",
 };
 
-export async function viewInvitation(db: Kysely<Database>, token: string, now = new Date()): Promise<InvitationView> {
+export async function viewInvitation(
+  db: Kysely<Database>,
+  token: string,
+  now = new Date(),
+): Promise<InvitationView> {
   const row = await db
     .selectFrom("invitations")
     .innerJoin("organizations", "organizations.id", "invitations.organization_id")
-    .select(["invitations.email", "invitations.roles", "invitations.expires_at", "invitations.accepted_at", "invitations.revoked_at", "organizations.name"])
-    .select((eb) => eb.exists(eb.selectFrom("users").select("users.id").whereRef("users.email", "=", "invitations.email")).as("has_account"))
+    .select([
+      "invitations.email",
+      "invitations.roles",
+      "invitations.expires_at",
+      "invitations.accepted_at",
+      "invitations.revoked_at",
+      "organizations.name",
+    ])
+    .select((eb) =>
+      eb
+        .exists(eb.selectFrom("users").select("users.id").whereRef("users.email", "=", "invitations.email"))
+        .as("has_account"),
+    )
     .where("invitations.token_hash", "=", hashToken(token))
     .executeTakeFirst();
   if (!row) return { state: "unknown" };
   if (row.accepted_at || row.revoked_at) return { state: "used" };
   if (new Date(row.expires_at) <= now) return { state: "expired" };
-  return { state: "open", email: row.email, organizationName: row.name, roles: sortRoles(row.roles), hasAccount: Boolean(row.has_account) };
+  return {
+    state: "open",
+    email: row.email,
+    organizationName: row.name,
+    roles: sortRoles(row.roles),
+    hasAccount: Boolean(row.has_account),
+  };
 }
 
 export type AcceptOutcome =
@@ -128,23 +169,42 @@ export async function acceptInvitation(
       .forUpdate()
       .executeTakeFirst();
     if (!invitation) return { ok: false, message: INVITATION_MESSAGES.unknown };
-    if (invitation.accepted_at || invitation.revoked_at) return { ok: false, message: INVITATION_MESSAGES.used };
+    if (invitation.accepted_at || invitation.revoked_at)
+      return { ok: false, message: INVITATION_MESSAGES.used };
     if (new Date(invitation.expires_at) <= now) return { ok: false, message: INVITATION_MESSAGES.expired };
 
-    const existing = await trx.selectFrom("users").select(["id", "password_hash"]).where("email", "=", invitation.email).executeTakeFirst();
+    const existing = await trx
+      .selectFrom("users")
+      .select(["id", "password_hash"])
+      .where("email", "=", invitation.email)
+      .executeTakeFirst();
     let userId: string;
     if (existing) {
       if (!existing.password_hash || !(await verifyPassword(existing.password_hash, input.password))) {
-        return { ok: false, message: "That is not the password of this account.", fieldErrors: { password: ["That is not the password of this account."] } };
+        return {
+          ok: false,
+          message: "That is not the password of this account.",
+          fieldErrors: { password: ["That is not the password of this account."] },
+        };
       }
       userId = existing.id;
     } else {
       const name = input.displayName?.trim();
-      if (!name) return { ok: false, message: "Enter your name.", fieldErrors: { displayName: ["Enter your name."] } };
-      if (input.password.length < 10) return { ok: false, message: "Use at least 10 characters.", fieldErrors: { password: ["Use at least 10 characters."] } };
+      if (!name)
+        return { ok: false, message: "Enter your name.", fieldErrors: { displayName: ["Enter your name."] } };
+      if (input.password.length < 10)
+        return {
+          ok: false,
+          message: "Use at least 10 characters.",
+          fieldErrors: { password: ["Use at least 10 characters."] },
+        };
       const created = await trx
         .insertInto("users")
-        .values({ email: invitation.email, display_name: name, password_hash: await hashPassword(input.password) })
+        .values({
+          email: invitation.email,
+          display_name: name,
+          password_hash: await hashPassword(input.password),
+        })
         .returning("id")
         .executeTakeFirstOrThrow();
       userId = created.id;
@@ -153,7 +213,9 @@ export async function acceptInvitation(
       .insertInto("memberships")
       .values({ organization_id: invitation.organization_id, user_id: userId, roles: invitation.roles })
       .onConflict((oc) =>
-        oc.columns(["organization_id", "user_id"]).doUpdateSet({ roles: sql`(select array_agg(distinct r) from unnest(memberships.roles || excluded.roles) r)` }),
+        oc.columns(["organization_id", "user_id"]).doUpdateSet({
+          roles: sql`(select array_agg(distinct r) from unnest(memberships.roles || excluded.roles) r)`,
+        }),
       )
       .execute();
     await trx.updateTable("invitations").set({ accepted_at: now }).where("id", "=", invitation.id).execute();

@@ -10,7 +10,8 @@ import type { SignUpInput } from "./schema";
 // designer, so they can start work before inviting anyone).
 export const FOUNDER_ROLES: Role[] = ["designer", "admin"];
 
-export type SignUpOutcome = { ok: true; userId: string; organizationId: string } | { ok: false; field: "email"; message: string };
+export type SignUpOutcome =
+  { ok: true; userId: string; organizationId: string } | { ok: false; field: "email"; message: string };
 
 export function slugify(name: string): string {
   const base = name
@@ -22,7 +23,10 @@ export function slugify(name: string): string {
   return `${base || "org"}-${randomBytes(3).toString("hex")}`;
 }
 
-export async function createOrganizationWithFounder(db: Kysely<Database>, input: SignUpInput): Promise<SignUpOutcome> {
+export async function createOrganizationWithFounder(
+  db: Kysely<Database>,
+  input: SignUpInput,
+): Promise<SignUpOutcome> {
   const passwordHash = await hashPassword(input.password);
   return db.transaction().execute(async (trx) => {
     const user = await trx
@@ -33,10 +37,21 @@ export async function createOrganizationWithFounder(db: Kysely<Database>, input:
       .executeTakeFirst();
     if (!user) {
       // Sign-up cannot help revealing that an address has an account; it says no more than that.
-      return { ok: false, field: "email", message: "This address already has an account. Sign in, or reset the password." };
+      return {
+        ok: false,
+        field: "email",
+        message: "This address already has an account. Sign in, or reset the password.",
+      };
     }
-    const org = await trx.insertInto("organizations").values({ name: input.organizationName, slug: slugify(input.organizationName) }).returning("id").executeTakeFirstOrThrow();
-    await trx.insertInto("memberships").values({ organization_id: org.id, user_id: user.id, roles: FOUNDER_ROLES }).execute();
+    const org = await trx
+      .insertInto("organizations")
+      .values({ name: input.organizationName, slug: slugify(input.organizationName) })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    await trx
+      .insertInto("memberships")
+      .values({ organization_id: org.id, user_id: user.id, roles: FOUNDER_ROLES })
+      .execute();
     return { ok: true, userId: user.id, organizationId: org.id };
   });
 }

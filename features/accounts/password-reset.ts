@@ -2,7 +2,13 @@ import "server-only";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import { hashPassword } from "@/server/auth/password";
-import { minutesUntilAllowedAll, RATE_LIMITS, recordAttempts, tooManyAttemptsMessage, type RateLimit } from "@/server/auth/rate-limit";
+import {
+  minutesUntilAllowedAll,
+  RATE_LIMITS,
+  recordAttempts,
+  tooManyAttemptsMessage,
+  type RateLimit,
+} from "@/server/auth/rate-limit";
 import { createToken, hashToken } from "@/server/auth/tokens";
 import { sendPasswordResetEmail } from "@/server/mail/messages";
 
@@ -24,11 +30,19 @@ export async function requestPasswordReset(
   if (wait > 0) return { ok: false, message: tooManyAttemptsMessage(wait) };
   await recordAttempts(db, checks);
 
-  const user = await db.selectFrom("users").select(["id", "email"]).where("email", "=", input.email).where("disabled_at", "is", null).executeTakeFirst();
+  const user = await db
+    .selectFrom("users")
+    .select(["id", "email"])
+    .where("email", "=", input.email)
+    .where("disabled_at", "is", null)
+    .executeTakeFirst();
   if (user) {
     const { token, tokenHash } = createToken();
     const expiresAt = new Date(now.getTime() + RESET_VALID_MINUTES * 60_000);
-    await db.insertInto("password_reset_tokens").values({ user_id: user.id, token_hash: tokenHash, expires_at: expiresAt }).execute();
+    await db
+      .insertInto("password_reset_tokens")
+      .values({ user_id: user.id, token_hash: tokenHash, expires_at: expiresAt })
+      .execute();
     await sendPasswordResetEmail({ to: user.email, token, validMinutes: RESET_VALID_MINUTES });
   }
   return { ok: true, message: RESET_REQUESTED };
@@ -36,8 +50,16 @@ export async function requestPasswordReset(
 
 export type ResetTokenState = "valid" | "expired" | "used" | "unknown";
 
-export async function getResetTokenState(db: Kysely<Database>, token: string, now = new Date()): Promise<ResetTokenState> {
-  const row = await db.selectFrom("password_reset_tokens").select(["expires_at", "used_at"]).where("token_hash", "=", hashToken(token)).executeTakeFirst();
+export async function getResetTokenState(
+  db: Kysely<Database>,
+  token: string,
+  now = new Date(),
+): Promise<ResetTokenState> {
+  const row = await db
+    .selectFrom("password_reset_tokens")
+    .select(["expires_at", "used_at"])
+    .where("token_hash", "=", hashToken(token))
+    .executeTakeFirst();
   if (!row) return "unknown";
   if (row.used_at) return "used";
   return new Date(row.expires_at) <= now ? "expired" : "valid";
@@ -56,19 +78,30 @@ export async function resetPassword(
   now = new Date(),
 ): Promise<{ ok: true; userId: string } | { ok: false; message: string }> {
   const passwordHash = await hashPassword(input.password);
-  return db.transaction().execute(async (trx): Promise<{ ok: true; userId: string } | { ok: false; message: string }> => {
-    const row = await trx
-      .selectFrom("password_reset_tokens")
-      .select(["id", "user_id", "expires_at", "used_at"])
-      .where("token_hash", "=", hashToken(input.token))
-      .forUpdate()
-      .executeTakeFirst();
-    if (!row) return { ok: false, message: RESET_TOKEN_MESSAGES.unknown };
-    if (row.used_at) return { ok: false, message: RESET_TOKEN_MESSAGES.used };
-    if (new Date(row.expires_at) <= now) return { ok: false, message: RESET_TOKEN_MESSAGES.expired };
-    await trx.updateTable("users").set({ password_hash: passwordHash }).where("id", "=", row.user_id).execute();
-    await trx.updateTable("password_reset_tokens").set({ used_at: now }).where("user_id", "=", row.user_id).where("used_at", "is", null).execute();
-    await trx.deleteFrom("sessions").where("user_id", "=", row.user_id).execute();
-    return { ok: true, userId: row.user_id };
-  });
+  return db
+    .transaction()
+    .execute(async (trx): Promise<{ ok: true; userId: string } | { ok: false; message: string }> => {
+      const row = await trx
+        .selectFrom("password_reset_tokens")
+        .select(["id", "user_id", "expires_at", "used_at"])
+        .where("token_hash", "=", hashToken(input.token))
+        .forUpdate()
+        .executeTakeFirst();
+      if (!row) return { ok: false, message: RESET_TOKEN_MESSAGES.unknown };
+      if (row.used_at) return { ok: false, message: RESET_TOKEN_MESSAGES.used };
+      if (new Date(row.expires_at) <= now) return { ok: false, message: RESET_TOKEN_MESSAGES.expired };
+      await trx
+        .updateTable("users")
+        .set({ password_hash: passwordHash })
+        .where("id", "=", row.user_id)
+        .execute();
+      await trx
+        .updateTable("password_reset_tokens")
+        .set({ used_at: now })
+        .where("user_id", "=", row.user_id)
+        .where("used_at", "is", null)
+        .execute();
+      await trx.deleteFrom("sessions").where("user_id", "=", row.user_id).execute();
+      return { ok: true, userId: row.user_id };
+    });
 }

@@ -13,7 +13,10 @@ export interface OrganizationChoice {
 }
 
 /** Every organisation the user belongs to, for the switcher. */
-export async function listUserOrganizations(db: Kysely<Database>, userId: string): Promise<OrganizationChoice[]> {
+export async function listUserOrganizations(
+  db: Kysely<Database>,
+  userId: string,
+): Promise<OrganizationChoice[]> {
   const rows = await db
     .selectFrom("memberships")
     .innerJoin("organizations", "organizations.id", "memberships.organization_id")
@@ -25,7 +28,10 @@ export async function listUserOrganizations(db: Kysely<Database>, userId: string
 }
 
 /** The user's oldest membership: where a fresh session starts. */
-export async function findDefaultOrganizationId(db: Kysely<Database>, userId: string): Promise<string | null> {
+export async function findDefaultOrganizationId(
+  db: Kysely<Database>,
+  userId: string,
+): Promise<string | null> {
   const row = await db
     .selectFrom("memberships")
     .select("organization_id")
@@ -37,6 +43,10 @@ export async function findDefaultOrganizationId(db: Kysely<Database>, userId: st
 }
 
 export async function findUserIdByEmail(db: Kysely<Database>, email: string): Promise<string | null> {
-  const row = await db.selectFrom("users").select("id").where("email", "=", email.toLowerCase()).executeTakeFirst();
+  const row = await db
+    .selectFrom("users")
+    .select("id")
+    .where("email", "=", email.toLowerCase())
+    .executeTakeFirst();
   return row?.id ?? null;
 }

@@ -13,11 +13,18 @@ import { acceptInvitationSchema, forgotPasswordSchema, resetPasswordSchema } fro
 
 // Entry points reached from e-mailed links: accept an invitation, ask for and use a reset link.
 
-export async function acceptInvitationAction(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
+export async function acceptInvitationAction(
+  _previous: ActionResult | null,
+  formData: FormData,
+): Promise<ActionResult> {
   const parsed = acceptInvitationSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalid(parsed.error);
   if (parsed.data.confirmPassword !== undefined && parsed.data.confirmPassword !== parsed.data.password) {
-    return { ok: false, message: "Check the highlighted fields.", fieldErrors: { confirmPassword: ["The two passwords differ."] } };
+    return {
+      ok: false,
+      message: "Check the highlighted fields.",
+      fieldErrors: { confirmPassword: ["The two passwords differ."] },
+    };
   }
   const outcome = await acceptInvitation(getDb(), parsed.data);
   if (!outcome.ok) return { ok: false, message: outcome.message, fieldErrors: outcome.fieldErrors };
@@ -25,14 +32,23 @@ export async function acceptInvitationAction(_previous: ActionResult | null, for
   redirect("/desk");
 }
 
-export async function requestPasswordResetAction(_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> {
+export async function requestPasswordResetAction(
+  _previous: ActionResult<string> | null,
+  formData: FormData,
+): Promise<ActionResult<string>> {
   const parsed = forgotPasswordSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalid(parsed.error);
-  const outcome = await requestPasswordReset(getDb(), { email: parsed.data.email, addressKey: clientAddressKey(await headers()) });
+  const outcome = await requestPasswordReset(getDb(), {
+    email: parsed.data.email,
+    addressKey: clientAddressKey(await headers()),
+  });
   return outcome.ok ? { ok: true, data: outcome.message } : { ok: false, message: outcome.message };
 }
 
-export async function resetPasswordAction(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
+export async function resetPasswordAction(
+  _previous: ActionResult | null,
+  formData: FormData,
+): Promise<ActionResult> {
   const parsed = resetPasswordSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalid(parsed.error);
   const outcome = await resetPassword(getDb(), parsed.data);

@@ -30,7 +30,10 @@ const displayName = z
   .max(120, "Names are limited to 120 characters.");
 
 export const roleSchema = z.enum(ROLES, { error: "Unknown role." });
-export const rolesField = z.array(roleSchema, { error: "Choose at least one role." }).min(1, "Choose at least one role.").max(3);
+export const rolesField = z
+  .array(roleSchema, { error: "Choose at least one role." })
+  .min(1, "Choose at least one role.")
+  .max(3);
 
 export const signInSchema = z.object({
   email: emailField,
@@ -51,7 +54,10 @@ export const signUpSchema = z
     password: newPasswordField,
     confirmPassword: z.string().max(1024, "Passwords are limited to 1024 characters."),
   })
-  .refine((v) => v.password === v.confirmPassword, { path: ["confirmPassword"], message: "The two passwords differ." });
+  .refine((v) => v.password === v.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two passwords differ.",
+  });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 
 export const forgotPasswordSchema = z.object({ email: emailField });
@@ -59,14 +65,24 @@ export const forgotPasswordSchema = z.object({ email: emailField });
 const tokenField = z.string().min(10).max(200);
 
 export const resetPasswordSchema = z
-  .object({ token: tokenField, password: newPasswordField, confirmPassword: z.string().max(1024, "Passwords are limited to 1024 characters.") })
-  .refine((v) => v.password === v.confirmPassword, { path: ["confirmPassword"], message: "The two passwords differ." });
+  .object({
+    token: tokenField,
+    password: newPasswordField,
+    confirmPassword: z.string().max(1024, "Passwords are limited to 1024 characters."),
+  })
+  .refine((v) => v.password === v.confirmPassword, {
+    path: ["confirmPassword"],
+    message: "The two passwords differ.",
+  });
 
 /** New invitees choose a name and password; people who already have an account confirm theirs. */
 export const acceptInvitationSchema = z.object({
   token: tokenField,
   displayName: displayName.optional(),
-  password: z.string({ error: "Enter a password." }).min(1, "Enter a password.").max(1024, "Passwords are limited to 1024 characters."),
+  password: z
+    .string({ error: "Enter a password." })
+    .min(1, "Enter a password.")
+    .max(1024, "Passwords are limited to 1024 characters."),
   confirmPassword: z.string().max(1024).optional(),
 });
 

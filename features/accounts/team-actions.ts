@@ -22,28 +22,54 @@ function toActionResult(result: CommandResult<unknown>, success: string): Action
   return { ok: false, message: result.message, fieldErrors: result.fieldErrors };
 }
 
-export async function inviteMemberAction(_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> {
+export async function inviteMemberAction(
+  _previous: ActionResult<string> | null,
+  formData: FormData,
+): Promise<ActionResult<string>> {
   const viewer = await requireViewer({ role: "admin" });
   const input = formFields(formData, ["roles"]);
-  return toActionResult(await inviteMemberCommand(viewer, input), `Invitation sent to ${String(input.email ?? "").trim().toLowerCase()}.`);
+  return toActionResult(
+    await inviteMemberCommand(viewer, input),
+    `Invitation sent to ${String(input.email ?? "")
+      .trim()
+      .toLowerCase()}.`,
+  );
 }
 
-export async function resendInvitationAction(_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> {
+export async function resendInvitationAction(
+  _previous: ActionResult<string> | null,
+  formData: FormData,
+): Promise<ActionResult<string>> {
   const viewer = await requireViewer({ role: "admin" });
-  return toActionResult(await resendInvitationCommand(viewer, formFields(formData)), "Sent again with a new link.");
+  return toActionResult(
+    await resendInvitationCommand(viewer, formFields(formData)),
+    "Sent again with a new link.",
+  );
 }
 
-export async function revokeInvitationAction(_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> {
+export async function revokeInvitationAction(
+  _previous: ActionResult<string> | null,
+  formData: FormData,
+): Promise<ActionResult<string>> {
   const viewer = await requireViewer({ role: "admin" });
   return toActionResult(await revokeInvitationCommand(viewer, formFields(formData)), "Invitation withdrawn.");
 }
 
-export async function changeMemberRolesAction(_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> {
+export async function changeMemberRolesAction(
+  _previous: ActionResult<string> | null,
+  formData: FormData,
+): Promise<ActionResult<string>> {
   const viewer = await requireViewer({ role: "admin" });
-  return toActionResult(await changeMemberRolesCommand(viewer, formFields(formData, ["roles"])), "Roles saved.");
+  return toActionResult(
+    await changeMemberRolesCommand(viewer, formFields(formData, ["roles"])),
+    "Roles saved.",
+  );
 }
 
-export async function removeMemberAction(_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> {
+export async function removeMemberAction(
+  _previous: ActionResult<string> | null,
+  formData: FormData,
+): Promise<ActionResult<string>> {
   const viewer = await requireViewer({ role: "admin" });
   return toActionResult(await removeMemberCommand(viewer, formFields(formData)), "Member removed.");
 }

@@ -15,7 +15,8 @@ export type CommandResult<T = void> =
 
 function fromChange(change: MemberChange): CommandResult {
   if (change === "ok") return { ok: true, data: undefined };
-  if (change === "not-found") return { ok: false, status: 404, message: "No such member in this organisation." };
+  if (change === "not-found")
+    return { ok: false, status: 404, message: "No such member in this organisation." };
   return { ok: false, status: 409, message: LAST_ADMIN_MESSAGE };
 }
 
@@ -23,7 +24,8 @@ function badInput(error: { issues: { path: PropertyKey[]; message: string }[] })
   const fieldErrors: Record<string, string[]> = {};
   for (const issue of error.issues) (fieldErrors[String(issue.path[0] ?? "form")] ??= []).push(issue.message);
   // A malformed id is as unknown as a foreign one.
-  if (fieldErrors.userId || fieldErrors.invitationId) return { ok: false, status: 404, message: "Not found in this organisation." };
+  if (fieldErrors.userId || fieldErrors.invitationId)
+    return { ok: false, status: 404, message: "Not found in this organisation." };
   return { ok: false, status: 400, message: "Check the highlighted fields.", fieldErrors };
 }
 
@@ -38,11 +40,24 @@ async function mailInvitation(viewer: Viewer, invitation: IssuedInvitation): Pro
   });
 }
 
-export async function inviteMemberCommand(viewer: Viewer, input: unknown): Promise<CommandResult<{ invitationId: string }>> {
+export async function inviteMemberCommand(
+  viewer: Viewer,
+  input: unknown,
+): Promise<CommandResult<{ invitationId: string }>> {
   const parsed = inviteMemberSchema.safeParse(input);
   if (!parsed.success) return badInput(parsed.error);
-  const outcome = await createInvitation(getDb(), { organizationId: viewer.organizationId, invitedBy: viewer.userId, ...parsed.data });
-  if (!outcome.ok) return { ok: false, status: 409, message: outcome.message, fieldErrors: outcome.field ? { [outcome.field]: [outcome.message] } : undefined };
+  const outcome = await createInvitation(getDb(), {
+    organizationId: viewer.organizationId,
+    invitedBy: viewer.userId,
+    ...parsed.data,
+  });
+  if (!outcome.ok)
+    return {
+      ok: false,
+      status: 409,
+      message: outcome.message,
+      fieldErrors: outcome.field ? { [outcome.field]: [outcome.message] } : undefined,
+    };
   await mailInvitation(viewer, outcome.invitation);
   return { ok: true, data: { invitationId: outcome.invitation.invitationId } };
 }
@@ -51,7 +66,8 @@ export async function resendInvitationCommand(viewer: Viewer, input: unknown): P
   const parsed = invitationIdSchema.safeParse(input);
   if (!parsed.success) return badInput(parsed.error);
   const invitation = await renewInvitation(getDb(), viewer.organizationId, parsed.data.invitationId);
-  if (!invitation) return { ok: false, status: 404, message: "No such open invitation in this organisation." };
+  if (!invitation)
+    return { ok: false, status: 404, message: "No such open invitation in this organisation." };
   await mailInvitation(viewer, invitation);
   return { ok: true, data: undefined };
 }
@@ -60,13 +76,17 @@ export async function revokeInvitationCommand(viewer: Viewer, input: unknown): P
   const parsed = invitationIdSchema.safeParse(input);
   if (!parsed.success) return badInput(parsed.error);
   const revoked = await revokeInvitation(getDb(), viewer.organizationId, parsed.data.invitationId);
-  return revoked ? { ok: true, data: undefined } : { ok: false, status: 404, message: "No such open invitation in this organisation." };
+  return revoked
+    ? { ok: true, data: undefined }
+    : { ok: false, status: 404, message: "No such open invitation in this organisation." };
 }
 
 export async function changeMemberRolesCommand(viewer: Viewer, input: unknown): Promise<CommandResult> {
   const parsed = changeRolesSchema.safeParse(input);
   if (!parsed.success) return badInput(parsed.error);
-  return fromChange(await changeMemberRoles(getDb(), viewer.organizationId, parsed.data.userId, parsed.data.roles));
+  return fromChange(
+    await changeMemberRoles(getDb(), viewer.organizationId, parsed.data.userId, parsed.data.roles),
+  );
 }
 
 export async function removeMemberCommand(viewer: Viewer, input: unknown): Promise<CommandResult> {

@@ -27,7 +27,11 @@ export interface TeamDto {
   invitations: PendingInvitationDto[];
 }
 
-export async function getTeam(db: Kysely<Database>, organizationId: string, now = new Date()): Promise<TeamDto> {
+export async function getTeam(
+  db: Kysely<Database>,
+  organizationId: string,
+  now = new Date(),
+): Promise<TeamDto> {
   const members = await db
     .selectFrom("memberships")
     .innerJoin("users", "users.id", "memberships.user_id")
@@ -44,7 +48,13 @@ export async function getTeam(db: Kysely<Database>, organizationId: string, now 
     .orderBy("created_at", "desc")
     .execute();
   return {
-    members: members.map((m) => ({ userId: m.id, displayName: m.display_name, email: m.email, roles: sortRoles(m.roles), joinedAt: new Date(m.created_at as unknown as Date).toISOString() })),
+    members: members.map((m) => ({
+      userId: m.id,
+      displayName: m.display_name,
+      email: m.email,
+      roles: sortRoles(m.roles),
+      joinedAt: new Date(m.created_at as unknown as Date).toISOString(),
+    })),
     invitations: invitations.map((i) => ({
       invitationId: i.id,
       email: i.email,
@@ -56,35 +66,64 @@ export async function getTeam(db: Kysely<Database>, organizationId: string, now 
 }
 
 export type MemberChange = "ok" | "not-found" | "last-admin";
-export const LAST_ADMIN_MESSAGE = "An organisation keeps at least one administrator. Make someone else an administrator first.";
+export const LAST_ADMIN_MESSAGE =
+  "An organisation keeps at least one administrator. Make someone else an administrator first.";
 
 /** Locks the organisation's memberships so two admins demoting each other cannot both succeed. */
 async function lockMembers(trx: Kysely<Database>, organizationId: string) {
-  return trx.selectFrom("memberships").select(["user_id", "roles"]).where("organization_id", "=", organizationId).forUpdate().execute();
+  return trx
+    .selectFrom("memberships")
+    .select(["user_id", "roles"])
+    .where("organization_id", "=", organizationId)
+    .forUpdate()
+    .execute();
 }
 
-export async function changeMemberRoles(db: Kysely<Database>, organizationId: string, userId: string, roles: Role[]): Promise<MemberChange> {
+export async function changeMemberRoles(
+  db: Kysely<Database>,
+  organizationId: string,
+  userId: string,
+  roles: Role[],
+): Promise<MemberChange> {
   return db.transaction().execute(async (trx): Promise<MemberChange> => {
     const members = await lockMembers(trx, organizationId);
     const target = members.find((m) => m.user_id === userId);
     if (!target) return "not-found";
     const otherAdmins = members.filter((m) => m.user_id !== userId && m.roles.includes("admin")).length;
     if (!roles.includes("admin") && target.roles.includes("admin") && otherAdmins === 0) return "last-admin";
-    await trx.updateTable("memberships").set({ roles: sortRoles(roles) }).where("organization_id", "=", organizationId).where("user_id", "=", userId).execute();
+    await trx
+      .updateTable("memberships")
+      .set({ roles: sortRoles(roles) })
+      .where("organization_id", "=", organizationId)
+      .where("user_id", "=", userId)
+      .execute();
     return "ok";
   });
 }
 
-export async function removeMember(db: Kysely<Database>, organizationId: string, userId: string): Promise<MemberChange> {
+export async function removeMember(
+  db: Kysely<Database>,
+  organizationId: string,
+  userId: string,
+): Promise<MemberChange> {
   return db.transaction().execute(async (trx): Promise<MemberChange> => {
     const members = await lockMembers(trx, organizationId);
     const target = members.find((m) => m.user_id === userId);
     if (!target) return "not-found";
     const otherAdmins = members.filter((m) => m.user_id !== userId && m.roles.includes("admin")).length;
     if (target.roles.includes("admin") && otherAdmins === 0) return "last-admin";
-    await trx.deleteFrom("memberships").where("organization_id", "=", organizationId).where("user_id", "=", userId).execute();
+    await trx
+      .deleteFrom("memberships")
+      .where("organization_id", "=", organizationId)
+      .where("user_id", "=", userId)
+      .execute();
     // Their sessions pointing at this organisation fall back to another membership (or none).
-    await trx.updateTable("sessions").set({ active_organization_id: null }).where("user_id", "=", userId).where("active_organization_id", "=", organizationId).execute();
+    await trx
+      .updateTable("sessions")
+      .set({ active_organization_id: null })
+      .where("user_id", "=", userId)
+      .where("active_organization_id", "=", organizationId)
+      .execute();
     return "ok";
   });
 }

@@ -1,5 +1,6 @@
 // The kinds of entry in a design's activity log and how they read on screen (neutral module).
-export type ActivityKind = "created" | "saved" | "submitted" | "returned" | "approved" | "new-revision" | "commented" | "exported";
+export type ActivityKind =
+  "created" | "saved" | "submitted" | "returned" | "approved" | "new-revision" | "commented" | "exported";
 
 export const ACTIVITY_LABELS: Record<ActivityKind, string> = {
   created: "created the design",

@@ -15,7 +15,12 @@ const point = z.object({ x: z.number().finite(), y: z.number().finite() });
 
 export const outlineSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("circle"), diameterMm: positive() }),
-  z.object({ kind: z.literal("rectangle"), widthMm: positive(), heightMm: positive(), cornerRadiusMm: nonNegative() }),
+  z.object({
+    kind: z.literal("rectangle"),
+    widthMm: positive(),
+    heightMm: positive(),
+    cornerRadiusMm: nonNegative(),
+  }),
   z.object({ kind: z.literal("obround"), lengthMm: positive(), widthMm: positive() }),
   z.object({ kind: z.literal("polygon"), points: z.array(point).min(3).max(4096) }),
 ]);
@@ -56,7 +61,12 @@ const boltSchema = z.object({
 
 const terminationSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("nut") }),
-  z.object({ kind: z.literal("tapped-hole"), engagementMm: positive(), memberThicknessMm: positive(), memberModulusMpa: positive() }),
+  z.object({
+    kind: z.literal("tapped-hole"),
+    engagementMm: positive(),
+    memberThicknessMm: positive(),
+    memberModulusMpa: positive(),
+  }),
 ]);
 
 const fastenerSchema = z.object({
@@ -73,13 +83,22 @@ const fastenerSchema = z.object({
 
 const layerSchema = z.discriminatedUnion("role", [
   z.object({ role: z.literal("gasket") }),
-  z.object({ role: z.enum(["flange", "cover"]), thicknessMm: positive(), materialName: z.string().max(100), modulusMpa: positive() }),
+  z.object({
+    role: z.enum(["flange", "cover"]),
+    thicknessMm: positive(),
+    materialName: z.string().max(100),
+    modulusMpa: positive(),
+  }),
 ]);
 
 const preloadSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("fraction-of-proof"), value: z.number().finite().positive().max(1.2) }),
   z.object({ kind: z.literal("fraction-of-yield"), value: z.number().finite().positive().max(1.2) }),
-  z.object({ kind: z.literal("bolt-stress"), value: positive(), areaBasis: z.enum(["tensile", "root"]).optional() }),
+  z.object({
+    kind: z.literal("bolt-stress"),
+    value: positive(),
+    areaBasis: z.enum(["tensile", "root"]).optional(),
+  }),
 ]);
 
 export const jointDesignBaseSchema = z.object({
@@ -92,14 +111,29 @@ export const jointDesignBaseSchema = z.object({
   bore: outlineSchema.nullable(),
   gasket: gasketSchema,
   boltPath: boltPathSchema,
-  bolts: z.array(boltSchema).min(1, { message: "at least one bolt is needed" }).max(MAX_BOLT_COUNT, { message: `at most ${MAX_BOLT_COUNT} bolts` }),
+  bolts: z
+    .array(boltSchema)
+    .min(1, { message: "at least one bolt is needed" })
+    .max(MAX_BOLT_COUNT, { message: `at most ${MAX_BOLT_COUNT} bolts` }),
   fastener: fastenerSchema,
   layers: z.array(layerSchema).min(2).max(12),
-  loads: z.object({ designPressureMpa: nonNegative(), designTemperatureC: z.number().finite(), axialLoadN: z.number().finite(), momentNmm: z.number().finite() }),
+  loads: z.object({
+    designPressureMpa: nonNegative(),
+    designTemperatureC: z.number().finite(),
+    axialLoadN: z.number().finite(),
+    momentNmm: z.number().finite(),
+  }),
   assembly: z.object({
     preload: preloadSchema,
     nutFactor: z.object({ value: z.number().finite().min(0.05).max(0.5), source: z.string().max(300) }),
-    method: z.enum(["torque-wrench", "turn-of-nut", "hydraulic-tensioner", "load-indicating-washer", "bolt-elongation", "ultrasonic"]),
+    method: z.enum([
+      "torque-wrench",
+      "turn-of-nut",
+      "hydraulic-tensioner",
+      "load-indicating-washer",
+      "bolt-elongation",
+      "ultrasonic",
+    ]),
     scatterOverride: z.number().finite().min(0).max(0.9).nullable(),
   }),
   estimator: z.object({
@@ -115,7 +149,10 @@ export const jointDesignBaseSchema = z.object({
 
 /** Splits "bolts[3].position" into ["bolts", 3, "position"] for zod issue paths. */
 function toPath(path: string): (string | number)[] {
-  return path.split(/\.|\[|\]/).filter((p) => p !== "").map((p) => (/^\d+$/.test(p) ? Number(p) : p));
+  return path
+    .split(/\.|\[|\]/)
+    .filter((p) => p !== "")
+    .map((p) => (/^\d+$/.test(p) ? Number(p) : p));
 }
 
 export const jointDesignSchema = jointDesignBaseSchema.superRefine((design, ctx) => {
@@ -134,7 +171,10 @@ export type JointDesignInput = z.input<typeof jointDesignSchema>;
 /** Formats a zod error as one line per issue, each starting with the field path. */
 export function formatDesignErrors(error: z.ZodError): string[] {
   return error.issues.map((i) => {
-    const path = i.path.reduce<string>((acc, p) => (typeof p === "number" ? `${acc}[${p}]` : acc ? `${acc}.${String(p)}` : String(p)), "");
+    const path = i.path.reduce<string>(
+      (acc, p) => (typeof p === "number" ? `${acc}[${p}]` : acc ? `${acc}.${String(p)}` : String(p)),
+      "",
+    );
     return i.message.startsWith(`${path}:`) ? i.message : `${path || "(design)"}: ${i.message}`;
   });
 }

@@ -5,7 +5,11 @@ import { z } from "zod";
 // report progress and we can stop reading at the limit instead of buffering a huge form).
 export const uploadHeadersSchema = z.object({
   designId: z.uuid(),
-  fileName: z.string().trim().min(1, "The upload has no file name.").max(255, "The file name is longer than 255 characters."),
+  fileName: z
+    .string()
+    .trim()
+    .min(1, "The upload has no file name.")
+    .max(255, "The file name is longer than 255 characters."),
 });
 
 export const idParamSchema = z.uuid();

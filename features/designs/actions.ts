@@ -6,7 +6,11 @@ import { requireViewer } from "@/server/auth/guard";
 import type { ActionResult } from "@/server/action-result";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import {
-  createDesignFromForm, duplicateDesignForViewer, saveWorkingRevisionForViewer, setDesignArchivedForViewer, setUnitSystemForViewer,
+  createDesignFromForm,
+  duplicateDesignForViewer,
+  saveWorkingRevisionForViewer,
+  setDesignArchivedForViewer,
+  setUnitSystemForViewer,
   type CommandResult,
 } from "./commands";
 import { formDataToObject } from "./field-errors";
@@ -17,13 +21,18 @@ import type { SaveWorkingRevisionInput, SaveWorkingRevisionResult } from "./work
 
 function toActionResult<T>(result: CommandResult<T>): ActionResult<T> {
   if (result.ok) return result;
-  return result.fieldErrors ? { ok: false, message: result.message, fieldErrors: result.fieldErrors } : { ok: false, message: result.message };
+  return result.fieldErrors
+    ? { ok: false, message: result.message, fieldErrors: result.fieldErrors }
+    : { ok: false, message: result.message };
 }
 
 type CreateDesignState = (ActionResult<{ designId: string }> & { values?: Record<string, string> }) | null;
 
 /** New-design form (useActionState); on success goes straight to the editor. */
-export async function createDesignAction(_previous: CreateDesignState, formData: FormData): Promise<CreateDesignState> {
+export async function createDesignAction(
+  _previous: CreateDesignState,
+  formData: FormData,
+): Promise<CreateDesignState> {
   const viewer = await requireViewer();
   const values = formDataToObject(formData);
   const result = await createDesignFromForm(getDb(), viewer, values);
@@ -33,7 +42,9 @@ export async function createDesignAction(_previous: CreateDesignState, formData:
   redirect(`/designs/${result.data.designId}`);
 }
 
-export async function saveWorkingRevisionAction(input: SaveWorkingRevisionInput): Promise<SaveWorkingRevisionResult> {
+export async function saveWorkingRevisionAction(
+  input: SaveWorkingRevisionInput,
+): Promise<SaveWorkingRevisionResult> {
   const viewer = await requireViewer();
   const result = await saveWorkingRevisionForViewer(getDb(), viewer, input);
   if (!result.ok) {
@@ -44,22 +55,35 @@ export async function saveWorkingRevisionAction(input: SaveWorkingRevisionInput)
   return result;
 }
 
-export async function duplicateDesignAction(_previous: ActionResult<{ designId: string }> | null, formData: FormData): Promise<ActionResult<{ designId: string }>> {
+export async function duplicateDesignAction(
+  _previous: ActionResult<{ designId: string }> | null,
+  formData: FormData,
+): Promise<ActionResult<{ designId: string }>> {
   const viewer = await requireViewer();
   const result = await duplicateDesignForViewer(getDb(), viewer, formData.get("designId"));
   if (result.ok) revalidatePath("/designs");
   return toActionResult(result);
 }
 
-export async function setDesignArchivedAction(_previous: ActionResult<{ archived: boolean }> | null, formData: FormData): Promise<ActionResult<{ archived: boolean }>> {
+export async function setDesignArchivedAction(
+  _previous: ActionResult<{ archived: boolean }> | null,
+  formData: FormData,
+): Promise<ActionResult<{ archived: boolean }>> {
   const viewer = await requireViewer();
-  const result = await setDesignArchivedForViewer(getDb(), viewer, formData.get("designId"), formData.get("archived") === "true");
+  const result = await setDesignArchivedForViewer(
+    getDb(),
+    viewer,
+    formData.get("designId"),
+    formData.get("archived") === "true",
+  );
   if (result.ok) revalidatePath("/designs");
   return toActionResult(result);
 }
 
 /** Remembers the viewer's unit system (users.unit_system) for every screen. */
-export async function setUnitSystemAction(unitSystem: UnitSystem): Promise<ActionResult<{ unitSystem: UnitSystem }>> {
+export async function setUnitSystemAction(
+  unitSystem: UnitSystem,
+): Promise<ActionResult<{ unitSystem: UnitSystem }>> {
   const viewer = await requireViewer();
   const result = await setUnitSystemForViewer(getDb(), viewer, unitSystem);
   if (result.ok) revalidatePath("/", "layout");

@@ -6,10 +6,23 @@ import type { Viewer } from "@/server/auth/guard";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { issuesToFieldErrors } from "./field-errors";
 import { findDesign } from "./queries";
-import { createDesign, deleteDesign, duplicateDesign, saveWorkingRevision, setDesignArchived, setUserUnitSystem } from "./mutations";
+import {
+  createDesign,
+  deleteDesign,
+  duplicateDesign,
+  saveWorkingRevision,
+  setDesignArchived,
+  setUserUnitSystem,
+} from "./mutations";
 import { formatUtcMinute } from "./model/labels";
 import { buildDesignFromTemplate, type TemplateInput } from "./model/templates";
-import { canArchiveDesign, canCreateDesign, canDeleteDesign, canEditDesign, isEditableStatus } from "./policies";
+import {
+  canArchiveDesign,
+  canCreateDesign,
+  canDeleteDesign,
+  canEditDesign,
+  isEditableStatus,
+} from "./policies";
 import { createDesignApiSchema, designIdSchema, saveWorkingRevisionSchema, unitSystemSchema } from "./schema";
 import { newDesignFormSchema } from "./template-schema";
 import type { JointAnalysis } from "./workspace-contract";
@@ -20,7 +33,13 @@ import type { JointAnalysis } from "./workspace-contract";
 export type CommandFailureReason = "invalid" | "not-found" | "forbidden" | "conflict" | "frozen";
 export type CommandResult<T> =
   | { ok: true; data: T }
-  | { ok: false; message: string; reason: CommandFailureReason; fieldErrors?: Record<string, string[]>; conflict?: true };
+  | {
+      ok: false;
+      message: string;
+      reason: CommandFailureReason;
+      fieldErrors?: Record<string, string[]>;
+      conflict?: true;
+    };
 
 const INVALID = "Check the highlighted fields; nothing was saved.";
 const NOT_FOUND = "This design does not exist in your organisation.";
@@ -29,7 +48,10 @@ function invalid(error: z.ZodError, flat = false): CommandResult<never> {
   let fieldErrors: Record<string, string[]>;
   if (flat) {
     const flattened = z.flattenError(error);
-    fieldErrors = { ...(flattened.fieldErrors as Record<string, string[]>), ...(flattened.formErrors.length ? { form: flattened.formErrors } : {}) };
+    fieldErrors = {
+      ...(flattened.fieldErrors as Record<string, string[]>),
+      ...(flattened.formErrors.length ? { form: flattened.formErrors } : {}),
+    };
   } else fieldErrors = issuesToFieldErrors(error);
   return { ok: false, reason: "invalid", message: INVALID, fieldErrors };
 }
@@ -46,23 +68,48 @@ export function conflictMessage(savedByName: string, savedAtIso: string, version
   return `This design was changed by ${savedByName} at ${formatUtcMinute(savedAtIso)} (version ${version}). Your edits are kept here; reload to see theirs, or copy your changes.`;
 }
 
-export async function createDesignFromForm(db: Kysely<Database>, viewer: Viewer, raw: Record<string, unknown>): Promise<CommandResult<{ designId: string }>> {
+export async function createDesignFromForm(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  raw: Record<string, unknown>,
+): Promise<CommandResult<{ designId: string }>> {
   if (!canCreateDesign(viewer)) return refuse("forbidden", "Only designers can create designs.");
   const parsed = newDesignFormSchema.safeParse(raw);
   if (!parsed.success) return invalid(parsed.error, true);
   const { name, equipmentTag, ...template } = parsed.data;
-  const document = buildDesignFromTemplate({ name, equipmentTag, units: viewer.unitSystem }, template as TemplateInput);
-  const { designId } = await createDesign(db, { organizationId: viewer.organizationId, ownerId: viewer.userId, name, equipmentTag, document });
+  const document = buildDesignFromTemplate(
+    { name, equipmentTag, units: viewer.unitSystem },
+    template as TemplateInput,
+  );
+  const { designId } = await createDesign(db, {
+    organizationId: viewer.organizationId,
+    ownerId: viewer.userId,
+    name,
+    equipmentTag,
+    document,
+  });
   return { ok: true, data: { designId } };
 }
 
-export async function createDesignFromApi(db: Kysely<Database>, viewer: Viewer, body: unknown): Promise<CommandResult<{ designId: string; version: number }>> {
+export async function createDesignFromApi(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  body: unknown,
+): Promise<CommandResult<{ designId: string; version: number }>> {
   if (!canCreateDesign(viewer)) return refuse("forbidden", "Only designers can create designs.");
   const parsed = createDesignApiSchema.safeParse(body);
   if (!parsed.success) return invalid(parsed.error);
   const { name, equipmentTag, template, document } = parsed.data;
-  const built = document ?? buildDesignFromTemplate({ name, equipmentTag, units: viewer.unitSystem }, template as TemplateInput);
-  const created = await createDesign(db, { organizationId: viewer.organizationId, ownerId: viewer.userId, name, equipmentTag, document: built });
+  const built =
+    document ??
+    buildDesignFromTemplate({ name, equipmentTag, units: viewer.unitSystem }, template as TemplateInput);
+  const created = await createDesign(db, {
+    organizationId: viewer.organizationId,
+    ownerId: viewer.userId,
+    name,
+    equipmentTag,
+    document: built,
+  });
   return { ok: true, data: created };
 }
 
@@ -78,50 +125,95 @@ export async function saveWorkingRevisionForViewer(
   if (!design) return refuse("not-found", NOT_FOUND);
   if (!isEditableStatus(design.status)) return refuse("frozen", frozenMessage(design.status));
   if (!canEditDesign(viewer, design)) return refuse("forbidden", "Only designers can edit designs.");
-  const outcome = await saveWorkingRevision(db, { ...input, organizationId: viewer.organizationId, userId: viewer.userId });
+  const outcome = await saveWorkingRevision(db, {
+    ...input,
+    organizationId: viewer.organizationId,
+    userId: viewer.userId,
+  });
   switch (outcome.kind) {
     case "saved":
-      return { ok: true, data: { version: outcome.version, result: outcome.result, savedAt: outcome.savedAt } };
+      return {
+        ok: true,
+        data: { version: outcome.version, result: outcome.result, savedAt: outcome.savedAt },
+      };
     case "not-found":
       return refuse("not-found", NOT_FOUND);
     case "frozen":
       return refuse("frozen", frozenMessage(outcome.status));
     case "stale":
-      return { ok: false, reason: "conflict", conflict: true, message: conflictMessage(outcome.savedByName, outcome.savedAt, outcome.version) };
+      return {
+        ok: false,
+        reason: "conflict",
+        conflict: true,
+        message: conflictMessage(outcome.savedByName, outcome.savedAt, outcome.version),
+      };
   }
 }
 
-export async function duplicateDesignForViewer(db: Kysely<Database>, viewer: Viewer, rawId: unknown): Promise<CommandResult<{ designId: string }>> {
+export async function duplicateDesignForViewer(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  rawId: unknown,
+): Promise<CommandResult<{ designId: string }>> {
   const id = designIdSchema.safeParse(rawId);
   if (!id.success) return refuse("not-found", NOT_FOUND);
   if (!canCreateDesign(viewer)) return refuse("forbidden", "Only designers can duplicate designs.");
-  const copy = await duplicateDesign(db, { organizationId: viewer.organizationId, ownerId: viewer.userId, designId: id.data });
+  const copy = await duplicateDesign(db, {
+    organizationId: viewer.organizationId,
+    ownerId: viewer.userId,
+    designId: id.data,
+  });
   return copy ? { ok: true, data: copy } : refuse("not-found", NOT_FOUND);
 }
 
-export async function setDesignArchivedForViewer(db: Kysely<Database>, viewer: Viewer, rawId: unknown, archived: boolean): Promise<CommandResult<{ archived: boolean }>> {
+export async function setDesignArchivedForViewer(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  rawId: unknown,
+  archived: boolean,
+): Promise<CommandResult<{ archived: boolean }>> {
   const id = designIdSchema.safeParse(rawId);
   const design = id.success ? await findDesign(db, viewer.organizationId, id.data) : null;
   if (!design) return refuse("not-found", NOT_FOUND);
-  if (!canArchiveDesign(viewer, design)) return refuse("forbidden", "Only the owner or an admin can archive a design.");
+  if (!canArchiveDesign(viewer, design))
+    return refuse("forbidden", "Only the owner or an admin can archive a design.");
   await setDesignArchived(db, viewer.organizationId, design.designId, archived);
   return { ok: true, data: { archived } };
 }
 
-export async function deleteDesignForViewer(db: Kysely<Database>, viewer: Viewer, rawId: unknown): Promise<CommandResult<{ deleted: true }>> {
+export async function deleteDesignForViewer(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  rawId: unknown,
+): Promise<CommandResult<{ deleted: true }>> {
   const id = designIdSchema.safeParse(rawId);
   const design = id.success ? await findDesign(db, viewer.organizationId, id.data) : null;
   if (!design) return refuse("not-found", NOT_FOUND);
-  if (!canArchiveDesign(viewer, design)) return refuse("forbidden", "Only the owner or an admin can delete a design.");
-  if (!canDeleteDesign(viewer, design)) return refuse("conflict", "Only a draft that was never submitted can be deleted; archive this design instead.");
+  if (!canArchiveDesign(viewer, design))
+    return refuse("forbidden", "Only the owner or an admin can delete a design.");
+  if (!canDeleteDesign(viewer, design))
+    return refuse(
+      "conflict",
+      "Only a draft that was never submitted can be deleted; archive this design instead.",
+    );
   const outcome = await deleteDesign(db, viewer.organizationId, design.designId);
   if (outcome.kind === "deleted") return { ok: true, data: { deleted: true } };
   return outcome.kind === "not-found" ? refuse("not-found", NOT_FOUND) : refuse("conflict", outcome.message);
 }
 
-export async function setUnitSystemForViewer(db: Kysely<Database>, viewer: Viewer, raw: unknown): Promise<CommandResult<{ unitSystem: UnitSystem }>> {
+export async function setUnitSystemForViewer(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  raw: unknown,
+): Promise<CommandResult<{ unitSystem: UnitSystem }>> {
   const parsed = unitSystemSchema.safeParse(raw);
-  if (!parsed.success) return { ok: false, reason: "invalid", message: "Unit system must be SI or US.", fieldErrors: { unitSystem: ["Unit system must be SI or US"] } };
+  if (!parsed.success)
+    return {
+      ok: false,
+      reason: "invalid",
+      message: "Unit system must be SI or US.",
+      fieldErrors: { unitSystem: ["Unit system must be SI or US"] },
+    };
   await setUserUnitSystem(db, viewer.userId, parsed.data);
   return { ok: true, data: { unitSystem: parsed.data } };
 }

@@ -11,7 +11,8 @@ function findAbsurdLengths(value: unknown, path: (string | number)[], out: (stri
   if (Array.isArray(value)) value.forEach((v, i) => findAbsurdLengths(v, [...path, i], out));
   else if (value && typeof value === "object") {
     for (const [key, v] of Object.entries(value)) {
-      if (typeof v === "number" && key.endsWith("Mm") && Math.abs(v) > MAX_LENGTH_MM) out.push([...path, key]);
+      if (typeof v === "number" && key.endsWith("Mm") && Math.abs(v) > MAX_LENGTH_MM)
+        out.push([...path, key]);
       else findAbsurdLengths(v, [...path, key], out);
     }
   }
@@ -22,7 +23,8 @@ export const designDocumentSchema = z
   .superRefine((doc, ctx) => {
     const absurd: (string | number)[][] = [];
     findAbsurdLengths(doc, [], absurd);
-    for (const path of absurd) ctx.addIssue({ code: "custom", message: `must be at most ${MAX_LENGTH_MM} mm`, path });
+    for (const path of absurd)
+      ctx.addIssue({ code: "custom", message: `must be at most ${MAX_LENGTH_MM} mm`, path });
   })
   .pipe(jointDesignSchema)
   .transform((doc) => doc as JointDesign);

@@ -4,12 +4,20 @@ import type { CommandFailureReason, CommandResult } from "./commands";
 import type { DesignDetailDto } from "./queries";
 
 // JSON plumbing shared by the /api/v1 designs route handlers.
-const STATUS: Record<CommandFailureReason, number> = { invalid: 422, "not-found": 404, forbidden: 403, conflict: 409, frozen: 409 };
+const STATUS: Record<CommandFailureReason, number> = {
+  invalid: 422,
+  "not-found": 404,
+  forbidden: 403,
+  conflict: 409,
+  frozen: 409,
+};
 
 export const NO_STORE = { "cache-control": "private, no-store" };
 
 /** The body as JSON, or a 400 Response when it is not JSON at all. */
-export async function readJsonBody(request: Request): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
+export async function readJsonBody(
+  request: Request,
+): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
   try {
     return { ok: true, body: await request.json() };
   } catch {
@@ -21,7 +29,10 @@ export function commandResponse<T>(result: CommandResult<T>, successStatus = 200
   if (result.ok) return Response.json(result.data, { status: successStatus, headers: NO_STORE });
   const response = jsonError(STATUS[result.reason], result.message, result.fieldErrors);
   if (!result.conflict) return response;
-  return Response.json({ error: { message: result.message, conflict: true } }, { status: 409, headers: NO_STORE });
+  return Response.json(
+    { error: { message: result.message, conflict: true } },
+    { status: 409, headers: NO_STORE },
+  );
 }
 
 /** What GET /api/v1/designs/[id] returns: the design with its working revision. */

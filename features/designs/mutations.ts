@@ -17,15 +17,26 @@ export function hashDocument(document: JointDesign): string {
   const canonical = (value: unknown): unknown => {
     if (Array.isArray(value)) return value.map(canonical);
     if (value && typeof value === "object") {
-      return Object.fromEntries(Object.keys(value).sort().map((k) => [k, canonical((value as Record<string, unknown>)[k])]));
+      return Object.fromEntries(
+        Object.keys(value)
+          .sort()
+          .map((k) => [k, canonical((value as Record<string, unknown>)[k])]),
+      );
     }
     return value;
   };
-  return createHash("sha256").update(JSON.stringify(canonical(document))).digest("hex");
+  return createHash("sha256")
+    .update(JSON.stringify(canonical(document)))
+    .digest("hex");
 }
 
 function workingRevisionId(db: Kysely<Database>, designId: string) {
-  return db.selectFrom("design_revisions").select("id").where("design_id", "=", designId).orderBy("number", "desc").limit(1);
+  return db
+    .selectFrom("design_revisions")
+    .select("id")
+    .where("design_id", "=", designId)
+    .orderBy("number", "desc")
+    .limit(1);
 }
 
 export interface CreateDesignInput {
@@ -37,25 +48,48 @@ export interface CreateDesignInput {
 }
 
 /** A new design with revision 1 as a draft, its result computed by the core and stored. */
-export async function createDesign(db: Kysely<Database>, input: CreateDesignInput): Promise<{ designId: string; version: number }> {
+export async function createDesign(
+  db: Kysely<Database>,
+  input: CreateDesignInput,
+): Promise<{ designId: string; version: number }> {
   const document: JointDesign = { ...input.document, name: input.name };
   const { result, coreVersion } = runAnalysis(document);
   return db.transaction().execute(async (trx) => {
     const design = await trx
       .insertInto("designs")
-      .values({ organization_id: input.organizationId, name: input.name, equipment_tag: input.equipmentTag, outline_kind: document.outline.kind, owner_id: input.ownerId })
+      .values({
+        organization_id: input.organizationId,
+        name: input.name,
+        equipment_tag: input.equipmentTag,
+        outline_kind: document.outline.kind,
+        owner_id: input.ownerId,
+      })
       .returning("id")
       .executeTakeFirstOrThrow();
     const revision = await trx
       .insertInto("design_revisions")
       .values({
-        design_id: design.id, organization_id: input.organizationId, number: 1, status: "draft", document: JSON.stringify(document),
-        result: JSON.stringify(result), core_version: coreVersion, content_hash: hashDocument(document),
-        created_by: input.ownerId, last_edited_by: input.ownerId,
+        design_id: design.id,
+        organization_id: input.organizationId,
+        number: 1,
+        status: "draft",
+        document: JSON.stringify(document),
+        result: JSON.stringify(result),
+        core_version: coreVersion,
+        content_hash: hashDocument(document),
+        created_by: input.ownerId,
+        last_edited_by: input.ownerId,
       })
       .returning(["id", "version"])
       .executeTakeFirstOrThrow();
-    await recordActivity(trx, { organizationId: input.organizationId, designId: design.id, revisionId: revision.id, actorId: input.ownerId, kind: "created", detail: input.name });
+    await recordActivity(trx, {
+      organizationId: input.organizationId,
+      designId: design.id,
+      revisionId: revision.id,
+      actorId: input.ownerId,
+      kind: "created",
+      detail: input.name,
+    });
     return { designId: design.id, version: revision.version };
   });
 }
@@ -81,7 +115,10 @@ export type SaveOutcome =
  * draft or returned. Zero rows means someone saved first, the revision is frozen, or the design is
  * not ours; the follow-up read only explains which, and nothing was written.
  */
-export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWorkingRevisionCommand): Promise<SaveOutcome> {
+export async function saveWorkingRevision(
+  db: Kysely<Database>,
+  command: SaveWorkingRevisionCommand,
+): Promise<SaveOutcome> {
   const name = command.name ?? undefined;
   const document: JointDesign = name ? { ...command.document, name } : command.document;
   const { result, coreVersion } = runAnalysis(document);
@@ -89,8 +126,13 @@ export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWor
     const updated = await trx
       .updateTable("design_revisions")
       .set({
-        document: JSON.stringify(document), result: JSON.stringify(result), core_version: coreVersion,
-        content_hash: hashDocument(document), version: sql`version + 1`, last_edited_by: command.userId, updated_at: sql`now()`,
+        document: JSON.stringify(document),
+        result: JSON.stringify(result),
+        core_version: coreVersion,
+        content_hash: hashDocument(document),
+        version: sql`version + 1`,
+        last_edited_by: command.userId,
+        updated_at: sql`now()`,
       })
       .where("id", "=", workingRevisionId(trx, command.designId))
       .where("organization_id", "=", command.organizationId)
@@ -103,8 +145,10 @@ export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWor
       await trx
         .updateTable("designs")
         .set({
-          outline_kind: document.outline.kind, updated_at: sql`now()`,
-          ...(name ? { name } : {}), ...(command.equipmentTag !== undefined ? { equipment_tag: command.equipmentTag } : {}),
+          outline_kind: document.outline.kind,
+          updated_at: sql`now()`,
+          ...(name ? { name } : {}),
+          ...(command.equipmentTag !== undefined ? { equipment_tag: command.equipmentTag } : {}),
         })
         .where("id", "=", command.designId)
         .where("organization_id", "=", command.organizationId)
@@ -114,31 +158,63 @@ export async function saveWorkingRevision(db: Kysely<Database>, command: SaveWor
     const current = await trx
       .selectFrom("design_revisions")
       .innerJoin("users", "users.id", "design_revisions.last_edited_by")
-      .select(["design_revisions.status", "design_revisions.version", "design_revisions.updated_at", "users.display_name"])
+      .select([
+        "design_revisions.status",
+        "design_revisions.version",
+        "design_revisions.updated_at",
+        "users.display_name",
+      ])
       .where("design_revisions.id", "=", workingRevisionId(trx, command.designId))
       .where("design_revisions.organization_id", "=", command.organizationId)
       .executeTakeFirst();
     if (!current) return { kind: "not-found" };
-    if (current.status !== "draft" && current.status !== "returned") return { kind: "frozen", status: current.status };
-    return { kind: "stale", version: current.version, savedByName: current.display_name, savedAt: toIso(current.updated_at) };
+    if (current.status !== "draft" && current.status !== "returned")
+      return { kind: "frozen", status: current.status };
+    return {
+      kind: "stale",
+      version: current.version,
+      savedByName: current.display_name,
+      savedAt: toIso(current.updated_at),
+    };
   });
 }
 
 /** A burst of saves by one person (autosave every pause) is one "saved" entry in the activity log. */
 export const SAVE_ENTRY_QUIET_MINUTES = 15;
 
-async function recordSave(trx: Kysely<Database>, command: SaveWorkingRevisionCommand, revisionId: string, version: number): Promise<void> {
+async function recordSave(
+  trx: Kysely<Database>,
+  command: SaveWorkingRevisionCommand,
+  revisionId: string,
+  version: number,
+): Promise<void> {
   const last = await trx
     .selectFrom("design_activity")
     .select(["kind", "actor_id", "revision_id"])
-    .select(sql<boolean>`created_at > now() - make_interval(mins => ${SAVE_ENTRY_QUIET_MINUTES})`.as("recent"))
+    .select(
+      sql<boolean>`created_at > now() - make_interval(mins => ${SAVE_ENTRY_QUIET_MINUTES})`.as("recent"),
+    )
     .where("design_id", "=", command.designId)
     .where("organization_id", "=", command.organizationId)
     .orderBy("created_at", "desc")
     .limit(1)
     .executeTakeFirst();
-  if (last && last.kind === "saved" && last.actor_id === command.userId && last.revision_id === revisionId && last.recent) return;
-  await recordActivity(trx, { organizationId: command.organizationId, designId: command.designId, revisionId, actorId: command.userId, kind: "saved", detail: `version ${version}` });
+  if (
+    last &&
+    last.kind === "saved" &&
+    last.actor_id === command.userId &&
+    last.revision_id === revisionId &&
+    last.recent
+  )
+    return;
+  await recordActivity(trx, {
+    organizationId: command.organizationId,
+    designId: command.designId,
+    revisionId,
+    actorId: command.userId,
+    kind: "saved",
+    detail: `version ${version}`,
+  });
 }
 
 /** A new design (revision 1, draft) holding a copy of the working document of another. */
@@ -157,13 +233,22 @@ export async function duplicateDesign(
   if (!source) return null;
   const name = `${source.name} (copy)`.slice(0, 120);
   const { designId } = await createDesign(db, {
-    organizationId: input.organizationId, ownerId: input.ownerId, name, equipmentTag: source.equipment_tag, document: source.document as JointDesign,
+    organizationId: input.organizationId,
+    ownerId: input.ownerId,
+    name,
+    equipmentTag: source.equipment_tag,
+    document: source.document as JointDesign,
   });
   return { designId };
 }
 
 /** Archives (hides from the register) or restores a design; false when it is not ours. */
-export async function setDesignArchived(db: Kysely<Database>, organizationId: string, designId: string, archived: boolean): Promise<boolean> {
+export async function setDesignArchived(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+  archived: boolean,
+): Promise<boolean> {
   const result = await db
     .updateTable("designs")
     .set({ archived_at: archived ? sql`now()` : null })
@@ -173,23 +258,45 @@ export async function setDesignArchived(db: Kysely<Database>, organizationId: st
   return Number(result.numUpdatedRows) === 1;
 }
 
-export type DeleteOutcome = { kind: "deleted" } | { kind: "not-found" } | { kind: "refused"; message: string };
+export type DeleteOutcome =
+  { kind: "deleted" } | { kind: "not-found" } | { kind: "refused"; message: string };
 
-export const DELETE_REFUSED_MESSAGE = "Only a draft that was never submitted can be deleted; archive this design instead.";
+export const DELETE_REFUSED_MESSAGE =
+  "Only a draft that was never submitted can be deleted; archive this design instead.";
 
 /** Deletes a design whose only revision is a never-submitted draft (checked under a row lock). */
-export async function deleteDesign(db: Kysely<Database>, organizationId: string, designId: string): Promise<DeleteOutcome> {
+export async function deleteDesign(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+): Promise<DeleteOutcome> {
   return db.transaction().execute(async (trx) => {
-    const design = await trx.selectFrom("designs").select("id").where("id", "=", designId).where("organization_id", "=", organizationId).forUpdate().executeTakeFirst();
+    const design = await trx
+      .selectFrom("designs")
+      .select("id")
+      .where("id", "=", designId)
+      .where("organization_id", "=", organizationId)
+      .forUpdate()
+      .executeTakeFirst();
     if (!design) return { kind: "not-found" };
-    const revisions = await trx.selectFrom("design_revisions").select(["status", "submitted_at"]).where("design_id", "=", designId).forUpdate().execute();
-    const deletable = revisions.length === 1 && revisions[0].status === "draft" && revisions[0].submitted_at === null;
+    const revisions = await trx
+      .selectFrom("design_revisions")
+      .select(["status", "submitted_at"])
+      .where("design_id", "=", designId)
+      .forUpdate()
+      .execute();
+    const deletable =
+      revisions.length === 1 && revisions[0].status === "draft" && revisions[0].submitted_at === null;
     if (!deletable) return { kind: "refused", message: DELETE_REFUSED_MESSAGE };
     await trx.deleteFrom("designs").where("id", "=", designId).execute();
     return { kind: "deleted" };
   });
 }
 
-export async function setUserUnitSystem(db: Kysely<Database>, userId: string, unitSystem: UnitSystem): Promise<void> {
+export async function setUserUnitSystem(
+  db: Kysely<Database>,
+  userId: string,
+  unitSystem: UnitSystem,
+): Promise<void> {
   await db.updateTable("users").set({ unit_system: unitSystem }).where("id", "=", userId).execute();
 }

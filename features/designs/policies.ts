@@ -46,5 +46,10 @@ export function canDeleteDesign(
   viewer: PolicyViewer,
   design: Pick<PolicyDesign, "ownerId" | "status"> & { revisionCount: number; everSubmitted: boolean },
 ): boolean {
-  return canArchiveDesign(viewer, design) && design.revisionCount === 1 && design.status === "draft" && !design.everSubmitted;
+  return (
+    canArchiveDesign(viewer, design) &&
+    design.revisionCount === 1 &&
+    design.status === "draft" &&
+    !design.everSubmitted
+  );
 }

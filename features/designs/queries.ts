@@ -53,7 +53,10 @@ function workingRevisions(db: Kysely<Database>, organizationId: string) {
     .where("designs.organization_id", "=", organizationId)
     .where("design_revisions.organization_id", "=", organizationId)
     .where("design_revisions.number", "=", (eb) =>
-      eb.selectFrom("design_revisions as later").select((e) => e.fn.max("later.number").as("n")).whereRef("later.design_id", "=", "designs.id"),
+      eb
+        .selectFrom("design_revisions as later")
+        .select((e) => e.fn.max("later.number").as("n"))
+        .whereRef("later.design_id", "=", "designs.id"),
     );
 }
 
@@ -67,18 +70,31 @@ export function toIso(value: unknown): string {
   return (value instanceof Date ? value : new Date(String(value))).toISOString();
 }
 
-export async function listDesigns(db: Kysely<Database>, organizationId: string, query: ListDesignsQueryInput): Promise<DesignListPage> {
+export async function listDesigns(
+  db: Kysely<Database>,
+  organizationId: string,
+  query: ListDesignsQueryInput,
+): Promise<DesignListPage> {
   let base = workingRevisions(db, organizationId);
-  base = query.archived === "only" ? base.where("designs.archived_at", "is not", null) : base.where("designs.archived_at", "is", null);
+  base =
+    query.archived === "only"
+      ? base.where("designs.archived_at", "is not", null)
+      : base.where("designs.archived_at", "is", null);
   if (query.q) {
     const pattern = `%${escapeLike(query.q)}%`;
-    base = base.where((eb) => eb.or([eb("designs.name", "ilike", pattern), eb("designs.equipment_tag", "ilike", pattern)]));
+    base = base.where((eb) =>
+      eb.or([eb("designs.name", "ilike", pattern), eb("designs.equipment_tag", "ilike", pattern)]),
+    );
   }
   if (query.status) base = base.where("design_revisions.status", "=", query.status);
   if (query.owner) base = base.where("designs.owner_id", "=", query.owner);
   if (query.outline) base = base.where("designs.outline_kind", "=", query.outline);
   if (query.updatedWithinDays) {
-    base = base.where("designs.updated_at", ">=", sql<never>`now() - make_interval(days => ${Number(query.updatedWithinDays)})`);
+    base = base.where(
+      "designs.updated_at",
+      ">=",
+      sql<never>`now() - make_interval(days => ${Number(query.updatedWithinDays)})`,
+    );
   }
 
   const { total } = await base.select((eb) => eb.fn.countAll<number>().as("total")).executeTakeFirstOrThrow();
@@ -88,18 +104,39 @@ export async function listDesigns(db: Kysely<Database>, organizationId: string, 
   const dir = query.dir ?? (query.sort === "updated" ? "desc" : "asc");
 
   let ordered = base.select([
-    "designs.id", "designs.name", "designs.equipment_tag", "designs.outline_kind", "designs.owner_id", "designs.updated_at",
-    "designs.archived_at", "owner.display_name as owner_name", "design_revisions.number", "design_revisions.status",
+    "designs.id",
+    "designs.name",
+    "designs.equipment_tag",
+    "designs.outline_kind",
+    "designs.owner_id",
+    "designs.updated_at",
+    "designs.archived_at",
+    "owner.display_name as owner_name",
+    "design_revisions.number",
+    "design_revisions.status",
   ]);
   if (query.sort === "name") ordered = ordered.orderBy(sql`lower(designs.name)`, dir);
-  else if (query.sort === "status") ordered = ordered.orderBy(STATUS_ORDER, dir).orderBy("designs.updated_at", "desc");
+  else if (query.sort === "status")
+    ordered = ordered.orderBy(STATUS_ORDER, dir).orderBy("designs.updated_at", "desc");
   else ordered = ordered.orderBy("designs.updated_at", dir);
-  const rows = await ordered.orderBy("designs.id").limit(DESIGNS_PAGE_SIZE).offset((page - 1) * DESIGNS_PAGE_SIZE).execute();
+  const rows = await ordered
+    .orderBy("designs.id")
+    .limit(DESIGNS_PAGE_SIZE)
+    .offset((page - 1) * DESIGNS_PAGE_SIZE)
+    .execute();
 
   return {
     items: rows.map((r) => ({
-      designId: r.id, name: r.name, equipmentTag: r.equipment_tag, outlineKind: r.outline_kind, ownerId: r.owner_id,
-      ownerName: r.owner_name, revisionNumber: r.number, status: r.status, updatedAt: toIso(r.updated_at), archived: r.archived_at !== null,
+      designId: r.id,
+      name: r.name,
+      equipmentTag: r.equipment_tag,
+      outlineKind: r.outline_kind,
+      ownerId: r.owner_id,
+      ownerName: r.owner_name,
+      revisionNumber: r.number,
+      status: r.status,
+      updatedAt: toIso(r.updated_at),
+      archived: r.archived_at !== null,
     })),
     total: totalCount,
     page,
@@ -109,27 +146,72 @@ export async function listDesigns(db: Kysely<Database>, organizationId: string, 
 }
 
 /** One design of the organisation with its working revision, or null (unknown or foreign id). */
-export async function findDesign(db: Kysely<Database>, organizationId: string, designId: string): Promise<DesignDetailDto | null> {
+export async function findDesign(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+): Promise<DesignDetailDto | null> {
   if (!/^[0-9a-f-]{36}$/i.test(designId)) return null;
   const row = await workingRevisions(db, organizationId)
     .innerJoin("users as editor", "editor.id", "design_revisions.last_edited_by")
     .where("designs.id", "=", designId)
     .select((eb) => [
-      "designs.id", "designs.organization_id", "designs.name", "designs.equipment_tag", "designs.outline_kind", "designs.owner_id",
-      "designs.updated_at", "designs.archived_at", "owner.display_name as owner_name", "editor.display_name as editor_name",
-      "design_revisions.id as revision_id", "design_revisions.number", "design_revisions.status", "design_revisions.version",
-      "design_revisions.document", "design_revisions.result", "design_revisions.core_version", "design_revisions.updated_at as revision_updated_at",
-      eb.selectFrom("design_revisions as all_revs").select((e) => e.fn.countAll<number>().as("c")).whereRef("all_revs.design_id", "=", "designs.id").as("revision_count"),
-      eb.exists(eb.selectFrom("design_revisions as sub").select("sub.id").whereRef("sub.design_id", "=", "designs.id").where("sub.submitted_at", "is not", null)).as("ever_submitted"),
+      "designs.id",
+      "designs.organization_id",
+      "designs.name",
+      "designs.equipment_tag",
+      "designs.outline_kind",
+      "designs.owner_id",
+      "designs.updated_at",
+      "designs.archived_at",
+      "owner.display_name as owner_name",
+      "editor.display_name as editor_name",
+      "design_revisions.id as revision_id",
+      "design_revisions.number",
+      "design_revisions.status",
+      "design_revisions.version",
+      "design_revisions.document",
+      "design_revisions.result",
+      "design_revisions.core_version",
+      "design_revisions.updated_at as revision_updated_at",
+      eb
+        .selectFrom("design_revisions as all_revs")
+        .select((e) => e.fn.countAll<number>().as("c"))
+        .whereRef("all_revs.design_id", "=", "designs.id")
+        .as("revision_count"),
+      eb
+        .exists(
+          eb
+            .selectFrom("design_revisions as sub")
+            .select("sub.id")
+            .whereRef("sub.design_id", "=", "designs.id")
+            .where("sub.submitted_at", "is not", null),
+        )
+        .as("ever_submitted"),
     ])
     .executeTakeFirst();
   if (!row) return null;
   return {
-    designId: row.id, organizationId: row.organization_id, name: row.name, equipmentTag: row.equipment_tag, outlineKind: row.outline_kind,
-    ownerId: row.owner_id, ownerName: row.owner_name, revisionNumber: row.number, status: row.status, updatedAt: toIso(row.updated_at),
-    archived: row.archived_at !== null, revisionId: row.revision_id, version: row.version, document: row.document as JointDesign,
-    result: (row.result ?? null) as JointAnalysis | null, coreVersion: row.core_version, revisionCount: Number(row.revision_count ?? 0),
-    everSubmitted: Boolean(row.ever_submitted), lastEditedByName: row.editor_name, revisionUpdatedAt: toIso(row.revision_updated_at),
+    designId: row.id,
+    organizationId: row.organization_id,
+    name: row.name,
+    equipmentTag: row.equipment_tag,
+    outlineKind: row.outline_kind,
+    ownerId: row.owner_id,
+    ownerName: row.owner_name,
+    revisionNumber: row.number,
+    status: row.status,
+    updatedAt: toIso(row.updated_at),
+    archived: row.archived_at !== null,
+    revisionId: row.revision_id,
+    version: row.version,
+    document: row.document as JointDesign,
+    result: (row.result ?? null) as JointAnalysis | null,
+    coreVersion: row.core_version,
+    revisionCount: Number(row.revision_count ?? 0),
+    everSubmitted: Boolean(row.ever_submitted),
+    lastEditedByName: row.editor_name,
+    revisionUpdatedAt: toIso(row.revision_updated_at),
   };
 }
 

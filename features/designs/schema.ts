@@ -33,7 +33,9 @@ export const listDesignsQuerySchema = z.object({
 export type ListDesignsQueryInput = z.infer<typeof listDesignsQuerySchema>;
 
 /** URLSearchParams or Next's searchParams object → plain object for the schema. */
-export function searchParamsToObject(params: URLSearchParams | Record<string, string | string[] | undefined>): Record<string, string> {
+export function searchParamsToObject(
+  params: URLSearchParams | Record<string, string | string[] | undefined>,
+): Record<string, string> {
   const out: Record<string, string> = {};
   const entries = params instanceof URLSearchParams ? [...params.entries()] : Object.entries(params);
   for (const [key, value] of entries) {
@@ -45,10 +47,17 @@ export function searchParamsToObject(params: URLSearchParams | Record<string, st
 
 export const saveWorkingRevisionSchema = z.object({
   designId: uuid,
-  baseVersion: z.number({ error: "baseVersion must be a number" }).int().min(1, { error: "baseVersion must be at least 1" }),
+  baseVersion: z
+    .number({ error: "baseVersion must be a number" })
+    .int()
+    .min(1, { error: "baseVersion must be at least 1" }),
   document: designDocumentSchema,
   name: designNameSchema.optional(),
-  equipmentTag: z.string().trim().max(60, { error: "Equipment tag must be at most 60 characters" }).optional(),
+  equipmentTag: z
+    .string()
+    .trim()
+    .max(60, { error: "Equipment tag must be at most 60 characters" })
+    .optional(),
 });
 export type SaveWorkingRevisionSchemaInput = z.infer<typeof saveWorkingRevisionSchema>;
 

@@ -44,10 +44,14 @@ export type SaveWorkingRevisionResult =
   | Extract<ActionResult<{ version: number; result: JointAnalysis; savedAt: string }>, { ok: true }>
   | { ok: false; message: string; fieldErrors?: Record<string, string[]>; conflict?: true };
 
-export type SaveWorkingRevisionAction = (input: SaveWorkingRevisionInput) => Promise<SaveWorkingRevisionResult>;
+export type SaveWorkingRevisionAction = (
+  input: SaveWorkingRevisionInput,
+) => Promise<SaveWorkingRevisionResult>;
 
 /** Remembers the viewer's unit system (users.unit_system). */
-export type SetUnitSystemAction = (unitSystem: UnitSystem) => Promise<ActionResult<{ unitSystem: UnitSystem }>>;
+export type SetUnitSystemAction = (
+  unitSystem: UnitSystem,
+) => Promise<ActionResult<{ unitSystem: UnitSystem }>>;
 
 export interface DesignWorkspaceProps {
   design: WorkspaceDesignDto;

@@ -14,7 +14,11 @@ export async function DeskLists({ viewer }: { viewer: Viewer }) {
     <section aria-label="Your work" className="flex flex-col gap-3">
       <DeskReviewLists fallback={lists} />
       <p className="text-table text-ink-600">
-        All designs of {viewer.organizationName} are in the <Link href="/designs" className="underline">Joint register</Link>.
+        All designs of {viewer.organizationName} are in the{" "}
+        <Link href="/designs" className="underline">
+          Joint register
+        </Link>
+        .
       </p>
     </section>
   );

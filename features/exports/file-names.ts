@@ -15,14 +15,19 @@ export const CONTENT_TYPES: Record<ExportKind, string> = {
 };
 
 /** `exportFileName({ equipmentTag: "E-2107", designName: "…" }, 3, "hole-list")` → "e-2107-rev3-hole-list.csv". */
-export function exportFileName(design: { equipmentTag: string; designName: string }, revisionNumber: number, kind: ExportKind): string {
-  const base = (design.equipmentTag.trim() || design.designName)
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "") // accents dropped: "Flänge" → "flange"
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 60) || "design";
+export function exportFileName(
+  design: { equipmentTag: string; designName: string },
+  revisionNumber: number,
+  kind: ExportKind,
+): string {
+  const base =
+    (design.equipmentTag.trim() || design.designName)
+      .normalize("NFKD")
+      .replace(/[\u0300-\u036f]/g, "") // accents dropped: "Flänge" → "flange"
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-+|-+$/g, "")
+      .slice(0, 60) || "design";
   return `${base}-rev${revisionNumber}-${SUFFIX[kind]}`;
 }
 

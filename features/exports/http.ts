@@ -4,7 +4,8 @@ import { attachmentDisposition } from "./file-names";
 import { exportPathSchema, sheetOptionsSchema, type ExportPathInput, type SheetOptionsInput } from "./schema";
 
 // Request plumbing shared by the export route handlers (parse, answer with a file).
-export type ParseResult<T> = { ok: true; data: T } | { ok: false; message: string; fieldErrors: Record<string, string[]> };
+export type ParseResult<T> =
+  { ok: true; data: T } | { ok: false; message: string; fieldErrors: Record<string, string[]> };
 
 export function parseExportPath(params: { designId: string; number: string }): ExportPathInput | null {
   const parsed = exportPathSchema.safeParse(params);
@@ -13,10 +14,16 @@ export function parseExportPath(params: { designId: string; number: string }): E
 
 /** ?paper=a4|letter&units=SI|US (units default to the viewer's choice, decided by the caller). */
 export function parseSheetOptions(url: URL): ParseResult<SheetOptionsInput> {
-  const raw = Object.fromEntries(["paper", "units"].flatMap((k) => (url.searchParams.has(k) ? [[k, url.searchParams.get(k)]] : [])));
+  const raw = Object.fromEntries(
+    ["paper", "units"].flatMap((k) => (url.searchParams.has(k) ? [[k, url.searchParams.get(k)]] : [])),
+  );
   const parsed = sheetOptionsSchema.safeParse(raw);
   if (parsed.success) return { ok: true, data: parsed.data };
-  return { ok: false, message: "The export options are not valid.", fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]> };
+  return {
+    ok: false,
+    message: "The export options are not valid.",
+    fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
+  };
 }
 
 export function fileResponse(body: Uint8Array | string, fileName: string, contentType: string): Response {

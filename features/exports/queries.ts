@@ -6,7 +6,8 @@ import type { RevisionStatus } from "@/db/tables/designs";
 
 // Reads for the export routes and the background sheet job. Every read filters by the viewer's
 // organisation: another organisation's design is simply not found (the route answers 404).
-const iso = (value: unknown): string | null => (value === null || value === undefined ? null : new Date(value as string).toISOString());
+const iso = (value: unknown): string | null =>
+  value === null || value === undefined ? null : new Date(value as string).toISOString();
 
 export interface ExportRevisionDto {
   designId: string;
@@ -27,7 +28,12 @@ export interface ExportRevisionDto {
 }
 
 /** One stored revision of a design of this organisation, or undefined. */
-export async function findExportRevision(db: Kysely<Database>, organizationId: string, designId: string, number: number): Promise<ExportRevisionDto | undefined> {
+export async function findExportRevision(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+  number: number,
+): Promise<ExportRevisionDto | undefined> {
   const row = await db
     .selectFrom("design_revisions as r")
     .innerJoin("designs as d", "d.id", "r.design_id")
@@ -35,8 +41,20 @@ export async function findExportRevision(db: Kysely<Database>, organizationId: s
     .leftJoin("users as s", "s.id", "r.submitted_by")
     .leftJoin("users as a", "a.id", "r.decided_by")
     .select([
-      "d.id as design_id", "d.name", "d.equipment_tag", "r.id as revision_id", "r.number", "r.status", "r.document", "r.result",
-      "r.core_version", "r.content_hash", "r.decided_at", "c.display_name as creator_name", "s.display_name as submitter_name", "a.display_name as decider_name",
+      "d.id as design_id",
+      "d.name",
+      "d.equipment_tag",
+      "r.id as revision_id",
+      "r.number",
+      "r.status",
+      "r.document",
+      "r.result",
+      "r.core_version",
+      "r.content_hash",
+      "r.decided_at",
+      "c.display_name as creator_name",
+      "s.display_name as submitter_name",
+      "a.display_name as decider_name",
     ])
     .where("r.organization_id", "=", organizationId)
     .where("d.organization_id", "=", organizationId)

@@ -3,7 +3,10 @@ import { z } from "zod";
 // Inputs of the export routes: the path (design id, revision number) and the sheet options.
 export const exportPathSchema = z.object({
   designId: z.uuid({ error: "This design does not exist." }),
-  number: z.coerce.number({ error: "The revision number must be a whole number." }).int("The revision number must be a whole number.").min(1, "Revision numbers start at 1."),
+  number: z.coerce
+    .number({ error: "The revision number must be a whole number." })
+    .int("The revision number must be a whole number.")
+    .min(1, "Revision numbers start at 1."),
 });
 
 export const sheetOptionsSchema = z.object({

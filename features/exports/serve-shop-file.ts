@@ -13,19 +13,34 @@ const BUILDERS = { "hole-list": holeListFor, "drilling-template": drillingTempla
  * One stored revision's shop file (hole list CSV or drilling template DXF), for any member of the
  * organisation; another organisation's design is a 404. Each download is written to the activity log.
  */
-export async function serveShopFile(request: Request, params: { designId: string; number: string }, kind: keyof typeof BUILDERS): Promise<Response> {
+export async function serveShopFile(
+  request: Request,
+  params: { designId: string; number: string },
+  kind: keyof typeof BUILDERS,
+): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const path = parseExportPath(params);
   const db = getDb();
-  const revision = path ? await findExportRevision(db, auth.viewer.organizationId, path.designId, path.number) : undefined;
+  const revision = path
+    ? await findExportRevision(db, auth.viewer.organizationId, path.designId, path.number)
+    : undefined;
   if (!revision) return jsonError(404, "This revision does not exist.");
   const fileName = exportFileName(revision, revision.number, kind);
   const body = BUILDERS[kind](revision.document, revision.result);
   try {
-    await recordActivity(db, { organizationId: auth.viewer.organizationId, designId: revision.designId, revisionId: revision.revisionId, actorId: auth.viewer.userId, kind: "exported", detail: fileName });
+    await recordActivity(db, {
+      organizationId: auth.viewer.organizationId,
+      designId: revision.designId,
+      revisionId: revision.revisionId,
+      actorId: auth.viewer.userId,
+      kind: "exported",
+      detail: fileName,
+    });
   } catch (error) {
-    console.error(`[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`);
+    console.error(
+      `[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
   return fileResponse(body, fileName, CONTENT_TYPES[kind]);
 }

@@ -3,7 +3,10 @@ import { buildBoltRows } from "./model/bolt-rows";
 import { buildDrillingTemplateDxf } from "./model/drilling-template";
 import { buildHoleListCsv } from "./model/hole-list";
 
-type StoredBolts = { bolts?: { id: string; xMm: number; yMm: number }[]; assemblyPlan?: { sequence?: string[] } } | null;
+type StoredBolts = {
+  bolts?: { id: string; xMm: number; yMm: number }[];
+  assemblyPlan?: { sequence?: string[] };
+} | null;
 
 function rowsFor(document: JointDesign, result: unknown) {
   const r = (result ?? null) as StoredBolts;

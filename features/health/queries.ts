@@ -4,8 +4,7 @@ import type { Db } from "@/db/index";
 import { listMigrationNames } from "@/db/migration-names";
 
 export type HealthReport =
-  | { ok: true; schemaVersion: string; migrations: number }
-  | { ok: false; reason: string };
+  { ok: true; schemaVersion: string; migrations: number } | { ok: false; reason: string };
 
 /** Is the database reachable, and has every migration file in migrations/ been applied? */
 export async function getHealth(db: Db): Promise<HealthReport> {

@@ -6,12 +6,29 @@ import { getDb } from "@/db/index";
 import type { LibraryKind } from "@/db/tables/library";
 import type { ActionResult } from "@/server/action-result";
 import { requireViewer } from "@/server/auth/guard";
-import { createBolting, createFlangeTemplate, createGasket, deleteLibraryRow, setBuiltinHidden, updateGasket } from "./mutations";
+import {
+  createBolting,
+  createFlangeTemplate,
+  createGasket,
+  deleteLibraryRow,
+  setBuiltinHidden,
+  updateGasket,
+} from "./mutations";
 import { canEditLibrary } from "./policies";
-import { boltingInputSchema, deleteRowSchema, flangeInputSchema, gasketInputSchema, hideBuiltinSchema } from "./schema";
+import {
+  boltingInputSchema,
+  deleteRowSchema,
+  flangeInputSchema,
+  gasketInputSchema,
+  hideBuiltinSchema,
+} from "./schema";
 
 // Stockroom entry points: authenticate, parse, authorise (admin), delegate, revalidate.
-const PATHS: Record<LibraryKind, string> = { gasket: "/library/gaskets", bolting: "/library/bolting", flange: "/library/flanges" };
+const PATHS: Record<LibraryKind, string> = {
+  gasket: "/library/gaskets",
+  bolting: "/library/bolting",
+  flange: "/library/flanges",
+};
 const NOT_ADMIN = "Only an admin of this organisation can change the Stockroom.";
 
 function fields(formData: FormData): Record<string, string> {
@@ -21,7 +38,11 @@ function fields(formData: FormData): Record<string, string> {
 }
 
 function invalid(error: z.ZodError): ActionResult<never> {
-  return { ok: false, message: "Some values need attention.", fieldErrors: z.flattenError(error).fieldErrors as Record<string, string[]> };
+  return {
+    ok: false,
+    message: "Some values need attention.",
+    fieldErrors: z.flattenError(error).fieldErrors as Record<string, string[]>,
+  };
 }
 
 async function editor() {
@@ -29,7 +50,10 @@ async function editor() {
   return canEditLibrary(viewer) ? viewer : null;
 }
 
-export async function saveGasketAction(_prev: ActionResult<{ id: string }> | null, formData: FormData): Promise<ActionResult<{ id: string }>> {
+export async function saveGasketAction(
+  _prev: ActionResult<{ id: string }> | null,
+  formData: FormData,
+): Promise<ActionResult<{ id: string }>> {
   const viewer = await editor();
   if (!viewer) return { ok: false, message: NOT_ADMIN };
   const raw = fields(formData);
@@ -47,7 +71,10 @@ export async function saveGasketAction(_prev: ActionResult<{ id: string }> | nul
 }
 
 /** One material with up to three size ranges: fields `<name>_1`, `<name>_2`, `<name>_3`; empty ranges are skipped. */
-export async function createBoltingAction(_prev: ActionResult<{ id: string }> | null, formData: FormData): Promise<ActionResult<{ id: string }>> {
+export async function createBoltingAction(
+  _prev: ActionResult<{ id: string }> | null,
+  formData: FormData,
+): Promise<ActionResult<{ id: string }>> {
   const viewer = await editor();
   if (!viewer) return { ok: false, message: NOT_ADMIN };
   const raw = fields(formData);
@@ -61,19 +88,25 @@ export async function createBoltingAction(_prev: ActionResult<{ id: string }> | 
     const parsed = boltingInputSchema.safeParse({ ...common, ...range });
     if (parsed.success) inputs.push(parsed.data);
     else {
-      for (const [k, msgs] of Object.entries(z.flattenError(parsed.error).fieldErrors as Record<string, string[]>)) {
+      for (const [k, msgs] of Object.entries(
+        z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
+      )) {
         fieldErrors[(rangeKeys as readonly string[]).includes(k) ? `${k}_${i}` : k] = msgs;
       }
     }
   }
-  if (Object.keys(fieldErrors).length > 0) return { ok: false, message: "Some values need attention.", fieldErrors };
+  if (Object.keys(fieldErrors).length > 0)
+    return { ok: false, message: "Some values need attention.", fieldErrors };
   const result = await createBolting(getDb(), viewer.organizationId, viewer.userId, inputs);
   if (!result.ok) return result;
   revalidatePath(PATHS.bolting);
   return { ok: true, data: { id: result.data.id } };
 }
 
-export async function createFlangeTemplateAction(_prev: ActionResult<{ id: string }> | null, formData: FormData): Promise<ActionResult<{ id: string }>> {
+export async function createFlangeTemplateAction(
+  _prev: ActionResult<{ id: string }> | null,
+  formData: FormData,
+): Promise<ActionResult<{ id: string }>> {
   const viewer = await editor();
   if (!viewer) return { ok: false, message: NOT_ADMIN };
   const parsed = flangeInputSchema.safeParse(fields(formData));
@@ -96,6 +129,13 @@ export async function setBuiltinHiddenAction(formData: FormData): Promise<void> 
   const viewer = await editor();
   const parsed = hideBuiltinSchema.safeParse(fields(formData));
   if (!viewer || !parsed.success) return;
-  await setBuiltinHidden(getDb(), viewer.organizationId, viewer.userId, parsed.data.kind, parsed.data.builtinId, parsed.data.hidden);
+  await setBuiltinHidden(
+    getDb(),
+    viewer.organizationId,
+    viewer.userId,
+    parsed.data.kind,
+    parsed.data.builtinId,
+    parsed.data.hidden,
+  );
   revalidatePath(PATHS[parsed.data.kind]);
 }

@@ -4,13 +4,19 @@ import type { Database } from "@/db/types";
 import type { LibraryKind, TightnessByClass } from "@/db/tables/library";
 import { builtinBolting, builtinFlangeTemplates, builtinGaskets } from "./model/builtin-rows";
 import type { BoltingChoiceDto, FlangeTemplateChoiceDto, GasketChoiceDto } from "./model/dto";
-import { describeCsvError, parseLibraryCsv, type CsvFieldError, type CsvPreviewRow } from "./model/library-csv";
+import {
+  describeCsvError,
+  parseLibraryCsv,
+  type CsvFieldError,
+  type CsvPreviewRow,
+} from "./model/library-csv";
 import { toBoltingDto, toFlangeDto, toGasketDto, type Executor } from "./queries";
 import type { BoltingInput, FlangeInput, GasketInput } from "./schema";
 
 // Writes of the Stockroom. Callers have already checked canEditLibrary; every write is scoped to
 // the organisation, so a row id of another organisation simply matches nothing.
-export type WriteResult<T> = { ok: true; data: T } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
+export type WriteResult<T> =
+  { ok: true; data: T } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 
 function isUniqueViolation(err: unknown): boolean {
   return typeof err === "object" && err !== null && (err as { code?: string }).code === "23505";
@@ -29,18 +35,35 @@ function tightnessOf(i: GasketInput): TightnessByClass {
 
 function gasketValues(i: GasketInput) {
   return {
-    name: i.name, gasket_type: i.gasket_type, m: i.m, y_mpa: i.y_mpa, tightness: JSON.stringify(tightnessOf(i)),
-    qs_max_mpa: i.qsmax_mpa, pqr: i.pqr, eg_mpa: i.eg_mpa, modulus_mpa: i.modulus_mpa, thickness_mm: i.thickness_mm,
-    source: i.source, edition: i.edition,
+    name: i.name,
+    gasket_type: i.gasket_type,
+    m: i.m,
+    y_mpa: i.y_mpa,
+    tightness: JSON.stringify(tightnessOf(i)),
+    qs_max_mpa: i.qsmax_mpa,
+    pqr: i.pqr,
+    eg_mpa: i.eg_mpa,
+    modulus_mpa: i.modulus_mpa,
+    thickness_mm: i.thickness_mm,
+    source: i.source,
+    edition: i.edition,
   };
 }
 
 function flangeValues(i: FlangeInput) {
   return {
-    standard: i.standard, pressure_class: i.pressure_class, size: i.size, outside_diameter_mm: i.outside_diameter_mm,
-    bore_diameter_mm: i.bore_diameter_mm, bolt_circle_diameter_mm: i.bolt_circle_diameter_mm, bolt_count: i.bolt_count,
-    bolt_designation: i.bolt_designation, bolt_diameter_mm: i.bolt_diameter_mm, hole_diameter_mm: i.hole_diameter_mm,
-    source: i.source, edition: i.edition,
+    standard: i.standard,
+    pressure_class: i.pressure_class,
+    size: i.size,
+    outside_diameter_mm: i.outside_diameter_mm,
+    bore_diameter_mm: i.bore_diameter_mm,
+    bolt_circle_diameter_mm: i.bolt_circle_diameter_mm,
+    bolt_count: i.bolt_count,
+    bolt_designation: i.bolt_designation,
+    bolt_diameter_mm: i.bolt_diameter_mm,
+    hole_diameter_mm: i.hole_diameter_mm,
+    source: i.source,
+    edition: i.edition,
   };
 }
 
@@ -49,15 +72,29 @@ function boltingValues(ranges: BoltingInput[]) {
   const first = ranges[0];
   const sorted = [...ranges].sort((a, b) => a.max_diameter_mm - b.max_diameter_mm);
   return {
-    name: first.name, modulus_mpa: first.modulus_mpa, source: first.source, edition: first.edition,
-    ranges: JSON.stringify(sorted.map((r) => ({ maxDiameterMm: r.max_diameter_mm, proofMpa: r.proof_mpa, yieldMpa: r.yield_mpa, tensileMpa: r.tensile_mpa, allowableMpa: r.allowable_mpa }))),
+    name: first.name,
+    modulus_mpa: first.modulus_mpa,
+    source: first.source,
+    edition: first.edition,
+    ranges: JSON.stringify(
+      sorted.map((r) => ({
+        maxDiameterMm: r.max_diameter_mm,
+        proofMpa: r.proof_mpa,
+        yieldMpa: r.yield_mpa,
+        tensileMpa: r.tensile_mpa,
+        allowableMpa: r.allowable_mpa,
+      })),
+    ),
   };
 }
 
 const DUPLICATE = {
   gasket: { field: "name", message: "a gasket with this name is already in the Stockroom" },
   bolting: { field: "name", message: "a bolting material with this name is already in the Stockroom" },
-  flange: { field: "size", message: "a template for this standard, class and size is already in the Stockroom" },
+  flange: {
+    field: "size",
+    message: "a template for this standard, class and size is already in the Stockroom",
+  },
 } as const;
 
 async function guarded<T>(kind: LibraryKind, write: () => Promise<T>): Promise<WriteResult<T>> {
@@ -70,13 +107,29 @@ async function guarded<T>(kind: LibraryKind, write: () => Promise<T>): Promise<W
   }
 }
 
-export function createGasket(db: Executor, organizationId: string, userId: string, input: GasketInput): Promise<WriteResult<GasketChoiceDto>> {
+export function createGasket(
+  db: Executor,
+  organizationId: string,
+  userId: string,
+  input: GasketInput,
+): Promise<WriteResult<GasketChoiceDto>> {
   return guarded("gasket", async () =>
-    toGasketDto(await db.insertInto("library_gaskets").values({ organization_id: organizationId, created_by: userId, ...gasketValues(input) }).returningAll().executeTakeFirstOrThrow()),
+    toGasketDto(
+      await db
+        .insertInto("library_gaskets")
+        .values({ organization_id: organizationId, created_by: userId, ...gasketValues(input) })
+        .returningAll()
+        .executeTakeFirstOrThrow(),
+    ),
   );
 }
 
-export async function updateGasket(db: Executor, organizationId: string, rowId: string, input: GasketInput): Promise<WriteResult<GasketChoiceDto | null>> {
+export async function updateGasket(
+  db: Executor,
+  organizationId: string,
+  rowId: string,
+  input: GasketInput,
+): Promise<WriteResult<GasketChoiceDto | null>> {
   return guarded("gasket", async () => {
     const row = await db
       .updateTable("library_gaskets")
@@ -89,22 +142,57 @@ export async function updateGasket(db: Executor, organizationId: string, rowId: 
   });
 }
 
-export function createBolting(db: Executor, organizationId: string, userId: string, ranges: BoltingInput[]): Promise<WriteResult<BoltingChoiceDto>> {
+export function createBolting(
+  db: Executor,
+  organizationId: string,
+  userId: string,
+  ranges: BoltingInput[],
+): Promise<WriteResult<BoltingChoiceDto>> {
   return guarded("bolting", async () =>
-    toBoltingDto(await db.insertInto("library_bolting").values({ organization_id: organizationId, created_by: userId, ...boltingValues(ranges) }).returningAll().executeTakeFirstOrThrow()),
+    toBoltingDto(
+      await db
+        .insertInto("library_bolting")
+        .values({ organization_id: organizationId, created_by: userId, ...boltingValues(ranges) })
+        .returningAll()
+        .executeTakeFirstOrThrow(),
+    ),
   );
 }
 
-export function createFlangeTemplate(db: Executor, organizationId: string, userId: string, input: FlangeInput): Promise<WriteResult<FlangeTemplateChoiceDto>> {
+export function createFlangeTemplate(
+  db: Executor,
+  organizationId: string,
+  userId: string,
+  input: FlangeInput,
+): Promise<WriteResult<FlangeTemplateChoiceDto>> {
   return guarded("flange", async () =>
-    toFlangeDto(await db.insertInto("library_flange_templates").values({ organization_id: organizationId, created_by: userId, ...flangeValues(input) }).returningAll().executeTakeFirstOrThrow()),
+    toFlangeDto(
+      await db
+        .insertInto("library_flange_templates")
+        .values({ organization_id: organizationId, created_by: userId, ...flangeValues(input) })
+        .returningAll()
+        .executeTakeFirstOrThrow(),
+    ),
   );
 }
 
-const TABLES = { gasket: "library_gaskets", bolting: "library_bolting", flange: "library_flange_templates" } as const;
+const TABLES = {
+  gasket: "library_gaskets",
+  bolting: "library_bolting",
+  flange: "library_flange_templates",
+} as const;
 
-export async function deleteLibraryRow(db: Executor, organizationId: string, kind: LibraryKind, rowId: string): Promise<boolean> {
-  const r = await db.deleteFrom(TABLES[kind]).where("organization_id", "=", organizationId).where("id", "=", rowId).executeTakeFirst();
+export async function deleteLibraryRow(
+  db: Executor,
+  organizationId: string,
+  kind: LibraryKind,
+  rowId: string,
+): Promise<boolean> {
+  const r = await db
+    .deleteFrom(TABLES[kind])
+    .where("organization_id", "=", organizationId)
+    .where("id", "=", rowId)
+    .executeTakeFirst();
   return Number(r.numDeletedRows) > 0;
 }
 
@@ -114,7 +202,14 @@ const BUILTIN_IDS: Record<LibraryKind, () => string[]> = {
   flange: () => builtinFlangeTemplates().map((r) => r.rowId),
 };
 
-export async function setBuiltinHidden(db: Executor, organizationId: string, userId: string, kind: LibraryKind, builtinId: string, hidden: boolean): Promise<boolean> {
+export async function setBuiltinHidden(
+  db: Executor,
+  organizationId: string,
+  userId: string,
+  kind: LibraryKind,
+  builtinId: string,
+  hidden: boolean,
+): Promise<boolean> {
   if (!BUILTIN_IDS[kind]().includes(builtinId)) return false;
   if (hidden) {
     await db
@@ -123,7 +218,12 @@ export async function setBuiltinHidden(db: Executor, organizationId: string, use
       .onConflict((oc) => oc.columns(["organization_id", "kind", "builtin_id"]).doNothing())
       .execute();
   } else {
-    await db.deleteFrom("library_hidden_builtins").where("organization_id", "=", organizationId).where("kind", "=", kind).where("builtin_id", "=", builtinId).execute();
+    await db
+      .deleteFrom("library_hidden_builtins")
+      .where("organization_id", "=", organizationId)
+      .where("kind", "=", kind)
+      .where("builtin_id", "=", builtinId)
+      .execute();
   }
   return true;
 }
@@ -143,7 +243,13 @@ class RowRefused extends Error {
  * value, or a name already in the Stockroom) and nothing is written. The message names the
  * file line and the column.
  */
-export async function importLibraryCsv(db: Executor, organizationId: string, userId: string, kind: LibraryKind, text: string): Promise<CsvImportResult> {
+export async function importLibraryCsv(
+  db: Executor,
+  organizationId: string,
+  userId: string,
+  kind: LibraryKind,
+  text: string,
+): Promise<CsvImportResult> {
   const parsed = parseLibraryCsv(kind, text);
   if (!parsed.ok) return parsed;
   const write = async (trx: Executor) => {
@@ -151,7 +257,8 @@ export async function importLibraryCsv(db: Executor, organizationId: string, use
       try {
         await run();
       } catch (err) {
-        if (isUniqueViolation(err)) throw new RowRefused({ line, field: DUPLICATE[kind].field, message: DUPLICATE[kind].message });
+        if (isUniqueViolation(err))
+          throw new RowRefused({ line, field: DUPLICATE[kind].field, message: DUPLICATE[kind].message });
         throw err;
       }
     };
@@ -163,26 +270,55 @@ export async function importLibraryCsv(db: Executor, organizationId: string, use
       }
       for (const items of groups.values()) {
         await insert(items[0].line, () =>
-          trx.insertInto("library_bolting").values({ organization_id: organizationId, created_by: userId, ...boltingValues(items.map((x) => x.input)) }).execute(),
+          trx
+            .insertInto("library_bolting")
+            .values({
+              organization_id: organizationId,
+              created_by: userId,
+              ...boltingValues(items.map((x) => x.input)),
+            })
+            .execute(),
         );
       }
       return groups.size;
     }
     for (const { line, input } of parsed.inputs) {
       if (kind === "gasket") {
-        await insert(line, () => trx.insertInto("library_gaskets").values({ organization_id: organizationId, created_by: userId, ...gasketValues(input as GasketInput) }).execute());
+        await insert(line, () =>
+          trx
+            .insertInto("library_gaskets")
+            .values({
+              organization_id: organizationId,
+              created_by: userId,
+              ...gasketValues(input as GasketInput),
+            })
+            .execute(),
+        );
       } else {
-        await insert(line, () => trx.insertInto("library_flange_templates").values({ organization_id: organizationId, created_by: userId, ...flangeValues(input as FlangeInput) }).execute());
+        await insert(line, () =>
+          trx
+            .insertInto("library_flange_templates")
+            .values({
+              organization_id: organizationId,
+              created_by: userId,
+              ...flangeValues(input as FlangeInput),
+            })
+            .execute(),
+        );
       }
     }
     return parsed.inputs.length;
   };
   try {
-    const imported = db.isTransaction ? await write(db) : await (db as Kysely<Database>).transaction().execute(write);
+    const imported = db.isTransaction
+      ? await write(db)
+      : await (db as Kysely<Database>).transaction().execute(write);
     return { ok: true, imported, rows: parsed.rows };
   } catch (err) {
     if (!(err instanceof RowRefused)) throw err;
-    const rows = parsed.rows.map((r) => (r.line === err.fieldError.line ? { ...r, errors: [err.fieldError] } : r));
+    const rows = parsed.rows.map((r) =>
+      r.line === err.fieldError.line ? { ...r, errors: [err.fieldError] } : r,
+    );
     return { ok: false, message: `${err.message}. Nothing was imported.`, rows, errors: [err.fieldError] };
   }
 }

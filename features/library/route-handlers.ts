@@ -5,14 +5,25 @@ import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { KIND_LABELS } from "./model/csv-columns";
 import { boltingToCsv, flangesToCsv, gasketsToCsv, parseLibraryCsv } from "./model/library-csv";
 import { importLibraryCsv } from "./mutations";
-import { listBoltingChoices, listFlangeTemplateChoices, listGasketChoices, listOwnBolting, listOwnFlangeTemplates, listOwnGaskets } from "./queries";
+import {
+  listBoltingChoices,
+  listFlangeTemplateChoices,
+  listGasketChoices,
+  listOwnBolting,
+  listOwnFlangeTemplates,
+  listOwnGaskets,
+} from "./queries";
 
 // The /api/v1/library/* handlers, shared by the three kinds. GET …/<kind>: the picker list
 // (built-in − hidden + own) for any member; GET …/<kind>/csv: the organisation's own rows as CSV
 // (the import format); POST …/<kind>/csv?step=preview|commit: admin-only import of a text/csv body.
 const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
-const CHOICES = { gasket: listGasketChoices, bolting: listBoltingChoices, flange: listFlangeTemplateChoices } as const;
+const CHOICES = {
+  gasket: listGasketChoices,
+  bolting: listBoltingChoices,
+  flange: listFlangeTemplateChoices,
+} as const;
 
 export async function getChoices(request: Request, kind: LibraryKind): Promise<Response> {
   const auth = await authorizeApi(request);
@@ -27,7 +38,11 @@ export async function exportCsv(request: Request, kind: LibraryKind): Promise<Re
   const db = getDb();
   const org = auth.viewer.organizationId;
   const text =
-    kind === "gasket" ? gasketsToCsv(await listOwnGaskets(db, org)) : kind === "bolting" ? boltingToCsv(await listOwnBolting(db, org)) : flangesToCsv(await listOwnFlangeTemplates(db, org));
+    kind === "gasket"
+      ? gasketsToCsv(await listOwnGaskets(db, org))
+      : kind === "bolting"
+        ? boltingToCsv(await listOwnBolting(db, org))
+        : flangesToCsv(await listOwnFlangeTemplates(db, org));
   return new Response(text, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
@@ -43,12 +58,17 @@ export async function importCsv(request: Request, kind: LibraryKind): Promise<Re
   const step = new URL(request.url).searchParams.get("step");
   if (step !== "preview" && step !== "commit") return jsonError(400, "Say ?step=preview or ?step=commit.");
   const declared = Number(request.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > MAX_CSV_BYTES) return jsonError(413, "The CSV file is larger than 2 MB; split it.");
+  if (Number.isFinite(declared) && declared > MAX_CSV_BYTES)
+    return jsonError(413, "The CSV file is larger than 2 MB; split it.");
   const text = await request.text();
   if (text.length > MAX_CSV_BYTES) return jsonError(413, "The CSV file is larger than 2 MB; split it.");
   if (step === "preview") {
     const parsed = parseLibraryCsv(kind, text);
-    return Response.json(parsed.ok ? { ok: true, rows: parsed.rows, count: parsed.inputs.length } : { ok: false, message: parsed.message, rows: parsed.rows, errors: parsed.errors });
+    return Response.json(
+      parsed.ok
+        ? { ok: true, rows: parsed.rows, count: parsed.inputs.length }
+        : { ok: false, message: parsed.message, rows: parsed.rows, errors: parsed.errors },
+    );
   }
   const result = await importLibraryCsv(getDb(), auth.viewer.organizationId, auth.viewer.userId, kind, text);
   return Response.json(result, { status: result.ok ? 200 : 422 });

@@ -3,8 +3,14 @@
 // core's units (mm, MPa). Field names are the CSV column names, so an error names the column.
 import { z } from "zod";
 
-const text = (max: number) => z.string({ error: "is required" }).trim().min(1, "is required").max(max, `must be at most ${max} characters`);
-const optionalText = (max: number) => z.string().trim().max(max, `must be at most ${max} characters`).optional().default("");
+const text = (max: number) =>
+  z
+    .string({ error: "is required" })
+    .trim()
+    .min(1, "is required")
+    .max(max, `must be at most ${max} characters`);
+const optionalText = (max: number) =>
+  z.string().trim().max(max, `must be at most ${max} characters`).optional().default("");
 
 function toNumber(v: unknown): unknown {
   if (typeof v === "string") {
@@ -15,7 +21,10 @@ function toNumber(v: unknown): unknown {
 }
 
 const number = (check: (n: z.ZodNumber) => z.ZodNumber) =>
-  z.preprocess(toNumber, check(z.number({ error: (i) => (i.input === undefined ? "is required" : "must be a number") })));
+  z.preprocess(
+    toNumber,
+    check(z.number({ error: (i) => (i.input === undefined ? "is required" : "must be a number") })),
+  );
 const optionalNumber = (check: (n: z.ZodNumber) => z.ZodNumber) =>
   z.preprocess((v) => toNumber(v) ?? null, check(z.number({ error: "must be a number" })).nullable());
 
@@ -54,7 +63,10 @@ export const boltingInputSchema = z
     source: text(300),
     edition: optionalText(200),
   })
-  .refine((r) => r.tensile_mpa >= r.yield_mpa, { path: ["tensile_mpa"], message: "must not be below the yield strength" });
+  .refine((r) => r.tensile_mpa >= r.yield_mpa, {
+    path: ["tensile_mpa"],
+    message: "must not be below the yield strength",
+  });
 export type BoltingInput = z.output<typeof boltingInputSchema>;
 
 export const flangeInputSchema = z
@@ -65,19 +77,30 @@ export const flangeInputSchema = z
     outside_diameter_mm: number(positive),
     bore_diameter_mm: optionalNumber(positive),
     bolt_circle_diameter_mm: number(positive),
-    bolt_count: number((n) => n.int("must be a whole number").min(2, "must be at least 2").max(512, "must be at most 512")),
+    bolt_count: number((n) =>
+      n.int("must be a whole number").min(2, "must be at least 2").max(512, "must be at most 512"),
+    ),
     bolt_designation: text(20),
     bolt_diameter_mm: number(positive),
     hole_diameter_mm: number(positive),
     source: text(300),
     edition: optionalText(200),
   })
-  .refine((r) => r.bolt_circle_diameter_mm < r.outside_diameter_mm, { path: ["bolt_circle_diameter_mm"], message: "must be smaller than the outside diameter" })
-  .refine((r) => r.hole_diameter_mm >= r.bolt_diameter_mm, { path: ["hole_diameter_mm"], message: "must not be smaller than the bolt" })
-  .refine((r) => r.bore_diameter_mm === null || r.bore_diameter_mm < r.bolt_circle_diameter_mm - r.hole_diameter_mm, {
-    path: ["bore_diameter_mm"],
-    message: "must leave room inside the bolt holes",
-  });
+  .refine((r) => r.bolt_circle_diameter_mm < r.outside_diameter_mm, {
+    path: ["bolt_circle_diameter_mm"],
+    message: "must be smaller than the outside diameter",
+  })
+  .refine((r) => r.hole_diameter_mm >= r.bolt_diameter_mm, {
+    path: ["hole_diameter_mm"],
+    message: "must not be smaller than the bolt",
+  })
+  .refine(
+    (r) => r.bore_diameter_mm === null || r.bore_diameter_mm < r.bolt_circle_diameter_mm - r.hole_diameter_mm,
+    {
+      path: ["bore_diameter_mm"],
+      message: "must leave room inside the bolt holes",
+    },
+  );
 export type FlangeInput = z.output<typeof flangeInputSchema>;
 
 export const libraryKindSchema = z.enum(["gasket", "bolting", "flange"]);

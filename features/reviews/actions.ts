@@ -8,8 +8,22 @@ import { requireViewer, type Viewer } from "@/server/auth/guard";
 import { revisionPath } from "./cache-keys";
 import { notifyReviewOutcome } from "./notifications";
 import type { CommentDto } from "./review-dto";
-import { addCommentSchema, approveRevisionSchema, returnRevisionSchema, startNewRevisionSchema, submitRevisionSchema } from "./schema";
-import { addComment, approveRevision, returnRevision, startNewRevision, submitRevision, type TransitionActor, type TransitionOutcome } from "./transitions";
+import {
+  addCommentSchema,
+  approveRevisionSchema,
+  returnRevisionSchema,
+  startNewRevisionSchema,
+  submitRevisionSchema,
+} from "./schema";
+import {
+  addComment,
+  approveRevision,
+  returnRevision,
+  startNewRevision,
+  submitRevision,
+  type TransitionActor,
+  type TransitionOutcome,
+} from "./transitions";
 
 // Review entry points: authenticate, parse, delegate (the transition checks role and state
 // inside its row-locked transaction), revalidate, then mail. Form-shaped: (previous, FormData).
@@ -27,7 +41,8 @@ function fields(formData: FormData): Record<string, unknown> {
   const justifications: Record<string, string> = {};
   for (const [key, value] of formData.entries()) {
     if (key.startsWith("$ACTION")) continue;
-    if (key.startsWith(JUSTIFICATION_PREFIX)) justifications[key.slice(JUSTIFICATION_PREFIX.length)] = String(value);
+    if (key.startsWith(JUSTIFICATION_PREFIX))
+      justifications[key.slice(JUSTIFICATION_PREFIX.length)] = String(value);
     else out[key] = String(value);
   }
   out.justifications = justifications;
@@ -36,52 +51,84 @@ function fields(formData: FormData): Record<string, unknown> {
   return out;
 }
 
-const invalid = (error: z.ZodError): { ok: false; message: string; fieldErrors: Record<string, string[]> } => ({
+const invalid = (
+  error: z.ZodError,
+): { ok: false; message: string; fieldErrors: Record<string, string[]> } => ({
   ok: false,
   message: "Check the highlighted fields.",
   fieldErrors: z.flattenError(error).fieldErrors as Record<string, string[]>,
 });
 
-const actorOf = (viewer: Viewer): TransitionActor => ({ userId: viewer.userId, organizationId: viewer.organizationId, roles: viewer.roles });
+const actorOf = (viewer: Viewer): TransitionActor => ({
+  userId: viewer.userId,
+  organizationId: viewer.organizationId,
+  roles: viewer.roles,
+});
 
-async function finish(viewer: Viewer, result: ActionResult<TransitionOutcome>): Promise<ActionResult<TransitionSummary>> {
+async function finish(
+  viewer: Viewer,
+  result: ActionResult<TransitionOutcome>,
+): Promise<ActionResult<TransitionSummary>> {
   if (!result.ok) return result;
   const outcome = result.data;
   revalidatePath(`/designs/${outcome.designId}`, "layout");
   revalidatePath("/desk");
   await notifyReviewOutcome(getDb(), viewer.organizationId, outcome);
-  return { ok: true, data: { designId: outcome.designId, number: outcome.number, status: outcome.status, href: revisionPath(outcome.designId, outcome.number) } };
+  return {
+    ok: true,
+    data: {
+      designId: outcome.designId,
+      number: outcome.number,
+      status: outcome.status,
+      href: revisionPath(outcome.designId, outcome.number),
+    },
+  };
 }
 
-export async function submitRevisionAction(_previous: ActionResult<TransitionSummary> | null, formData: FormData): Promise<ActionResult<TransitionSummary>> {
+export async function submitRevisionAction(
+  _previous: ActionResult<TransitionSummary> | null,
+  formData: FormData,
+): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "designer" });
   const parsed = submitRevisionSchema.safeParse(fields(formData));
   if (!parsed.success) return invalid(parsed.error);
   return finish(viewer, await submitRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function approveRevisionAction(_previous: ActionResult<TransitionSummary> | null, formData: FormData): Promise<ActionResult<TransitionSummary>> {
+export async function approveRevisionAction(
+  _previous: ActionResult<TransitionSummary> | null,
+  formData: FormData,
+): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "approver" });
   const parsed = approveRevisionSchema.safeParse(fields(formData));
   if (!parsed.success) return invalid(parsed.error);
   return finish(viewer, await approveRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function returnRevisionAction(_previous: ActionResult<TransitionSummary> | null, formData: FormData): Promise<ActionResult<TransitionSummary>> {
+export async function returnRevisionAction(
+  _previous: ActionResult<TransitionSummary> | null,
+  formData: FormData,
+): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "approver" });
   const parsed = returnRevisionSchema.safeParse(fields(formData));
   if (!parsed.success) return invalid(parsed.error);
   return finish(viewer, await returnRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function startNewRevisionAction(_previous: ActionResult<TransitionSummary> | null, formData: FormData): Promise<ActionResult<TransitionSummary>> {
+export async function startNewRevisionAction(
+  _previous: ActionResult<TransitionSummary> | null,
+  formData: FormData,
+): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "designer" });
   const parsed = startNewRevisionSchema.safeParse(fields(formData));
   if (!parsed.success) return invalid(parsed.error);
   return finish(viewer, await startNewRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function addCommentAction(_previous: ActionResult<CommentDto> | null, formData: FormData): Promise<ActionResult<CommentDto>> {
+export async function addCommentAction(
+  _previous: ActionResult<CommentDto> | null,
+  formData: FormData,
+): Promise<ActionResult<CommentDto>> {
   const viewer = await requireViewer();
   const parsed = addCommentSchema.safeParse(fields(formData));
   if (!parsed.success) return invalid(parsed.error);

@@ -3,6 +3,9 @@ export const DESK_LISTS_KEY = "/api/v1/desk";
 /** How often the desk lists poll, ms: new submissions appear without a reload. */
 export const DESK_REFRESH_MS = 3000;
 
-export const revisionPath = (designId: string, number: number): string => `/designs/${designId}/revisions/${number}`;
-export const comparePath = (designId: string, from: number, to: number): string => `/designs/${designId}/compare?from=${from}&to=${to}`;
-export const revisionApiPath = (designId: string, number: number): string => `/api/v1/designs/${designId}/revisions/${number}`;
+export const revisionPath = (designId: string, number: number): string =>
+  `/designs/${designId}/revisions/${number}`;
+export const comparePath = (designId: string, from: number, to: number): string =>
+  `/designs/${designId}/compare?from=${from}&to=${to}`;
+export const revisionApiPath = (designId: string, number: number): string =>
+  `/api/v1/designs/${designId}/revisions/${number}`;

@@ -1,4 +1,9 @@
-import { decideTransition, isEditableStatus, type ReviewActor, type RevisionFacts } from "./model/review-states";
+import {
+  decideTransition,
+  isEditableStatus,
+  type ReviewActor,
+  type RevisionFacts,
+} from "./model/review-states";
 
 // Who may do what on a revision. The server enforces these inside the transaction that locks the
 // revision (queries.ts); components call the same predicates only to hide buttons.
@@ -20,5 +25,7 @@ export const canStartNewRevision = (actor: ReviewActor, revision: RevisionFacts)
 export const canCommentOnRevision = (actor: ReviewActor): boolean => actor.roles.length > 0;
 
 /** Whether the design's save path may write this revision (designers, Draft or Returned only). */
-export const canEditRevision = (actor: ReviewActor, revision: Pick<RevisionFacts, "status" | "isWorking">): boolean =>
-  actor.roles.includes("designer") && revision.isWorking && isEditableStatus(revision.status);
+export const canEditRevision = (
+  actor: ReviewActor,
+  revision: Pick<RevisionFacts, "status" | "isWorking">,
+): boolean => actor.roles.includes("designer") && revision.isWorking && isEditableStatus(revision.status);

@@ -6,22 +6,54 @@ import { verifySnapshot, type SnapshotIntegrity } from "./model/content-hash";
 import { isFrozenStatus, type ReviewActor, type RevisionFacts } from "./model/review-states";
 import { readChecks } from "./model/review-checks";
 import { diffDocuments, listBoltMoves, listCheckChanges } from "./model/compare-revisions";
-import { canApproveRevision, canCommentOnRevision, canEditRevision, canReturnRevision, canStartNewRevision, canSubmitRevision } from "./policies";
+import {
+  canApproveRevision,
+  canCommentOnRevision,
+  canEditRevision,
+  canReturnRevision,
+  canStartNewRevision,
+  canSubmitRevision,
+} from "./policies";
 import { revisionPath } from "./cache-keys";
-import type { CommentDto, DecisionDto, DeskItemDto, DeskListsDto, JustificationDto, RevisionComparisonDto, RevisionReviewDto, RevisionSummaryDto } from "./review-dto";
+import type {
+  CommentDto,
+  DecisionDto,
+  DeskItemDto,
+  DeskListsDto,
+  JustificationDto,
+  RevisionComparisonDto,
+  RevisionReviewDto,
+  RevisionSummaryDto,
+} from "./review-dto";
 
 // Reads of the review feature. Every query filters by the viewer's organisation: another
 // organisation's revision is simply not found. Frozen snapshots are re-hashed on every read.
 // Typed loosely on purpose: the designs tables declare timestamps as Generated<ColumnType<…>>.
-const iso = (value: unknown): string | null => (value === null || value === undefined ? null : new Date(value as string).toISOString());
+const iso = (value: unknown): string | null =>
+  value === null || value === undefined ? null : new Date(value as string).toISOString();
 
 /** The integrity of a stored revision: recomputed for In review / Approved, "not-frozen" otherwise. */
-export function integrityOf(row: { status: RevisionFacts["status"]; document: unknown; result: unknown; core_version: string | null; content_hash: string | null }): SnapshotIntegrity {
+export function integrityOf(row: {
+  status: RevisionFacts["status"];
+  document: unknown;
+  result: unknown;
+  core_version: string | null;
+  content_hash: string | null;
+}): SnapshotIntegrity {
   if (!isFrozenStatus(row.status)) return { state: "not-frozen" };
-  return verifySnapshot({ document: row.document, result: row.result, coreVersion: row.core_version, contentHash: row.content_hash });
+  return verifySnapshot({
+    document: row.document,
+    result: row.result,
+    coreVersion: row.core_version,
+    contentHash: row.content_hash,
+  });
 }
 
-export async function listComments(db: Kysely<Database>, organizationId: string, revisionId: string): Promise<CommentDto[]> {
+export async function listComments(
+  db: Kysely<Database>,
+  organizationId: string,
+  revisionId: string,
+): Promise<CommentDto[]> {
   const rows = await db
     .selectFrom("revision_comments as c")
     .innerJoin("users as u", "u.id", "c.author_id")
@@ -31,11 +63,22 @@ export async function listComments(db: Kysely<Database>, organizationId: string,
     .orderBy("c.created_at")
     .orderBy("c.id")
     .execute();
-  return rows.map((r) => ({ id: r.id, authorName: r.display_name, body: r.body, targetKind: r.target_kind, targetId: r.target_id, at: iso(r.created_at)! }));
+  return rows.map((r) => ({
+    id: r.id,
+    authorName: r.display_name,
+    body: r.body,
+    targetKind: r.target_kind,
+    targetId: r.target_id,
+    at: iso(r.created_at)!,
+  }));
 }
 
 /** The written justifications of warn/fail checks recorded with an approval (the PDF prints these). */
-export async function listJustifications(db: Kysely<Database>, organizationId: string, revisionId: string): Promise<JustificationDto[]> {
+export async function listJustifications(
+  db: Kysely<Database>,
+  organizationId: string,
+  revisionId: string,
+): Promise<JustificationDto[]> {
   const rows = await db
     .selectFrom("revision_justifications as j")
     .innerJoin("users as u", "u.id", "j.author_id")
@@ -44,10 +87,20 @@ export async function listJustifications(db: Kysely<Database>, organizationId: s
     .where("j.revision_id", "=", revisionId)
     .orderBy("j.check_id")
     .execute();
-  return rows.map((r) => ({ checkId: r.check_id, checkStatus: r.check_status, text: r.text, authorName: r.display_name, at: iso(r.created_at)! }));
+  return rows.map((r) => ({
+    checkId: r.check_id,
+    checkStatus: r.check_status,
+    text: r.text,
+    authorName: r.display_name,
+    at: iso(r.created_at)!,
+  }));
 }
 
-export async function listDecisions(db: Kysely<Database>, organizationId: string, revisionId: string): Promise<DecisionDto[]> {
+export async function listDecisions(
+  db: Kysely<Database>,
+  organizationId: string,
+  revisionId: string,
+): Promise<DecisionDto[]> {
   const rows = await db
     .selectFrom("revision_decisions as d")
     .innerJoin("users as u", "u.id", "d.actor_id")
@@ -56,10 +109,19 @@ export async function listDecisions(db: Kysely<Database>, organizationId: string
     .where("d.revision_id", "=", revisionId)
     .orderBy("d.created_at")
     .execute();
-  return rows.map((r) => ({ kind: r.kind, actorName: r.display_name, comment: r.comment, at: iso(r.created_at)! }));
+  return rows.map((r) => ({
+    kind: r.kind,
+    actorName: r.display_name,
+    comment: r.comment,
+    at: iso(r.created_at)!,
+  }));
 }
 
-export async function listRevisionSummaries(db: Kysely<Database>, organizationId: string, designId: string): Promise<RevisionSummaryDto[]> {
+export async function listRevisionSummaries(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+): Promise<RevisionSummaryDto[]> {
   const rows = await db
     .selectFrom("design_revisions")
     .select(["number", "status", "content_hash", "submitted_at", "decided_at", "updated_at"])
@@ -67,10 +129,22 @@ export async function listRevisionSummaries(db: Kysely<Database>, organizationId
     .where("design_id", "=", designId)
     .orderBy("number")
     .execute();
-  return rows.map((r) => ({ number: r.number, status: r.status, contentHash: r.content_hash, submittedAt: iso(r.submitted_at), decidedAt: iso(r.decided_at), updatedAt: iso(r.updated_at)! }));
+  return rows.map((r) => ({
+    number: r.number,
+    status: r.status,
+    contentHash: r.content_hash,
+    submittedAt: iso(r.submitted_at),
+    decidedAt: iso(r.decided_at),
+    updatedAt: iso(r.updated_at)!,
+  }));
 }
 
-async function findRevisionRow(db: Kysely<Database>, organizationId: string, designId: string, number: number) {
+async function findRevisionRow(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+  number: number,
+) {
   return db
     .selectFrom("design_revisions as r")
     .innerJoin("designs as d", "d.id", "r.design_id")
@@ -79,11 +153,26 @@ async function findRevisionRow(db: Kysely<Database>, organizationId: string, des
     .leftJoin("users as submitter", "submitter.id", "r.submitted_by")
     .leftJoin("users as decider", "decider.id", "r.decided_by")
     .select([
-      "r.id", "r.design_id", "r.number", "r.status", "r.version", "r.document", "r.result", "r.core_version", "r.content_hash",
-      "r.created_by", "r.last_edited_by", "r.submitted_by", "r.submitted_at", "r.decided_at",
-      "d.name as design_name", "d.equipment_tag",
-      "creator.display_name as creator_name", "editor.display_name as editor_name",
-      "submitter.display_name as submitter_name", "decider.display_name as decider_name",
+      "r.id",
+      "r.design_id",
+      "r.number",
+      "r.status",
+      "r.version",
+      "r.document",
+      "r.result",
+      "r.core_version",
+      "r.content_hash",
+      "r.created_by",
+      "r.last_edited_by",
+      "r.submitted_by",
+      "r.submitted_at",
+      "r.decided_at",
+      "d.name as design_name",
+      "d.equipment_tag",
+      "creator.display_name as creator_name",
+      "editor.display_name as editor_name",
+      "submitter.display_name as submitter_name",
+      "decider.display_name as decider_name",
     ])
     .where("r.organization_id", "=", organizationId)
     .where("d.organization_id", "=", organizationId)
@@ -103,7 +192,10 @@ export async function getRevisionReview(
   if (!row) return undefined;
   const numbers = (await listRevisionSummaries(db, viewer.organizationId, designId)).map((r) => r.number);
   const facts: RevisionFacts = {
-    status: row.status, createdBy: row.created_by, lastEditedBy: row.last_edited_by, submittedBy: row.submitted_by,
+    status: row.status,
+    createdBy: row.created_by,
+    lastEditedBy: row.last_edited_by,
+    submittedBy: row.submitted_by,
     isWorking: numbers.at(-1) === row.number,
   };
   const [comments, justifications, decisions] = await Promise.all([
@@ -147,8 +239,17 @@ export async function getRevisionReview(
 }
 
 /** Side-by-side comparison of two revisions of one design; undefined when either is missing. */
-export async function compareRevisions(db: Kysely<Database>, organizationId: string, designId: string, from: number, to: number): Promise<RevisionComparisonDto | undefined> {
-  const [a, b] = await Promise.all([findRevisionRow(db, organizationId, designId, from), findRevisionRow(db, organizationId, designId, to)]);
+export async function compareRevisions(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+  from: number,
+  to: number,
+): Promise<RevisionComparisonDto | undefined> {
+  const [a, b] = await Promise.all([
+    findRevisionRow(db, organizationId, designId, from),
+    findRevisionRow(db, organizationId, designId, to),
+  ]);
   if (!a || !b) return undefined;
   const numbers = (await listRevisionSummaries(db, organizationId, designId)).map((r) => r.number);
   return {
@@ -168,7 +269,10 @@ export async function compareRevisions(db: Kysely<Database>, organizationId: str
  * viewer (an approver) did not create, last edit or submit. "Returned to me": Returned revisions the
  * viewer created, last edited or submitted.
  */
-export async function getDeskLists(db: Kysely<Database>, viewer: ReviewActor & { organizationId: string }): Promise<DeskListsDto> {
+export async function getDeskLists(
+  db: Kysely<Database>,
+  viewer: ReviewActor & { organizationId: string },
+): Promise<DeskListsDto> {
   const isApprover = viewer.roles.includes("approver");
   const me = viewer.userId;
   const base = db
@@ -181,7 +285,14 @@ export async function getDeskLists(db: Kysely<Database>, viewer: ReviewActor & {
   const waiting = isApprover
     ? await base
         .leftJoin("users as s", "s.id", "r.submitted_by")
-        .select(["r.design_id", "r.number", "r.submitted_at as at", "d.name", "d.equipment_tag", "s.display_name as person"])
+        .select([
+          "r.design_id",
+          "r.number",
+          "r.submitted_at as at",
+          "d.name",
+          "d.equipment_tag",
+          "s.display_name as person",
+        ])
         .where("r.status", "=", "in_review")
         .where("r.created_by", "<>", me)
         .where("r.last_edited_by", "<>", me)
@@ -194,7 +305,12 @@ export async function getDeskLists(db: Kysely<Database>, viewer: ReviewActor & {
   const returned = await base
     .leftJoin("users as x", "x.id", "r.decided_by")
     .select((eb) => [
-      "r.design_id", "r.number", "r.decided_at as at", "d.name", "d.equipment_tag", "x.display_name as person",
+      "r.design_id",
+      "r.number",
+      "r.decided_at as at",
+      "d.name",
+      "d.equipment_tag",
+      "x.display_name as person",
       eb
         .selectFrom("revision_decisions as rd")
         .select("rd.comment")
@@ -205,12 +321,22 @@ export async function getDeskLists(db: Kysely<Database>, viewer: ReviewActor & {
         .as("comment"),
     ])
     .where("r.status", "=", "returned")
-    .where((eb) => eb.or([eb("r.created_by", "=", me), eb("r.last_edited_by", "=", me), eb("r.submitted_by", "=", me)]))
+    .where((eb) =>
+      eb.or([eb("r.created_by", "=", me), eb("r.last_edited_by", "=", me), eb("r.submitted_by", "=", me)]),
+    )
     .orderBy("r.decided_at", "desc")
     .limit(50)
     .execute();
 
-  const item = (r: { design_id: string; number: number; at: unknown; name: string; equipment_tag: string; person: string | null; comment?: string | null }): DeskItemDto => ({
+  const item = (r: {
+    design_id: string;
+    number: number;
+    at: unknown;
+    name: string;
+    equipment_tag: string;
+    person: string | null;
+    comment?: string | null;
+  }): DeskItemDto => ({
     designId: r.design_id,
     designName: r.name,
     equipmentTag: r.equipment_tag,
@@ -224,7 +350,11 @@ export async function getDeskLists(db: Kysely<Database>, viewer: ReviewActor & {
 }
 
 /** Contacts for review mail: active approvers of the organisation, minus `exceptUserId`. */
-export async function listApproverContacts(db: Kysely<Database>, organizationId: string, exceptUserId: string): Promise<{ email: string; displayName: string }[]> {
+export async function listApproverContacts(
+  db: Kysely<Database>,
+  organizationId: string,
+  exceptUserId: string,
+): Promise<{ email: string; displayName: string }[]> {
   return db
     .selectFrom("memberships as m")
     .innerJoin("users as u", "u.id", "m.user_id")
@@ -237,7 +367,15 @@ export async function listApproverContacts(db: Kysely<Database>, organizationId:
     .execute();
 }
 
-export async function listUserContacts(db: Kysely<Database>, userIds: string[]): Promise<{ id: string; email: string; displayName: string }[]> {
+export async function listUserContacts(
+  db: Kysely<Database>,
+  userIds: string[],
+): Promise<{ id: string; email: string; displayName: string }[]> {
   if (userIds.length === 0) return [];
-  return db.selectFrom("users").select(["id", "email", "display_name as displayName"]).where("id", "in", userIds).where("disabled_at", "is", null).execute();
+  return db
+    .selectFrom("users")
+    .select(["id", "email", "display_name as displayName"])
+    .where("id", "in", userIds)
+    .where("disabled_at", "is", null)
+    .execute();
 }

@@ -15,7 +15,11 @@ export type SubmitRevisionInput = z.infer<typeof submitRevisionSchema>;
 
 export const returnRevisionSchema = z.object({
   ...revisionRef,
-  comment: z.string().trim().min(1, "Say what needs to change: a returned revision needs a comment.").max(5000, "Keep the comment under 5000 characters."),
+  comment: z
+    .string()
+    .trim()
+    .min(1, "Say what needs to change: a returned revision needs a comment.")
+    .max(5000, "Keep the comment under 5000 characters."),
 });
 export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
 
@@ -23,7 +27,12 @@ export const approveRevisionSchema = z.object({
   ...revisionRef,
   comment: z.string().trim().max(5000, "Keep the comment under 5000 characters.").default(""),
   /** check id → written justification, for every check that is warn or fail. */
-  justifications: z.record(z.string().min(1).max(200), z.string().trim().max(5000, "Keep each justification under 5000 characters.")).default({}),
+  justifications: z
+    .record(
+      z.string().min(1).max(200),
+      z.string().trim().max(5000, "Keep each justification under 5000 characters."),
+    )
+    .default({}),
 });
 export type ApproveRevisionInput = z.infer<typeof approveRevisionSchema>;
 
@@ -33,7 +42,11 @@ export type StartNewRevisionInput = z.infer<typeof startNewRevisionSchema>;
 export const addCommentSchema = z
   .object({
     ...revisionRef,
-    body: z.string().trim().min(1, "Write a comment first.").max(5000, "Keep the comment under 5000 characters."),
+    body: z
+      .string()
+      .trim()
+      .min(1, "Write a comment first.")
+      .max(5000, "Keep the comment under 5000 characters."),
     targetKind: z.enum(["bolt", "check"]).nullable().default(null),
     targetId: z.string().trim().max(200).nullable().default(null),
   })

@@ -8,10 +8,22 @@ import { formatIssue, validateJointDesign } from "@/features/analysis/core/valid
 import { recordActivity } from "@/features/activity/queries";
 import type { ActionResult } from "@/server/action-result";
 import { computeContentHash, verifySnapshot } from "./model/content-hash";
-import { decideTransition, type ReviewActor, type ReviewCommand, type ReviewStatus, type RevisionFacts } from "./model/review-states";
+import {
+  decideTransition,
+  type ReviewActor,
+  type ReviewCommand,
+  type ReviewStatus,
+  type RevisionFacts,
+} from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
 import type { CommentDto } from "./review-dto";
-import type { AddCommentInput, ApproveRevisionInput, ReturnRevisionInput, StartNewRevisionInput, SubmitRevisionInput } from "./schema";
+import type {
+  AddCommentInput,
+  ApproveRevisionInput,
+  ReturnRevisionInput,
+  StartNewRevisionInput,
+  SubmitRevisionInput,
+} from "./schema";
 
 // Every review transition runs in ONE transaction that first takes the revision's row lock
 // (select … for update). A second approver acting at the same moment waits for the lock, then
@@ -35,16 +47,36 @@ export interface TransitionOutcome {
 }
 
 type Refusal = Extract<ActionResult, { ok: false }>;
-const refused = (message: string, fieldErrors?: Record<string, string[]>): Refusal => ({ ok: false, message, ...(fieldErrors ? { fieldErrors } : {}) });
+const refused = (message: string, fieldErrors?: Record<string, string[]>): Refusal => ({
+  ok: false,
+  message,
+  ...(fieldErrors ? { fieldErrors } : {}),
+});
 
 /** Locks one revision of a design of the organisation; undefined when it is not theirs or missing. */
-export async function lockRevisionForUpdate(trx: Transaction<Database>, organizationId: string, designId: string, number: number) {
+export async function lockRevisionForUpdate(
+  trx: Transaction<Database>,
+  organizationId: string,
+  designId: string,
+  number: number,
+) {
   const row = await trx
     .selectFrom("design_revisions as r")
     .innerJoin("designs as d", "d.id", "r.design_id")
     .select([
-      "r.id", "r.design_id", "r.number", "r.status", "r.document", "r.result", "r.core_version", "r.content_hash",
-      "r.version", "r.created_by", "r.last_edited_by", "r.submitted_by", "d.name as design_name",
+      "r.id",
+      "r.design_id",
+      "r.number",
+      "r.status",
+      "r.document",
+      "r.result",
+      "r.core_version",
+      "r.content_hash",
+      "r.version",
+      "r.created_by",
+      "r.last_edited_by",
+      "r.submitted_by",
+      "d.name as design_name",
     ])
     .where("r.organization_id", "=", organizationId)
     .where("d.organization_id", "=", organizationId)
@@ -86,24 +118,57 @@ async function withLockedRevision<T>(
   });
 }
 
-function outcomeOf(revision: LockedRevision, status: ReviewStatus, actor: TransitionActor, comment = "", revisionId = revision.id, number = revision.number): TransitionOutcome {
-  const designerIds = [...new Set([revision.created_by, revision.last_edited_by, revision.submitted_by].filter((x): x is string => !!x))];
-  return { designId: revision.design_id, designName: revision.design_name, revisionId, number, status, designerIds, actorId: actor.userId, comment };
+function outcomeOf(
+  revision: LockedRevision,
+  status: ReviewStatus,
+  actor: TransitionActor,
+  comment = "",
+  revisionId = revision.id,
+  number = revision.number,
+): TransitionOutcome {
+  const designerIds = [
+    ...new Set(
+      [revision.created_by, revision.last_edited_by, revision.submitted_by].filter((x): x is string => !!x),
+    ),
+  ];
+  return {
+    designId: revision.design_id,
+    designName: revision.design_name,
+    revisionId,
+    number,
+    status,
+    designerIds,
+    actorId: actor.userId,
+    comment,
+  };
 }
 
 async function touchDesign(trx: Transaction<Database>, designId: string): Promise<void> {
-  await trx.updateTable("designs").set({ updated_at: sql`now()` }).where("id", "=", designId).execute();
+  await trx
+    .updateTable("designs")
+    .set({ updated_at: sql`now()` })
+    .where("id", "=", designId)
+    .execute();
 }
 
 /** Draft or Returned → In review: recomputes the result on the server and freezes the snapshot. */
-export async function submitRevision(db: Kysely<Database>, actor: TransitionActor, input: SubmitRevisionInput): Promise<ActionResult<TransitionOutcome>> {
+export async function submitRevision(
+  db: Kysely<Database>,
+  actor: TransitionActor,
+  input: SubmitRevisionInput,
+): Promise<ActionResult<TransitionOutcome>> {
   return withLockedRevision(db, actor, input, "submit", async (trx, revision) => {
     if (input.baseVersion !== undefined && input.baseVersion !== revision.version) {
-      return refused(`This revision was saved again since you opened it (version ${revision.version}, you had ${input.baseVersion}). Reload and check the latest version before submitting.`);
+      return refused(
+        `This revision was saved again since you opened it (version ${revision.version}, you had ${input.baseVersion}). Reload and check the latest version before submitting.`,
+      );
     }
     const document = revision.document as JointDesign;
     const issues = validateJointDesign(document);
-    if (issues.length > 0) return refused(`The design has problems to fix before it can be submitted: ${issues.slice(0, 5).map(formatIssue).join("; ")}.`);
+    if (issues.length > 0)
+      return refused(
+        `The design has problems to fix before it can be submitted: ${issues.slice(0, 5).map(formatIssue).join("; ")}.`,
+      );
     // Round-trip through JSON so the hash covers exactly what jsonb will store and return.
     const result: unknown = JSON.parse(JSON.stringify(analyzeJoint(document)));
     const contentHash = computeContentHash({ document, result, coreVersion: CORE_VERSION });
@@ -125,103 +190,197 @@ export async function submitRevision(db: Kysely<Database>, actor: TransitionActo
       .execute();
     await touchDesign(trx, revision.design_id);
     await recordActivity(trx, {
-      organizationId: actor.organizationId, designId: revision.design_id, revisionId: revision.id, actorId: actor.userId,
-      kind: "submitted", detail: revision.status === "returned" ? "resubmitted after changes" : "",
+      organizationId: actor.organizationId,
+      designId: revision.design_id,
+      revisionId: revision.id,
+      actorId: actor.userId,
+      kind: "submitted",
+      detail: revision.status === "returned" ? "resubmitted after changes" : "",
     });
     return { ok: true, data: { ...outcomeOf(revision, "in_review", actor), designerIds: [actor.userId] } };
   });
 }
 
 /** In review → Approved. Needs independence, an intact snapshot and a justification per warn/fail. */
-export async function approveRevision(db: Kysely<Database>, actor: TransitionActor, input: ApproveRevisionInput): Promise<ActionResult<TransitionOutcome>> {
+export async function approveRevision(
+  db: Kysely<Database>,
+  actor: TransitionActor,
+  input: ApproveRevisionInput,
+): Promise<ActionResult<TransitionOutcome>> {
   return withLockedRevision(db, actor, input, "approve", async (trx, revision) => {
-    const integrity = verifySnapshot({ document: revision.document, result: revision.result, coreVersion: revision.core_version, contentHash: revision.content_hash });
+    const integrity = verifySnapshot({
+      document: revision.document,
+      result: revision.result,
+      coreVersion: revision.core_version,
+      contentHash: revision.content_hash,
+    });
     if (integrity.state !== "intact") {
-      return refused("The stored snapshot does not match its content hash, so it cannot be approved. Return it so the designer resubmits.");
+      return refused(
+        "The stored snapshot does not match its content hash, so it cannot be approved. Return it so the designer resubmits.",
+      );
     }
     const checks = readChecks(revision.result);
     const missing = missingJustifications(checks, input.justifications);
     if (missing.length > 0) {
-      const fieldErrors = Object.fromEntries(missing.map((id) => [`justifications.${id}`, ["Write why this warning or failure is acceptable."]]));
-      return refused(`Every check that warns or fails needs a written justification before approval (${missing.join(", ")}).`, fieldErrors);
+      const fieldErrors = Object.fromEntries(
+        missing.map((id) => [`justifications.${id}`, ["Write why this warning or failure is acceptable."]]),
+      );
+      return refused(
+        `Every check that warns or fails needs a written justification before approval (${missing.join(", ")}).`,
+        fieldErrors,
+      );
     }
     const needing = checks.filter((c) => c.status === "warn" || c.status === "fail");
     if (needing.length > 0) {
       await trx
         .insertInto("revision_justifications")
-        .values(needing.map((c) => ({
-          revision_id: revision.id, organization_id: actor.organizationId, check_id: c.id,
-          check_status: c.status as "warn" | "fail", text: input.justifications[c.id]!.trim(), author_id: actor.userId,
-        })))
+        .values(
+          needing.map((c) => ({
+            revision_id: revision.id,
+            organization_id: actor.organizationId,
+            check_id: c.id,
+            check_status: c.status as "warn" | "fail",
+            text: input.justifications[c.id]!.trim(),
+            author_id: actor.userId,
+          })),
+        )
         .execute();
     }
     await trx
       .insertInto("revision_decisions")
-      .values({ revision_id: revision.id, organization_id: actor.organizationId, kind: "approved", actor_id: actor.userId, comment: input.comment, content_hash: integrity.storedHash })
+      .values({
+        revision_id: revision.id,
+        organization_id: actor.organizationId,
+        kind: "approved",
+        actor_id: actor.userId,
+        comment: input.comment,
+        content_hash: integrity.storedHash,
+      })
       .execute();
     await trx
       .updateTable("design_revisions")
-      .set({ status: "approved", decided_by: actor.userId, decided_at: sql`now()`, version: sql`version + 1`, updated_at: sql`now()` })
+      .set({
+        status: "approved",
+        decided_by: actor.userId,
+        decided_at: sql`now()`,
+        version: sql`version + 1`,
+        updated_at: sql`now()`,
+      })
       .where("id", "=", revision.id)
       .execute();
     await touchDesign(trx, revision.design_id);
     await recordActivity(trx, {
-      organizationId: actor.organizationId, designId: revision.design_id, revisionId: revision.id, actorId: actor.userId, kind: "approved",
-      detail: needing.length > 0 ? `with ${needing.length} justified check${needing.length === 1 ? "" : "s"}` : "",
+      organizationId: actor.organizationId,
+      designId: revision.design_id,
+      revisionId: revision.id,
+      actorId: actor.userId,
+      kind: "approved",
+      detail:
+        needing.length > 0 ? `with ${needing.length} justified check${needing.length === 1 ? "" : "s"}` : "",
     });
     return { ok: true, data: outcomeOf(revision, "approved", actor, input.comment) };
   });
 }
 
 /** In review → Returned, with a required comment (also posted to the revision's thread). */
-export async function returnRevision(db: Kysely<Database>, actor: TransitionActor, input: ReturnRevisionInput): Promise<ActionResult<TransitionOutcome>> {
+export async function returnRevision(
+  db: Kysely<Database>,
+  actor: TransitionActor,
+  input: ReturnRevisionInput,
+): Promise<ActionResult<TransitionOutcome>> {
   const comment = input.comment.trim();
-  if (!comment) return refused("Say what needs to change: a returned revision needs a comment.", { comment: ["A returned revision needs a comment."] });
+  if (!comment)
+    return refused("Say what needs to change: a returned revision needs a comment.", {
+      comment: ["A returned revision needs a comment."],
+    });
   return withLockedRevision(db, actor, input, "return", async (trx, revision) => {
     await trx
       .insertInto("revision_decisions")
-      .values({ revision_id: revision.id, organization_id: actor.organizationId, kind: "returned", actor_id: actor.userId, comment, content_hash: revision.content_hash ?? "" })
+      .values({
+        revision_id: revision.id,
+        organization_id: actor.organizationId,
+        kind: "returned",
+        actor_id: actor.userId,
+        comment,
+        content_hash: revision.content_hash ?? "",
+      })
       .execute();
     await trx
       .insertInto("revision_comments")
-      .values({ revision_id: revision.id, organization_id: actor.organizationId, author_id: actor.userId, body: `Returned: ${comment}` })
+      .values({
+        revision_id: revision.id,
+        organization_id: actor.organizationId,
+        author_id: actor.userId,
+        body: `Returned: ${comment}`,
+      })
       .execute();
     await trx
       .updateTable("design_revisions")
-      .set({ status: "returned", decided_by: actor.userId, decided_at: sql`now()`, version: sql`version + 1`, updated_at: sql`now()` })
+      .set({
+        status: "returned",
+        decided_by: actor.userId,
+        decided_at: sql`now()`,
+        version: sql`version + 1`,
+        updated_at: sql`now()`,
+      })
       .where("id", "=", revision.id)
       .execute();
     await touchDesign(trx, revision.design_id);
     await recordActivity(trx, {
-      organizationId: actor.organizationId, designId: revision.design_id, revisionId: revision.id, actorId: actor.userId, kind: "returned", detail: comment.slice(0, 200),
+      organizationId: actor.organizationId,
+      designId: revision.design_id,
+      revisionId: revision.id,
+      actorId: actor.userId,
+      kind: "returned",
+      detail: comment.slice(0, 200),
     });
     return { ok: true, data: outcomeOf(revision, "returned", actor, comment) };
   });
 }
 
 /** From the Approved working revision: revision number + 1 as a Draft copy of its document. */
-export async function startNewRevision(db: Kysely<Database>, actor: TransitionActor, input: StartNewRevisionInput): Promise<ActionResult<TransitionOutcome>> {
+export async function startNewRevision(
+  db: Kysely<Database>,
+  actor: TransitionActor,
+  input: StartNewRevisionInput,
+): Promise<ActionResult<TransitionOutcome>> {
   return withLockedRevision(db, actor, input, "start-new-revision", async (trx, revision) => {
     const number = revision.number + 1;
     const created = await trx
       .insertInto("design_revisions")
       .values({
-        design_id: revision.design_id, organization_id: actor.organizationId, number, status: "draft",
-        document: JSON.stringify(revision.document), result: revision.result === null ? null : JSON.stringify(revision.result),
-        core_version: revision.core_version, content_hash: null, created_by: actor.userId, last_edited_by: actor.userId,
+        design_id: revision.design_id,
+        organization_id: actor.organizationId,
+        number,
+        status: "draft",
+        document: JSON.stringify(revision.document),
+        result: revision.result === null ? null : JSON.stringify(revision.result),
+        core_version: revision.core_version,
+        content_hash: null,
+        created_by: actor.userId,
+        last_edited_by: actor.userId,
       })
       .returning("id")
       .executeTakeFirstOrThrow();
     await touchDesign(trx, revision.design_id);
     await recordActivity(trx, {
-      organizationId: actor.organizationId, designId: revision.design_id, revisionId: created.id, actorId: actor.userId, kind: "new-revision", detail: `from approved revision ${revision.number}`,
+      organizationId: actor.organizationId,
+      designId: revision.design_id,
+      revisionId: created.id,
+      actorId: actor.userId,
+      kind: "new-revision",
+      detail: `from approved revision ${revision.number}`,
     });
     return { ok: true, data: outcomeOf(revision, "draft", actor, "", created.id, number) };
   });
 }
 
 /** Adds a comment to a revision's thread; a target must exist in that revision (bolt id or check id). */
-export async function addComment(db: Kysely<Database>, actor: TransitionActor, input: AddCommentInput): Promise<ActionResult<CommentDto>> {
+export async function addComment(
+  db: Kysely<Database>,
+  actor: TransitionActor,
+  input: AddCommentInput,
+): Promise<ActionResult<CommentDto>> {
   return db.transaction().execute(async (trx) => {
     const revision = await trx
       .selectFrom("design_revisions")
@@ -232,25 +391,52 @@ export async function addComment(db: Kysely<Database>, actor: TransitionActor, i
       .executeTakeFirst();
     if (!revision) return refused("That revision does not exist in this organisation.");
     const targetId = input.targetKind ? (input.targetId ?? "").trim() : null;
-    if (input.targetKind === "bolt" && !(revision.document as JointDesign).bolts.some((b) => b.id === targetId)) {
+    if (
+      input.targetKind === "bolt" &&
+      !(revision.document as JointDesign).bolts.some((b) => b.id === targetId)
+    ) {
       return refused("That bolt is not in this revision.", { targetId: ["Choose a bolt of this revision."] });
     }
     if (input.targetKind === "check" && !readChecks(revision.result).some((c) => c.id === targetId)) {
-      return refused("That check is not in this revision's result.", { targetId: ["Choose a check of this revision."] });
+      return refused("That check is not in this revision's result.", {
+        targetId: ["Choose a check of this revision."],
+      });
     }
     const row = await trx
       .insertInto("revision_comments")
-      .values({ revision_id: revision.id, organization_id: actor.organizationId, author_id: actor.userId, body: input.body.trim(), target_kind: input.targetKind, target_id: targetId })
+      .values({
+        revision_id: revision.id,
+        organization_id: actor.organizationId,
+        author_id: actor.userId,
+        body: input.body.trim(),
+        target_kind: input.targetKind,
+        target_id: targetId,
+      })
       .returning(["id", "created_at"])
       .executeTakeFirstOrThrow();
-    const author = await trx.selectFrom("users").select("display_name").where("id", "=", actor.userId).executeTakeFirstOrThrow();
+    const author = await trx
+      .selectFrom("users")
+      .select("display_name")
+      .where("id", "=", actor.userId)
+      .executeTakeFirstOrThrow();
     await recordActivity(trx, {
-      organizationId: actor.organizationId, designId: revision.design_id, revisionId: revision.id, actorId: actor.userId, kind: "commented",
+      organizationId: actor.organizationId,
+      designId: revision.design_id,
+      revisionId: revision.id,
+      actorId: actor.userId,
+      kind: "commented",
       detail: targetId ? `on ${input.targetKind} ${targetId}` : "",
     });
     return {
       ok: true,
-      data: { id: row.id, authorName: author.display_name, body: input.body.trim(), targetKind: input.targetKind, targetId, at: new Date(row.created_at).toISOString() },
+      data: {
+        id: row.id,
+        authorName: author.display_name,
+        body: input.body.trim(),
+        targetKind: input.targetKind,
+        targetId,
+        at: new Date(row.created_at).toISOString(),
+      },
     };
   });
 }

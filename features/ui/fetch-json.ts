@@ -5,7 +5,9 @@ export async function fetchJson<T>(url: string, fallback: string | ((status: num
   const res = await fetch(url, { cache: "no-store" });
   if (!res.ok) {
     const body = (await res.json().catch(() => null)) as { error?: { message?: string } } | null;
-    throw new Error(body?.error?.message ?? (typeof fallback === "function" ? fallback(res.status) : fallback));
+    throw new Error(
+      body?.error?.message ?? (typeof fallback === "function" ? fallback(res.status) : fallback),
+    );
   }
   return res.json() as Promise<T>;
 }

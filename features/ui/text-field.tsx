@@ -7,7 +7,12 @@ export function TextField({
   errors,
   hint,
   ...input
-}: { label: string; name: string; errors?: string[]; hint?: string } & InputHTMLAttributes<HTMLInputElement>) {
+}: {
+  label: string;
+  name: string;
+  errors?: string[];
+  hint?: string;
+} & InputHTMLAttributes<HTMLInputElement>) {
   const id = `field-${name}`;
   const message = errors?.[0];
   return (

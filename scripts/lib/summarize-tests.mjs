@@ -13,7 +13,9 @@ if (existsSync(vitestPath)) {
   passed += report.numPassedTests ?? 0;
   failed += (report.numFailedTests ?? 0) + (report.numRuntimeErrorTestSuites ?? 0);
   skipped += (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0);
-  console.log(`vitest: ${report.numPassedTests} passed, ${report.numFailedTests} failed in ${report.numTotalTestSuites} suites`);
+  console.log(
+    `vitest: ${report.numPassedTests} passed, ${report.numFailedTests} failed in ${report.numTotalTestSuites} suites`,
+  );
 } else missing.push("vitest");
 
 if (playwrightPath === "--vitest-only") {
@@ -24,7 +26,9 @@ if (playwrightPath === "--vitest-only") {
   failed += stats.unexpected ?? 0;
   passed += stats.flaky ?? 0; // passed on its retry; listed above by the list reporter
   skipped += stats.skipped ?? 0;
-  console.log(`playwright: ${stats.expected ?? 0} passed, ${stats.unexpected ?? 0} failed, ${stats.flaky ?? 0} flaky`);
+  console.log(
+    `playwright: ${stats.expected ?? 0} passed, ${stats.unexpected ?? 0} failed, ${stats.flaky ?? 0} flaky`,
+  );
 } else missing.push("playwright");
 
 if (missing.length) {

@@ -17,10 +17,15 @@ export const DEMO_USERS: { email: string; displayName: string; roles: Role[] }[]
 
 /** Creates the demo organisation and its members when missing; never changes existing rows. */
 export async function seedAccounts(db: Kysely<Database>): Promise<{ organizationId: string }> {
-  const existing = await db.selectFrom("organizations").select("id").where("slug", "=", DEMO_ORGANIZATION.slug).executeTakeFirst();
+  const existing = await db
+    .selectFrom("organizations")
+    .select("id")
+    .where("slug", "=", DEMO_ORGANIZATION.slug)
+    .executeTakeFirst();
   const organizationId =
     existing?.id ??
-    (await db.insertInto("organizations").values(DEMO_ORGANIZATION).returning("id").executeTakeFirstOrThrow()).id;
+    (await db.insertInto("organizations").values(DEMO_ORGANIZATION).returning("id").executeTakeFirstOrThrow())
+      .id;
 
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   for (const user of DEMO_USERS) {
@@ -30,7 +35,10 @@ export async function seedAccounts(db: Kysely<Database>): Promise<{ organization
       .onConflict((oc) => oc.column("email").doNothing())
       .returning("id")
       .executeTakeFirst();
-    const userId = row?.id ?? (await db.selectFrom("users").select("id").where("email", "=", user.email).executeTakeFirstOrThrow()).id;
+    const userId =
+      row?.id ??
+      (await db.selectFrom("users").select("id").where("email", "=", user.email).executeTakeFirstOrThrow())
+        .id;
     await db
       .insertInto("memberships")
       .values({ organization_id: organizationId, user_id: userId, roles: user.roles })

@@ -16,17 +16,40 @@ export function equipmentTagFromName(name: string): string {
   return /\b[A-Z]{1,3}-\d{3,5}\b/.exec(name)?.[0] ?? "";
 }
 
-export async function seedDesigns(db: Kysely<Database>, organizationId: string): Promise<{ created: string[] }> {
-  const owner = await db.selectFrom("users").select("id").where("email", "=", OWNER_EMAIL).executeTakeFirstOrThrow();
+export async function seedDesigns(
+  db: Kysely<Database>,
+  organizationId: string,
+): Promise<{ created: string[] }> {
+  const owner = await db
+    .selectFrom("users")
+    .select("id")
+    .where("email", "=", OWNER_EMAIL)
+    .executeTakeFirstOrThrow();
   const files = (await readdir(EXAMPLES_DIR)).filter((f) => f.endsWith(".json")).sort();
   const created: string[] = [];
   for (const file of files) {
-    const parsed = jointDesignSchema.safeParse(JSON.parse(await readFile(path.join(EXAMPLES_DIR, file), "utf8")));
-    if (!parsed.success) throw new Error(`examples/${file} is not a valid design: ${formatDesignErrors(parsed.error).join("; ")}`);
+    const parsed = jointDesignSchema.safeParse(
+      JSON.parse(await readFile(path.join(EXAMPLES_DIR, file), "utf8")),
+    );
+    if (!parsed.success)
+      throw new Error(
+        `examples/${file} is not a valid design: ${formatDesignErrors(parsed.error).join("; ")}`,
+      );
     const document = parsed.data as Parameters<typeof createDesign>[1]["document"];
-    const exists = await db.selectFrom("designs").select("id").where("organization_id", "=", organizationId).where("name", "=", document.name).executeTakeFirst();
+    const exists = await db
+      .selectFrom("designs")
+      .select("id")
+      .where("organization_id", "=", organizationId)
+      .where("name", "=", document.name)
+      .executeTakeFirst();
     if (exists) continue;
-    await createDesign(db, { organizationId, ownerId: owner.id, name: document.name, equipmentTag: equipmentTagFromName(document.name), document });
+    await createDesign(db, {
+      organizationId,
+      ownerId: owner.id,
+      name: document.name,
+      equipmentTag: equipmentTagFromName(document.name),
+      document,
+    });
     created.push(document.name);
   }
   return { created };

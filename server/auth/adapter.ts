@@ -17,9 +17,19 @@ export interface UserRowAttributes {
   unit_system: UnitSystem;
 }
 
-const sessionColumns = ["sessions.id", "sessions.user_id", "sessions.expires_at", "sessions.active_organization_id"] as const;
+const sessionColumns = [
+  "sessions.id",
+  "sessions.user_id",
+  "sessions.expires_at",
+  "sessions.active_organization_id",
+] as const;
 
-function toDatabaseSession(row: { id: string; user_id: string; expires_at: Date; active_organization_id: string | null }): DatabaseSession {
+function toDatabaseSession(row: {
+  id: string;
+  user_id: string;
+  expires_at: Date;
+  active_organization_id: string | null;
+}): DatabaseSession {
   return {
     id: row.id,
     userId: row.user_id,
@@ -34,7 +44,13 @@ export function createKyselyAdapter(db: Kysely<Database>): Adapter {
       const row = await db
         .selectFrom("sessions")
         .innerJoin("users", "users.id", "sessions.user_id")
-        .select([...sessionColumns, "users.email", "users.display_name", "users.unit_system", "users.disabled_at"])
+        .select([
+          ...sessionColumns,
+          "users.email",
+          "users.display_name",
+          "users.unit_system",
+          "users.disabled_at",
+        ])
         .where("sessions.id", "=", sessionId)
         .executeTakeFirst();
       if (!row) return [null, null];
@@ -49,7 +65,11 @@ export function createKyselyAdapter(db: Kysely<Database>): Adapter {
     },
 
     async getUserSessions(userId) {
-      const rows = await db.selectFrom("sessions").select(sessionColumns).where("sessions.user_id", "=", userId).execute();
+      const rows = await db
+        .selectFrom("sessions")
+        .select(sessionColumns)
+        .where("sessions.user_id", "=", userId)
+        .execute();
       return rows.map(toDatabaseSession);
     },
 

@@ -36,7 +36,10 @@ export async function requireViewer(options?: { role?: Role | Role[] }): Promise
 }
 
 export function jsonError(status: number, message: string, fieldErrors?: Record<string, string[]>): Response {
-  return Response.json({ error: fieldErrors ? { message, fieldErrors } : { message } }, { status, headers: { "cache-control": "no-store" } });
+  return Response.json(
+    { error: fieldErrors ? { message, fieldErrors } : { message } },
+    { status, headers: { "cache-control": "no-store" } },
+  );
 }
 
 /** True when a state-changing request comes from our own origin (CSRF defence for route handlers). */

@@ -20,7 +20,12 @@ export const RATE_LIMITS = {
 } as const satisfies Record<string, RateLimit>;
 
 /** Minutes until the key may try again (0 when it may try now). */
-export async function minutesUntilAllowed(db: Kysely<Database>, limit: RateLimit, key: string, now = new Date()): Promise<number> {
+export async function minutesUntilAllowed(
+  db: Kysely<Database>,
+  limit: RateLimit,
+  key: string,
+  now = new Date(),
+): Promise<number> {
   const since = new Date(now.getTime() - limit.windowMinutes * 60_000);
   const row = await db
     .selectFrom("auth_attempts")
@@ -36,13 +41,20 @@ export async function minutesUntilAllowed(db: Kysely<Database>, limit: RateLimit
 }
 
 /** The longest wait over several limits (0 when all allow). */
-export async function minutesUntilAllowedAll(db: Kysely<Database>, checks: [RateLimit, string][], now = new Date()): Promise<number> {
+export async function minutesUntilAllowedAll(
+  db: Kysely<Database>,
+  checks: [RateLimit, string][],
+  now = new Date(),
+): Promise<number> {
   const waits = await Promise.all(checks.map(([limit, key]) => minutesUntilAllowed(db, limit, key, now)));
   return Math.max(0, ...waits);
 }
 
 export async function recordAttempts(db: Kysely<Database>, checks: [RateLimit, string][]): Promise<void> {
-  await db.insertInto("auth_attempts").values(checks.map(([limit, key]) => ({ kind: limit.kind, key }))).execute();
+  await db
+    .insertInto("auth_attempts")
+    .values(checks.map(([limit, key]) => ({ kind: limit.kind, key })))
+    .execute();
 }
 
 export async function clearAttempts(db: Kysely<Database>, limit: RateLimit, key: string): Promise<void> {
@@ -52,7 +64,10 @@ export async function clearAttempts(db: Kysely<Database>, limit: RateLimit, key:
 /** Drops rows older than every window (called opportunistically; no job needed). */
 export async function pruneAttempts(db: Kysely<Database>, now = new Date()): Promise<void> {
   const oldest = Math.max(...Object.values(RATE_LIMITS).map((l) => l.windowMinutes));
-  await db.deleteFrom("auth_attempts").where("created_at", "<", new Date(now.getTime() - oldest * 60_000)).execute();
+  await db
+    .deleteFrom("auth_attempts")
+    .where("created_at", "<", new Date(now.getTime() - oldest * 60_000))
+    .execute();
 }
 
 export function tooManyAttemptsMessage(minutes: number): string {

@@ -32,7 +32,11 @@ export async function endAllSessions(userId: string): Promise<void> {
 }
 
 /** Moves a session to another organisation; refused (false) unless the user is a member there. */
-export async function switchSessionOrganization(sessionId: string, userId: string, organizationId: string): Promise<boolean> {
+export async function switchSessionOrganization(
+  sessionId: string,
+  userId: string,
+  organizationId: string,
+): Promise<boolean> {
   const db = getDb();
   const result = await db
     .updateTable("sessions")
@@ -41,7 +45,11 @@ export async function switchSessionOrganization(sessionId: string, userId: strin
     .where("user_id", "=", userId)
     .where((eb) =>
       eb.exists(
-        eb.selectFrom("memberships").select("user_id").where("memberships.user_id", "=", userId).where("memberships.organization_id", "=", organizationId),
+        eb
+          .selectFrom("memberships")
+          .select("user_id")
+          .where("memberships.user_id", "=", userId)
+          .where("memberships.organization_id", "=", organizationId),
       ),
     )
     .executeTakeFirst();

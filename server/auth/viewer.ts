@@ -33,7 +33,10 @@ export function sortRoles(roles: readonly Role[]): Role[] {
  * the session if the user still belongs to it, else their oldest membership. A user without any
  * membership has no viewer (they cannot see any data).
  */
-export async function resolveViewerContext(db: Kysely<Database>, sessionId: string | null | undefined): Promise<ViewerContext | null> {
+export async function resolveViewerContext(
+  db: Kysely<Database>,
+  sessionId: string | null | undefined,
+): Promise<ViewerContext | null> {
   if (!sessionId) return null;
   const { session, user } = await getLucia().validateSession(sessionId);
   if (!session || !user) return null;

@@ -6,7 +6,8 @@ import type { ExportFileStatus } from "@/db/tables/exports";
 
 // Rows of export_files: one background export (its progress and, when done, its bytes).
 // Reads filter by organisation; another organisation's job is not found.
-const iso = (value: unknown): string | null => (value === null || value === undefined ? null : new Date(value as string).toISOString());
+const iso = (value: unknown): string | null =>
+  value === null || value === undefined ? null : new Date(value as string).toISOString();
 
 export interface SheetJobOptions {
   revisionNumber: number;
@@ -34,7 +35,16 @@ export function jobDownloadUrl(jobId: string): string {
 
 export async function createExportFile(
   db: Kysely<Database>,
-  row: { organizationId: string; designId: string; revisionId: string; kind: string; options: SheetJobOptions; fileName: string; contentType: string; requestedBy: string },
+  row: {
+    organizationId: string;
+    designId: string;
+    revisionId: string;
+    kind: string;
+    options: SheetJobOptions;
+    fileName: string;
+    contentType: string;
+    requestedBy: string;
+  },
 ): Promise<string> {
   const created = await db
     .insertInto("export_files")
@@ -65,13 +75,26 @@ export async function claimExportFile(db: Kysely<Database>, id: string) {
 }
 
 export async function setExportProgress(db: Kysely<Database>, id: string, progress: number): Promise<void> {
-  await db.updateTable("export_files").set({ progress: Math.max(1, Math.min(99, Math.round(progress))), updated_at: sql`now()` }).where("id", "=", id).where("status", "=", "running").execute();
+  await db
+    .updateTable("export_files")
+    .set({ progress: Math.max(1, Math.min(99, Math.round(progress))), updated_at: sql`now()` })
+    .where("id", "=", id)
+    .where("status", "=", "running")
+    .execute();
 }
 
 export async function finishExportFile(db: Kysely<Database>, id: string, bytes: Buffer): Promise<void> {
   await db
     .updateTable("export_files")
-    .set({ status: "done", progress: 100, bytes, byte_size: bytes.length, error: null, updated_at: sql`now()`, finished_at: sql`now()` })
+    .set({
+      status: "done",
+      progress: 100,
+      bytes,
+      byte_size: bytes.length,
+      error: null,
+      updated_at: sql`now()`,
+      finished_at: sql`now()`,
+    })
     .where("id", "=", id)
     .execute();
 }
@@ -84,7 +107,11 @@ export async function failExportFile(db: Kysely<Database>, id: string, message: 
     .execute();
 }
 
-export async function findExportJob(db: Kysely<Database>, organizationId: string, id: string): Promise<ExportJobDto | undefined> {
+export async function findExportJob(
+  db: Kysely<Database>,
+  organizationId: string,
+  id: string,
+): Promise<ExportJobDto | undefined> {
   const row = await db
     .selectFrom("export_files")
     .select(["id", "kind", "status", "progress", "file_name", "error", "created_at", "finished_at"])
@@ -105,7 +132,11 @@ export async function findExportJob(db: Kysely<Database>, organizationId: string
   };
 }
 
-export async function findExportFileBytes(db: Kysely<Database>, organizationId: string, id: string): Promise<{ fileName: string; contentType: string; bytes: Buffer } | undefined> {
+export async function findExportFileBytes(
+  db: Kysely<Database>,
+  organizationId: string,
+  id: string,
+): Promise<{ fileName: string; contentType: string; bytes: Buffer } | undefined> {
   const row = await db
     .selectFrom("export_files")
     .select(["file_name", "content_type", "bytes"])

@@ -6,7 +6,10 @@ import { getEnv } from "@/server/env";
 // pg-boss installs and migrates itself on start). Started lazily, the first time a route needs
 // the queue, so `next build` and pages that never export touch nothing. Kept on globalThis so
 // that development hot reloads do not start a second instance.
-const globalForBoss = globalThis as unknown as { sealpitchBoss?: Promise<PgBoss>; sealpitchWorkers?: Set<string> };
+const globalForBoss = globalThis as unknown as {
+  sealpitchBoss?: Promise<PgBoss>;
+  sealpitchWorkers?: Set<string>;
+};
 
 export const SHEET_QUEUE = "spacing-sheet";
 
@@ -20,7 +23,12 @@ async function startBoss(): Promise<PgBoss> {
   });
   boss.on("error", (error: Error) => console.error(`[jobs] ${error.message}`));
   await boss.start();
-  await boss.createQueue(SHEET_QUEUE, { name: SHEET_QUEUE, retryLimit: 0, expireInSeconds: 300, retentionMinutes: 24 * 60 });
+  await boss.createQueue(SHEET_QUEUE, {
+    name: SHEET_QUEUE,
+    retryLimit: 0,
+    expireInSeconds: 300,
+    retentionMinutes: 24 * 60,
+  });
   return boss;
 }
 
@@ -36,7 +44,10 @@ export function getQueue(): Promise<PgBoss> {
 }
 
 /** Registers a worker for `name` once per process. */
-export async function ensureWorker<T extends object>(name: string, handler: (data: T) => Promise<void>): Promise<void> {
+export async function ensureWorker<T extends object>(
+  name: string,
+  handler: (data: T) => Promise<void>,
+): Promise<void> {
   const workers = (globalForBoss.sealpitchWorkers ??= new Set());
   if (workers.has(name)) return;
   workers.add(name);

@@ -4,7 +4,14 @@ import type { Database } from "@/db/types";
 import { exportFileName, CONTENT_TYPES } from "@/features/exports/file-names";
 import { loadSheetInput } from "@/server/pdf/load-sheet-input";
 import { renderSpacingSheet } from "@/server/pdf/render-sheet";
-import { claimExportFile, createExportFile, failExportFile, finishExportFile, setExportProgress, type SheetJobOptions } from "./export-files";
+import {
+  claimExportFile,
+  createExportFile,
+  failExportFile,
+  finishExportFile,
+  setExportProgress,
+  type SheetJobOptions,
+} from "./export-files";
 import { SHEET_QUEUE, ensureWorker, getQueue } from "./queue";
 
 /** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
@@ -28,7 +35,8 @@ export async function runSheetJob(db: Kysely<Database>, exportFileId: string): P
       units: options.units,
       createdAt: new Date(),
     });
-    if (!loaded || loaded.revision.revisionId !== row.revision_id) throw new Error("The revision of this export no longer exists.");
+    if (!loaded || loaded.revision.revisionId !== row.revision_id)
+      throw new Error("The revision of this export no longer exists.");
     let last = 0;
     const bytes = await renderSpacingSheet(loaded.input, {
       onProgress: async (fraction) => {
@@ -53,7 +61,14 @@ export async function ensureSheetWorker(db: Kysely<Database>): Promise<void> {
 /** Records the export and queues it; returns the job id (= export_files.id = pg-boss job id). */
 export async function enqueueSheetJob(
   db: Kysely<Database>,
-  input: { organizationId: string; designId: string; revisionId: string; designName: string; equipmentTag: string; requestedBy: string } & SheetJobOptions,
+  input: {
+    organizationId: string;
+    designId: string;
+    revisionId: string;
+    designName: string;
+    equipmentTag: string;
+    requestedBy: string;
+  } & SheetJobOptions,
 ): Promise<string> {
   const id = await createExportFile(db, {
     organizationId: input.organizationId,
@@ -61,7 +76,11 @@ export async function enqueueSheetJob(
     revisionId: input.revisionId,
     kind: "spacing-sheet",
     options: { revisionNumber: input.revisionNumber, paper: input.paper, units: input.units },
-    fileName: exportFileName({ equipmentTag: input.equipmentTag, designName: input.designName }, input.revisionNumber, "spacing-sheet"),
+    fileName: exportFileName(
+      { equipmentTag: input.equipmentTag, designName: input.designName },
+      input.revisionNumber,
+      "spacing-sheet",
+    ),
     contentType: CONTENT_TYPES["spacing-sheet"],
     requestedBy: input.requestedBy,
   });
@@ -70,7 +89,11 @@ export async function enqueueSheetJob(
     const boss = await getQueue();
     await boss.send(SHEET_QUEUE, { exportFileId: id } satisfies SheetJobData, { id, retryLimit: 0 });
   } catch (error) {
-    await failExportFile(db, id, `Could not queue the sheet: ${error instanceof Error ? error.message : String(error)}`);
+    await failExportFile(
+      db,
+      id,
+      `Could not queue the sheet: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
   return id;
 }

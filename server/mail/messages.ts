@@ -7,7 +7,10 @@ import { sendMail } from "./send-mail";
 export { sendMail, type MailMessage } from "./send-mail";
 
 function escapeHtml(value: string): string {
-  return value.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c);
+  return value.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] ?? c,
+  );
 }
 
 function link(path: string): string {
@@ -35,7 +38,11 @@ export async function sendInvitationEmail(input: {
   await sendMail({ to: input.to, subject: `Join ${input.organizationName} on Sealpitch`, text, html });
 }
 
-export async function sendPasswordResetEmail(input: { to: string; token: string; validMinutes: number }): Promise<void> {
+export async function sendPasswordResetEmail(input: {
+  to: string;
+  token: string;
+  validMinutes: number;
+}): Promise<void> {
   const url = link(`/reset-password/${input.token}`);
   const text = [
     "Someone (hopefully you) asked to reset your Sealpitch password.",

@@ -22,7 +22,8 @@ export function revisionLink(designId: string, number: number, appUrl: string = 
   return `${appUrl.replace(/\/$/, "")}/designs/${designId}/revisions/${number}`;
 }
 
-const escapeHtml = (s: string): string => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+const escapeHtml = (s: string): string =>
+  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 function compose(subject: string, lines: string[], link: string): ReviewMessage {
   const text = [...lines, "", `Open the review: ${link}`, "", "— Sealpitch"].join("\n");
@@ -34,7 +35,10 @@ function compose(subject: string, lines: string[], link: string): ReviewMessage 
 export function buildRevisionSubmittedMessage(info: RevisionMailInfo, appUrl: string): ReviewMessage {
   return compose(
     `Review requested: ${info.designName} revision ${info.number}`,
-    [`${info.actorName} submitted revision ${info.number} of ${info.designName} for review.`, "It is waiting for an approver who did not design it."],
+    [
+      `${info.actorName} submitted revision ${info.number} of ${info.designName} for review.`,
+      "It is waiting for an approver who did not design it.",
+    ],
     revisionLink(info.designId, info.number, appUrl),
   );
 }
@@ -42,15 +46,25 @@ export function buildRevisionSubmittedMessage(info: RevisionMailInfo, appUrl: st
 export function buildRevisionReturnedMessage(info: RevisionMailInfo, appUrl: string): ReviewMessage {
   return compose(
     `Returned: ${info.designName} revision ${info.number}`,
-    [`${info.actorName} returned revision ${info.number} of ${info.designName}.`, `Comment: ${info.comment ?? ""}`, "Fix it and submit it again."],
+    [
+      `${info.actorName} returned revision ${info.number} of ${info.designName}.`,
+      `Comment: ${info.comment ?? ""}`,
+      "Fix it and submit it again.",
+    ],
     revisionLink(info.designId, info.number, appUrl),
   );
 }
 
 export function buildRevisionApprovedMessage(info: RevisionMailInfo, appUrl: string): ReviewMessage {
-  const lines = [`${info.actorName} approved revision ${info.number} of ${info.designName}. It is now frozen.`];
+  const lines = [
+    `${info.actorName} approved revision ${info.number} of ${info.designName}. It is now frozen.`,
+  ];
   if (info.comment) lines.push(`Comment: ${info.comment}`);
-  return compose(`Approved: ${info.designName} revision ${info.number}`, lines, revisionLink(info.designId, info.number, appUrl));
+  return compose(
+    `Approved: ${info.designName} revision ${info.number}`,
+    lines,
+    revisionLink(info.designId, info.number, appUrl),
+  );
 }
 
 async function sendEach(to: string[], message: ReviewMessage): Promise<void> {

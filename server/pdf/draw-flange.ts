@@ -10,7 +10,8 @@ const SCALES = [1, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10, 12.5, 15, 20, 25, 30, 40, 50,
 
 /** Largest standard reduction 1:n that fits `extentMm` into `boxPt` (both axes). */
 export function chooseScale(widthMm: number, heightMm: number, boxWPt: number, boxHPt: number): number {
-  for (const n of SCALES) if ((widthMm * PT_PER_MM) / n <= boxWPt && (heightMm * PT_PER_MM) / n <= boxHPt) return n;
+  for (const n of SCALES)
+    if ((widthMm * PT_PER_MM) / n <= boxWPt && (heightMm * PT_PER_MM) / n <= boxHPt) return n;
   return SCALES[SCALES.length - 1];
 }
 
@@ -38,7 +39,12 @@ function arrowHead(doc: PDFKit.PDFDocument, x: number, y: number, dx: number, dy
   const uy = dy / len;
   const a = 4.2;
   const b = 1.4;
-  doc.moveTo(x, y).lineTo(x - ux * a - uy * b, y - uy * a + ux * b).lineTo(x - ux * a + uy * b, y - uy * a - ux * b).closePath().fill(C.ink900);
+  doc
+    .moveTo(x, y)
+    .lineTo(x - ux * a - uy * b, y - uy * a + ux * b)
+    .lineTo(x - ux * a + uy * b, y - uy * a - ux * b)
+    .closePath()
+    .fill(C.ink900);
 }
 
 /** A linear dimension between two page points, text centred above the line. */
@@ -74,14 +80,22 @@ function extent(o: Outline): { hw: number; hh: number } {
  * Returns the reduction n of the scale 1:n (true when the sheet is printed at 100 %).
  */
 /** Where the flange centre lands on the page and how many points one model mm is (pure). */
-export function flangeTransform(box: Box, outline: Outline): { cx: number; cy: number; ptPerMm: number; reduction: number } {
+export function flangeTransform(
+  box: Box,
+  outline: Outline,
+): { cx: number; cy: number; ptPerMm: number; reduction: number } {
   const { hw, hh } = extent(outline);
   const pad = 40;
   const n = chooseScale(2 * hw, 2 * hh, box.w - 2 * pad, box.h - 2 * pad - 10);
   return { cx: box.x + box.w / 2, cy: box.y + box.h / 2 - 4, ptPerMm: PT_PER_MM / n, reduction: n };
 }
 
-export function drawFlange(ctx: SheetContext, box: Box, design: JointDesign, rows: readonly BoltRow[]): number {
+export function drawFlange(
+  ctx: SheetContext,
+  box: Box,
+  design: JointDesign,
+  rows: readonly BoltRow[],
+): number {
   const { doc, u } = ctx;
   const { hw, hh } = extent(design.outline);
   const { cx, cy, ptPerMm: s, reduction: n } = flangeTransform(box, design.outline);
@@ -91,22 +105,48 @@ export function drawFlange(ctx: SheetContext, box: Box, design: JointDesign, row
   // Outline with the bore cut out (even-odd), then the gasket on top.
   traceOutline(doc, design.outline, xf, s);
   if (design.bore) traceOutline(doc, design.bore, xf, s);
-  doc.fillColor(C.steel100).lineWidth(1).strokeColor(C.ink900).fillAndStroke(C.steel100, C.ink900, "even-odd");
+  doc
+    .fillColor(C.steel100)
+    .lineWidth(1)
+    .strokeColor(C.ink900)
+    .fillAndStroke(C.steel100, C.ink900, "even-odd");
   const g = design.gasket;
   if (g.kind === "ring") {
     if (g.geometry.kind === "annulus") {
-      doc.circle(cx, cy, (g.geometry.outerDiameterMm / 2) * s).circle(cx, cy, (g.geometry.innerDiameterMm / 2) * s);
+      doc
+        .circle(cx, cy, (g.geometry.outerDiameterMm / 2) * s)
+        .circle(cx, cy, (g.geometry.innerDiameterMm / 2) * s);
     } else {
       const { centreOffsetMm, widthMm } = g.geometry;
-      tracePolygon(doc, pathToPolyline(getBoltPath(design.outline, { kind: "offset", offsetMm: centreOffsetMm - widthMm / 2 }), 1.5), xf);
-      tracePolygon(doc, pathToPolyline(getBoltPath(design.outline, { kind: "offset", offsetMm: centreOffsetMm + widthMm / 2 }), 1.5), xf);
+      tracePolygon(
+        doc,
+        pathToPolyline(
+          getBoltPath(design.outline, { kind: "offset", offsetMm: centreOffsetMm - widthMm / 2 }),
+          1.5,
+        ),
+        xf,
+      );
+      tracePolygon(
+        doc,
+        pathToPolyline(
+          getBoltPath(design.outline, { kind: "offset", offsetMm: centreOffsetMm + widthMm / 2 }),
+          1.5,
+        ),
+        xf,
+      );
     }
     doc.fillOpacity(0.85).lineWidth(0.5).fillAndStroke(C.brass300, C.brass700, "even-odd").fillOpacity(1);
   }
   // Centre lines (chain) and the bolt path.
   doc.lineWidth(0.35).strokeColor(C.ink500).dash(9, { space: 2.2 });
-  doc.moveTo(cx - hw * s - 12, cy).lineTo(cx + hw * s + 12, cy).stroke();
-  doc.moveTo(cx, cy - hh * s - 12).lineTo(cx, cy + hh * s + 12).stroke();
+  doc
+    .moveTo(cx - hw * s - 12, cy)
+    .lineTo(cx + hw * s + 12, cy)
+    .stroke();
+  doc
+    .moveTo(cx, cy - hh * s - 12)
+    .lineTo(cx, cy + hh * s + 12)
+    .stroke();
   if (design.boltPath.kind === "circle") doc.circle(cx, cy, (design.boltPath.diameterMm / 2) * s).stroke();
   else {
     tracePolygon(doc, pathToPolyline(getBoltPath(design.outline, design.boltPath), 2), xf);
@@ -125,7 +165,11 @@ export function drawFlange(ctx: SheetContext, box: Box, design: JointDesign, row
   const arm = Math.max(rHole * 1.35, 2);
   for (const r of rows) {
     const [x, y] = xf({ x: r.xMm, y: r.yMm });
-    doc.moveTo(x - arm, y).lineTo(x + arm, y).moveTo(x, y - arm).lineTo(x, y + arm);
+    doc
+      .moveTo(x - arm, y)
+      .lineTo(x + arm, y)
+      .moveTo(x, y - arm)
+      .lineTo(x, y + arm);
   }
   doc.stroke();
   const minChordPt = Math.min(...rows.map((r) => (r.chordToNextMm ?? 1e9) * s));
@@ -149,15 +193,36 @@ export function drawFlange(ctx: SheetContext, box: Box, design: JointDesign, row
   const top = cy - hh * s;
   const bottom = cy + hh * s;
   doc.lineWidth(0.3).strokeColor(C.ink500);
-  doc.moveTo(cx - hw * s, cy + 4).lineTo(cx - hw * s, bottom + 20).moveTo(cx + hw * s, cy + 4).lineTo(cx + hw * s, bottom + 20).stroke();
-  const overall = design.outline.kind === "circle" ? `Ø${u.len(design.outline.diameterMm)}` : `${u.len(2 * hw)} × ${u.len(2 * hh)}`;
+  doc
+    .moveTo(cx - hw * s, cy + 4)
+    .lineTo(cx - hw * s, bottom + 20)
+    .moveTo(cx + hw * s, cy + 4)
+    .lineTo(cx + hw * s, bottom + 20)
+    .stroke();
+  const overall =
+    design.outline.kind === "circle"
+      ? `Ø${u.len(design.outline.diameterMm)}`
+      : `${u.len(2 * hw)} × ${u.len(2 * hh)}`;
   dimension(ctx, cx - hw * s, bottom + 17, cx + hw * s, bottom + 17, overall);
   if (design.boltPath.kind === "circle") {
     const rb = (design.boltPath.diameterMm / 2) * s;
-    doc.lineWidth(0.3).strokeColor(C.ink500).moveTo(cx - rb, cy - 4).lineTo(cx - rb, top - 20).moveTo(cx + rb, cy - 4).lineTo(cx + rb, top - 20).stroke();
+    doc
+      .lineWidth(0.3)
+      .strokeColor(C.ink500)
+      .moveTo(cx - rb, cy - 4)
+      .lineTo(cx - rb, top - 20)
+      .moveTo(cx + rb, cy - 4)
+      .lineTo(cx + rb, top - 20)
+      .stroke();
     dimension(ctx, cx - rb, top - 17, cx + rb, top - 17, `Ø${u.len(design.boltPath.diameterMm)} bolt circle`);
   } else {
-    doc.font("mono").fontSize(7).fillColor(C.ink900).text(`bolt path ${u.len(design.boltPath.offsetMm)} in from edge`, box.x + 6, top - 20, { lineBreak: false });
+    doc
+      .font("mono")
+      .fontSize(7)
+      .fillColor(C.ink900)
+      .text(`bolt path ${u.len(design.boltPath.offsetMm)} in from edge`, box.x + 6, top - 20, {
+        lineBreak: false,
+      });
   }
   const first = rows[0];
   const next = first?.nextNumber ? rows[first.nextNumber - 1] : undefined;
@@ -169,13 +234,31 @@ export function drawFlange(ctx: SheetContext, box: Box, design: JointDesign, row
     const my = (y1 + y2) / 2;
     const lx = box.x + box.w - 150;
     const ly = box.y + 14;
-    doc.lineWidth(0.35).strokeColor(C.brass700).moveTo(mx, my).lineTo(lx + 146, ly + 16).lineTo(lx, ly + 16).stroke();
+    doc
+      .lineWidth(0.35)
+      .strokeColor(C.brass700)
+      .moveTo(mx, my)
+      .lineTo(lx + 146, ly + 16)
+      .lineTo(lx, ly + 16)
+      .stroke();
     doc.font("mono").fontSize(6.8).fillColor(C.brass700);
-    doc.text(`pitch ${first.number}–${next.number}  ${u.len(first.pitchToNextMm)} ${u.length}`, lx, ly, { lineBreak: false });
-    doc.text(`chord ${first.number}–${next.number}  ${u.len(first.chordToNextMm)} ${u.length}`, lx, ly + 7.5, { lineBreak: false });
+    doc.text(`pitch ${first.number}–${next.number}  ${u.len(first.pitchToNextMm)} ${u.length}`, lx, ly, {
+      lineBreak: false,
+    });
+    doc.text(
+      `chord ${first.number}–${next.number}  ${u.len(first.chordToNextMm)} ${u.length}`,
+      lx,
+      ly + 7.5,
+      { lineBreak: false },
+    );
   }
   doc.font("sans").fontSize(6.5).fillColor(C.ink500);
-  doc.text(`Scale 1:${n} when printed at 100 % · view on the bolted face · dimensions in ${u.length} · bolts numbered clockwise from the top`, box.x + 6, box.y + box.h - 10, { lineBreak: false });
+  doc.text(
+    `Scale 1:${n} when printed at 100 % · view on the bolted face · dimensions in ${u.length} · bolts numbered clockwise from the top`,
+    box.x + 6,
+    box.y + box.h - 10,
+    { lineBreak: false },
+  );
   doc.restore();
   return n;
 }

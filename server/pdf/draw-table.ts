@@ -28,7 +28,12 @@ const PAD = 3;
  * A ruled table that flows over pages: the header row is repeated on each new page with
  * "(continued)", rows never split. Sized for 100 rows and more (the 96-bolt table).
  */
-export function drawTable(ctx: SheetContext, cols: Column[], rows: Cell[][], opts: { x?: number; width?: number; zebra?: boolean } = {}): void {
+export function drawTable(
+  ctx: SheetContext,
+  cols: Column[],
+  rows: Cell[][],
+  opts: { x?: number; width?: number; zebra?: boolean } = {},
+): void {
   const { doc } = ctx;
   const x0 = opts.x ?? ctx.content.x0;
   const totalW = opts.width ?? ctx.content.x1 - x0;
@@ -39,10 +44,17 @@ export function drawTable(ctx: SheetContext, cols: Column[], rows: Cell[][], opt
     const h = ROW_H + 2;
     doc.rect(x0, ctx.y, totalW, h).fill(C.ink900);
     let x = x0;
-    doc.font("sansBold").fontSize(FONT - 0.3).fillColor("#ffffff");
+    doc
+      .font("sansBold")
+      .fontSize(FONT - 0.3)
+      .fillColor("#ffffff");
     cols.forEach((c, i) => {
       const label = continued && i === 0 ? `${c.header} (cont.)` : c.header;
-      doc.text(label, x + PAD, ctx.y + 3.2, { width: widths[i] - 2 * PAD, align: c.align ?? "left", lineBreak: false });
+      doc.text(label, x + PAD, ctx.y + 3.2, {
+        width: widths[i] - 2 * PAD,
+        align: c.align ?? "left",
+        lineBreak: false,
+      });
       x += widths[i];
     });
     ctx.y += h;
@@ -76,27 +88,50 @@ export function drawTable(ctx: SheetContext, cols: Column[], rows: Cell[][], opt
         .font(style.bold ? (c.mono ? "monoBold" : "sansBold") : c.mono ? "mono" : "sans")
         .fontSize(FONT)
         .fillColor(style.color ?? C.ink900)
-        .text(text, x + PAD, ctx.y + 2.4, { width: widths[i] - 2 * PAD, align: c.align ?? "left", lineBreak: !!c.wrap });
+        .text(text, x + PAD, ctx.y + 2.4, {
+          width: widths[i] - 2 * PAD,
+          align: c.align ?? "left",
+          lineBreak: !!c.wrap,
+        });
       x += widths[i];
     });
-    doc.lineWidth(0.3).strokeColor(C.ink200).moveTo(x0, ctx.y + h).lineTo(x0 + totalW, ctx.y + h).stroke();
+    doc
+      .lineWidth(0.3)
+      .strokeColor(C.ink200)
+      .moveTo(x0, ctx.y + h)
+      .lineTo(x0 + totalW, ctx.y + h)
+      .stroke();
     ctx.y += h;
   });
   ctx.y += 8;
 }
 
 /** Key–value block (two columns of label and value). */
-export function drawKeyValues(ctx: SheetContext, x: number, width: number, items: { label: string; value: string }[]): number {
+export function drawKeyValues(
+  ctx: SheetContext,
+  x: number,
+  width: number,
+  items: { label: string; value: string }[],
+): number {
   const { doc } = ctx;
   let y = ctx.y;
   for (const raw of items) {
     const it = { label: plainText(raw.label), value: plainText(raw.value) };
-    doc.font("sans").fontSize(6.6).fillColor(C.ink500).text(it.label, x, y, { width: width * 0.45, lineBreak: false });
+    doc
+      .font("sans")
+      .fontSize(6.6)
+      .fillColor(C.ink500)
+      .text(it.label, x, y, { width: width * 0.45, lineBreak: false });
     doc.font("mono").fontSize(6.8).fillColor(C.ink900);
     const h = doc.heightOfString(it.value, { width: width * 0.55 });
     doc.text(it.value, x + width * 0.45, y, { width: width * 0.55 });
     y += Math.max(9.5, h + 2.5);
-    doc.lineWidth(0.25).strokeColor(C.ink100).moveTo(x, y - 1.5).lineTo(x + width, y - 1.5).stroke();
+    doc
+      .lineWidth(0.25)
+      .strokeColor(C.ink100)
+      .moveTo(x, y - 1.5)
+      .lineTo(x + width, y - 1.5)
+      .stroke();
   }
   return y;
 }

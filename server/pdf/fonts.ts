@@ -35,6 +35,9 @@ export function getSheetFonts(): Record<SheetFont, ParsedFont> {
     const probe = new PDFDocument({ autoFirstPage: false, font: sfnt as unknown as string });
     return (probe as unknown as { _font: { font: ParsedFont } })._font.font;
   };
-  cache = Object.fromEntries(Object.entries(FILES).map(([k, f]) => [k, parse(f)])) as Record<SheetFont, ParsedFont>;
+  cache = Object.fromEntries(Object.entries(FILES).map(([k, f]) => [k, parse(f)])) as Record<
+    SheetFont,
+    ParsedFont
+  >;
   return cache;
 }

@@ -16,20 +16,47 @@ export function jointDataItems(d: JointDesign, u: SheetUnits): { label: string; 
   const L = (mm: number) => `${u.len(mm)} ${u.length}`;
   const o = d.outline;
   const outline =
-    o.kind === "circle" ? `circle Ø${L(o.diameterMm)}`
-    : o.kind === "rectangle" ? `rectangle ${u.len(o.widthMm)} × ${L(o.heightMm)}, r ${L(o.cornerRadiusMm)}`
-    : o.kind === "obround" ? `obround ${u.len(o.lengthMm)} × ${L(o.widthMm)}`
-    : `polygon, ${o.points.length} corners`;
+    o.kind === "circle"
+      ? `circle Ø${L(o.diameterMm)}`
+      : o.kind === "rectangle"
+        ? `rectangle ${u.len(o.widthMm)} × ${L(o.heightMm)}, r ${L(o.cornerRadiusMm)}`
+        : o.kind === "obround"
+          ? `obround ${u.len(o.lengthMm)} × ${L(o.widthMm)}`
+          : `polygon, ${o.points.length} corners`;
   const b = d.bore;
-  const bore = !b ? "none" : b.kind === "circle" ? `Ø${L(b.diameterMm)}` : b.kind === "rectangle" ? `${u.len(b.widthMm)} × ${L(b.heightMm)}` : b.kind === "obround" ? `${u.len(b.lengthMm)} × ${L(b.widthMm)}` : "polygon";
+  const bore = !b
+    ? "none"
+    : b.kind === "circle"
+      ? `Ø${L(b.diameterMm)}`
+      : b.kind === "rectangle"
+        ? `${u.len(b.widthMm)} × ${L(b.heightMm)}`
+        : b.kind === "obround"
+          ? `${u.len(b.lengthMm)} × ${L(b.widthMm)}`
+          : "polygon";
   const g = d.gasket;
-  const gasketGeom = g.kind === "full-face" ? "full face" : g.geometry.kind === "annulus" ? `ID ${u.len(g.geometry.innerDiameterMm)} / OD ${L(g.geometry.outerDiameterMm)}` : `band ${L(g.geometry.widthMm)} wide, centre ${L(g.geometry.centreOffsetMm)} in`;
+  const gasketGeom =
+    g.kind === "full-face"
+      ? "full face"
+      : g.geometry.kind === "annulus"
+        ? `ID ${u.len(g.geometry.innerDiameterMm)} / OD ${L(g.geometry.outerDiameterMm)}`
+        : `band ${L(g.geometry.widthMm)} wide, centre ${L(g.geometry.centreOffsetMm)} in`;
   const p = d.assembly.preload;
-  const preload = p.kind === "fraction-of-proof" ? `${p.value} × proof load` : p.kind === "fraction-of-yield" ? `${p.value} × yield` : `${u.stress1(p.value)} ${u.stress} bolt stress`;
+  const preload =
+    p.kind === "fraction-of-proof"
+      ? `${p.value} × proof load`
+      : p.kind === "fraction-of-yield"
+        ? `${p.value} × yield`
+        : `${u.stress1(p.value)} ${u.stress} bolt stress`;
   return [
     { label: "Outline", value: outline },
     { label: "Bore / opening", value: bore },
-    { label: "Bolt path", value: d.boltPath.kind === "circle" ? `circle Ø${L(d.boltPath.diameterMm)}` : `outline offset ${L(d.boltPath.offsetMm)}` },
+    {
+      label: "Bolt path",
+      value:
+        d.boltPath.kind === "circle"
+          ? `circle Ø${L(d.boltPath.diameterMm)}`
+          : `outline offset ${L(d.boltPath.offsetMm)}`,
+    },
     { label: "Bolts", value: `${d.bolts.length} × ${d.fastener.designation} ${d.fastener.form}` },
     { label: "Bolt material", value: d.fastener.materialId },
     { label: "Hole diameter", value: L(d.fastener.holeDiameterMm) },
@@ -41,6 +68,12 @@ export function jointDataItems(d: JointDesign, u: SheetUnits): { label: string; 
     { label: "Nut factor K", value: `${d.assembly.nutFactor.value}` },
     { label: "Tightening method", value: METHOD[d.assembly.method] ?? d.assembly.method },
     { label: "Design pressure", value: `${u.stress1(d.loads.designPressureMpa)} ${u.stress}` },
-    { label: "Design temperature", value: u.system === "US" ? `${((d.loads.designTemperatureC * 9) / 5 + 32).toFixed(0)} °F` : `${d.loads.designTemperatureC} °C` },
+    {
+      label: "Design temperature",
+      value:
+        u.system === "US"
+          ? `${((d.loads.designTemperatureC * 9) / 5 + 32).toFixed(0)} °F`
+          : `${d.loads.designTemperatureC} °C`,
+    },
   ];
 }

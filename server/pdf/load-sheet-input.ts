@@ -24,7 +24,12 @@ export async function loadSheetInput(
   const justifications = await listJustifications(db, organizationId, revision.revisionId);
   const frozen = revision.status === "in_review" || revision.status === "approved";
   const integrity = frozen
-    ? verifySnapshot({ document: revision.document, result: revision.result, coreVersion: revision.coreVersion, contentHash: revision.contentHash })
+    ? verifySnapshot({
+        document: revision.document,
+        result: revision.result,
+        coreVersion: revision.coreVersion,
+        contentHash: revision.contentHash,
+      })
     : ({ state: "not-frozen" } as const);
   return {
     revision,
@@ -41,7 +46,13 @@ export async function loadSheetInput(
       },
       document: revision.document,
       result: revision.result,
-      justifications: justifications.map((j) => ({ checkId: j.checkId, status: j.checkStatus, text: j.text, by: j.authorName, at: j.at })),
+      justifications: justifications.map((j) => ({
+        checkId: j.checkId,
+        status: j.checkStatus,
+        text: j.text,
+        by: j.authorName,
+        at: j.at,
+      })),
       paper: options.paper,
       units: options.units,
       createdAt: options.createdAt,

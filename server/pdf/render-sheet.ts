@@ -9,8 +9,22 @@ import { drawFlange } from "./draw-flange";
 import { drawProfileChart } from "./draw-profile-chart";
 import { drawKeyValues, drawTable, type Cell } from "./draw-table";
 import { jointDataItems } from "./joint-data";
-import { groupChecks, readResultView, type SheetCheckGroup, type SheetResultView, type SheetStatus } from "./result-view";
-import { C, MARGIN, PAPER_SIZES, TITLE_BLOCK_H, createContext, heading, type SheetContext } from "./sheet-context";
+import {
+  groupChecks,
+  readResultView,
+  type SheetCheckGroup,
+  type SheetResultView,
+  type SheetStatus,
+} from "./result-view";
+import {
+  C,
+  MARGIN,
+  PAPER_SIZES,
+  TITLE_BLOCK_H,
+  createContext,
+  heading,
+  type SheetContext,
+} from "./sheet-context";
 import type { RenderOptions, SheetInput } from "./sheet-input";
 import { drawNotApprovedMark, drawTitleBlock } from "./title-block";
 
@@ -27,8 +41,12 @@ const STATUS_STYLE: Record<SheetStatus, { text: string; color: string; fill: str
  * differ only in the date strings.
  */
 function fileId(input: SheetInput): Buffer {
-  const basis = input.revision.contentHash ?? `${input.design.name}|${input.revision.number}|${input.revision.status}`;
-  return createHash("sha256").update(`sealpitch-sheet|${basis}|${input.paper}|${input.units}`).digest().subarray(0, 16);
+  const basis =
+    input.revision.contentHash ?? `${input.design.name}|${input.revision.number}|${input.revision.status}`;
+  return createHash("sha256")
+    .update(`sealpitch-sheet|${basis}|${input.paper}|${input.units}`)
+    .digest()
+    .subarray(0, 16);
 }
 
 /** The drawing's frame on page 1 (pure, so tests can find the flange on the rendered page). */
@@ -44,8 +62,21 @@ export function drawingBox(paper: SheetInput["paper"]): { x: number; y: number; 
 function pageOne(ctx: SheetContext, rows: BoltRow[], view: SheetResultView): void {
   const { doc, input, content, u } = ctx;
   const { design, revision } = input;
-  doc.font("sansBold").fontSize(15).fillColor(C.ink900).text("Bolt-spacing sheet", content.x0, ctx.y, { lineBreak: false });
-  doc.font("sans").fontSize(9).fillColor(C.ink700).text(`${design.equipmentTag ? `${design.equipmentTag} · ` : ""}${design.name} · revision ${revision.number}`, content.x0, ctx.y + 19, { lineBreak: false });
+  doc
+    .font("sansBold")
+    .fontSize(15)
+    .fillColor(C.ink900)
+    .text("Bolt-spacing sheet", content.x0, ctx.y, { lineBreak: false });
+  doc
+    .font("sans")
+    .fontSize(9)
+    .fillColor(C.ink700)
+    .text(
+      `${design.equipmentTag ? `${design.equipmentTag} · ` : ""}${design.name} · revision ${revision.number}`,
+      content.x0,
+      ctx.y + 19,
+      { lineBreak: false },
+    );
   ctx.y += 36;
   const box = drawingBox(input.paper);
   const drawW = box.w;
@@ -55,7 +86,11 @@ function pageOne(ctx: SheetContext, rows: BoltRow[], view: SheetResultView): voi
   const sideX = content.x0 + drawW + 12;
   const sideW = content.x1 - sideX;
   const savedY = ctx.y;
-  doc.font("sansBold").fontSize(8).fillColor(C.ink900).text("JOINT DATA", sideX, ctx.y, { lineBreak: false, characterSpacing: 0.5 });
+  doc
+    .font("sansBold")
+    .fontSize(8)
+    .fillColor(C.ink900)
+    .text("JOINT DATA", sideX, ctx.y, { lineBreak: false, characterSpacing: 0.5 });
   ctx.y += 12;
   const items = [...jointDataItems(input.document, u), ...view.keyValues];
   ctx.y = drawKeyValues(ctx, sideX, sideW, items);
@@ -64,7 +99,11 @@ function pageOne(ctx: SheetContext, rows: BoltRow[], view: SheetResultView): voi
 
 function boltTable(ctx: SheetContext, rows: BoltRow[]): void {
   const { u } = ctx;
-  heading(ctx, "Bolt table", `${rows.length} bolts · x, y from the flange centre (y up) · angle clockwise from the top · ${u.length}`);
+  heading(
+    ctx,
+    "Bolt table",
+    `${rows.length} bolts · x, y from the flange centre (y up) · angle clockwise from the top · ${u.length}`,
+  );
   const byNumber = rows;
   drawTable(
     ctx,
@@ -110,7 +149,11 @@ function subjectsNote(g: SheetCheckGroup, limit = 14): string {
 function checkTable(ctx: SheetContext, view: SheetResultView): void {
   heading(ctx, "Checks", "as stored with the revision; per-pair and per-bolt checks of one kind share a row");
   if (view.checks.length === 0) {
-    ctx.doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result has no checks.", ctx.content.x0, ctx.y);
+    ctx.doc
+      .font("sans")
+      .fontSize(7.5)
+      .fillColor(C.ink700)
+      .text("The stored result has no checks.", ctx.content.x0, ctx.y);
     ctx.y += 16;
     return;
   }
@@ -125,7 +168,13 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
     ],
     groupChecks(view.checks).map((g): Cell[] => {
       const st = STATUS_STYLE[g.status];
-      return [`${g.title}${subjectsNote(g)}`, g.value, g.limit, { text: st.text, style: { bold: true, color: st.color, fill: st.fill } }, g.source || "—"];
+      return [
+        `${g.title}${subjectsNote(g)}`,
+        g.value,
+        g.limit,
+        { text: st.text, style: { bold: true, color: st.color, fill: st.fill } },
+        g.source || "—",
+      ];
     }),
   );
 }
@@ -139,22 +188,46 @@ function justifications(ctx: SheetContext, view: SheetResultView): void {
   const rows: Cell[][] = list.map((j) => {
     const c = byId.get(j.checkId);
     const title = c ? `${c.title}${c.boltIds.length ? ` (${c.boltIds.join(", ")})` : ""}` : j.checkId;
-    return [title, { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } }, j.text, `${j.by}, ${j.at.slice(0, 10)}`];
+    return [
+      title,
+      { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } },
+      j.text,
+      `${j.by}, ${j.at.slice(0, 10)}`,
+    ];
   });
   const justified = new Set(list.map((j) => j.checkId));
   for (const g of open) {
     const missing = g.worstIds.filter((id) => !justified.has(id));
     if (missing.length === 0) continue;
-    const note = g.count === 1 ? subjectsNote(g) : ` — ${missing.length} of ${g.count} without a justification`;
-    rows.push([`${g.title}${note}`, { text: STATUS_STYLE[g.status].text, style: { bold: true, color: STATUS_STYLE[g.status].color } }, "No approved justification.", "—"]);
+    const note =
+      g.count === 1 ? subjectsNote(g) : ` — ${missing.length} of ${g.count} without a justification`;
+    rows.push([
+      `${g.title}${note}`,
+      { text: STATUS_STYLE[g.status].text, style: { bold: true, color: STATUS_STYLE[g.status].color } },
+      "No approved justification.",
+      "—",
+    ]);
   }
-  drawTable(ctx, [{ header: "Check", width: 2.4, wrap: true }, { header: "Status", width: 0.6 }, { header: "Justification", width: 3.6, wrap: true }, { header: "Accepted by", width: 1.4, wrap: true }], rows);
+  drawTable(
+    ctx,
+    [
+      { header: "Check", width: 2.4, wrap: true },
+      { header: "Status", width: 0.6 },
+      { header: "Justification", width: 3.6, wrap: true },
+      { header: "Accepted by", width: 1.4, wrap: true },
+    ],
+    rows,
+  );
 }
 
 function profileChart(ctx: SheetContext, view: SheetResultView, rows: BoltRow[]): void {
   if (!view.profile) return;
   ctx.ensure(210);
-  heading(ctx, "Gasket stress along the path", `${view.profile.pathLabel} · governing estimate: ${view.profile.estimator}`);
+  heading(
+    ctx,
+    "Gasket stress along the path",
+    `${view.profile.pathLabel} · governing estimate: ${view.profile.estimator}`,
+  );
   const box = { x: ctx.content.x0, y: ctx.y, w: ctx.content.x1 - ctx.content.x0, h: 180 };
   drawProfileChart(ctx, box, view.profile, rows);
   ctx.y += box.h + 10;
@@ -166,11 +239,25 @@ function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[])
   if (view.passes.length > 0) {
     drawTable(
       ctx,
-      [{ header: "Pass", width: 1.1 }, { header: "Share of target", width: 1, align: "right", mono: true }, { header: `Torque ${u.torque}`, width: 1, align: "right", mono: true }, { header: "Pattern and note", width: 4.4, wrap: true }],
-      view.passes.map((p) => [p.label, `${Math.round(p.fraction * 100)} %`, u.torque1(p.torqueNmm), p.pattern]),
+      [
+        { header: "Pass", width: 1.1 },
+        { header: "Share of target", width: 1, align: "right", mono: true },
+        { header: `Torque ${u.torque}`, width: 1, align: "right", mono: true },
+        { header: "Pattern and note", width: 4.4, wrap: true },
+      ],
+      view.passes.map((p) => [
+        p.label,
+        `${Math.round(p.fraction * 100)} %`,
+        u.torque1(p.torqueNmm),
+        p.pattern,
+      ]),
     );
   } else {
-    doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result has no pass plan.", content.x0, ctx.y);
+    doc
+      .font("sans")
+      .fontSize(7.5)
+      .fillColor(C.ink700)
+      .text("The stored result has no pass plan.", content.x0, ctx.y);
     ctx.y += 14;
   }
   if (view.sequenceIds.length > 0) {
@@ -180,8 +267,18 @@ function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[])
     doc.font("mono").fontSize(7.2);
     const h = doc.heightOfString(seq, { width: w }) + 11;
     ctx.ensure(h + 6);
-    doc.font("sansBold").fontSize(7.2).fillColor(C.ink900).text(`Tightening sequence (bolt numbers, ${view.sequenceNote})`, content.x0, ctx.y, { lineBreak: false });
-    doc.font("mono").fontSize(7.2).fillColor(C.ink900).text(seq, content.x0, ctx.y + 11, { width: w });
+    doc
+      .font("sansBold")
+      .fontSize(7.2)
+      .fillColor(C.ink900)
+      .text(`Tightening sequence (bolt numbers, ${view.sequenceNote})`, content.x0, ctx.y, {
+        lineBreak: false,
+      });
+    doc
+      .font("mono")
+      .fontSize(7.2)
+      .fillColor(C.ink900)
+      .text(seq, content.x0, ctx.y + 11, { width: w });
     ctx.y += h + 10;
   }
 }
@@ -194,19 +291,47 @@ function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
   const h = doc.heightOfString(text, { width: w - 16 }) + 26;
   ctx.ensure(h + 8);
   doc.rect(content.x0, ctx.y, w, h).fillAndStroke(C.brass50, C.brass300);
-  doc.font("sansBold").fontSize(8).fillColor(C.brass700).text("Cautions — before you rely on these numbers", content.x0 + 8, ctx.y + 7, { lineBreak: false });
-  doc.font("sans").fontSize(7.2).fillColor(C.ink900).text(text, content.x0 + 8, ctx.y + 19, { width: w - 16 });
+  doc
+    .font("sansBold")
+    .fontSize(8)
+    .fillColor(C.brass700)
+    .text("Cautions — before you rely on these numbers", content.x0 + 8, ctx.y + 7, { lineBreak: false });
+  doc
+    .font("sans")
+    .fontSize(7.2)
+    .fillColor(C.ink900)
+    .text(text, content.x0 + 8, ctx.y + 19, { width: w - 16 });
   ctx.y += h + 10;
-  heading(ctx, "Tables and editions used", view.coreVersion ? `calculation core ${view.coreVersion}` : undefined);
+  heading(
+    ctx,
+    "Tables and editions used",
+    view.coreVersion ? `calculation core ${view.coreVersion}` : undefined,
+  );
   if (view.editions.length === 0) {
-    doc.font("sans").fontSize(7.5).fillColor(C.ink700).text("The stored result lists no tables.", content.x0, ctx.y);
+    doc
+      .font("sans")
+      .fontSize(7.5)
+      .fillColor(C.ink700)
+      .text("The stored result lists no tables.", content.x0, ctx.y);
     ctx.y += 14;
   } else {
-    drawTable(ctx, [{ header: "Data", width: 2, wrap: true }, { header: "Source", width: 3, wrap: true }, { header: "Edition", width: 2.4, wrap: true }, { header: "Tag", width: 0.6 }], view.editions.map((e) => [e.what, e.source, e.edition, e.confidence]));
+    drawTable(
+      ctx,
+      [
+        { header: "Data", width: 2, wrap: true },
+        { header: "Source", width: 3, wrap: true },
+        { header: "Edition", width: 2.4, wrap: true },
+        { header: "Tag", width: 0.6 },
+      ],
+      view.editions.map((e) => [e.what, e.source, e.edition, e.confidence]),
+    );
   }
   const integrity = ctx.input.revision.integrityNote;
   if (integrity) {
-    doc.font("sans").fontSize(7.2).fillColor(integrity.includes("mismatch") ? C.fail : C.ink700);
+    doc
+      .font("sans")
+      .fontSize(7.2)
+      .fillColor(integrity.includes("mismatch") ? C.fail : C.ink700);
     ctx.ensure(14);
     doc.text(integrity, content.x0, ctx.y, { width: w });
     ctx.y += doc.heightOfString(integrity, { width: w }) + 6;

@@ -69,7 +69,8 @@ import { plainText } from "./plain-text";
 
 type Obj = Record<string, unknown>;
 const isObj = (v: unknown): v is Obj => typeof v === "object" && v !== null && !Array.isArray(v);
-const text = (v: unknown): string => (typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "");
+const text = (v: unknown): string =>
+  typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "";
 
 export function normaliseStatus(v: unknown): SheetStatus {
   return v === "pass" || v === "warn" || v === "fail" ? v : "na";
@@ -127,7 +128,13 @@ export function groupChecks(checks: SheetCheck[]): SheetCheckGroup[] {
     const same = list.filter((c) => c.status === worst.status);
     const statusCounts: Record<SheetStatus, number> = { pass: 0, warn: 0, fail: 0, na: 0 };
     for (const c of list) statusCounts[c.status]++;
-    return { ...worst, count: list.length, worstIds: same.map((c) => c.id), worstSubjects: same.map((c) => c.boltIds.join("–")).filter(Boolean), statusCounts };
+    return {
+      ...worst,
+      count: list.length,
+      worstIds: same.map((c) => c.id),
+      worstSubjects: same.map((c) => c.boltIds.join("–")).filter(Boolean),
+      statusCounts,
+    };
   });
 }
 
@@ -151,10 +158,14 @@ export function readResultView(stored: unknown, u: SheetUnits): SheetResultView 
           stressMpa: gs.profile.stressMpa,
           minFactor: pre && pre.targetN > 0 ? pre.minN / pre.targetN : 1,
           pathLengthMm: gs.pathLengthMm,
-          pathLabel: gs.pathKind === "bolt-path" ? "along the bolt path (full-face gasket)" : "along the gasket centre line",
+          pathLabel:
+            gs.pathKind === "bolt-path"
+              ? "along the bolt path (full-face gasket)"
+              : "along the gasket centre line",
           seatingMpa: gs.seatingMpa ?? null,
           crushMpa: gs.crushMpa ?? null,
-          estimator: gs.governing === "beam" ? "flange as a beam on an elastic foundation" : "cone superposition",
+          estimator:
+            gs.governing === "beam" ? "flange as a beam on an elastic foundation" : "cone superposition",
           boltSMm: gs.boltSOnPathMm ?? null,
         }
       : null;
@@ -174,20 +185,38 @@ export function readResultView(stored: unknown, u: SheetUnits): SheetResultView 
   const keyValues: { label: string; value: string }[] = [];
   if (pre) {
     keyValues.push(
-      { label: "Target preload", value: `${u.force1(pre.targetN)} ${u.force} (${u.stress1(pre.targetStressMpa)} ${u.stress})` },
-      { label: "Preload window", value: `${u.force1(pre.minN)} … ${u.force1(pre.maxN)} ${u.force} (±${Math.round(pre.scatter * 100)} %)` },
+      {
+        label: "Target preload",
+        value: `${u.force1(pre.targetN)} ${u.force} (${u.stress1(pre.targetStressMpa)} ${u.stress})`,
+      },
+      {
+        label: "Preload window",
+        value: `${u.force1(pre.minN)} … ${u.force1(pre.maxN)} ${u.force} (±${Math.round(pre.scatter * 100)} %)`,
+      },
       { label: "Target torque", value: `${u.torque1(pre.targetTorqueNmm)} ${u.torque} (K ${pre.nutFactor})` },
     );
   }
-  if (gs) keyValues.push({ label: "Gasket stress (target)", value: `${u.stress1(gs.minMpa)} … ${u.stress1(gs.maxMpa)} ${u.stress}` });
-  if (r.summary) keyValues.push({ label: "Checks", value: `${r.summary.passCount} pass · ${r.summary.warnCount} warn · ${r.summary.failCount} fail` });
+  if (gs)
+    keyValues.push({
+      label: "Gasket stress (target)",
+      value: `${u.stress1(gs.minMpa)} … ${u.stress1(gs.maxMpa)} ${u.stress}`,
+    });
+  if (r.summary)
+    keyValues.push({
+      label: "Checks",
+      value: `${r.summary.passCount} pass · ${r.summary.warnCount} warn · ${r.summary.failCount} fail`,
+    });
   const boltPoints = new Map((r.bolts ?? []).map((b) => [b.id, { xMm: b.xMm, yMm: b.yMm }]));
   return {
     checks,
     profile,
     passes,
     sequenceIds: plan?.sequence ?? [],
-    sequenceNote: plan ? (plan.sequenceRule === "bit-reversal" ? "cross pattern (bit reversal)" : "cross pattern (farthest first)") : "",
+    sequenceNote: plan
+      ? plan.sequenceRule === "bit-reversal"
+        ? "cross pattern (bit reversal)"
+        : "cross pattern (farthest first)"
+      : "",
     planSource: text(plan?.source ?? ""),
     editions,
     keyValues,

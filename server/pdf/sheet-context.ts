@@ -57,7 +57,12 @@ export interface SheetContext {
 
 export function createContext(doc: PDFKit.PDFDocument, input: SheetInput, u: SheetUnits): SheetContext {
   const [pageW, pageH] = PAPER_SIZES[input.paper];
-  const content = { x0: MARGIN + 10, x1: pageW - MARGIN - 10, y0: MARGIN + 10, y1: pageH - MARGIN - TITLE_BLOCK_H - 8 };
+  const content = {
+    x0: MARGIN + 10,
+    x1: pageW - MARGIN - 10,
+    y0: MARGIN + 10,
+    y1: pageH - MARGIN - TITLE_BLOCK_H - 8,
+  };
   const ctx: SheetContext = {
     doc,
     input,
@@ -85,10 +90,18 @@ export function heading(ctx: SheetContext, text: string, note?: string): void {
   ctx.ensure(40);
   const y = ctx.y;
   doc.rect(content.x0, y + 1, 3, 10).fill(C.brass500);
-  doc.font("sansBold").fontSize(9.5).fillColor(C.ink900).text(text.toUpperCase(), content.x0 + 8, y, { lineBreak: false, characterSpacing: 0.6 });
+  doc
+    .font("sansBold")
+    .fontSize(9.5)
+    .fillColor(C.ink900)
+    .text(text.toUpperCase(), content.x0 + 8, y, { lineBreak: false, characterSpacing: 0.6 });
   if (note) {
     const w = doc.widthOfString(text.toUpperCase(), { characterSpacing: 0.6 });
-    doc.font("sans").fontSize(7.5).fillColor(C.ink500).text(note, content.x0 + 16 + w, y + 2, { lineBreak: false });
+    doc
+      .font("sans")
+      .fontSize(7.5)
+      .fillColor(C.ink500)
+      .text(note, content.x0 + 16 + w, y + 2, { lineBreak: false });
   }
   ctx.y = y + 16;
 }

@@ -2,17 +2,40 @@ import "server-only";
 import { plainText } from "./plain-text";
 import { C, MARGIN, TITLE_BLOCK_H, type SheetContext } from "./sheet-context";
 
-const STATUS_TEXT = { draft: "DRAFT", in_review: "IN REVIEW", returned: "RETURNED", approved: "APPROVED" } as const;
+const STATUS_TEXT = {
+  draft: "DRAFT",
+  in_review: "IN REVIEW",
+  returned: "RETURNED",
+  approved: "APPROVED",
+} as const;
 
-function cell(ctx: SheetContext, x: number, y: number, w: number, h: number, label: string, value: string, opts: { mono?: boolean; size?: number; color?: string } = {}): void {
+function cell(
+  ctx: SheetContext,
+  x: number,
+  y: number,
+  w: number,
+  h: number,
+  label: string,
+  value: string,
+  opts: { mono?: boolean; size?: number; color?: string } = {},
+): void {
   const { doc } = ctx;
   doc.lineWidth(0.5).strokeColor(C.ink700).rect(x, y, w, h).stroke();
-  doc.font("sans").fontSize(5.6).fillColor(C.ink500).text(label.toUpperCase(), x + 3.5, y + 3, { lineBreak: false, characterSpacing: 0.4 });
+  doc
+    .font("sans")
+    .fontSize(5.6)
+    .fillColor(C.ink500)
+    .text(label.toUpperCase(), x + 3.5, y + 3, { lineBreak: false, characterSpacing: 0.4 });
   doc
     .font(opts.mono ? "mono" : "sansBold")
     .fontSize(opts.size ?? 8.2)
     .fillColor(opts.color ?? C.ink900)
-    .text(plainText(value), x + 3.5, y + 11.5, { width: w - 7, height: h - 12, lineBreak: true, ellipsis: true });
+    .text(plainText(value), x + 3.5, y + 11.5, {
+      width: w - 7,
+      height: h - 12,
+      lineBreak: true,
+      ellipsis: true,
+    });
 }
 
 function date(iso: string | null): string {
@@ -26,7 +49,11 @@ function date(iso: string | null): string {
 export function drawTitleBlock(ctx: SheetContext, pageIndex: number, pageCount: number): void {
   const { doc, pageW, pageH, input } = ctx;
   const { design, revision } = input;
-  doc.lineWidth(1.2).strokeColor(C.ink900).rect(MARGIN, MARGIN, pageW - 2 * MARGIN, pageH - 2 * MARGIN).stroke();
+  doc
+    .lineWidth(1.2)
+    .strokeColor(C.ink900)
+    .rect(MARGIN, MARGIN, pageW - 2 * MARGIN, pageH - 2 * MARGIN)
+    .stroke();
   const x0 = MARGIN;
   const y0 = pageH - MARGIN - TITLE_BLOCK_H;
   const w = pageW - 2 * MARGIN;
@@ -34,9 +61,26 @@ export function drawTitleBlock(ctx: SheetContext, pageIndex: number, pageCount: 
   // Brand cell spans both rows.
   const brandW = 92;
   doc.rect(x0, y0, brandW, TITLE_BLOCK_H).fill(C.ink900);
-  doc.font("sansBold").fontSize(12).fillColor("#ffffff").text("Sealpitch", x0 + 8, y0 + 9, { lineBreak: false });
-  doc.font("sans").fontSize(6.5).fillColor(C.brass300).text("BOLT-SPACING SHEET", x0 + 8, y0 + 26, { lineBreak: false, characterSpacing: 0.5 });
-  doc.font("sans").fontSize(6).fillColor(C.ink200).text(`${ctx.u.system === "SI" ? "SI units (mm, MPa, N·m)" : "US units (in, psi, ft·lb)"}`, x0 + 8, y0 + 38, { lineBreak: false });
+  doc
+    .font("sansBold")
+    .fontSize(12)
+    .fillColor("#ffffff")
+    .text("Sealpitch", x0 + 8, y0 + 9, { lineBreak: false });
+  doc
+    .font("sans")
+    .fontSize(6.5)
+    .fillColor(C.brass300)
+    .text("BOLT-SPACING SHEET", x0 + 8, y0 + 26, { lineBreak: false, characterSpacing: 0.5 });
+  doc
+    .font("sans")
+    .fontSize(6)
+    .fillColor(C.ink200)
+    .text(
+      `${ctx.u.system === "SI" ? "SI units (mm, MPa, N·m)" : "US units (in, psi, ft·lb)"}`,
+      x0 + 8,
+      y0 + 38,
+      { lineBreak: false },
+    );
 
   const rest = w - brandW;
   const cols1 = [0.34, 0.2, 0.12, 0.34];
@@ -46,7 +90,13 @@ export function drawTitleBlock(ctx: SheetContext, pageIndex: number, pageCount: 
     ["Equipment tag", design.equipmentTag || "—"],
     ["Revision", String(revision.number)],
     // Also printed in words in the strip: text extractors drop the diagonal mark.
-    ["Status", revision.status === "approved" ? STATUS_TEXT.approved : `${STATUS_TEXT[revision.status]} · NOT APPROVED`, { color: revision.status === "approved" ? C.pass : C.fail }],
+    [
+      "Status",
+      revision.status === "approved"
+        ? STATUS_TEXT.approved
+        : `${STATUS_TEXT[revision.status]} · NOT APPROVED`,
+      { color: revision.status === "approved" ? C.pass : C.fail },
+    ],
   ];
   const row2: [string, string, object?][] = [
     ["Designer", revision.designer],
@@ -88,6 +138,10 @@ export function drawNotApprovedMark(ctx: SheetContext, pageIndex: number): void 
   const sx = pageW - MARGIN - sw - 10;
   const sy = MARGIN + 8;
   doc.lineWidth(1.4).strokeColor(C.fail).rect(sx, sy, sw, 22).stroke();
-  doc.font("sansBold").fontSize(11).fillColor(C.fail).text(label, sx, sy + 5, { width: sw, align: "center", lineBreak: false });
+  doc
+    .font("sansBold")
+    .fontSize(11)
+    .fillColor(C.fail)
+    .text(label, sx, sy + 5, { width: sw, align: "center", lineBreak: false });
   doc.restore();
 }

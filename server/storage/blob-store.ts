@@ -22,7 +22,12 @@ export async function putBlob(db: Executor, organizationId: string, bytes: Uint8
   const sha256 = sha256Hex(bytes);
   const row = await db
     .insertInto("blobs")
-    .values({ organization_id: organizationId, bytes: Buffer.from(bytes), size_bytes: bytes.byteLength, sha256 })
+    .values({
+      organization_id: organizationId,
+      bytes: Buffer.from(bytes),
+      size_bytes: bytes.byteLength,
+      sha256,
+    })
     .returning(["id", "size_bytes", "sha256"])
     .executeTakeFirstOrThrow();
   return { id: row.id, sizeBytes: row.size_bytes, sha256: row.sha256 };
@@ -39,6 +44,10 @@ export async function getBlob(db: Executor, organizationId: string, blobId: stri
 }
 
 export async function deleteBlob(db: Executor, organizationId: string, blobId: string): Promise<boolean> {
-  const result = await db.deleteFrom("blobs").where("organization_id", "=", organizationId).where("id", "=", blobId).executeTakeFirst();
+  const result = await db
+    .deleteFrom("blobs")
+    .where("organization_id", "=", organizationId)
+    .where("id", "=", blobId)
+    .executeTakeFirst();
   return Number(result.numDeletedRows) > 0;
 }

@@ -20,13 +20,20 @@ describe("database foundation (real PostgreSQL)", () => {
   });
 
   it("writes an organisation, a user and a membership and reads them back", async () => {
-    const org = await db.insertInto("organizations").values({ name: "Test Works", slug: "test-works" }).returning("id").executeTakeFirstOrThrow();
+    const org = await db
+      .insertInto("organizations")
+      .values({ name: "Test Works", slug: "test-works" })
+      .returning("id")
+      .executeTakeFirstOrThrow();
     const user = await db
       .insertInto("users")
       .values({ email: "tess@test-works.example", display_name: "Tess", password_hash: null })
       .returning("id")
       .executeTakeFirstOrThrow();
-    await db.insertInto("memberships").values({ organization_id: org.id, user_id: user.id, roles: ["designer", "approver"] }).execute();
+    await db
+      .insertInto("memberships")
+      .values({ organization_id: org.id, user_id: user.id, roles: ["designer", "approver"] })
+      .execute();
 
     const row = await db
       .selectFrom("memberships")
@@ -38,14 +45,28 @@ describe("database foundation (real PostgreSQL)", () => {
   });
 
   it("refuses an unknown role and an e-mail address that is not lower case", async () => {
-    const org = await db.insertInto("organizations").values({ name: "X", slug: "x" }).returning("id").executeTakeFirstOrThrow();
-    const user = await db.insertInto("users").values({ email: "x@x.example", display_name: "X", password_hash: null }).returning("id").executeTakeFirstOrThrow();
+    const org = await db
+      .insertInto("organizations")
+      .values({ name: "X", slug: "x" })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    const user = await db
+      .insertInto("users")
+      .values({ email: "x@x.example", display_name: "X", password_hash: null })
+      .returning("id")
+      .executeTakeFirstOrThrow();
     await expect(
-      db.insertInto("memberships").values({ organization_id: org.id, user_id: user.id, roles: ["owner" as never] }).execute(),
+      db
+        .insertInto("memberships")
+        .values({ organization_id: org.id, user_id: user.id, roles: ["owner" as never] })
+        .execute(),
     ).rejects.toThrow(/memberships_roles_known/);
-    await expect(db.insertInto("users").values({ email: "Mixed@X.example", display_name: "M", password_hash: null }).execute()).rejects.toThrow(
-      /users_email_lower/,
-    );
+    await expect(
+      db
+        .insertInto("users")
+        .values({ email: "Mixed@X.example", display_name: "M", password_hash: null })
+        .execute(),
+    ).rejects.toThrow(/users_email_lower/);
   });
 
   it("reports health: green when current, a reason when a migration is missing", async () => {

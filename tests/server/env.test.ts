@@ -32,6 +32,8 @@ describe("server settings", () => {
   });
 
   it("rejects a database URL that is not PostgreSQL", () => {
-    expect(() => parseEnv({ ...valid, DATABASE_URL: "mysql://x" })).toThrow(/DATABASE_URL must be a postgres/);
+    expect(() => parseEnv({ ...valid, DATABASE_URL: "mysql://x" })).toThrow(
+      /DATABASE_URL must be a postgres/,
+    );
   });
 });

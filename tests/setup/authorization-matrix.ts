@@ -16,7 +16,10 @@ export const VIEWER_ROLES = {
 } as const satisfies Record<string, Role[]>;
 
 export type MatrixViewer = keyof typeof VIEWER_ROLES | "signedOut";
-export const MATRIX_VIEWERS: MatrixViewer[] = ["signedOut", ...(Object.keys(VIEWER_ROLES) as (keyof typeof VIEWER_ROLES)[])];
+export const MATRIX_VIEWERS: MatrixViewer[] = [
+  "signedOut",
+  ...(Object.keys(VIEWER_ROLES) as (keyof typeof VIEWER_ROLES)[]),
+];
 
 export interface MatrixContext {
   home: OrganizationFixture<keyof typeof VIEWER_ROLES>;
@@ -45,8 +48,14 @@ export function runAuthorizationMatrix(title: string, rows: MatrixRow[]): void {
     const db = getTestDb();
     let ctx: MatrixContext;
     beforeAll(async () => {
-      const home = await createOrganizationWithMembers(db, VIEWER_ROLES as unknown as Record<keyof typeof VIEWER_ROLES, Role[]>);
-      const foreign = await createOrganizationWithMembers(db, { foreignAdmin: ["admin"], foreignDesigner: ["designer"] });
+      const home = await createOrganizationWithMembers(
+        db,
+        VIEWER_ROLES as unknown as Record<keyof typeof VIEWER_ROLES, Role[]>,
+      );
+      const foreign = await createOrganizationWithMembers(db, {
+        foreignAdmin: ["admin"],
+        foreignDesigner: ["designer"],
+      });
       ctx = {
         home,
         foreign,

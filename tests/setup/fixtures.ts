@@ -43,15 +43,26 @@ export async function createOrganizationWithMembers<K extends string>(
   const tag = randomUUID().slice(0, 8);
   const organizationName = options.name ?? `Fixture Works ${tag}`;
   const slug = `fixture-${tag}`;
-  const org = await db.insertInto("organizations").values({ name: organizationName, slug }).returning("id").executeTakeFirstOrThrow();
+  const org = await db
+    .insertInto("organizations")
+    .values({ name: organizationName, slug })
+    .returning("id")
+    .executeTakeFirstOrThrow();
   fixtureHash ??= hashPassword(FIXTURE_PASSWORD);
   const passwordHash = await fixtureHash;
   const users = {} as Record<K, FixtureUser>;
   for (const key of Object.keys(members) as K[]) {
     const email = `${key.toLowerCase().replace(/[^a-z0-9]+/g, "-")}.${tag}@fixture.example`;
     const displayName = `${key} ${tag}`;
-    const user = await db.insertInto("users").values({ email, display_name: displayName, password_hash: passwordHash }).returning("id").executeTakeFirstOrThrow();
-    await db.insertInto("memberships").values({ organization_id: org.id, user_id: user.id, roles: members[key] }).execute();
+    const user = await db
+      .insertInto("users")
+      .values({ email, display_name: displayName, password_hash: passwordHash })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    await db
+      .insertInto("memberships")
+      .values({ organization_id: org.id, user_id: user.id, roles: members[key] })
+      .execute();
     users[key] = { userId: user.id, email, displayName, roles: members[key] };
   }
   return {
@@ -77,7 +88,13 @@ export async function sessionCookieFor(userId: string, organizationId: string | 
 /** A Request to the app as the browser would send it (same Origin unless told otherwise). */
 export function appRequest(
   path: string,
-  init: { method?: string; cookie?: string; body?: unknown; origin?: string | null; headers?: Record<string, string> } = {},
+  init: {
+    method?: string;
+    cookie?: string;
+    body?: unknown;
+    origin?: string | null;
+    headers?: Record<string, string>;
+  } = {},
 ): Request {
   const base = process.env.APP_URL ?? "http://127.0.0.1:3100";
   const headers = new Headers(init.headers);
@@ -85,5 +102,9 @@ export function appRequest(
   const method = init.method ?? "GET";
   if (init.origin !== null && method !== "GET") headers.set("origin", init.origin ?? new URL(base).origin);
   if (init.body !== undefined) headers.set("content-type", "application/json");
-  return new Request(new URL(path, base), { method, headers, body: init.body === undefined ? undefined : JSON.stringify(init.body) });
+  return new Request(new URL(path, base), {
+    method,
+    headers,
+    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+  });
 }

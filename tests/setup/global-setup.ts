@@ -4,6 +4,8 @@
 export default function setup(): void {
   const url = process.env.DATABASE_URL;
   if (url && !/sealpitch_test/.test(url)) {
-    throw new Error(`Refusing to run tests against ${url}: the test database name must contain "sealpitch_test".`);
+    throw new Error(
+      `Refusing to run tests against ${url}: the test database name must contain "sealpitch_test".`,
+    );
   }
 }

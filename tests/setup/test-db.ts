@@ -9,7 +9,9 @@ let instance: Kysely<Database> | undefined;
 export function getTestDb(): Kysely<Database> {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error("DATABASE_URL is not set: run the integration tests through `npm test`.");
-  instance ??= new Kysely<Database>({ dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: url, max: 4 }) }) });
+  instance ??= new Kysely<Database>({
+    dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: url, max: 4 }) }),
+  });
   return instance;
 }
 
@@ -17,7 +19,11 @@ export function getTestDb(): Kysely<Database> {
 export async function clearTables(db: Kysely<Database> = getTestDb()): Promise<void> {
   const { rows } = await sql<{ tablename: string }>`
     select tablename from pg_tables
-    where schemaname = 'public' and tablename not in ('kysely_migration', 'kysely_migration_lock', 'app_meta')`.execute(db);
+    where schemaname = 'public' and tablename not in ('kysely_migration', 'kysely_migration_lock', 'app_meta')`.execute(
+    db,
+  );
   if (rows.length === 0) return;
-  await sql.raw(`truncate ${rows.map((r) => `"${r.tablename}"`).join(", ")} restart identity cascade`).execute(db);
+  await sql
+    .raw(`truncate ${rows.map((r) => `"${r.tablename}"`).join(", ")} restart identity cascade`)
+    .execute(db);
 }

@@ -9,11 +9,17 @@ export default function ForgotPasswordPage() {
   return (
     <>
       <h1 className="text-heading font-semibold">Forgot your password?</h1>
-      <p className="mt-1 text-table text-ink-600">We e-mail you a link that lets you choose a new one. It works once, for an hour.</p>
+      <p className="mt-1 text-table text-ink-600">
+        We e-mail you a link that lets you choose a new one. It works once, for an hour.
+      </p>
       <div className="mt-5">
         <ForgotPasswordForm requestPasswordResetAction={requestPasswordResetAction} />
       </div>
-      <p className="mt-4 text-table"><Link href="/sign-in" className="underline">Back to sign-in</Link></p>
+      <p className="mt-4 text-table">
+        <Link href="/sign-in" className="underline">
+          Back to sign-in
+        </Link>
+      </p>
     </>
   );
 }

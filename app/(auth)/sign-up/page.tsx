@@ -13,7 +13,10 @@ export default async function SignUpPage() {
     <>
       <h1 className="text-heading font-semibold">Start an organisation</h1>
       <p className="mt-1 text-table text-ink-600">
-        Joining a team that already uses Sealpitch? Ask its administrator for an invitation instead. <Link href="/sign-in" className="underline">Sign in</Link>
+        Joining a team that already uses Sealpitch? Ask its administrator for an invitation instead.{" "}
+        <Link href="/sign-in" className="underline">
+          Sign in
+        </Link>
       </p>
       <div className="mt-5">
         <SignUpForm signUpAction={signUpAction} />

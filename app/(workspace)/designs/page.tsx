@@ -13,27 +13,49 @@ import { requireViewer } from "@/server/auth/guard";
 
 export const metadata: Metadata = { title: "Joint register" };
 
-export default async function DesignsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function DesignsPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const viewer = await requireViewer();
   const query = listDesignsQuerySchema.parse(searchParamsToObject(await searchParams));
   const db = getDb();
-  const [page, owners] = await Promise.all([listDesigns(db, viewer.organizationId, query), listDesignOwners(db, viewer.organizationId)]);
+  const [page, owners] = await Promise.all([
+    listDesigns(db, viewer.organizationId, query),
+    listDesignOwners(db, viewer.organizationId),
+  ]);
   return (
     <div className="flex flex-col gap-6">
       <header className="flex flex-wrap items-end justify-between gap-4">
         <div>
           <p className="text-table uppercase tracking-wider text-brass-600">{viewer.organizationName}</p>
-          <h1 className="mt-1 text-display font-semibold">{query.archived === "only" ? "Joint register: archived" : "Joint register"}</h1>
+          <h1 className="mt-1 text-display font-semibold">
+            {query.archived === "only" ? "Joint register: archived" : "Joint register"}
+          </h1>
         </div>
         <div className="flex gap-3">
-          <Link href={registerHref(query, { archived: query.archived === "only" ? "hide" : "only", page: 1 })} className={buttonStyles.quiet}>
+          <Link
+            href={registerHref(query, { archived: query.archived === "only" ? "hide" : "only", page: 1 })}
+            className={buttonStyles.quiet}
+          >
             {query.archived === "only" ? "Show current joints" : "Show archived"}
           </Link>
-          {canCreateDesign(viewer) ? <Link href="/designs/new" className={buttonStyles.primary}>New design</Link> : null}
+          {canCreateDesign(viewer) ? (
+            <Link href="/designs/new" className={buttonStyles.primary}>
+              New design
+            </Link>
+          ) : null}
         </div>
       </header>
       <RegisterFilters query={query} owners={owners} />
-      <DesignRegisterTable page={page} query={query} viewer={viewer} duplicateDesignAction={duplicateDesignAction} setDesignArchivedAction={setDesignArchivedAction} />
+      <DesignRegisterTable
+        page={page}
+        query={query}
+        viewer={viewer}
+        duplicateDesignAction={duplicateDesignAction}
+        setDesignArchivedAction={setDesignArchivedAction}
+      />
     </div>
   );
 }

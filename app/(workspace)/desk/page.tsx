@@ -14,14 +14,27 @@ export default async function DeskPage() {
     <div className="flex flex-col gap-6">
       <section>
         <p className="text-table uppercase tracking-wider text-brass-600">Desk</p>
-        <h1 className="mt-1 text-display font-semibold">Good to see you, {viewer.displayName.split(" ")[0]}.</h1>
+        <h1 className="mt-1 text-display font-semibold">
+          Good to see you, {viewer.displayName.split(" ")[0]}.
+        </h1>
         <p className="mt-2 text-lead text-ink-700">
-          {viewer.organizationName} · <span data-testid="desk-roles">{viewer.roles.map((r) => ROLE_NAMES[r]).join(", ")}</span>
+          {viewer.organizationName} ·{" "}
+          <span data-testid="desk-roles">{viewer.roles.map((r) => ROLE_NAMES[r]).join(", ")}</span>
         </p>
         <div className="mt-4 flex flex-wrap gap-3">
-          <Link href="/designs" className={buttonStyles.primary}>Open the Joint register</Link>
-          {viewer.roles.includes("designer") ? <Link href="/designs/new" className={buttonStyles.secondary}>Start a joint design</Link> : null}
-          {viewer.roles.includes("admin") ? <Link href="/team" className={buttonStyles.quiet}>Manage the crew</Link> : null}
+          <Link href="/designs" className={buttonStyles.primary}>
+            Open the Joint register
+          </Link>
+          {viewer.roles.includes("designer") ? (
+            <Link href="/designs/new" className={buttonStyles.secondary}>
+              Start a joint design
+            </Link>
+          ) : null}
+          {viewer.roles.includes("admin") ? (
+            <Link href="/team" className={buttonStyles.quiet}>
+              Manage the crew
+            </Link>
+          ) : null}
         </div>
       </section>
       <DeskLists viewer={viewer} />

@@ -1,6 +1,11 @@
 import type { Metadata } from "next";
 import { getDb } from "@/db/index";
-import { InvitationButtons, InviteMemberForm, MemberRoleForm, RemoveMemberForm } from "@/features/accounts/components/team-forms";
+import {
+  InvitationButtons,
+  InviteMemberForm,
+  MemberRoleForm,
+  RemoveMemberForm,
+} from "@/features/accounts/components/team-forms";
 import { getTeam } from "@/features/accounts/team";
 import {
   changeMemberRolesAction,
@@ -24,18 +29,43 @@ export default async function TeamPage() {
       </header>
 
       <section aria-labelledby="members" className="rounded-plate bg-white p-5 shadow-plate">
-        <h2 id="members" className="text-lead font-semibold">Members</h2>
+        <h2 id="members" className="text-lead font-semibold">
+          Members
+        </h2>
         <table className="mt-3 w-full">
           <thead className="text-left text-ink-500">
-            <tr><th className="py-2">Name</th><th>E-mail</th><th>Roles</th><th><span className="sr-only">Remove</span></th></tr>
+            <tr>
+              <th className="py-2">Name</th>
+              <th>E-mail</th>
+              <th>Roles</th>
+              <th>
+                <span className="sr-only">Remove</span>
+              </th>
+            </tr>
           </thead>
           <tbody>
             {team.members.map((m) => (
               <tr key={m.userId} className="border-t border-ink-100 align-middle">
-                <td className="py-2 font-medium">{m.displayName}{m.userId === viewer.userId ? " (you)" : ""}</td>
+                <td className="py-2 font-medium">
+                  {m.displayName}
+                  {m.userId === viewer.userId ? " (you)" : ""}
+                </td>
                 <td className="num">{m.email}</td>
-                <td><MemberRoleForm userId={m.userId} displayName={m.displayName} roles={m.roles} changeMemberRolesAction={changeMemberRolesAction} /></td>
-                <td><RemoveMemberForm userId={m.userId} displayName={m.displayName} removeMemberAction={removeMemberAction} /></td>
+                <td>
+                  <MemberRoleForm
+                    userId={m.userId}
+                    displayName={m.displayName}
+                    roles={m.roles}
+                    changeMemberRolesAction={changeMemberRolesAction}
+                  />
+                </td>
+                <td>
+                  <RemoveMemberForm
+                    userId={m.userId}
+                    displayName={m.displayName}
+                    removeMemberAction={removeMemberAction}
+                  />
+                </td>
               </tr>
             ))}
           </tbody>
@@ -43,13 +73,22 @@ export default async function TeamPage() {
       </section>
 
       <section aria-labelledby="pending" className="rounded-plate bg-white p-5 shadow-plate">
-        <h2 id="pending" className="text-lead font-semibold">Pending invitations</h2>
+        <h2 id="pending" className="text-lead font-semibold">
+          Pending invitations
+        </h2>
         {team.invitations.length === 0 ? (
           <p className="mt-2 text-ink-600">No invitations are waiting.</p>
         ) : (
           <table className="mt-3 w-full">
             <thead className="text-left text-ink-500">
-              <tr><th className="py-2">E-mail</th><th>Roles</th><th>Link valid until</th><th><span className="sr-only">Actions</span></th></tr>
+              <tr>
+                <th className="py-2">E-mail</th>
+                <th>Roles</th>
+                <th>Link valid until</th>
+                <th>
+                  <span className="sr-only">Actions</span>
+                </th>
+              </tr>
             </thead>
             <tbody>
               {team.invitations.map((i) => (
@@ -57,7 +96,14 @@ export default async function TeamPage() {
                   <td className="num py-2">{i.email}</td>
                   <td>{i.roles.join(", ")}</td>
                   <td className="num">{i.expired ? "expired" : i.expiresAt.slice(0, 10)}</td>
-                  <td><InvitationButtons invitationId={i.invitationId} email={i.email} resendInvitationAction={resendInvitationAction} revokeInvitationAction={revokeInvitationAction} /></td>
+                  <td>
+                    <InvitationButtons
+                      invitationId={i.invitationId}
+                      email={i.email}
+                      resendInvitationAction={resendInvitationAction}
+                      revokeInvitationAction={revokeInvitationAction}
+                    />
+                  </td>
                 </tr>
               ))}
             </tbody>
@@ -66,9 +112,13 @@ export default async function TeamPage() {
       </section>
 
       <section aria-labelledby="invite" className="max-w-lg rounded-plate bg-white p-5 shadow-plate">
-        <h2 id="invite" className="text-lead font-semibold">Invite a member</h2>
+        <h2 id="invite" className="text-lead font-semibold">
+          Invite a member
+        </h2>
         <p className="mt-1 text-table text-ink-600">They get an e-mail with a link that works for 7 days.</p>
-        <div className="mt-4"><InviteMemberForm inviteMemberAction={inviteMemberAction} /></div>
+        <div className="mt-4">
+          <InviteMemberForm inviteMemberAction={inviteMemberAction} />
+        </div>
       </section>
     </div>
   );

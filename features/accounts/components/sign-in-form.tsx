@@ -8,23 +8,48 @@ import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
 import { useRememberedValues } from "@/features/ui/use-remembered-values";
 
-export function SignInForm({ signInAction, next }: { signInAction: (prev: ActionResult | null, data: FormData) => Promise<ActionResult>; next?: string }) {
+export function SignInForm({
+  signInAction,
+  next,
+}: {
+  signInAction: (prev: ActionResult | null, data: FormData) => Promise<ActionResult>;
+  next?: string;
+}) {
   const [state, formAction, pending] = useActionState(signInAction, null);
   const errors = state && !state.ok ? state.fieldErrors : undefined;
   const { values, remember } = useRememberedValues(["password"]);
   return (
     <form action={remember(formAction)} className="flex flex-col gap-4" noValidate>
       {next ? <input type="hidden" name="next" value={next} /> : null}
-      <TextField label="E-mail" name="email" type="email" autoComplete="username" required errors={errors?.email} defaultValue={values.email} />
-      <TextField label="Password" name="password" type="password" autoComplete="current-password" required errors={errors?.password} />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="username"
+        required
+        errors={errors?.email}
+        defaultValue={values.email}
+      />
+      <TextField
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="current-password"
+        required
+        errors={errors?.password}
+      />
       <FormStatus state={state} />
       <button type="submit" className={buttonStyles.primary} disabled={pending}>
         Sign in
       </button>
       <p className="text-table text-ink-600">
-        <Link href="/forgot-password" className="underline">Forgot your password?</Link>
+        <Link href="/forgot-password" className="underline">
+          Forgot your password?
+        </Link>
         {" · "}
-        <Link href="/sign-up" className="underline">Start an organisation</Link>
+        <Link href="/sign-up" className="underline">
+          Start an organisation
+        </Link>
       </p>
     </form>
   );

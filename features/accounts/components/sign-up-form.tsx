@@ -7,19 +7,63 @@ import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
 import { useRememberedValues } from "@/features/ui/use-remembered-values";
 
-export function SignUpForm({ signUpAction }: { signUpAction: (prev: ActionResult | null, data: FormData) => Promise<ActionResult> }) {
+export function SignUpForm({
+  signUpAction,
+}: {
+  signUpAction: (prev: ActionResult | null, data: FormData) => Promise<ActionResult>;
+}) {
   const [state, formAction, pending] = useActionState(signUpAction, null);
   const errors = state && !state.ok ? state.fieldErrors : undefined;
   const { values, remember } = useRememberedValues(["password", "confirmPassword"]);
   return (
     <form action={remember(formAction)} className="flex flex-col gap-4" noValidate>
-      <TextField label="Your name" name="displayName" autoComplete="name" required errors={errors?.displayName} defaultValue={values.displayName} />
-      <TextField label="E-mail" name="email" type="email" autoComplete="email" required errors={errors?.email} defaultValue={values.email} />
-      <TextField label="Organisation" name="organizationName" autoComplete="organization" required errors={errors?.organizationName} defaultValue={values.organizationName} hint="Your company or team; you become its administrator." />
-      <TextField label="Password" name="password" type="password" autoComplete="new-password" required errors={errors?.password} hint="At least 10 characters." />
-      <TextField label="Repeat the password" name="confirmPassword" type="password" autoComplete="new-password" required errors={errors?.confirmPassword} />
+      <TextField
+        label="Your name"
+        name="displayName"
+        autoComplete="name"
+        required
+        errors={errors?.displayName}
+        defaultValue={values.displayName}
+      />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="email"
+        required
+        errors={errors?.email}
+        defaultValue={values.email}
+      />
+      <TextField
+        label="Organisation"
+        name="organizationName"
+        autoComplete="organization"
+        required
+        errors={errors?.organizationName}
+        defaultValue={values.organizationName}
+        hint="Your company or team; you become its administrator."
+      />
+      <TextField
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="new-password"
+        required
+        errors={errors?.password}
+        hint="At least 10 characters."
+      />
+      <TextField
+        label="Repeat the password"
+        name="confirmPassword"
+        type="password"
+        autoComplete="new-password"
+        required
+        errors={errors?.confirmPassword}
+      />
       <FormStatus state={state} />
-      <button type="submit" className={buttonStyles.primary} disabled={pending}>Start the organisation</button>
+      <button type="submit" className={buttonStyles.primary} disabled={pending}>
+        Start the organisation
+      </button>
     </form>
   );
 }

@@ -17,7 +17,11 @@ const ROLE_LABELS: { role: Role; label: string }[] = [
 
 function Status({ state }: { state: ActionResult<string> | null }) {
   return (
-    <span role="status" aria-live="polite" className={state?.ok ? "text-table text-verdict-pass" : "text-table text-verdict-fail"}>
+    <span
+      role="status"
+      aria-live="polite"
+      className={state?.ok ? "text-table text-verdict-pass" : "text-table text-verdict-fail"}
+    >
       {state ? (state.ok ? state.data : (state.fieldErrors?.roles?.[0] ?? state.message)) : ""}
     </span>
   );
@@ -41,19 +45,41 @@ export function InviteMemberForm({ inviteMemberAction }: { inviteMemberAction: T
   const errors = state && !state.ok ? state.fieldErrors : undefined;
   const { values, remember } = useRememberedValues();
   return (
-    <form action={remember(formAction)} className="flex flex-col gap-3" noValidate aria-label="Invite a member">
-      <TextField label="E-mail" name="email" type="email" required errors={errors?.email} defaultValue={state?.ok ? "" : values.email} />
+    <form
+      action={remember(formAction)}
+      className="flex flex-col gap-3"
+      noValidate
+      aria-label="Invite a member"
+    >
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        required
+        errors={errors?.email}
+        defaultValue={state?.ok ? "" : values.email}
+      />
       <RoleChoices name="roles" selected={["designer"]} legend="Roles of the new member" />
       {errors?.roles ? <p className="text-table text-verdict-fail">{errors.roles[0]}</p> : null}
       <div className="flex items-center gap-3">
-        <button type="submit" className={buttonStyles.primary} disabled={pending}>Send invitation</button>
+        <button type="submit" className={buttonStyles.primary} disabled={pending}>
+          Send invitation
+        </button>
         <Status state={state && !state.ok && (errors?.email || errors?.roles) ? null : state} />
       </div>
     </form>
   );
 }
 
-function RowForm({ action, children, hidden }: { action: TeamAction; children: (pending: boolean) => ReactNode; hidden: Record<string, string> }) {
+function RowForm({
+  action,
+  children,
+  hidden,
+}: {
+  action: TeamAction;
+  children: (pending: boolean) => ReactNode;
+  hidden: Record<string, string>;
+}) {
   const [state, formAction, pending] = useActionState(action, null);
   return (
     <form action={formAction} className="flex flex-wrap items-center gap-3">
@@ -66,37 +92,97 @@ function RowForm({ action, children, hidden }: { action: TeamAction; children: (
   );
 }
 
-export function MemberRoleForm({ userId, displayName, roles, changeMemberRolesAction }: { userId: string; displayName: string; roles: Role[]; changeMemberRolesAction: TeamAction }) {
+export function MemberRoleForm({
+  userId,
+  displayName,
+  roles,
+  changeMemberRolesAction,
+}: {
+  userId: string;
+  displayName: string;
+  roles: Role[];
+  changeMemberRolesAction: TeamAction;
+}) {
   return (
     <RowForm action={changeMemberRolesAction} hidden={{ userId }}>
       {(pending) => (
         <>
           <RoleChoices name="roles" selected={roles} legend={`Roles of ${displayName}`} />
-          <button type="submit" className={buttonStyles.secondary} disabled={pending} aria-label={`Save roles of ${displayName}`}>Save roles</button>
+          <button
+            type="submit"
+            className={buttonStyles.secondary}
+            disabled={pending}
+            aria-label={`Save roles of ${displayName}`}
+          >
+            Save roles
+          </button>
         </>
       )}
     </RowForm>
   );
 }
 
-export function RemoveMemberForm({ userId, displayName, removeMemberAction }: { userId: string; displayName: string; removeMemberAction: TeamAction }) {
+export function RemoveMemberForm({
+  userId,
+  displayName,
+  removeMemberAction,
+}: {
+  userId: string;
+  displayName: string;
+  removeMemberAction: TeamAction;
+}) {
   return (
     <RowForm action={removeMemberAction} hidden={{ userId }}>
       {(pending) => (
-        <button type="submit" className={buttonStyles.danger} disabled={pending} aria-label={`Remove ${displayName}`}>Remove</button>
+        <button
+          type="submit"
+          className={buttonStyles.danger}
+          disabled={pending}
+          aria-label={`Remove ${displayName}`}
+        >
+          Remove
+        </button>
       )}
     </RowForm>
   );
 }
 
-export function InvitationButtons({ invitationId, email, resendInvitationAction, revokeInvitationAction }: { invitationId: string; email: string; resendInvitationAction: TeamAction; revokeInvitationAction: TeamAction }) {
+export function InvitationButtons({
+  invitationId,
+  email,
+  resendInvitationAction,
+  revokeInvitationAction,
+}: {
+  invitationId: string;
+  email: string;
+  resendInvitationAction: TeamAction;
+  revokeInvitationAction: TeamAction;
+}) {
   return (
     <div className="flex flex-wrap items-center gap-2">
       <RowForm action={resendInvitationAction} hidden={{ invitationId }}>
-        {(pending) => <button type="submit" className={buttonStyles.secondary} disabled={pending} aria-label={`Resend the invitation to ${email}`}>Resend</button>}
+        {(pending) => (
+          <button
+            type="submit"
+            className={buttonStyles.secondary}
+            disabled={pending}
+            aria-label={`Resend the invitation to ${email}`}
+          >
+            Resend
+          </button>
+        )}
       </RowForm>
       <RowForm action={revokeInvitationAction} hidden={{ invitationId }}>
-        {(pending) => <button type="submit" className={buttonStyles.quiet} disabled={pending} aria-label={`Revoke the invitation to ${email}`}>Revoke</button>}
+        {(pending) => (
+          <button
+            type="submit"
+            className={buttonStyles.quiet}
+            disabled={pending}
+            aria-label={`Revoke the invitation to ${email}`}
+          >
+            Revoke
+          </button>
+        )}
       </RowForm>
     </div>
   );

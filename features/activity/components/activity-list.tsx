@@ -2,7 +2,13 @@ import { ACTIVITY_LABELS, type ActivityEntryDto } from "../activity-kinds";
 
 // Server-renderable list of a design's activity (who did what when). Pass the entries from
 // listActivity(db, organizationId, designId) — the component does no data access itself.
-export function ActivityList({ entries, title = "Activity" }: { entries: ActivityEntryDto[]; title?: string }) {
+export function ActivityList({
+  entries,
+  title = "Activity",
+}: {
+  entries: ActivityEntryDto[];
+  title?: string;
+}) {
   return (
     <section aria-labelledby="activity-heading" className="rounded-plate bg-steel-50 p-panel shadow-plate">
       <h2 id="activity-heading" className="text-lead font-semibold text-ink-900">
@@ -17,7 +23,8 @@ export function ActivityList({ entries, title = "Activity" }: { entries: Activit
               <time dateTime={entry.at} className="num mr-2 text-ink-500">
                 {entry.at.slice(0, 16).replace("T", " ")}
               </time>
-              <span className="font-medium text-ink-900">{entry.actorName}</span> {ACTIVITY_LABELS[entry.kind]}
+              <span className="font-medium text-ink-900">{entry.actorName}</span>{" "}
+              {ACTIVITY_LABELS[entry.kind]}
               {entry.revisionNumber !== null ? ` revision ${entry.revisionNumber}` : ""}
               {entry.detail ? <span className="text-ink-500"> — {entry.detail}</span> : null}
             </li>

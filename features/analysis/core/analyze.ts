@@ -79,7 +79,13 @@ export interface JointAnalysis {
     gasketSpringNPerMm: number | null;
     jointConstant: number;
     bearingDiameterMm: number;
-    frusta: { layerIndex: number; thicknessMm: number; narrowDiameterMm: number; modulusMpa: number; stiffnessNPerMm: number }[];
+    frusta: {
+      layerIndex: number;
+      thicknessMm: number;
+      narrowDiameterMm: number;
+      modulusMpa: number;
+      stiffnessNPerMm: number;
+    }[];
     wileman: { stiffnessNPerMm: number; coneMetalOnlyNPerMm: number; ratio: number } | null;
   };
   preload: {
@@ -130,9 +136,23 @@ export interface JointAnalysis {
     crushMpa: number | null;
     boltSOnPathMm: number[];
     cone: ProfileSummary & { missesGasket: boolean };
-    beam: ProfileSummary & { liftedLengthMm: number; iterations: number; converged: boolean; solverNodes: number; forceBalanceRatio: number };
+    beam: ProfileSummary & {
+      liftedLengthMm: number;
+      iterations: number;
+      converged: boolean;
+      solverNodes: number;
+      forceBalanceRatio: number;
+    };
     /** Stress at target preload; scale by preload.minN/targetN or maxN/targetN for the window. */
-    profile: { sMm: number[]; xMm: number[]; yMm: number[]; stressMpa: number[]; coneMpa: number[]; beamMpa: number[]; onGasket: boolean[] };
+    profile: {
+      sMm: number[];
+      xMm: number[];
+      yMm: number[];
+      stressMpa: number[];
+      coneMpa: number[];
+      beamMpa: number[];
+      onGasket: boolean[];
+    };
   };
   asmeAppendix2: AsmeAppendix2Result;
   bolts: BoltResult[];
@@ -160,10 +180,19 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     const share = shareExternalLoad(p.targetN, Math.max(ext, 0), C);
     const sp = spacing.get(b.id);
     return {
-      id: b.id, sMm: b.sMm, xMm: model.boltPoints[i].x, yMm: model.boltPoints[i].y,
-      pitchToNextMm: sp?.pitchMm ?? null, chordToNextMm: sp?.chordMm ?? null,
-      preloadTargetN: p.targetN, preloadMinN: p.minN, preloadMaxN: p.maxN, torqueNmm,
-      externalLoadN: ext, boltLoadN: share.boltN, clampLoadN: share.clampN,
+      id: b.id,
+      sMm: b.sMm,
+      xMm: model.boltPoints[i].x,
+      yMm: model.boltPoints[i].y,
+      pitchToNextMm: sp?.pitchMm ?? null,
+      chordToNextMm: sp?.chordMm ?? null,
+      preloadTargetN: p.targetN,
+      preloadMinN: p.minN,
+      preloadMaxN: p.maxN,
+      torqueNmm,
+      externalLoadN: ext,
+      boltLoadN: share.boltN,
+      clampLoadN: share.clampN,
     };
   });
   const maxExt = Math.max(0, ...model.externalLoadPerBoltN);
@@ -178,9 +207,18 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
   ];
   const gm = design.gasket.material;
   const warnings: string[] = [];
-  if (!profiles.beamInfo.converged) warnings.push("Tensionless beam contact did not settle within 60 iterations; the last contact set is shown.");
-  if (profiles.beam.unloadedLengthMm > 0 && gov.estimator === "beam") warnings.push(`The flange lifts off the gasket over ${profiles.beam.unloadedLengthMm.toFixed(1)} mm of the path at target preload (beam estimate).`);
-  if (profiles.cone.unloadedLengthMm > 0 && gov.estimator === "cone") warnings.push(`Cone footprints leave ${profiles.cone.unloadedLengthMm.toFixed(1)} mm of the gasket path unloaded.`);
+  if (!profiles.beamInfo.converged)
+    warnings.push(
+      "Tensionless beam contact did not settle within 60 iterations; the last contact set is shown.",
+    );
+  if (profiles.beam.unloadedLengthMm > 0 && gov.estimator === "beam")
+    warnings.push(
+      `The flange lifts off the gasket over ${profiles.beam.unloadedLengthMm.toFixed(1)} mm of the path at target preload (beam estimate).`,
+    );
+  if (profiles.cone.unloadedLengthMm > 0 && gov.estimator === "cone")
+    warnings.push(
+      `Cone footprints leave ${profiles.cone.unloadedLengthMm.toFixed(1)} mm of the gasket path unloaded.`,
+    );
   const assumptions = [
     ...model.notes,
     `Cone half-angle ${model.coneAngleDeg.toFixed(2)}°: ${model.coneAngleRule}.`,
@@ -202,45 +240,98 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     schemaVersion: 1,
     designName: design.name,
     units: design.units,
-    summary: { governingEstimator: gov.estimator, minGasketStressMpa: gov.summary.minMpa, maxGasketStressMpa: gov.summary.maxMpa, meanGasketStressMpa: gov.summary.meanMpa, ...counts },
+    summary: {
+      governingEstimator: gov.estimator,
+      minGasketStressMpa: gov.summary.minMpa,
+      maxGasketStressMpa: gov.summary.maxMpa,
+      meanGasketStressMpa: gov.summary.meanMpa,
+      ...counts,
+    },
     fastener: {
-      threadId: model.thread.id, nominalDiameterMm: d, tensileStressAreaMm2: model.thread.tensileStressAreaMm2, rootAreaMm2: model.thread.rootAreaMm2,
-      materialId: model.material.id, materialName: model.material.name, yieldMpa: model.strength.yieldMpa, tensileMpa: model.strength.tensileMpa,
-      proofMpa: p.proofMpa, proofEstimated: p.proofEstimated, allowableMpa: model.strength.allowableMpa,
-      nutAcrossFlatsMm: model.nut?.acrossFlatsMm ?? null, nutAcrossCornersMm: model.nut?.acrossCornersMm ?? null, threadLengthMm: model.threadLengthMm,
+      threadId: model.thread.id,
+      nominalDiameterMm: d,
+      tensileStressAreaMm2: model.thread.tensileStressAreaMm2,
+      rootAreaMm2: model.thread.rootAreaMm2,
+      materialId: model.material.id,
+      materialName: model.material.name,
+      yieldMpa: model.strength.yieldMpa,
+      tensileMpa: model.strength.tensileMpa,
+      proofMpa: p.proofMpa,
+      proofEstimated: p.proofEstimated,
+      allowableMpa: model.strength.allowableMpa,
+      nutAcrossFlatsMm: model.nut?.acrossFlatsMm ?? null,
+      nutAcrossCornersMm: model.nut?.acrossCornersMm ?? null,
+      threadLengthMm: model.threadLengthMm,
     },
     stiffness: {
-      gripMm: model.gripMm, shankInGripMm: model.shankInGripMm, threadInGripMm: model.threadInGripMm, boltStiffnessNPerMm: model.boltStiffnessNPerMm,
-      memberStiffnessNPerMm: model.memberStiffnessNPerMm, gasketSpringNPerMm: model.gasketSpringNPerMm, jointConstant: C,
-      bearingDiameterMm: model.bearingDiameterMm, frusta: model.frusta, wileman: model.wileman,
+      gripMm: model.gripMm,
+      shankInGripMm: model.shankInGripMm,
+      threadInGripMm: model.threadInGripMm,
+      boltStiffnessNPerMm: model.boltStiffnessNPerMm,
+      memberStiffnessNPerMm: model.memberStiffnessNPerMm,
+      gasketSpringNPerMm: model.gasketSpringNPerMm,
+      jointConstant: C,
+      bearingDiameterMm: model.bearingDiameterMm,
+      frusta: model.frusta,
+      wileman: model.wileman,
     },
     preload: {
-      rule: p.rule, targetN: p.targetN, minN: p.minN, maxN: p.maxN, scatter: p.scatter, scatterSource: p.scatterSource,
-      targetStressMpa: p.targetN / model.thread.tensileStressAreaMm2, targetTorqueNmm: torqueNmm,
-      nutFactor: design.assembly.nutFactor.value, nutFactorSource: design.assembly.nutFactor.source,
+      rule: p.rule,
+      targetN: p.targetN,
+      minN: p.minN,
+      maxN: p.maxN,
+      scatter: p.scatter,
+      scatterSource: p.scatterSource,
+      targetStressMpa: p.targetN / model.thread.tensileStressAreaMm2,
+      targetTorqueNmm: torqueNmm,
+      nutFactor: design.assembly.nutFactor.value,
+      nutFactorSource: design.assembly.nutFactor.source,
     },
     loads: {
-      pressureAreaMm2: model.pressureAreaMm2, pressureAreaBasis: model.pressureAreaBasis,
-      totalExternalN: model.externalLoadPerBoltN.reduce((a, v) => a + v, 0), maxExternalPerBoltN: maxExt,
-      separationLoadAtMinPreloadN: p.minN / (1 - C), factors: computeSafetyFactors(proofLoadN, p.targetN, maxExt, C),
+      pressureAreaMm2: model.pressureAreaMm2,
+      pressureAreaBasis: model.pressureAreaBasis,
+      totalExternalN: model.externalLoadPerBoltN.reduce((a, v) => a + v, 0),
+      maxExternalPerBoltN: maxExt,
+      separationLoadAtMinPreloadN: p.minN / (1 - C),
+      factors: computeSafetyFactors(proofLoadN, p.targetN, maxExt, C),
     },
     estimator: {
-      governing: gov.estimator, requested: design.estimator.estimator, reason: profiles.choice.reason,
-      coneAngleDeg: model.coneAngleDeg, coneAngleMode: design.estimator.coneAngle.mode, coneRule: model.coneAngleRule,
-      coneDepthMm: model.coneDepthMm, coneRadiusMm: model.coneRadiusMm, lambdaPerMm: model.lambdaPerMm,
-      beamSpreadMm: profiles.choice.beamSpreadMm, spreadRatio: profiles.choice.spreadRatio,
-      flexuralRigidityNmm2: model.flexuralRigidityNmm2, foundationModulusMpa: model.foundationModulusMpa,
-      stripWidthMm: model.region.stripWidthMm, samplesPerPitch: design.estimator.samplesPerPitch,
+      governing: gov.estimator,
+      requested: design.estimator.estimator,
+      reason: profiles.choice.reason,
+      coneAngleDeg: model.coneAngleDeg,
+      coneAngleMode: design.estimator.coneAngle.mode,
+      coneRule: model.coneAngleRule,
+      coneDepthMm: model.coneDepthMm,
+      coneRadiusMm: model.coneRadiusMm,
+      lambdaPerMm: model.lambdaPerMm,
+      beamSpreadMm: profiles.choice.beamSpreadMm,
+      spreadRatio: profiles.choice.spreadRatio,
+      flexuralRigidityNmm2: model.flexuralRigidityNmm2,
+      foundationModulusMpa: model.foundationModulusMpa,
+      stripWidthMm: model.region.stripWidthMm,
+      samplesPerPitch: design.estimator.samplesPerPitch,
     },
     gasketStress: {
-      governing: gov.estimator, pathLengthMm: profiles.pathLengthMm, pathKind: model.region.kind === "full-face" ? "bolt-path" : "gasket-centre-line",
-      minMpa: gov.summary.minMpa, maxMpa: gov.summary.maxMpa, meanMpa: gov.summary.meanMpa,
-      seatingMpa: gm.qMinMpa ?? gm.yMpa, crushMpa: gm.qsMaxMpa ?? null, boltSOnPathMm: profiles.boltSOnPathMm,
+      governing: gov.estimator,
+      pathLengthMm: profiles.pathLengthMm,
+      pathKind: model.region.kind === "full-face" ? "bolt-path" : "gasket-centre-line",
+      minMpa: gov.summary.minMpa,
+      maxMpa: gov.summary.maxMpa,
+      meanMpa: gov.summary.meanMpa,
+      seatingMpa: gm.qMinMpa ?? gm.yMpa,
+      crushMpa: gm.qsMaxMpa ?? null,
+      boltSOnPathMm: profiles.boltSOnPathMm,
       cone: { ...profiles.cone, missesGasket: profiles.coneMisses },
       beam: { ...profiles.beam, ...profiles.beamInfo },
       profile: {
-        sMm: arr(profiles.sMm), xMm: arr(profiles.xMm), yMm: arr(profiles.yMm), stressMpa: arr(gov.values),
-        coneMpa: arr(profiles.coneMpa), beamMpa: arr(profiles.beamMpa), onGasket: Array.from(profiles.onGasket, (v) => v === 1),
+        sMm: arr(profiles.sMm),
+        xMm: arr(profiles.xMm),
+        yMm: arr(profiles.yMm),
+        stressMpa: arr(gov.values),
+        coneMpa: arr(profiles.coneMpa),
+        beamMpa: arr(profiles.beamMpa),
+        onGasket: Array.from(profiles.onGasket, (v) => v === 1),
       },
     },
     asmeAppendix2: asme.result,
@@ -249,7 +340,10 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     assemblyPlan: buildAssemblyPlan({
       boltIds: byLabel.map((x) => x.id),
       points: byLabel.map((x) => x.p),
-      targetPreloadN: p.targetN, nutFactor: design.assembly.nutFactor.value, nutFactorSource: design.assembly.nutFactor.source, nominalDiameterMm: d,
+      targetPreloadN: p.targetN,
+      nutFactor: design.assembly.nutFactor.value,
+      nutFactorSource: design.assembly.nutFactor.source,
+      nominalDiameterMm: d,
     }),
     assumptions,
     warnings,

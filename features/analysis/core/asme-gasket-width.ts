@@ -34,7 +34,11 @@ export interface AsmeGasketGeometry {
  * Computes b0, b and G in the branch's own unit, from the contact OD/ID given in that unit.
  * Example (B16.20 NPS 6 Class 150, inch): OD 8.25, ID 7.19 → b0 0.265, b 0.2574, G 7.735.
  */
-export function asmeGasketGeometryNative(contactOd: number, contactId: number, branch: WidthBranch): { n: number; b0: number; b: number; g: number } {
+export function asmeGasketGeometryNative(
+  contactOd: number,
+  contactId: number,
+  branch: WidthBranch,
+): { n: number; b0: number; b: number; g: number } {
   const n = (contactOd - contactId) / 2;
   const b0 = n / 2;
   const b = effectiveGasketWidth(b0, branch);
@@ -44,7 +48,11 @@ export function asmeGasketGeometryNative(contactOd: number, contactId: number, b
 }
 
 /** Same, from mm inputs, choosing the branch from the display units (US → inch branch). */
-export function asmeGasketGeometry(contactOdMm: number, contactIdMm: number, branch: WidthBranch): AsmeGasketGeometry {
+export function asmeGasketGeometry(
+  contactOdMm: number,
+  contactIdMm: number,
+  branch: WidthBranch,
+): AsmeGasketGeometry {
   if (branch === "inch") {
     const r = asmeGasketGeometryNative(mmToIn(contactOdMm), mmToIn(contactIdMm), "inch");
     return { branch, unit: "in", ...r, b0Mm: inToMm(r.b0), bMm: inToMm(r.b), gMm: inToMm(r.g) };

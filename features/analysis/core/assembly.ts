@@ -43,9 +43,13 @@ export function farthestFirstOrder(points: PointMm[]): number[] {
     let best = -1;
     for (let i = 0; i < n; i++) {
       if (done[i]) continue;
-      if (best < 0) { best = i; continue; }
+      if (best < 0) {
+        best = i;
+        continue;
+      }
       if (minDist[i] > minDist[best] + tol) best = i;
-      else if (Math.abs(minDist[i] - minDist[best]) <= tol && dist(i, last) > dist(best, last) + tol) best = i;
+      else if (Math.abs(minDist[i] - minDist[best]) <= tol && dist(i, last) > dist(best, last) + tol)
+        best = i;
     }
     done[best] = 1;
     order.push(best);
@@ -57,7 +61,9 @@ export function farthestFirstOrder(points: PointMm[]): number[] {
 
 /** Cross-pattern order (indices into `points`, which must be in clockwise label order). */
 export function crossPatternOrder(points: PointMm[]): number[] {
-  return isPowerOfTwo(points.length) && points.length > 2 ? bitReversalOrder(points.length) : farthestFirstOrder(points);
+  return isPowerOfTwo(points.length) && points.length > 2
+    ? bitReversalOrder(points.length)
+    : farthestFirstOrder(points);
 }
 
 export interface AssemblyPass {
@@ -107,13 +113,22 @@ export function buildAssemblyPlan(input: {
   const tNmm = torqueFromPreloadNmm(input.nutFactor, input.targetPreloadN, input.nominalDiameterMm);
   return {
     sequence: order.map((i) => input.boltIds[i]),
-    sequenceRule: isPowerOfTwo(input.points.length) && input.points.length > 2 ? "bit-reversal" : "farthest-first",
+    sequenceRule:
+      isPowerOfTwo(input.points.length) && input.points.length > 2 ? "bit-reversal" : "farthest-first",
     targetPreloadN: input.targetPreloadN,
     targetTorqueNm: nmmToNm(tNmm),
     targetTorqueFtLb: nmmToFtLb(tNmm),
     nutFactor: input.nutFactor,
     nutFactorSource: input.nutFactorSource,
-    passes: PASSES.map(([name, pattern, f, note], i) => ({ pass: i + 1, name, pattern, fractionOfTarget: f, torqueNm: nmmToNm(tNmm * f), torqueFtLb: nmmToFtLb(tNmm * f), note })),
+    passes: PASSES.map(([name, pattern, f, note], i) => ({
+      pass: i + 1,
+      name,
+      pattern,
+      fractionOfTarget: f,
+      torqueNm: nmmToNm(tNmm * f),
+      torqueFtLb: nmmToFtLb(tNmm * f),
+      note,
+    })),
     source: "ASME PCC-1 legacy cross-pattern method (pass fractions as reproduced) [pub2]; T = K·F·d",
   };
 }

@@ -17,17 +17,31 @@ export function foundationLambdaPerMm(foundationModulusMpa: number, flexuralRigi
  * Hetényi (1946) infinite beam under a point load F: w(x) = (F·λ/2k)·e^(−λ|x|)·(cos λ|x| + sin λ|x|).
  * Example: F = 10 kN, k = 2000, λ = 0.02, x = 0 → 0.05 mm.
  */
-export function hetenyiDeflectionMm(forceN: number, foundationModulusMpa: number, lambdaPerMm: number, xMm: number): number {
+export function hetenyiDeflectionMm(
+  forceN: number,
+  foundationModulusMpa: number,
+  lambdaPerMm: number,
+  xMm: number,
+): number {
   const lx = lambdaPerMm * Math.abs(xMm);
-  return ((forceN * lambdaPerMm) / (2 * foundationModulusMpa)) * Math.exp(-lx) * (Math.cos(lx) + Math.sin(lx));
+  return (
+    ((forceN * lambdaPerMm) / (2 * foundationModulusMpa)) * Math.exp(-lx) * (Math.cos(lx) + Math.sin(lx))
+  );
 }
 
 /** Periodic superposition of Hetényi's solution on a closed path of length L (images until negligible). */
-export function hetenyiPeriodicDeflectionMm(loads: { sMm: number; forceN: number }[], pathLengthMm: number, foundationModulusMpa: number, lambdaPerMm: number, sMm: number): number {
+export function hetenyiPeriodicDeflectionMm(
+  loads: { sMm: number; forceN: number }[],
+  pathLengthMm: number,
+  foundationModulusMpa: number,
+  lambdaPerMm: number,
+  sMm: number,
+): number {
   const images = Math.ceil(20 / (lambdaPerMm * pathLengthMm)) + 1;
   let w = 0;
   for (const l of loads) {
-    for (let j = -images; j <= images; j++) w += hetenyiDeflectionMm(l.forceN, foundationModulusMpa, lambdaPerMm, sMm - l.sMm + j * pathLengthMm);
+    for (let j = -images; j <= images; j++)
+      w += hetenyiDeflectionMm(l.forceN, foundationModulusMpa, lambdaPerMm, sMm - l.sMm + j * pathLengthMm);
   }
   return w;
 }
@@ -101,9 +115,15 @@ export function solveBeamOnFoundation(input: {
     for (let i = 0; i < N; i++) {
       w[i] = rhs[pos[i]];
       const c = w[i] > 0 ? 1 : 0;
-      if (c !== contact[i]) { contact[i] = c; changed = true; }
+      if (c !== contact[i]) {
+        contact[i] = c;
+        changed = true;
+      }
     }
-    if (!changed) { converged = true; break; }
+    if (!changed) {
+      converged = true;
+      break;
+    }
   }
   const lineLoadNPerMm = new Float64Array(N);
   let lifted = 0;

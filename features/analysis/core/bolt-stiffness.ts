@@ -26,7 +26,11 @@ export function computeGripMm(input: {
  * lt = l − ld. A stud threaded full length has ld = 0.
  * Example: L = 100, LT = 46, l = 60 → ld = 54, lt = 6.
  */
-export function splitGripMm(gripMm: number, lengthMm: number, threadLengthMm: number): { shankMm: number; threadMm: number } {
+export function splitGripMm(
+  gripMm: number,
+  lengthMm: number,
+  threadLengthMm: number,
+): { shankMm: number; threadMm: number } {
   const shankMm = Math.min(Math.max(lengthMm - threadLengthMm, 0), gripMm);
   return { shankMm, threadMm: gripMm - shankMm };
 }

@@ -13,7 +13,11 @@ export const CONE_ANGLE_RULE_TEXT =
 /**
  * Example: grip 50, dW 27, DA 60 → βL = 1.85, y = 2.22 → φ ≈ 25.7°.
  */
-export function thicknessDependentConeAngleDeg(gripMm: number, bearingDiameterMm: number, availableDiameterMm: number): number {
+export function thicknessDependentConeAngleDeg(
+  gripMm: number,
+  bearingDiameterMm: number,
+  availableDiameterMm: number,
+): number {
   const betaL = gripMm / bearingDiameterMm;
   const y = Math.min(Math.max(availableDiameterMm / bearingDiameterMm, 1), 3);
   const tanPhi = 0.362 + 0.032 * Math.log(betaL / 2) + 0.153 * Math.log(y);
@@ -22,7 +26,16 @@ export function thicknessDependentConeAngleDeg(gripMm: number, bearingDiameterMm
 }
 
 /** The angle a design uses, and a sentence saying which rule produced it. */
-export function resolveConeAngle(setting: ConeAngleSetting, gripMm: number, bearingDiameterMm: number, availableDiameterMm: number): { degrees: number; rule: string } {
-  if (setting.mode === "fixed") return { degrees: setting.degrees, rule: `fixed ${setting.degrees}° (design input)` };
-  return { degrees: thicknessDependentConeAngleDeg(gripMm, bearingDiameterMm, availableDiameterMm), rule: CONE_ANGLE_RULE_TEXT };
+export function resolveConeAngle(
+  setting: ConeAngleSetting,
+  gripMm: number,
+  bearingDiameterMm: number,
+  availableDiameterMm: number,
+): { degrees: number; rule: string } {
+  if (setting.mode === "fixed")
+    return { degrees: setting.degrees, rule: `fixed ${setting.degrees}° (design input)` };
+  return {
+    degrees: thicknessDependentConeAngleDeg(gripMm, bearingDiameterMm, availableDiameterMm),
+    rule: CONE_ANGLE_RULE_TEXT,
+  };
 }

@@ -46,9 +46,19 @@ function clippedFraction(region: GasketRegion, x: number, y: number, ri: number,
 }
 
 /** Quick classification of a footprint: wholly on gasket (1), wholly off it (0), or partly (−1). */
-function quickFraction(region: GasketRegion, x: number, y: number, ri: number, rc: number, hash: PointHash, self: number): number {
+function quickFraction(
+  region: GasketRegion,
+  x: number,
+  y: number,
+  ri: number,
+  rc: number,
+  hash: PointHash,
+  self: number,
+): number {
   let neighbourHole = false;
-  forEachNear(hash, x, y, rc + region.holeRadiusMm, (j) => { if (j !== self) neighbourHole = true; });
+  forEachNear(hash, x, y, rc + region.holeRadiusMm, (j) => {
+    if (j !== self) neighbourHole = true;
+  });
   if (region.kind === "annulus") {
     const r = Math.hypot(x, y);
     if (r - rc > region.outerRadiusMm || r + rc < region.innerRadiusMm) return 0;
@@ -77,16 +87,36 @@ const regionKeys = new WeakMap<GasketRegion, string>();
 function regionKey(region: GasketRegion): string {
   let k = regionKeys.get(region);
   if (k === undefined) {
-    k = JSON.stringify([region.kind, region.innerRadiusMm, region.outerRadiusMm, region.bandCentreOffsetMm, region.bandWidthMm, region.outline, region.bore, region.holeRadiusMm]);
+    k = JSON.stringify([
+      region.kind,
+      region.innerRadiusMm,
+      region.outerRadiusMm,
+      region.bandCentreOffsetMm,
+      region.bandWidthMm,
+      region.outline,
+      region.bore,
+      region.holeRadiusMm,
+    ]);
     regionKeys.set(region, k);
   }
   return k;
 }
 
-function memoClippedFraction(region: GasketRegion, x: number, y: number, ri: number, rc: number, hash: PointHash, self: number): number {
+function memoClippedFraction(
+  region: GasketRegion,
+  x: number,
+  y: number,
+  ri: number,
+  rc: number,
+  hash: PointHash,
+  self: number,
+): number {
   let key = `${regionKey(region)}|${x}|${y}|${ri}|${rc}`;
   // Full-face regions exclude bolt holes: any hole within rc + hole radius can change the result.
-  if (region.kind === "full-face") forEachNear(hash, x, y, rc + region.holeRadiusMm, (j) => { if (j !== self) key += `|${hash.xs[j]},${hash.ys[j]}`; });
+  if (region.kind === "full-face")
+    forEachNear(hash, x, y, rc + region.holeRadiusMm, (j) => {
+      if (j !== self) key += `|${hash.xs[j]},${hash.ys[j]}`;
+    });
   const hit = fractionMemo.get(key);
   if (hit !== undefined) return hit;
   const v = clippedFraction(region, x, y, ri, rc);
@@ -99,10 +129,20 @@ function memoClippedFraction(region: GasketRegion, x: number, y: number, ri: num
  * Prepares the superposition for given bolt forces. Regular circular patterns reuse one
  * clipping integral for every bolt (`regular`).
  */
-export function buildConeField(region: GasketRegion, forcesN: ArrayLike<number>, innerRadiusMm: number, outerRadiusMm: number, regular: boolean): ConeField {
+export function buildConeField(
+  region: GasketRegion,
+  forcesN: ArrayLike<number>,
+  innerRadiusMm: number,
+  outerRadiusMm: number,
+  regular: boolean,
+): ConeField {
   const rc = Math.max(outerRadiusMm, innerRadiusMm * 1.0001 + 1e-6);
   const n = region.bolts.length;
-  const hash = buildPointHash(region.bolts.map((p) => p.x), region.bolts.map((p) => p.y), rc + region.holeRadiusMm);
+  const hash = buildPointHash(
+    region.bolts.map((p) => p.x),
+    region.bolts.map((p) => p.y),
+    rc + region.holeRadiusMm,
+  );
   const full = coneFootprintIntegralMm2(innerRadiusMm, rc);
   const peak = new Float64Array(n);
   const frac = new Float64Array(n);
@@ -128,8 +168,10 @@ export function conePressureAtMpa(field: ConeField, x: number, y: number): numbe
   const ri2 = ri * ri;
   const cx = Math.floor((x - h.x0) / h.cellMm);
   const cy = Math.floor((y - h.y0) / h.cellMm);
-  const x0 = cx > 0 ? cx - 1 : 0, x1 = cx + 1 < h.nx ? cx + 1 : h.nx - 1;
-  const y0 = cy > 0 ? cy - 1 : 0, y1 = cy + 1 < h.ny ? cy + 1 : h.ny - 1;
+  const x0 = cx > 0 ? cx - 1 : 0,
+    x1 = cx + 1 < h.nx ? cx + 1 : h.nx - 1;
+  const y0 = cy > 0 ? cy - 1 : 0,
+    y1 = cy + 1 < h.ny ? cy + 1 : h.ny - 1;
   let p = 0;
   for (let iy = y0; iy <= y1; iy++) {
     for (let ix = x0; ix <= x1; ix++) {
@@ -152,4 +194,3 @@ export function coneMissesGasket(field: ConeField): boolean {
   for (let i = 0; i < field.onGasketFraction.length; i++) if (field.onGasketFraction[i] > 1e-9) return false;
   return true;
 }
-

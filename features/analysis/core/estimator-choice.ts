@@ -32,14 +32,33 @@ export function chooseEstimator(input: {
   const base = { requested: input.requested, beamSpreadMm, coneRadiusMm: input.coneRadiusMm, spreadRatio };
   const spread = `beam spread 3π/(4λ) = ${beamSpreadMm.toFixed(1)} mm, cone footprint radius rc = ${input.coneRadiusMm.toFixed(1)} mm`;
   if (input.requested !== "auto") {
-    const miss = input.requested === "cone" && input.coneMissesGasket ? "; note: no cone footprint reaches the gasket, so the cone estimate is zero" : "";
-    return { ...base, estimator: input.requested, reason: `${input.requested} estimate requested in the design (${spread})${miss}` };
+    const miss =
+      input.requested === "cone" && input.coneMissesGasket
+        ? "; note: no cone footprint reaches the gasket, so the cone estimate is zero"
+        : "";
+    return {
+      ...base,
+      estimator: input.requested,
+      reason: `${input.requested} estimate requested in the design (${spread})${miss}`,
+    };
   }
   if (input.coneMissesGasket) {
-    return { ...base, estimator: "beam", reason: `no bolt's pressure-cone footprint reaches the gasket; the load reaches it through flange bending, so the beam on elastic foundation governs (${spread})` };
+    return {
+      ...base,
+      estimator: "beam",
+      reason: `no bolt's pressure-cone footprint reaches the gasket; the load reaches it through flange bending, so the beam on elastic foundation governs (${spread})`,
+    };
   }
   if (spreadRatio >= 1) {
-    return { ...base, estimator: "beam", reason: `the flange spreads each bolt's load further than its pressure cone (${spread}, ratio ${spreadRatio.toFixed(2)} ≥ 1): soft gasket relative to the flange, beam on elastic foundation governs` };
+    return {
+      ...base,
+      estimator: "beam",
+      reason: `the flange spreads each bolt's load further than its pressure cone (${spread}, ratio ${spreadRatio.toFixed(2)} ≥ 1): soft gasket relative to the flange, beam on elastic foundation governs`,
+    };
   }
-  return { ...base, estimator: "cone", reason: `the contact is stiff relative to the flange, so the load stays within each bolt's cone (${spread}, ratio ${spreadRatio.toFixed(2)} < 1): cone superposition governs` };
+  return {
+    ...base,
+    estimator: "cone",
+    reason: `the contact is stiff relative to the flange, so the load stays within each bolt's cone (${spread}, ratio ${spreadRatio.toFixed(2)} < 1): cone superposition governs`,
+  };
 }

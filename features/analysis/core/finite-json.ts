@@ -42,7 +42,8 @@ export function toFiniteRecords<T extends object>(records: readonly T[]): { valu
       if (x === undefined) continue;
       if (typeof x === "number") out[k] = num(x);
       else if (x === null || typeof x !== "object") out[k] = x;
-      else if (Array.isArray(x) && x.every((e) => e === null || typeof e !== "object")) out[k] = x.map((e) => (typeof e === "number" ? num(e) : e));
+      else if (Array.isArray(x) && x.every((e) => e === null || typeof e !== "object"))
+        out[k] = x.map((e) => (typeof e === "number" ? num(e) : e));
       else {
         const deep = toFiniteJson(x);
         replaced += deep.replaced;

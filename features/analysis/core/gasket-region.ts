@@ -8,7 +8,14 @@ import type { JointDesign, PointMm } from "./design";
 import { getBoltPath, getBoltPoint } from "./geometry";
 import { shapeToPath, type ClosedPath } from "./path";
 import { buildPointHash, hasPointNear, type PointHash } from "./point-hash";
-import { outlineToShape, offsetShape, shapeAreaMm2, shapeBounds, signedDistanceToShape, type Shape } from "./shape";
+import {
+  outlineToShape,
+  offsetShape,
+  shapeAreaMm2,
+  shapeBounds,
+  signedDistanceToShape,
+  type Shape,
+} from "./shape";
 import { pointAtArcLength } from "./path";
 
 export interface GasketRegion {
@@ -41,7 +48,9 @@ export interface GasketRegion {
 export function isOnGasket(region: GasketRegion, x: number, y: number): boolean {
   if (region.kind === "annulus") {
     const r2 = x * x + y * y;
-    return r2 >= region.innerRadiusMm * region.innerRadiusMm && r2 <= region.outerRadiusMm * region.outerRadiusMm;
+    return (
+      r2 >= region.innerRadiusMm * region.innerRadiusMm && r2 <= region.outerRadiusMm * region.outerRadiusMm
+    );
   }
   if (region.kind === "band") {
     const d = -signedDistanceToShape(region.outline, x, y);
@@ -66,10 +75,17 @@ export function buildGasketRegion(design: JointDesign): GasketRegion {
   const boltPath = getBoltPath(design.outline, design.boltPath);
   const bolts = design.bolts.map((b) => getBoltPoint(boltPath, b));
   const holeRadiusMm = design.fastener.holeDiameterMm / 2;
-  const holeHash = buildPointHash(bolts.map((p) => p.x), bolts.map((p) => p.y), Math.max(holeRadiusMm * 2, 1));
+  const holeHash = buildPointHash(
+    bolts.map((p) => p.x),
+    bolts.map((p) => p.y),
+    Math.max(holeRadiusMm * 2, 1),
+  );
   const g = design.gasket;
   let kind: GasketRegion["kind"] = "full-face";
-  let inner = 0, outer = 0, c = 0, w = 0;
+  let inner = 0,
+    outer = 0,
+    c = 0,
+    w = 0;
   let path: ClosedPath = boltPath;
   let areaMm2: number;
   let bounds = shapeBounds(outline);
@@ -90,7 +106,10 @@ export function buildGasketRegion(design: JointDesign): GasketRegion {
     areaMm2 = shapeAreaMm2(outerShape) - shapeAreaMm2(offsetShape(outline, c + w / 2));
     bounds = shapeBounds(outerShape);
   } else {
-    areaMm2 = shapeAreaMm2(outline) - (bore ? shapeAreaMm2(bore) : 0) - bolts.length * Math.PI * holeRadiusMm * holeRadiusMm;
+    areaMm2 =
+      shapeAreaMm2(outline) -
+      (bore ? shapeAreaMm2(bore) : 0) -
+      bolts.length * Math.PI * holeRadiusMm * holeRadiusMm;
   }
   // Strip that bends along the path: from the outline edge to the bore edge (or, with no bore,
   // as far again inward as the outline is outward: a [practice] choice for blind covers).
@@ -99,7 +118,20 @@ export function buildGasketRegion(design: JointDesign): GasketRegion {
   const stripWidthMm = Math.max(dOut + dIn, 1e-3);
   const foundationWidthMm = kind === "annulus" ? outer - inner : kind === "band" ? w : stripWidthMm;
   return {
-    kind, outline, bore, innerRadiusMm: inner, outerRadiusMm: outer, bandCentreOffsetMm: c, bandWidthMm: w,
-    bolts, holeRadiusMm, holeHash, path, foundationWidthMm, stripWidthMm, areaMm2, bounds,
+    kind,
+    outline,
+    bore,
+    innerRadiusMm: inner,
+    outerRadiusMm: outer,
+    bandCentreOffsetMm: c,
+    bandWidthMm: w,
+    bolts,
+    holeRadiusMm,
+    holeHash,
+    path,
+    foundationWidthMm,
+    stripWidthMm,
+    areaMm2,
+    bounds,
   };
 }

@@ -37,7 +37,12 @@ export interface GasketStressGrid {
  * Example: `computeGasketStressGrid(design, 256, 256)` → 65 536 cells, with `estimator` the
  * governing one unless `options.estimator` forces the other.
  */
-export function computeGasketStressGrid(design: JointDesign, nx: number, ny: number, options: { estimator?: EstimatorName } = {}): GasketStressGrid {
+export function computeGasketStressGrid(
+  design: JointDesign,
+  nx: number,
+  ny: number,
+  options: { estimator?: EstimatorName } = {},
+): GasketStressGrid {
   const issues = validateJointDesign(design);
   if (issues.length > 0) throw new Error(`invalid design: ${issues.map(formatIssue).join("; ")}`);
   const model = buildJointModel(design);
@@ -45,7 +50,13 @@ export function computeGasketStressGrid(design: JointDesign, nx: number, ny: num
 }
 
 /** Grid from an already computed model and profiles (used by analyzeJoint's callers to avoid recomputation). */
-export function computeGridFromProfiles(model: JointModel, profiles: GasketStressProfiles, nx: number, ny: number, estimator?: EstimatorName): GasketStressGrid {
+export function computeGridFromProfiles(
+  model: JointModel,
+  profiles: GasketStressProfiles,
+  nx: number,
+  ny: number,
+  estimator?: EstimatorName,
+): GasketStressGrid {
   const region = model.region;
   const est = estimator ?? profiles.choice.estimator;
   const b = region.bounds;
@@ -56,7 +67,9 @@ export function computeGridFromProfiles(model: JointModel, profiles: GasketStres
   const L = path.lengthMm;
   const N = profiles.sampleCount;
   const beam = profiles.beamMpa;
-  const circular = path.segments.every((s) => s.kind === "arc" && Math.abs(s.cx) < 1e-9 && Math.abs(s.cy) < 1e-9);
+  const circular = path.segments.every(
+    (s) => s.kind === "arc" && Math.abs(s.cx) < 1e-9 && Math.abs(s.cy) < 1e-9,
+  );
   const rPath = L / (2 * Math.PI);
   let max = 0;
   let force = 0;
@@ -65,7 +78,10 @@ export function computeGridFromProfiles(model: JointModel, profiles: GasketStres
     for (let i = 0; i < nx; i++) {
       const x = b.xMinMm + (i + 0.5) * dx;
       const idx = j * nx + i;
-      if (!isOnGasket(region, x, y)) { values[idx] = OUTSIDE_GASKET; continue; }
+      if (!isOnGasket(region, x, y)) {
+        values[idx] = OUTSIDE_GASKET;
+        continue;
+      }
       let v: number;
       if (est === "cone") v = conePressureAtMpa(profiles.coneField, x, y);
       else {
@@ -84,5 +100,17 @@ export function computeGridFromProfiles(model: JointModel, profiles: GasketStres
       force += v * dx * dy;
     }
   }
-  return { nx, ny, xMinMm: b.xMinMm, xMaxMm: b.xMaxMm, yMinMm: b.yMinMm, yMaxMm: b.yMaxMm, values, estimator: est, maxMpa: max, integratedForceN: force, totalBoltForceN: profiles.totalForceN };
+  return {
+    nx,
+    ny,
+    xMinMm: b.xMinMm,
+    xMaxMm: b.xMaxMm,
+    yMinMm: b.yMinMm,
+    yMaxMm: b.yMaxMm,
+    values,
+    estimator: est,
+    maxMpa: max,
+    integratedForceN: force,
+    totalBoltForceN: profiles.totalForceN,
+  };
 }

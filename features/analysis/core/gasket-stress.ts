@@ -38,7 +38,13 @@ export interface GasketStressProfiles {
   choice: EstimatorChoice;
   coneField: ConeField;
   coneMisses: boolean;
-  beamInfo: { solverNodes: number; iterations: number; converged: boolean; liftedLengthMm: number; forceBalanceRatio: number };
+  beamInfo: {
+    solverNodes: number;
+    iterations: number;
+    converged: boolean;
+    liftedLengthMm: number;
+    forceBalanceRatio: number;
+  };
   /** Bolt positions projected onto the gasket path, mm. */
   boltSOnPathMm: number[];
   totalForceN: number;
@@ -53,24 +59,53 @@ export function isRegularCircularPattern(design: JointDesign): boolean {
   const n = design.bolts.length;
   const s = design.bolts.map((b) => ((b.sMm % L) + L) % L).sort((a, b) => a - b);
   const p = L / n;
-  return design.bolts.every((b) => !b.offPathMm) && s.every((v, i) => Math.abs(((v - s[0] - i * p + L / 2) % L) - L / 2) < 1e-6 * p);
+  return (
+    design.bolts.every((b) => !b.offPathMm) &&
+    s.every((v, i) => Math.abs(((v - s[0] - i * p + L / 2) % L) - L / 2) < 1e-6 * p)
+  );
 }
 
-function summarise(values: Float64Array, s: Float64Array, x: Float64Array, y: Float64Array, on: Uint8Array, step: number): ProfileSummary {
-  let min = Infinity, max = -Infinity, sum = 0, count = 0, iMin = 0, iMax = 0, unloaded = 0;
+function summarise(
+  values: Float64Array,
+  s: Float64Array,
+  x: Float64Array,
+  y: Float64Array,
+  on: Uint8Array,
+  step: number,
+): ProfileSummary {
+  let min = Infinity,
+    max = -Infinity,
+    sum = 0,
+    count = 0,
+    iMin = 0,
+    iMax = 0,
+    unloaded = 0;
   for (let i = 0; i < values.length; i++) {
     if (!on[i]) continue;
     const v = values[i];
-    sum += v; count++;
-    if (v < min) { min = v; iMin = i; }
-    if (v > max) { max = v; iMax = i; }
+    sum += v;
+    count++;
+    if (v < min) {
+      min = v;
+      iMin = i;
+    }
+    if (v > max) {
+      max = v;
+      iMax = i;
+    }
   }
   const tol = Math.max(max, 0) * 1e-9;
   for (let i = 0; i < values.length; i++) if (on[i] && values[i] <= tol) unloaded += step;
-  if (count === 0) { min = 0; max = 0; }
+  if (count === 0) {
+    min = 0;
+    max = 0;
+  }
   return {
-    minMpa: min, maxMpa: max, meanMpa: count ? sum / count : 0,
-    minAt: { sMm: s[iMin], xMm: x[iMin], yMm: y[iMin] }, maxAt: { sMm: s[iMax], xMm: x[iMax], yMm: y[iMax] },
+    minMpa: min,
+    maxMpa: max,
+    meanMpa: count ? sum / count : 0,
+    minAt: { sMm: s[iMin], xMm: x[iMin], yMm: y[iMin] },
+    maxAt: { sMm: s[iMax], xMm: x[iMax], yMm: y[iMax] },
     unloadedLengthMm: unloaded,
   };
 }
@@ -86,7 +121,9 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
   const total = forces.reduce((a, f) => a + f, 0);
   const N = n * design.estimator.samplesPerPitch;
   const step = L / N;
-  const sMm = new Float64Array(N), xMm = new Float64Array(N), yMm = new Float64Array(N);
+  const sMm = new Float64Array(N),
+    xMm = new Float64Array(N),
+    yMm = new Float64Array(N);
   const onGasket = new Uint8Array(N);
   const fullFace = region.kind === "full-face";
   samplePathUniform(path, N, xMm, yMm);
@@ -98,11 +135,17 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
   // Beam on elastic foundation along the path, solved on a grid fine enough for λ·h ≤ 0.05.
   const boltSOnPathMm = model.boltPoints.map((p) => projectOntoPath(path, p).sMm);
   // A whole number of solver nodes per bolt keeps a regular pattern exactly periodic.
-  const perBolt = Math.min(design.estimator.samplesPerPitch, Math.max(8, Math.ceil((model.lambdaPerMm * L) / 0.05 / n)));
+  const perBolt = Math.min(
+    design.estimator.samplesPerPitch,
+    Math.max(8, Math.ceil((model.lambdaPerMm * L) / 0.05 / n)),
+  );
   const solverNodes = Math.max(perBolt * n, 16);
   const sol = solveBeamOnFoundation({
-    pathLengthMm: L, nodes: solverNodes, loads: boltSOnPathMm.map((s, i) => ({ sMm: s, forceN: forces[i] })),
-    flexuralRigidityNmm2: model.flexuralRigidityNmm2, foundationModulusMpa: model.foundationModulusMpa,
+    pathLengthMm: L,
+    nodes: solverNodes,
+    loads: boltSOnPathMm.map((s, i) => ({ sMm: s, forceN: forces[i] })),
+    flexuralRigidityNmm2: model.flexuralRigidityNmm2,
+    foundationModulusMpa: model.foundationModulusMpa,
   });
   const beamMpa = new Float64Array(N);
   const hs = L / solverNodes;
@@ -118,23 +161,57 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
   }
 
   // Cone superposition at the gasket plane.
-  const field = buildConeField(region, forces, region.holeRadiusMm, model.coneRadiusMm, isRegularCircularPattern(design));
+  const field = buildConeField(
+    region,
+    forces,
+    region.holeRadiusMm,
+    model.coneRadiusMm,
+    isRegularCircularPattern(design),
+  );
   const misses = coneMissesGasket(field);
   const coneMpa = new Float64Array(N);
-  if (!misses) for (let j = 0; j < N; j++) if (onGasket[j]) coneMpa[j] = conePressureAtMpa(field, xMm[j], yMm[j]);
+  if (!misses)
+    for (let j = 0; j < N; j++) if (onGasket[j]) coneMpa[j] = conePressureAtMpa(field, xMm[j], yMm[j]);
 
-  const choice = chooseEstimator({ requested: design.estimator.estimator, lambdaPerMm: model.lambdaPerMm, coneRadiusMm: model.coneRadiusMm, coneMissesGasket: misses });
+  const choice = chooseEstimator({
+    requested: design.estimator.estimator,
+    lambdaPerMm: model.lambdaPerMm,
+    coneRadiusMm: model.coneRadiusMm,
+    coneMissesGasket: misses,
+  });
   return {
-    pathLengthMm: L, sampleCount: N, sMm, xMm, yMm, onGasket, coneMpa, beamMpa,
+    pathLengthMm: L,
+    sampleCount: N,
+    sMm,
+    xMm,
+    yMm,
+    onGasket,
+    coneMpa,
+    beamMpa,
     cone: summarise(coneMpa, sMm, xMm, yMm, onGasket, step),
     beam: summarise(beamMpa, sMm, xMm, yMm, onGasket, step),
-    choice, coneField: field, coneMisses: misses,
-    beamInfo: { solverNodes, iterations: sol.iterations, converged: sol.converged, liftedLengthMm: sol.liftedLengthMm, forceBalanceRatio: total > 0 ? beamForce / total : 1 },
-    boltSOnPathMm, totalForceN: total,
+    choice,
+    coneField: field,
+    coneMisses: misses,
+    beamInfo: {
+      solverNodes,
+      iterations: sol.iterations,
+      converged: sol.converged,
+      liftedLengthMm: sol.liftedLengthMm,
+      forceBalanceRatio: total > 0 ? beamForce / total : 1,
+    },
+    boltSOnPathMm,
+    totalForceN: total,
   };
 }
 
 /** The governing profile's values. */
-export function governingProfile(p: GasketStressProfiles): { estimator: EstimatorName; values: Float64Array; summary: ProfileSummary } {
-  return p.choice.estimator === "cone" ? { estimator: "cone", values: p.coneMpa, summary: p.cone } : { estimator: "beam", values: p.beamMpa, summary: p.beam };
+export function governingProfile(p: GasketStressProfiles): {
+  estimator: EstimatorName;
+  values: Float64Array;
+  summary: ProfileSummary;
+} {
+  return p.choice.estimator === "cone"
+    ? { estimator: "cone", values: p.coneMpa, summary: p.cone }
+    : { estimator: "beam", values: p.beamMpa, summary: p.beam };
 }

@@ -68,7 +68,9 @@ export interface NeighbourSpacing {
 }
 
 /** Pitch and chord between each bolt and its clockwise neighbour, sorted by s. */
-export function getNeighbourSpacings(design: Pick<JointDesign, "outline" | "boltPath" | "bolts">): NeighbourSpacing[] {
+export function getNeighbourSpacings(
+  design: Pick<JointDesign, "outline" | "boltPath" | "bolts">,
+): NeighbourSpacing[] {
   const path = getBoltPath(design.outline, design.boltPath);
   const L = path.lengthMm;
   const sorted = design.bolts
@@ -79,7 +81,12 @@ export function getNeighbourSpacings(design: Pick<JointDesign, "outline" | "bolt
     const next = sorted[(i + 1) % sorted.length];
     let pitch = next.s - cur.s;
     if (i === sorted.length - 1) pitch += L;
-    return { fromId: cur.b.id, toId: next.b.id, pitchMm: pitch, chordMm: Math.hypot(next.p.x - cur.p.x, next.p.y - cur.p.y) };
+    return {
+      fromId: cur.b.id,
+      toId: next.b.id,
+      pitchMm: pitch,
+      chordMm: Math.hypot(next.p.x - cur.p.x, next.p.y - cur.p.y),
+    };
   });
 }
 
@@ -99,7 +106,10 @@ export function getOutlineAreaMm2(outline: Outline): number {
 }
 
 /** Nearest arc position on the bolt path for a dragged point (s and off-path distance). */
-export function snapToBoltPath(design: Pick<JointDesign, "outline" | "boltPath">, p: PointMm): { sMm: number; offPathMm: number } {
+export function snapToBoltPath(
+  design: Pick<JointDesign, "outline" | "boltPath">,
+  p: PointMm,
+): { sMm: number; offPathMm: number } {
   const r = projectOntoPath(getBoltPath(design.outline, design.boltPath), p);
   return { sMm: r.sMm, offPathMm: r.offPathMm };
 }

@@ -11,8 +11,16 @@ export function jointConstant(boltStiffnessNPerMm: number, memberStiffnessNPerMm
 }
 
 /** Example: Fi = 100 kN, P = 30 kN, C = 0.3 → Fb = 109 kN, Fm = 79 kN, P0 = 142.9 kN. */
-export function shareExternalLoad(preloadN: number, externalN: number, c: number): { boltN: number; clampN: number; separationLoadN: number } {
-  return { boltN: preloadN + c * externalN, clampN: preloadN - (1 - c) * externalN, separationLoadN: preloadN / (1 - c) };
+export function shareExternalLoad(
+  preloadN: number,
+  externalN: number,
+  c: number,
+): { boltN: number; clampN: number; separationLoadN: number } {
+  return {
+    boltN: preloadN + c * externalN,
+    clampN: preloadN - (1 - c) * externalN,
+    separationLoadN: preloadN / (1 - c),
+  };
 }
 
 /**
@@ -20,7 +28,12 @@ export function shareExternalLoad(preloadN: number, externalN: number, c: number
  * load factor nL = (Fp − Fi)/(C·P), separation factor n0 = Fi/((1 − C)·P). A factor that does
  * not apply (no external load) is null.
  */
-export function computeSafetyFactors(proofLoadN: number, preloadN: number, externalN: number, c: number): {
+export function computeSafetyFactors(
+  proofLoadN: number,
+  preloadN: number,
+  externalN: number,
+  c: number,
+): {
   yieldFactor: number;
   loadFactor: number | null;
   separationFactor: number | null;

@@ -9,7 +9,12 @@ import type { ClosedPath } from "./path";
 import { buildGasketRegion, type GasketRegion } from "./gasket-region";
 import { offsetShape, outlineToShape, shapeAreaMm2, signedDistanceToShape } from "./shape";
 import { findThread, type ThreadRow } from "./catalogue/threads";
-import { getBoltMaterialById, getStrengthForDiameter, type BoltMaterialRow, type StrengthRange } from "./catalogue/bolt-materials";
+import {
+  getBoltMaterialById,
+  getStrengthForDiameter,
+  type BoltMaterialRow,
+  type StrengthRange,
+} from "./catalogue/bolt-materials";
 import { findNut, type NutRow } from "./catalogue/nuts";
 import { fastenerThreadLengthMm } from "./catalogue/thread-length";
 import { computeBoltStiffnessNPerMm, computeGripMm, splitGripMm } from "./bolt-stiffness";
@@ -49,7 +54,16 @@ export interface JointModel {
   /** Winkler modulus per unit path length k = Eg·wg/tg, N/mm². */
   foundationModulusMpa: number;
   lambdaPerMm: number;
-  preload: { targetN: number; minN: number; maxN: number; scatter: number; scatterSource: string; rule: string; proofMpa: number; proofEstimated: boolean };
+  preload: {
+    targetN: number;
+    minN: number;
+    maxN: number;
+    scatter: number;
+    scatterSource: string;
+    rule: string;
+    proofMpa: number;
+    proofEstimated: boolean;
+  };
   pressureAreaMm2: number;
   pressureAreaBasis: string;
   asmeGeometry: AsmeGasketGeometry | null;
@@ -79,19 +93,35 @@ export function buildJointModel(design: JointDesign): JointModel {
   const fullFace = design.gasket.kind === "full-face";
 
   const gi = design.layers.findIndex((l) => l.role === "gasket");
-  const plate = (l: JointDesign["layers"][number]) => (l.role === "gasket" ? { thicknessMm: gm.thicknessMm, modulusMpa: gm.modulusMpa } : { thicknessMm: l.thicknessMm, modulusMpa: l.modulusMpa });
+  const plate = (l: JointDesign["layers"][number]) =>
+    l.role === "gasket"
+      ? { thicknessMm: gm.thicknessMm, modulusMpa: gm.modulusMpa }
+      : { thicknessMm: l.thicknessMm, modulusMpa: l.modulusMpa };
   const above = design.layers.slice(0, gi).map(plate);
   const below = design.layers.slice(gi + 1).map(plate);
   const clamped = design.layers.reduce((a, l) => a + plate(l).thicknessMm, 0);
   const tapped = f.termination.kind === "tapped-hole" ? f.termination : null;
   const washerT = f.washer?.thicknessMm ?? 0;
-  const gripMm = computeGripMm({ clampedThicknessMm: clamped, washerThicknessMm: washerT, nominalDiameterMm: d, tappedMemberThicknessMm: tapped ? tapped.memberThicknessMm : null });
+  const gripMm = computeGripMm({
+    clampedThicknessMm: clamped,
+    washerThicknessMm: washerT,
+    nominalDiameterMm: d,
+    tappedMemberThicknessMm: tapped ? tapped.memberThicknessMm : null,
+  });
   const threadLengthMm = fastenerThreadLengthMm(f.form, f.threadSeries === "metric-coarse", d, f.lengthMm);
   const split = splitGripMm(gripMm, f.lengthMm, threadLengthMm);
-  const boltStiffnessNPerMm = computeBoltStiffnessNPerMm({ nominalDiameterMm: d, tensileStressAreaMm2: thread.tensileStressAreaMm2, shankInGripMm: split.shankMm, threadInGripMm: split.threadMm, modulusMpa: material.modulusMpa });
+  const boltStiffnessNPerMm = computeBoltStiffnessNPerMm({
+    nominalDiameterMm: d,
+    tensileStressAreaMm2: thread.tensileStressAreaMm2,
+    shankInGripMm: split.shankMm,
+    threadInGripMm: split.threadMm,
+    modulusMpa: material.modulusMpa,
+  });
 
   const bearingDiameterMm = f.washer ? f.washer.outerDiameterMm : 1.5 * d;
-  notes.push(`Member stiffness assumes a hole ≈ d = ${d.toFixed(2)} mm and a bearing face of ${bearingDiameterMm.toFixed(1)} mm (${f.washer ? "washer OD" : "≈ 1.5·d nut face"}); washers are treated as rigid.`);
+  notes.push(
+    `Member stiffness assumes a hole ≈ d = ${d.toFixed(2)} mm and a bearing face of ${bearingDiameterMm.toFixed(1)} mm (${f.washer ? "washer OD" : "≈ 1.5·d nut face"}); washers are treated as rigid.`,
+  );
   const spacings = getNeighbourSpacings(design);
   const outline = outlineToShape(design.outline);
   const minEdge = Math.min(...boltPoints.map((p) => -signedDistanceToShape(outline, p.x, p.y)));
@@ -105,20 +135,36 @@ export function buildJointModel(design: JointDesign): JointModel {
   stack.push(...below);
   const metal = [...above, ...below];
   if (tapped) {
-    const part = { thicknessMm: Math.min(tapped.memberThicknessMm, d) / 2, modulusMpa: tapped.memberModulusMpa };
+    const part = {
+      thicknessMm: Math.min(tapped.memberThicknessMm, d) / 2,
+      modulusMpa: tapped.memberModulusMpa,
+    };
     stack.push(part);
     metal.push(part);
   }
-  const members = computeMemberStiffness({ layers: stack, bearingDiameterMm, holeDiameterMm: d, coneAngleDeg: cone.degrees });
+  const members = computeMemberStiffness({
+    layers: stack,
+    bearingDiameterMm,
+    holeDiameterMm: d,
+    coneAngleDeg: cone.degrees,
+  });
   const gasketSpringNPerMm = fullFace ? null : ((region.areaMm2 / n) * gm.modulusMpa) / gm.thicknessMm;
-  const memberStiffnessNPerMm = gasketSpringNPerMm === null ? members.stiffnessNPerMm : 1 / (1 / members.stiffnessNPerMm + 1 / gasketSpringNPerMm);
+  const memberStiffnessNPerMm =
+    gasketSpringNPerMm === null
+      ? members.stiffnessNPerMm
+      : 1 / (1 / members.stiffnessNPerMm + 1 / gasketSpringNPerMm);
   if (!fullFace) notes.push("Ring gasket in series with the flange frusta as kg = (gasket area / n)·Eg/tg.");
   let wileman: JointModel["wileman"] = null;
   const e0 = metal[0]?.modulusMpa ?? 0;
   if (metal.length > 0 && metal.every((m) => Math.abs(m.modulusMpa - e0) <= 0.01 * e0)) {
     const lMetal = metal.reduce((a, m) => a + m.thicknessMm, 0);
     const w = wilemanMemberStiffnessNPerMm(e0, d, lMetal, "steel");
-    const c = computeMemberStiffness({ layers: metal, bearingDiameterMm, holeDiameterMm: d, coneAngleDeg: cone.degrees }).stiffnessNPerMm;
+    const c = computeMemberStiffness({
+      layers: metal,
+      bearingDiameterMm,
+      holeDiameterMm: d,
+      coneAngleDeg: cone.degrees,
+    }).stiffnessNPerMm;
     wileman = { stiffnessNPerMm: w, coneMetalOnlyNPerMm: c, ratio: c / w };
   }
 
@@ -128,15 +174,28 @@ export function buildJointModel(design: JointDesign): JointModel {
   const coneRadiusMm = bearingDiameterMm / 2 + coneDepthMm * tan;
 
   const b = region.stripWidthMm;
-  const ei = (layers: { thicknessMm: number; modulusMpa: number }[]) => layers.reduce((a, l) => a + (l.modulusMpa * b * l.thicknessMm ** 3) / 12, 0);
+  const ei = (layers: { thicknessMm: number; modulusMpa: number }[]) =>
+    layers.reduce((a, l) => a + (l.modulusMpa * b * l.thicknessMm ** 3) / 12, 0);
   const eiTop = ei(above);
-  const eiBottom = ei(below) + (tapped ? (tapped.memberModulusMpa * b * tapped.memberThicknessMm ** 3) / 12 : 0);
-  const flexuralRigidityNmm2 = eiBottom > 0 && eiTop > 0 ? 1 / (1 / eiTop + 1 / eiBottom) : Math.max(eiTop, eiBottom);
+  const eiBottom =
+    ei(below) + (tapped ? (tapped.memberModulusMpa * b * tapped.memberThicknessMm ** 3) / 12 : 0);
+  const flexuralRigidityNmm2 =
+    eiBottom > 0 && eiTop > 0 ? 1 / (1 / eiTop + 1 / eiBottom) : Math.max(eiTop, eiBottom);
   const foundationModulusMpa = (gm.modulusMpa * region.foundationWidthMm) / gm.thicknessMm;
   const lambdaPerMm = Math.pow(foundationModulusMpa / (4 * flexuralRigidityNmm2), 0.25);
 
-  const proof = effectiveProofMpa({ tensileStressAreaMm2: thread.tensileStressAreaMm2, rootAreaMm2: thread.rootAreaMm2, proofMpa: strength.proofMpa, yieldMpa: strength.yieldMpa });
-  const target = computeTargetPreloadN(design.assembly.preload, { tensileStressAreaMm2: thread.tensileStressAreaMm2, rootAreaMm2: thread.rootAreaMm2, proofMpa: strength.proofMpa, yieldMpa: strength.yieldMpa });
+  const proof = effectiveProofMpa({
+    tensileStressAreaMm2: thread.tensileStressAreaMm2,
+    rootAreaMm2: thread.rootAreaMm2,
+    proofMpa: strength.proofMpa,
+    yieldMpa: strength.yieldMpa,
+  });
+  const target = computeTargetPreloadN(design.assembly.preload, {
+    tensileStressAreaMm2: thread.tensileStressAreaMm2,
+    rootAreaMm2: thread.rootAreaMm2,
+    proofMpa: strength.proofMpa,
+    yieldMpa: strength.yieldMpa,
+  });
   const scatter = resolveScatter(design.assembly);
   const window = applyScatterN(target.targetN, scatter.scatter);
 
@@ -145,26 +204,69 @@ export function buildJointModel(design: JointDesign): JointModel {
   let pressureAreaBasis: string;
   const g = design.gasket;
   if (g.kind === "ring" && g.geometry.kind === "annulus") {
-    asmeGeometry = asmeGasketGeometry(g.geometry.outerDiameterMm, g.geometry.innerDiameterMm, design.units === "US" ? "inch" : "metric");
+    asmeGeometry = asmeGasketGeometry(
+      g.geometry.outerDiameterMm,
+      g.geometry.innerDiameterMm,
+      design.units === "US" ? "inch" : "metric",
+    );
     pressureAreaMm2 = (Math.PI / 4) * asmeGeometry.gMm ** 2;
     pressureAreaBasis = "π/4·G² (ASME VIII-1 Appendix 2)";
   } else if (g.kind === "ring" && g.geometry.kind === "band") {
     pressureAreaMm2 = shapeAreaMm2(offsetShape(outline, g.geometry.centreOffsetMm));
     pressureAreaBasis = "area enclosed by the gasket centre line (generalisation of π/4·G²) [practice]";
   } else {
-    pressureAreaMm2 = design.boltPath.kind === "circle" ? (Math.PI / 4) * design.boltPath.diameterMm ** 2 : shapeAreaMm2(offsetShape(outline, design.boltPath.offsetMm));
-    pressureAreaBasis = "area enclosed by the bolt path (full-face gasket: pressure assumed to reach the bolt line) [practice]";
+    pressureAreaMm2 =
+      design.boltPath.kind === "circle"
+        ? (Math.PI / 4) * design.boltPath.diameterMm ** 2
+        : shapeAreaMm2(offsetShape(outline, design.boltPath.offsetMm));
+    pressureAreaBasis =
+      "area enclosed by the bolt path (full-face gasket: pressure assumed to reach the bolt line) [practice]";
   }
   const totalAxialN = design.loads.designPressureMpa * pressureAreaMm2 + design.loads.axialLoadN;
   const externalLoadPerBoltN = distributeExternalLoadN(boltPoints, totalAxialN, design.loads.momentNmm);
 
   return {
-    design, region, boltPath, boltPoints, thread, material, strength, nut, nominalDiameterMm: d, bearingDiameterMm,
-    gripMm, shankInGripMm: split.shankMm, threadInGripMm: split.threadMm, threadLengthMm, boltStiffnessNPerMm,
-    memberStiffnessNPerMm, frusta: members.frusta, gasketSpringNPerMm, jointConstant: jointConstant(boltStiffnessNPerMm, memberStiffnessNPerMm),
-    wileman, coneAngleDeg: cone.degrees, coneAngleRule: cone.rule, coneDepthMm, coneRadiusMm, flexuralRigidityNmm2,
-    foundationModulusMpa, lambdaPerMm,
-    preload: { targetN: target.targetN, minN: window.minN, maxN: window.maxN, scatter: scatter.scatter, scatterSource: scatter.source, rule: target.note, proofMpa: proof.proofMpa, proofEstimated: proof.estimated },
-    pressureAreaMm2, pressureAreaBasis, asmeGeometry, externalLoadPerBoltN, notes,
+    design,
+    region,
+    boltPath,
+    boltPoints,
+    thread,
+    material,
+    strength,
+    nut,
+    nominalDiameterMm: d,
+    bearingDiameterMm,
+    gripMm,
+    shankInGripMm: split.shankMm,
+    threadInGripMm: split.threadMm,
+    threadLengthMm,
+    boltStiffnessNPerMm,
+    memberStiffnessNPerMm,
+    frusta: members.frusta,
+    gasketSpringNPerMm,
+    jointConstant: jointConstant(boltStiffnessNPerMm, memberStiffnessNPerMm),
+    wileman,
+    coneAngleDeg: cone.degrees,
+    coneAngleRule: cone.rule,
+    coneDepthMm,
+    coneRadiusMm,
+    flexuralRigidityNmm2,
+    foundationModulusMpa,
+    lambdaPerMm,
+    preload: {
+      targetN: target.targetN,
+      minN: window.minN,
+      maxN: window.maxN,
+      scatter: scatter.scatter,
+      scatterSource: scatter.source,
+      rule: target.note,
+      proofMpa: proof.proofMpa,
+      proofEstimated: proof.estimated,
+    },
+    pressureAreaMm2,
+    pressureAreaBasis,
+    asmeGeometry,
+    externalLoadPerBoltN,
+    notes,
   };
 }

@@ -17,7 +17,13 @@ export interface FrustumResult {
  * k = π·E·d·tanα / ln{[(2t·tanα + D − d)(D + d)] / [(2t·tanα + D + d)(D − d)]}, D the diameter at
  * the narrow end. Example: E = 90 GPa, t = 25, D = 27, d = 18, α = 45° → 4.4916e6 N/mm.
  */
-export function frustumStiffnessNPerMm(modulusMpa: number, thicknessMm: number, narrowDiameterMm: number, holeDiameterMm: number, coneAngleDeg: number): number {
+export function frustumStiffnessNPerMm(
+  modulusMpa: number,
+  thicknessMm: number,
+  narrowDiameterMm: number,
+  holeDiameterMm: number,
+  coneAngleDeg: number,
+): number {
   const tan = Math.tan((coneAngleDeg * Math.PI) / 180);
   const D = narrowDiameterMm;
   const d = holeDiameterMm;
@@ -55,7 +61,19 @@ export function computeMemberStiffness(input: {
       if (t <= 1e-12) continue;
       const depthNarrow = a < mid ? a : total - b;
       const D = input.bearingDiameterMm + 2 * depthNarrow * tan;
-      frusta.push({ layerIndex: i, thicknessMm: t, narrowDiameterMm: D, modulusMpa: layer.modulusMpa, stiffnessNPerMm: frustumStiffnessNPerMm(layer.modulusMpa, t, D, input.holeDiameterMm, input.coneAngleDeg) });
+      frusta.push({
+        layerIndex: i,
+        thicknessMm: t,
+        narrowDiameterMm: D,
+        modulusMpa: layer.modulusMpa,
+        stiffnessNPerMm: frustumStiffnessNPerMm(
+          layer.modulusMpa,
+          t,
+          D,
+          input.holeDiameterMm,
+          input.coneAngleDeg,
+        ),
+      });
     }
   });
   const flex = frusta.reduce((a, f) => a + 1 / f.stiffnessNPerMm, 0);
@@ -74,7 +92,12 @@ export const WILEMAN_CONSTANTS = {
  * Cross-check for two members of one material: km = E·d·A·exp(B·d/l).
  * Example: steel 207 GPa, d = 16, l = 40 → about 3.35e6 N/mm (the 30° cone gives 3.33e6: within 1 %).
  */
-export function wilemanMemberStiffnessNPerMm(modulusMpa: number, diameterMm: number, gripMm: number, material: keyof typeof WILEMAN_CONSTANTS = "steel"): number {
+export function wilemanMemberStiffnessNPerMm(
+  modulusMpa: number,
+  diameterMm: number,
+  gripMm: number,
+  material: keyof typeof WILEMAN_CONSTANTS = "steel",
+): number {
   const c = WILEMAN_CONSTANTS[material];
   return modulusMpa * diameterMm * c.a * Math.exp((c.b * diameterMm) / gripMm);
 }

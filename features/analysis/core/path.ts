@@ -9,7 +9,15 @@ import { shapeBounds, type Shape } from "./shape";
 export type PathSegment =
   | { kind: "line"; x0: number; y0: number; x1: number; y1: number; lengthMm: number }
   /** `sweepRad` is negative (clockwise). */
-  | { kind: "arc"; cx: number; cy: number; radiusMm: number; startRad: number; sweepRad: number; lengthMm: number };
+  | {
+      kind: "arc";
+      cx: number;
+      cy: number;
+      radiusMm: number;
+      startRad: number;
+      sweepRad: number;
+      lengthMm: number;
+    };
 
 export interface ClosedPath {
   segments: PathSegment[];
@@ -55,7 +63,10 @@ export function shapeToPath(shape: Shape): ClosedPath {
     segs.push(line(-hw, -hh + r, -hw, hh - r));
     if (r > 0) segs.push(arc(-hw + r, hh - r, r, Math.PI, q));
     segs.push(line(-hw + r, hh, 0, hh));
-    return finish(segs.filter((s) => s.lengthMm > EPS), 0);
+    return finish(
+      segs.filter((s) => s.lengthMm > EPS),
+      0,
+    );
   }
   const pts = shape.points;
   for (let i = 0; i < pts.length; i++) {
@@ -63,7 +74,10 @@ export function shapeToPath(shape: Shape): ClosedPath {
     const b = pts[(i + 1) % pts.length];
     segs.push(line(a.x, a.y, b.x, b.y));
   }
-  const path = finish(segs.filter((s) => s.lengthMm > EPS), 0);
+  const path = finish(
+    segs.filter((s) => s.lengthMm > EPS),
+    0,
+  );
   // s = 0 at the topmost point nearest the vertical centre line of the bounding box.
   const bb = shapeBounds(shape);
   const cx = (bb.xMinMm + bb.xMaxMm) / 2;
@@ -160,7 +174,10 @@ function projectInternal(path: ClosedPath, p: PointMm): { uMm: number; dist2: nu
  * i.e. to the left of the clockwise direction of travel). Used when a bolt is dragged.
  * Example: circle of 200 mm, p = (0, 110) → s = 0, offset = +10.
  */
-export function projectOntoPath(path: ClosedPath, p: PointMm): { sMm: number; offPathMm: number; x: number; y: number } {
+export function projectOntoPath(
+  path: ClosedPath,
+  p: PointMm,
+): { sMm: number; offPathMm: number; x: number; y: number } {
   const { uMm } = projectInternal(path, p);
   const sMm = wrap(uMm - path.shiftMm, path.lengthMm);
   const q = pointAtArcLength(path, sMm);
@@ -188,7 +205,10 @@ export function samplePathUniform(path: ClosedPath, count: number, xs: Float64Ar
     const u = wrap(j * step + path.shiftMm, L);
     // advance (with wrap-around) until u lies in the current segment
     let guard = 0;
-    while (guard++ <= path.segments.length && !(u >= path.segmentStartMm[seg] && u < path.segmentStartMm[seg] + path.segments[seg].lengthMm + 1e-12)) {
+    while (
+      guard++ <= path.segments.length &&
+      !(u >= path.segmentStartMm[seg] && u < path.segmentStartMm[seg] + path.segments[seg].lengthMm + 1e-12)
+    ) {
       seg = (seg + 1) % path.segments.length;
     }
     const s = path.segments[seg];

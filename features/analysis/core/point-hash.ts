@@ -20,12 +20,19 @@ const MAX_CELLS_PER_AXIS = 1024;
 
 export function buildPointHash(xs: ArrayLike<number>, ys: ArrayLike<number>, cellMm: number): PointHash {
   const n = xs.length;
-  let xMin = Infinity, xMax = -Infinity, yMin = Infinity, yMax = -Infinity;
+  let xMin = Infinity,
+    xMax = -Infinity,
+    yMin = Infinity,
+    yMax = -Infinity;
   for (let i = 0; i < n; i++) {
-    xMin = Math.min(xMin, xs[i]); xMax = Math.max(xMax, xs[i]);
-    yMin = Math.min(yMin, ys[i]); yMax = Math.max(yMax, ys[i]);
+    xMin = Math.min(xMin, xs[i]);
+    xMax = Math.max(xMax, xs[i]);
+    yMin = Math.min(yMin, ys[i]);
+    yMax = Math.max(yMax, ys[i]);
   }
-  if (n === 0) { xMin = xMax = yMin = yMax = 0; }
+  if (n === 0) {
+    xMin = xMax = yMin = yMax = 0;
+  }
   let cell = Math.max(cellMm, 1e-6);
   cell = Math.max(cell, (xMax - xMin) / MAX_CELLS_PER_AXIS, (yMax - yMin) / MAX_CELLS_PER_AXIS);
   const x0 = xMin - cell;
@@ -43,11 +50,27 @@ export function buildPointHash(xs: ArrayLike<number>, ys: ArrayLike<number>, cel
   const fill = counts.slice(0, nx * ny);
   const items = new Int32Array(n);
   for (let i = 0; i < n; i++) items[fill[cellOf[i]]++] = i;
-  return { cellMm: cell, x0, y0, nx, ny, cellStart: counts, items, xs: Float64Array.from(xs), ys: Float64Array.from(ys) };
+  return {
+    cellMm: cell,
+    x0,
+    y0,
+    nx,
+    ny,
+    cellStart: counts,
+    items,
+    xs: Float64Array.from(xs),
+    ys: Float64Array.from(ys),
+  };
 }
 
 /** Calls `visit(index, distanceSquared)` for every point within `radiusMm` of (x, y). */
-export function forEachNear(hash: PointHash, x: number, y: number, radiusMm: number, visit: (i: number, d2: number) => void): void {
+export function forEachNear(
+  hash: PointHash,
+  x: number,
+  y: number,
+  radiusMm: number,
+  visit: (i: number, d2: number) => void,
+): void {
   const cx = Math.floor((x - hash.x0) / hash.cellMm);
   const cy = Math.floor((y - hash.y0) / hash.cellMm);
   const r2 = radiusMm * radiusMm;

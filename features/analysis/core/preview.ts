@@ -55,19 +55,31 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
   // Plain arrays with non-finite values as null: what toFiniteJson gives analyzeJoint, in one pass.
   const arr = (a: ArrayLike<number>): number[] => {
     const out = new Array<number>(a.length);
-    for (let i = 0; i < a.length; i++) { const v = a[i]; out[i] = Number.isFinite(v) ? v : (null as unknown as number); }
+    for (let i = 0; i < a.length; i++) {
+      const v = a[i];
+      out[i] = Number.isFinite(v) ? v : (null as unknown as number);
+    }
     return out;
   };
   const preview: Omit<JointPreview, "seating"> = {
     coreVersion: CORE_VERSION,
     governingEstimator: gov.estimator,
     profile: {
-      sMm: arr(profiles.sMm), xMm: arr(profiles.xMm), yMm: arr(profiles.yMm), stressMpa: arr(gov.values),
-      coneMpa: arr(profiles.coneMpa), beamMpa: arr(profiles.beamMpa), onGasket: Array.from(profiles.onGasket, (v) => v === 1),
+      sMm: arr(profiles.sMm),
+      xMm: arr(profiles.xMm),
+      yMm: arr(profiles.yMm),
+      stressMpa: arr(gov.values),
+      coneMpa: arr(profiles.coneMpa),
+      beamMpa: arr(profiles.beamMpa),
+      onGasket: Array.from(profiles.onGasket, (v) => v === 1),
     },
     boltSOnPathMm: arr(profiles.boltSOnPathMm),
     // The records and the summary get the conversion analyzeJoint applies (flat records: the short form).
-    summary: toFiniteJson({ minGasketStressMpa: gov.summary.minMpa, maxGasketStressMpa: gov.summary.maxMpa, meanGasketStressMpa: gov.summary.meanMpa }).value,
+    summary: toFiniteJson({
+      minGasketStressMpa: gov.summary.minMpa,
+      maxGasketStressMpa: gov.summary.maxMpa,
+      meanGasketStressMpa: gov.summary.meanMpa,
+    }).value,
     gasket: toFiniteRecords(checkGasketStress(model, gov.summary, gov.estimator).map(withIds)).value,
     spacing: toFiniteRecords(checkSpacing(model, gov.estimator === "cone").map(withIds)).value,
   };

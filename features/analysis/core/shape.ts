@@ -24,10 +24,20 @@ function signedArea(points: PointMm[]): number {
 export function outlineToShape(outline: Outline): Shape {
   switch (outline.kind) {
     case "circle":
-      return { kind: "rounded-rect", halfWidthMm: outline.diameterMm / 2, halfHeightMm: outline.diameterMm / 2, radiusMm: outline.diameterMm / 2 };
+      return {
+        kind: "rounded-rect",
+        halfWidthMm: outline.diameterMm / 2,
+        halfHeightMm: outline.diameterMm / 2,
+        radiusMm: outline.diameterMm / 2,
+      };
     case "rectangle": {
       const r = Math.min(Math.max(outline.cornerRadiusMm, 0), outline.widthMm / 2, outline.heightMm / 2);
-      return { kind: "rounded-rect", halfWidthMm: outline.widthMm / 2, halfHeightMm: outline.heightMm / 2, radiusMm: r };
+      return {
+        kind: "rounded-rect",
+        halfWidthMm: outline.widthMm / 2,
+        halfHeightMm: outline.heightMm / 2,
+        radiusMm: r,
+      };
     }
     case "obround":
       return {
@@ -133,14 +143,29 @@ export function shapeAreaMm2(shape: Shape): number {
 }
 
 /** Axis-aligned bounding box of the shape, mm. */
-export function shapeBounds(shape: Shape): { xMinMm: number; xMaxMm: number; yMinMm: number; yMaxMm: number } {
+export function shapeBounds(shape: Shape): {
+  xMinMm: number;
+  xMaxMm: number;
+  yMinMm: number;
+  yMaxMm: number;
+} {
   if (shape.kind === "rounded-rect") {
-    return { xMinMm: -shape.halfWidthMm, xMaxMm: shape.halfWidthMm, yMinMm: -shape.halfHeightMm, yMaxMm: shape.halfHeightMm };
+    return {
+      xMinMm: -shape.halfWidthMm,
+      xMaxMm: shape.halfWidthMm,
+      yMinMm: -shape.halfHeightMm,
+      yMaxMm: shape.halfHeightMm,
+    };
   }
-  let xMin = Infinity, xMax = -Infinity, yMin = Infinity, yMax = -Infinity;
+  let xMin = Infinity,
+    xMax = -Infinity,
+    yMin = Infinity,
+    yMax = -Infinity;
   for (const p of shape.points) {
-    xMin = Math.min(xMin, p.x); xMax = Math.max(xMax, p.x);
-    yMin = Math.min(yMin, p.y); yMax = Math.max(yMax, p.y);
+    xMin = Math.min(xMin, p.x);
+    xMax = Math.max(xMax, p.x);
+    yMin = Math.min(yMin, p.y);
+    yMax = Math.max(yMax, p.y);
   }
   return { xMinMm: xMin, xMaxMm: xMax, yMinMm: yMin, yMaxMm: yMax };
 }

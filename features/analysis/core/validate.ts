@@ -26,10 +26,20 @@ export function formatIssue(issue: DesignIssue): string {
 
 function outlineNumbers(o: Outline): [string, number][] {
   switch (o.kind) {
-    case "circle": return [["diameterMm", o.diameterMm]];
-    case "rectangle": return [["widthMm", o.widthMm], ["heightMm", o.heightMm]];
-    case "obround": return [["lengthMm", o.lengthMm], ["widthMm", o.widthMm]];
-    case "polygon": return [];
+    case "circle":
+      return [["diameterMm", o.diameterMm]];
+    case "rectangle":
+      return [
+        ["widthMm", o.widthMm],
+        ["heightMm", o.heightMm],
+      ];
+    case "obround":
+      return [
+        ["lengthMm", o.lengthMm],
+        ["widthMm", o.widthMm],
+      ];
+    case "polygon":
+      return [];
   }
 }
 
@@ -39,10 +49,14 @@ function boundaryPoints(o: Outline): PointMm[] {
 
 function approxSize(o: Outline): number {
   switch (o.kind) {
-    case "circle": return o.diameterMm;
-    case "rectangle": return Math.max(o.widthMm, o.heightMm);
-    case "obround": return Math.max(o.lengthMm, o.widthMm);
-    case "polygon": return 1000;
+    case "circle":
+      return o.diameterMm;
+    case "rectangle":
+      return Math.max(o.widthMm, o.heightMm);
+    case "obround":
+      return Math.max(o.lengthMm, o.widthMm);
+    case "polygon":
+      return 1000;
   }
 }
 
@@ -63,7 +77,8 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
 
   if (design.schemaVersion !== 1) add("schemaVersion", "unsupported schema version (expected 1)");
   for (const [k, v] of outlineNumbers(design.outline)) positive(`outline.${k}`, v);
-  if (design.outline.kind === "polygon" && design.outline.points.length < 3) add("outline.points", "a polygon needs at least 3 points");
+  if (design.outline.kind === "polygon" && design.outline.points.length < 3)
+    add("outline.points", "a polygon needs at least 3 points");
   if (design.bore) for (const [k, v] of outlineNumbers(design.bore)) positive(`bore.${k}`, v);
   if (design.boltPath.kind === "circle") positive("boltPath.diameterMm", design.boltPath.diameterMm);
   else positive("boltPath.offsetMm", design.boltPath.offsetMm);
@@ -96,25 +111,35 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
   positive("assembly.nutFactor.value", design.assembly.nutFactor.value);
   positive("assembly.preload.value", design.assembly.preload.value);
   const so = design.assembly.scatterOverride;
-  if (so !== null && !(so >= 0 && so < 1)) add("assembly.scatterOverride", "must be a fraction between 0 and 1");
+  if (so !== null && !(so >= 0 && so < 1))
+    add("assembly.scatterOverride", "must be a fraction between 0 and 1");
   const est = design.estimator;
-  if (!(Number.isInteger(est.samplesPerPitch) && est.samplesPerPitch >= 8 && est.samplesPerPitch <= 1024)) add("estimator.samplesPerPitch", "must be an integer from 8 to 1024");
-  if (est.coneAngle.mode === "fixed" && !(est.coneAngle.degrees >= 5 && est.coneAngle.degrees <= 60)) add("estimator.coneAngle.degrees", "must be between 5° and 60°");
+  if (!(Number.isInteger(est.samplesPerPitch) && est.samplesPerPitch >= 8 && est.samplesPerPitch <= 1024))
+    add("estimator.samplesPerPitch", "must be an integer from 8 to 1024");
+  if (est.coneAngle.mode === "fixed" && !(est.coneAngle.degrees >= 5 && est.coneAngle.degrees <= 60))
+    add("estimator.coneAngle.degrees", "must be between 5° and 60°");
   for (const k of ["nx", "ny"] as const) {
-    if (!(Number.isInteger(est.grid[k]) && est.grid[k] >= 2 && est.grid[k] <= 2048)) add(`estimator.grid.${k}`, "must be an integer from 2 to 2048");
+    if (!(Number.isInteger(est.grid[k]) && est.grid[k] >= 2 && est.grid[k] <= 2048))
+      add(`estimator.grid.${k}`, "must be an integer from 2 to 2048");
   }
   const n = design.bolts.length;
-  if (n < 1 || n > MAX_BOLT_COUNT) add("bolts", `bolt count must be between 1 and ${MAX_BOLT_COUNT} (got ${n})`);
+  if (n < 1 || n > MAX_BOLT_COUNT)
+    add("bolts", `bolt count must be between 1 and ${MAX_BOLT_COUNT} (got ${n})`);
   const thread = findThread(f.designation, f.threadSeries);
-  if (!thread) add("fastener.designation", `no ${f.threadSeries} thread "${f.designation}" in the thread catalogue`);
-  if (!getBoltMaterialById(f.materialId)) add("fastener.materialId", `unknown bolt material "${f.materialId}"`);
-  if (thread && f.holeDiameterMm < thread.nominalDiameterMm) add("fastener.holeDiameterMm", "bolt hole is smaller than the bolt");
-  if (f.washer && f.washer.outerDiameterMm <= f.holeDiameterMm) add("fastener.washer.outerDiameterMm", "washer must be larger than the bolt hole");
+  if (!thread)
+    add("fastener.designation", `no ${f.threadSeries} thread "${f.designation}" in the thread catalogue`);
+  if (!getBoltMaterialById(f.materialId))
+    add("fastener.materialId", `unknown bolt material "${f.materialId}"`);
+  if (thread && f.holeDiameterMm < thread.nominalDiameterMm)
+    add("fastener.holeDiameterMm", "bolt hole is smaller than the bolt");
+  if (f.washer && f.washer.outerDiameterMm <= f.holeDiameterMm)
+    add("fastener.washer.outerDiameterMm", "washer must be larger than the bolt hole");
   if (issues.length > 0) return issues; // geometry below needs sane numbers
 
   design.bolts.forEach((b, i) => {
     if (!Number.isFinite(b.sMm)) add(`bolts[${i}].sMm`, "must be a finite number");
-    if (b.offPathMm !== undefined && !Number.isFinite(b.offPathMm)) add(`bolts[${i}].offPathMm`, "must be a finite number");
+    if (b.offPathMm !== undefined && !Number.isFinite(b.offPathMm))
+      add(`bolts[${i}].offPathMm`, "must be a finite number");
   });
   const seen = new Map<string, number>();
   design.bolts.forEach((b, i) => {
@@ -125,21 +150,35 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
 
   const outline = outlineToShape(design.outline);
   const bore = design.bore ? outlineToShape(design.bore) : null;
-  if (bore && design.bore && maxSdf(outline, boundaryPoints(design.bore)) >= 0) add("bore", "bore does not lie inside the flange outline");
+  if (bore && design.bore && maxSdf(outline, boundaryPoints(design.bore)) >= 0)
+    add("bore", "bore does not lie inside the flange outline");
   const boltPath = getBoltPath(design.outline, design.boltPath);
-  if (boltPath.lengthMm <= 0 || maxSdf(outline, pathToPolyline(boltPath, Math.max(1, boltPath.lengthMm / 2000))) >= 0) {
+  if (
+    boltPath.lengthMm <= 0 ||
+    maxSdf(outline, pathToPolyline(boltPath, Math.max(1, boltPath.lengthMm / 2000))) >= 0
+  ) {
     add("boltPath", "bolt path does not lie inside the flange outline");
   }
   const rh = f.holeDiameterMm / 2;
   const pts = design.bolts.map((b) => getBoltPoint(boltPath, b));
   pts.forEach((p, i) => {
-    if (signedDistanceToShape(outline, p.x, p.y) > -rh) add(`bolts[${i}].position`, "bolt hole lies outside the flange outline");
-    else if (bore && signedDistanceToShape(bore, p.x, p.y) < rh) add(`bolts[${i}].position`, "bolt hole cuts into the bore");
+    if (signedDistanceToShape(outline, p.x, p.y) > -rh)
+      add(`bolts[${i}].position`, "bolt hole lies outside the flange outline");
+    else if (bore && signedDistanceToShape(bore, p.x, p.y) < rh)
+      add(`bolts[${i}].position`, "bolt hole cuts into the bore");
   });
-  const hash = buildPointHash(pts.map((p) => p.x), pts.map((p) => p.y), 2 * rh);
+  const hash = buildPointHash(
+    pts.map((p) => p.x),
+    pts.map((p) => p.y),
+    2 * rh,
+  );
   pts.forEach((p, i) => {
     forEachNear(hash, p.x, p.y, 2 * rh, (j, d2) => {
-      if (j < i && d2 < 4 * rh * rh) add(`bolts[${i}].position`, `bolt hole overlaps the hole of bolt "${design.bolts[j].id}" (bolts[${j}])`);
+      if (j < i && d2 < 4 * rh * rh)
+        add(
+          `bolts[${i}].position`,
+          `bolt hole overlaps the hole of bolt "${design.bolts[j].id}" (bolts[${j}])`,
+        );
     });
   });
 
@@ -150,20 +189,35 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
       positive("gasket.geometry.innerDiameterMm", id);
       positive("gasket.geometry.outerDiameterMm", od);
       if (od <= id) add("gasket.geometry.outerDiameterMm", "must be larger than the inner diameter");
-      const ring = (r: number) => Array.from({ length: 256 }, (_, k) => ({ x: r * Math.cos((k * Math.PI) / 128), y: r * Math.sin((k * Math.PI) / 128) }));
-      if (od > 0 && maxSdf(outline, ring(od / 2)) >= 0) add("gasket.geometry.outerDiameterMm", "ring gasket extends beyond the flange outline");
-      if (bore && id > 0 && ring(id / 2).some((p) => signedDistanceToShape(bore, p.x, p.y) < -1e-6)) add("gasket.geometry.innerDiameterMm", "ring gasket inner edge lies inside the bore");
+      const ring = (r: number) =>
+        Array.from({ length: 256 }, (_, k) => ({
+          x: r * Math.cos((k * Math.PI) / 128),
+          y: r * Math.sin((k * Math.PI) / 128),
+        }));
+      if (od > 0 && maxSdf(outline, ring(od / 2)) >= 0)
+        add("gasket.geometry.outerDiameterMm", "ring gasket extends beyond the flange outline");
+      if (bore && id > 0 && ring(id / 2).some((p) => signedDistanceToShape(bore, p.x, p.y) < -1e-6))
+        add("gasket.geometry.innerDiameterMm", "ring gasket inner edge lies inside the bore");
       pts.forEach((p, i) => {
         const r = Math.hypot(p.x, p.y);
-        if (r + rh > id / 2 && r - rh < od / 2) add("gasket.geometry", `ring gasket overlaps the hole of bolt "${design.bolts[i].id}" (bolts[${i}])`);
+        if (r + rh > id / 2 && r - rh < od / 2)
+          add(
+            "gasket.geometry",
+            `ring gasket overlaps the hole of bolt "${design.bolts[i].id}" (bolts[${i}])`,
+          );
       });
     } else {
       const { centreOffsetMm: c, widthMm: w } = g.geometry;
       positive("gasket.geometry.widthMm", w);
-      if (!(c - w / 2 >= 0)) add("gasket.geometry.centreOffsetMm", "ring gasket band extends beyond the flange outline");
+      if (!(c - w / 2 >= 0))
+        add("gasket.geometry.centreOffsetMm", "ring gasket band extends beyond the flange outline");
       pts.forEach((p, i) => {
         const d = -signedDistanceToShape(outline, p.x, p.y);
-        if (Math.abs(d - c) < w / 2 + rh) add("gasket.geometry", `ring gasket overlaps the hole of bolt "${design.bolts[i].id}" (bolts[${i}])`);
+        if (Math.abs(d - c) < w / 2 + rh)
+          add(
+            "gasket.geometry",
+            `ring gasket overlaps the hole of bolt "${design.bolts[i].id}" (bolts[${i}])`,
+          );
       });
     }
   }

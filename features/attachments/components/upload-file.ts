@@ -6,7 +6,11 @@ export interface UploadOutcome {
   message?: string;
 }
 
-export function uploadFile(url: string, file: File, onProgress: (fraction: number) => void): Promise<UploadOutcome> {
+export function uploadFile(
+  url: string,
+  file: File,
+  onProgress: (fraction: number) => void,
+): Promise<UploadOutcome> {
   return new Promise((resolve) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
@@ -24,7 +28,12 @@ export function uploadFile(url: string, file: File, onProgress: (fraction: numbe
       }
       resolve({ ok: xhr.status >= 200 && xhr.status < 300, status: xhr.status, message });
     };
-    xhr.onerror = () => resolve({ ok: false, status: 0, message: "The upload was interrupted; check the connection and try again." });
+    xhr.onerror = () =>
+      resolve({
+        ok: false,
+        status: 0,
+        message: "The upload was interrupted; check the connection and try again.",
+      });
     xhr.send(file);
   });
 }

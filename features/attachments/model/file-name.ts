@@ -5,7 +5,11 @@ const EXTENSIONS = { pdf: ".pdf", png: ".png", jpeg: ".jpg", dxf: ".dxf" } as co
 export function cleanFileName(raw: string, kind: keyof typeof EXTENSIONS): string {
   const base = raw.split(/[\\/]/).pop() ?? "";
   // eslint-disable-next-line no-control-regex
-  let name = base.replace(/[\u0000-\u001f\u007f"]/g, "").trim().slice(0, 180) || "attachment";
+  let name =
+    base
+      .replace(/[\u0000-\u001f\u007f"]/g, "")
+      .trim()
+      .slice(0, 180) || "attachment";
   const ext = EXTENSIONS[kind];
   const lower = name.toLowerCase();
   const matches = kind === "jpeg" ? lower.endsWith(".jpg") || lower.endsWith(".jpeg") : lower.endsWith(ext);

@@ -20,7 +20,8 @@ function looksLikeDxf(bytes: Uint8Array): boolean {
   let head = "";
   const n = Math.min(bytes.length, 64);
   for (let i = 0; i < n; i++) head += String.fromCharCode(bytes[i]);
-  if (head.charCodeAt(0) === 0xef && head.charCodeAt(1) === 0xbb && head.charCodeAt(2) === 0xbf) head = head.slice(3);
+  if (head.charCodeAt(0) === 0xef && head.charCodeAt(1) === 0xbb && head.charCodeAt(2) === 0xbf)
+    head = head.slice(3);
   return /^\s*0[ \t]*\r?\n[ \t]*SECTION[ \t]*\r?\n/.test(head);
 }
 

@@ -6,13 +6,27 @@ import { OUTLINE_KINDS, REVISION_STATUSES, UPDATED_WITHIN_DAYS, type ListDesigns
 
 const selectClass = "rounded-plate border border-ink-200 bg-white px-2 py-2 text-body";
 
-function Select({ name, label, value, options }: { name: string; label: string; value: string | undefined; options: [string, string][] }) {
+function Select({
+  name,
+  label,
+  value,
+  options,
+}: {
+  name: string;
+  label: string;
+  value: string | undefined;
+  options: [string, string][];
+}) {
   return (
     <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
       {label}
       <select name={name} defaultValue={value ?? ""} className={selectClass}>
         <option value="">Any</option>
-        {options.map(([v, text]) => <option key={v} value={v}>{text}</option>)}
+        {options.map(([v, text]) => (
+          <option key={v} value={v}>
+            {text}
+          </option>
+        ))}
       </select>
     </label>
   );
@@ -21,20 +35,59 @@ function Select({ name, label, value, options }: { name: string; label: string; 
 /** A plain GET form: filters live in the URL, so the register is server-rendered and shareable. */
 export function RegisterFilters({ query, owners }: { query: ListDesignsQueryInput; owners: OwnerOption[] }) {
   return (
-    <form method="get" action="/designs" role="search" aria-label="Filter the register" className="flex flex-wrap items-end gap-3 rounded-plate bg-steel-50 p-panel">
+    <form
+      method="get"
+      action="/designs"
+      role="search"
+      aria-label="Filter the register"
+      className="flex flex-wrap items-end gap-3 rounded-plate bg-steel-50 p-panel"
+    >
       <label className="flex min-w-56 flex-1 flex-col gap-1 text-table font-medium text-ink-800">
         Search
-        <input type="search" name="q" defaultValue={query.q ?? ""} placeholder="Name or equipment tag" className="rounded-plate border border-ink-200 bg-white px-3 py-2 text-body" />
+        <input
+          type="search"
+          name="q"
+          defaultValue={query.q ?? ""}
+          placeholder="Name or equipment tag"
+          className="rounded-plate border border-ink-200 bg-white px-3 py-2 text-body"
+        />
       </label>
-      <Select name="status" label="Status" value={query.status} options={REVISION_STATUSES.map((s) => [s, STATUS_LABELS[s]])} />
-      <Select name="owner" label="Owner" value={query.owner} options={owners.map((o) => [o.userId, o.displayName])} />
-      <Select name="outline" label="Outline" value={query.outline} options={OUTLINE_KINDS.map((k) => [k, OUTLINE_LABELS[k]])} />
-      <Select name="updatedWithinDays" label="Updated" value={query.updatedWithinDays} options={UPDATED_WITHIN_DAYS.map((d) => [d, UPDATED_LABELS[d]])} />
+      <Select
+        name="status"
+        label="Status"
+        value={query.status}
+        options={REVISION_STATUSES.map((s) => [s, STATUS_LABELS[s]])}
+      />
+      <Select
+        name="owner"
+        label="Owner"
+        value={query.owner}
+        options={owners.map((o) => [o.userId, o.displayName])}
+      />
+      <Select
+        name="outline"
+        label="Outline"
+        value={query.outline}
+        options={OUTLINE_KINDS.map((k) => [k, OUTLINE_LABELS[k]])}
+      />
+      <Select
+        name="updatedWithinDays"
+        label="Updated"
+        value={query.updatedWithinDays}
+        options={UPDATED_WITHIN_DAYS.map((d) => [d, UPDATED_LABELS[d]])}
+      />
       {query.sort !== "updated" ? <input type="hidden" name="sort" value={query.sort} /> : null}
       {query.dir ? <input type="hidden" name="dir" value={query.dir} /> : null}
       {query.archived === "only" ? <input type="hidden" name="archived" value="only" /> : null}
-      <button type="submit" className={buttonStyles.secondary}>Apply</button>
-      <Link href={query.archived === "only" ? "/designs?archived=only" : "/designs"} className={buttonStyles.quiet}>Clear</Link>
+      <button type="submit" className={buttonStyles.secondary}>
+        Apply
+      </button>
+      <Link
+        href={query.archived === "only" ? "/designs?archived=only" : "/designs"}
+        className={buttonStyles.quiet}
+      >
+        Clear
+      </Link>
     </form>
   );
 }

@@ -61,7 +61,10 @@ export function buildFastener(options: {
   const d = thread.nominalDiameterMm;
   // Washer proportions of ISO 7089 (OD ≈ 1.85·d, t ≈ 0.15·d), rounded [practice].
   const washer = options.withWasher
-    ? { thicknessMm: Math.max(1, Math.round(0.15 * d * 2) / 2), outerDiameterMm: Math.max(Math.round(1.85 * d), Math.ceil(options.holeDiameterMm) + 4) }
+    ? {
+        thicknessMm: Math.max(1, Math.round(0.15 * d * 2) / 2),
+        outerDiameterMm: Math.max(Math.round(1.85 * d), Math.ceil(options.holeDiameterMm) + 4),
+      }
     : null;
   const stack = options.clampedMm + 2 * (washer?.thicknessMm ?? 0) + 2 * 0.8 * d + 3 * thread.pitchMm;
   return {

@@ -18,9 +18,27 @@ export interface TemplateChoice {
   fields: TemplateField[];
 }
 
-const mm = (name: string, label: string, defaultValue: string, hint?: string): TemplateField => ({ name, label, unit: "mm", defaultValue, input: "number", hint });
-const count = (defaultValue: string): TemplateField => ({ name: "boltCount", label: "Number of bolts", defaultValue, input: "number", hint: "Placed at equal pitch, straddling the centre lines" });
-const size = (defaultValue: string): TemplateField => ({ name: "boltSize", label: "Bolt size", defaultValue, input: "bolt-size" });
+const mm = (name: string, label: string, defaultValue: string, hint?: string): TemplateField => ({
+  name,
+  label,
+  unit: "mm",
+  defaultValue,
+  input: "number",
+  hint,
+});
+const count = (defaultValue: string): TemplateField => ({
+  name: "boltCount",
+  label: "Number of bolts",
+  defaultValue,
+  input: "number",
+  hint: "Placed at equal pitch, straddling the centre lines",
+});
+const size = (defaultValue: string): TemplateField => ({
+  name: "boltSize",
+  label: "Bolt size",
+  defaultValue,
+  input: "bolt-size",
+});
 
 const coverFields = (bolts: string): TemplateField[] => [
   mm("boltEdgeDistanceMm", "Bolt edge distance", "35", "From the outer edge to the bolt centres"),
@@ -50,7 +68,12 @@ export const TEMPLATE_CHOICES: readonly TemplateChoice[] = [
     label: "Catalogue pipe flange",
     description: "ASME B16.5 Class 150 outside diameter, bolt circle and bolting from the catalogue.",
     fields: [
-      { name: "flangeTemplateId", label: "Pipe flange size", defaultValue: "asme-b16.5-cl150-nps6", input: "pipe-flange" },
+      {
+        name: "flangeTemplateId",
+        label: "Pipe flange size",
+        defaultValue: "asme-b16.5-cl150-nps6",
+        input: "pipe-flange",
+      },
       mm("flangeThicknessMm", "Flange thickness", "25", "Take it from the flange drawing"),
     ],
   },
@@ -58,7 +81,12 @@ export const TEMPLATE_CHOICES: readonly TemplateChoice[] = [
     kind: "rectangular-cover",
     label: "Rectangular cover",
     description: "A bolted rectangular hatch or channel cover with rounded corners.",
-    fields: [mm("widthMm", "Width", "600"), mm("heightMm", "Height", "400"), mm("cornerRadiusMm", "Corner radius", "40"), ...coverFields("16")],
+    fields: [
+      mm("widthMm", "Width", "600"),
+      mm("heightMm", "Height", "400"),
+      mm("cornerRadiusMm", "Corner radius", "40"),
+      ...coverFields("16"),
+    ],
   },
   {
     kind: "obround-manway",
@@ -71,7 +99,12 @@ export const TEMPLATE_CHOICES: readonly TemplateChoice[] = [
     label: "Polygon cover",
     description: "Any straight-sided cover, given by its vertices.",
     fields: [
-      { name: "points", label: "Vertices (x, y in mm, one per line)", defaultValue: "-300, -200\n300, -200\n300, 150\n0, 250\n-300, 150", input: "vertices" },
+      {
+        name: "points",
+        label: "Vertices (x, y in mm, one per line)",
+        defaultValue: "-300, -200\n300, -200\n300, 150\n0, 250\n-300, 150",
+        input: "vertices",
+      },
       ...coverFields("14"),
     ],
   },

@@ -3,26 +3,57 @@
 // Pure functions; the form's zod schemas (../schema.ts) check the numbers before these run.
 import type { JointDesign, Layer, Outline, PointMm, UnitSystem } from "@/features/analysis/core/design";
 import { getBoltPathLengthMm, placeBoltsEqually } from "@/features/analysis/core/geometry";
-import { getFlangeTemplateById, type FlangeTemplateRow } from "@/features/analysis/core/catalogue/flange-templates";
 import {
-  DEFAULT_GASKET_TYPE_ID, DEFAULT_PIPE_GASKET_TYPE_ID, STEEL_MODULUS_MPA, buildFastener, defaultJointSettings,
-  gasketMaterialFromCatalogue, metricHoleDiameterMm, nominalDiameterMm, type MetricBoltSize,
+  getFlangeTemplateById,
+  type FlangeTemplateRow,
+} from "@/features/analysis/core/catalogue/flange-templates";
+import {
+  DEFAULT_GASKET_TYPE_ID,
+  DEFAULT_PIPE_GASKET_TYPE_ID,
+  STEEL_MODULUS_MPA,
+  buildFastener,
+  defaultJointSettings,
+  gasketMaterialFromCatalogue,
+  metricHoleDiameterMm,
+  nominalDiameterMm,
+  type MetricBoltSize,
 } from "./template-defaults";
 
-export type TemplateKind = "circular-flange" | "pipe-flange" | "rectangular-cover" | "obround-manway" | "polygon-cover";
+export type TemplateKind =
+  "circular-flange" | "pipe-flange" | "rectangular-cover" | "obround-manway" | "polygon-cover";
 
 export interface CircularFlangeParams {
-  outsideDiameterMm: number; boreDiameterMm: number; boltCircleDiameterMm: number;
-  boltCount: number; boltSize: MetricBoltSize; flangeThicknessMm: number;
+  outsideDiameterMm: number;
+  boreDiameterMm: number;
+  boltCircleDiameterMm: number;
+  boltCount: number;
+  boltSize: MetricBoltSize;
+  flangeThicknessMm: number;
 }
-export interface PipeFlangeParams { flangeTemplateId: string; flangeThicknessMm: number }
+export interface PipeFlangeParams {
+  flangeTemplateId: string;
+  flangeThicknessMm: number;
+}
 interface CoverParams {
-  boltEdgeDistanceMm: number; boltCount: number; boltSize: MetricBoltSize;
-  coverThicknessMm: number; flangeThicknessMm: number; gasketWidthMm: number;
+  boltEdgeDistanceMm: number;
+  boltCount: number;
+  boltSize: MetricBoltSize;
+  coverThicknessMm: number;
+  flangeThicknessMm: number;
+  gasketWidthMm: number;
 }
-export interface RectangularCoverParams extends CoverParams { widthMm: number; heightMm: number; cornerRadiusMm: number }
-export interface ObroundManwayParams extends CoverParams { lengthMm: number; widthMm: number }
-export interface PolygonCoverParams extends CoverParams { points: PointMm[] }
+export interface RectangularCoverParams extends CoverParams {
+  widthMm: number;
+  heightMm: number;
+  cornerRadiusMm: number;
+}
+export interface ObroundManwayParams extends CoverParams {
+  lengthMm: number;
+  widthMm: number;
+}
+export interface PolygonCoverParams extends CoverParams {
+  points: PointMm[];
+}
 
 export type TemplateInput =
   | ({ kind: "circular-flange" } & CircularFlangeParams)
@@ -31,7 +62,11 @@ export type TemplateInput =
   | ({ kind: "obround-manway" } & ObroundManwayParams)
   | ({ kind: "polygon-cover" } & PolygonCoverParams);
 
-export interface DocumentMeta { name: string; equipmentTag: string; units: UnitSystem }
+export interface DocumentMeta {
+  name: string;
+  equipmentTag: string;
+  units: UnitSystem;
+}
 
 /** Radial gap kept between a gasket edge and a bolt hole or the bore, mm [practice]. */
 const GAP_MM = 3;
@@ -41,7 +76,14 @@ const GAP_MM = 3;
  * gasket's inner edge sits just outside it, like a B16.21 flat ring.
  */
 const PIPE_OUTSIDE_DIAMETER_MM: Record<string, number> = {
-  "2": 60.3, "4": 114.3, "6": 168.3, "8": 219.1, "10": 273.1, "12": 323.9, "16": 406.4, "24": 609.6,
+  "2": 60.3,
+  "4": 114.3,
+  "6": 168.3,
+  "8": 219.1,
+  "10": 273.1,
+  "12": 323.9,
+  "16": 406.4,
+  "24": 609.6,
 };
 
 function flangeLayer(role: "flange" | "cover", thicknessMm: number, materialName: string): Layer {
@@ -53,8 +95,17 @@ function withEqualBolts(design: Omit<JointDesign, "bolts">, count: number): Join
   return { ...design, bolts: placeBoltsEqually(length, count) };
 }
 
-function base(meta: DocumentMeta): Pick<JointDesign, "schemaVersion" | "name" | "description" | "units"> & ReturnType<typeof defaultJointSettings> {
-  return { schemaVersion: 1, name: meta.name, ...(meta.equipmentTag ? { description: meta.equipmentTag } : {}), units: meta.units, ...defaultJointSettings() };
+function base(
+  meta: DocumentMeta,
+): Pick<JointDesign, "schemaVersion" | "name" | "description" | "units"> &
+  ReturnType<typeof defaultJointSettings> {
+  return {
+    schemaVersion: 1,
+    name: meta.name,
+    ...(meta.equipmentTag ? { description: meta.equipmentTag } : {}),
+    units: meta.units,
+    ...defaultJointSettings(),
+  };
 }
 
 export function buildCircularFlange(meta: DocumentMeta, p: CircularFlangeParams): JointDesign {
@@ -62,15 +113,36 @@ export function buildCircularFlange(meta: DocumentMeta, p: CircularFlangeParams)
   const hole = metricHoleDiameterMm(d);
   const gasket = gasketMaterialFromCatalogue(DEFAULT_GASKET_TYPE_ID);
   const innerDiameterMm = p.boreDiameterMm > 0 ? p.boreDiameterMm + 2 * GAP_MM : 2 * GAP_MM;
-  return withEqualBolts({
-    ...base(meta),
-    outline: { kind: "circle", diameterMm: p.outsideDiameterMm },
-    bore: p.boreDiameterMm > 0 ? { kind: "circle", diameterMm: p.boreDiameterMm } : null,
-    gasket: { kind: "ring", geometry: { kind: "annulus", innerDiameterMm, outerDiameterMm: p.boltCircleDiameterMm - hole - 2 * GAP_MM }, material: gasket },
-    boltPath: { kind: "circle", diameterMm: p.boltCircleDiameterMm },
-    fastener: buildFastener({ designation: p.boltSize, materialId: "iso-898-1-8.8", holeDiameterMm: hole, clampedMm: 2 * p.flangeThicknessMm + gasket.thicknessMm, withWasher: true }),
-    layers: [flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"), { role: "gasket" }, flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate")],
-  }, p.boltCount);
+  return withEqualBolts(
+    {
+      ...base(meta),
+      outline: { kind: "circle", diameterMm: p.outsideDiameterMm },
+      bore: p.boreDiameterMm > 0 ? { kind: "circle", diameterMm: p.boreDiameterMm } : null,
+      gasket: {
+        kind: "ring",
+        geometry: {
+          kind: "annulus",
+          innerDiameterMm,
+          outerDiameterMm: p.boltCircleDiameterMm - hole - 2 * GAP_MM,
+        },
+        material: gasket,
+      },
+      boltPath: { kind: "circle", diameterMm: p.boltCircleDiameterMm },
+      fastener: buildFastener({
+        designation: p.boltSize,
+        materialId: "iso-898-1-8.8",
+        holeDiameterMm: hole,
+        clampedMm: 2 * p.flangeThicknessMm + gasket.thicknessMm,
+        withWasher: true,
+      }),
+      layers: [
+        flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"),
+        { role: "gasket" },
+        flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"),
+      ],
+    },
+    p.boltCount,
+  );
 }
 
 export function pipeFlangeRow(id: string): FlangeTemplateRow | undefined {
@@ -83,54 +155,110 @@ export function buildPipeFlange(meta: DocumentMeta, p: PipeFlangeParams): JointD
   if (!row) throw new Error(`unknown flange template ${p.flangeTemplateId}`);
   const pipeOd = PIPE_OUTSIDE_DIAMETER_MM[row.nps];
   const gasket = gasketMaterialFromCatalogue(DEFAULT_PIPE_GASKET_TYPE_ID);
-  return withEqualBolts({
-    ...base(meta),
-    templateId: row.id,
-    outline: { kind: "circle", diameterMm: row.outsideDiameterMm },
-    bore: { kind: "circle", diameterMm: pipeOd },
-    gasket: {
-      kind: "ring",
-      geometry: { kind: "annulus", innerDiameterMm: pipeOd + 2 * GAP_MM, outerDiameterMm: row.boltCircleDiameterMm - row.holeDiameterMm - 2 * GAP_MM },
-      material: gasket,
+  return withEqualBolts(
+    {
+      ...base(meta),
+      templateId: row.id,
+      outline: { kind: "circle", diameterMm: row.outsideDiameterMm },
+      bore: { kind: "circle", diameterMm: pipeOd },
+      gasket: {
+        kind: "ring",
+        geometry: {
+          kind: "annulus",
+          innerDiameterMm: pipeOd + 2 * GAP_MM,
+          outerDiameterMm: row.boltCircleDiameterMm - row.holeDiameterMm - 2 * GAP_MM,
+        },
+        material: gasket,
+      },
+      boltPath: { kind: "circle", diameterMm: row.boltCircleDiameterMm },
+      fastener: buildFastener({
+        designation: row.boltDesignation,
+        materialId: "astm-a193-b7",
+        holeDiameterMm: row.holeDiameterMm,
+        clampedMm: 2 * p.flangeThicknessMm + gasket.thicknessMm,
+        withWasher: false,
+      }),
+      layers: [
+        flangeLayer("flange", p.flangeThicknessMm, "ASTM A105 forged steel"),
+        { role: "gasket" },
+        flangeLayer("flange", p.flangeThicknessMm, "ASTM A105 forged steel"),
+      ],
     },
-    boltPath: { kind: "circle", diameterMm: row.boltCircleDiameterMm },
-    fastener: buildFastener({ designation: row.boltDesignation, materialId: "astm-a193-b7", holeDiameterMm: row.holeDiameterMm, clampedMm: 2 * p.flangeThicknessMm + gasket.thicknessMm, withWasher: false }),
-    layers: [flangeLayer("flange", p.flangeThicknessMm, "ASTM A105 forged steel"), { role: "gasket" }, flangeLayer("flange", p.flangeThicknessMm, "ASTM A105 forged steel")],
-  }, row.boltCount);
+    row.boltCount,
+  );
 }
 
 /** Where a cover's gasket band and opening sit, measured inward from the outline, mm. */
-export function coverBandLayout(p: CoverParams): { holeDiameterMm: number; bandCentreOffsetMm: number; boreOffsetMm: number } {
+export function coverBandLayout(p: CoverParams): {
+  holeDiameterMm: number;
+  bandCentreOffsetMm: number;
+  boreOffsetMm: number;
+} {
   const holeDiameterMm = metricHoleDiameterMm(nominalDiameterMm(p.boltSize));
   const bandCentreOffsetMm = p.boltEdgeDistanceMm + holeDiameterMm / 2 + GAP_MM + p.gasketWidthMm / 2;
-  return { holeDiameterMm, bandCentreOffsetMm, boreOffsetMm: bandCentreOffsetMm + p.gasketWidthMm / 2 + GAP_MM };
+  return {
+    holeDiameterMm,
+    bandCentreOffsetMm,
+    boreOffsetMm: bandCentreOffsetMm + p.gasketWidthMm / 2 + GAP_MM,
+  };
 }
 
 function buildCover(meta: DocumentMeta, p: CoverParams, outline: Outline, bore: Outline | null): JointDesign {
   const { holeDiameterMm, bandCentreOffsetMm } = coverBandLayout(p);
   const gasket = gasketMaterialFromCatalogue(DEFAULT_GASKET_TYPE_ID);
-  return withEqualBolts({
-    ...base(meta),
-    outline,
-    bore,
-    gasket: { kind: "ring", geometry: { kind: "band", centreOffsetMm: bandCentreOffsetMm, widthMm: p.gasketWidthMm }, material: gasket },
-    boltPath: { kind: "offset", offsetMm: p.boltEdgeDistanceMm },
-    fastener: buildFastener({ designation: p.boltSize, materialId: "iso-898-1-8.8", holeDiameterMm, clampedMm: p.coverThicknessMm + p.flangeThicknessMm + gasket.thicknessMm, withWasher: true }),
-    layers: [flangeLayer("cover", p.coverThicknessMm, "Carbon steel plate"), { role: "gasket" }, flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate")],
-  }, p.boltCount);
+  return withEqualBolts(
+    {
+      ...base(meta),
+      outline,
+      bore,
+      gasket: {
+        kind: "ring",
+        geometry: { kind: "band", centreOffsetMm: bandCentreOffsetMm, widthMm: p.gasketWidthMm },
+        material: gasket,
+      },
+      boltPath: { kind: "offset", offsetMm: p.boltEdgeDistanceMm },
+      fastener: buildFastener({
+        designation: p.boltSize,
+        materialId: "iso-898-1-8.8",
+        holeDiameterMm,
+        clampedMm: p.coverThicknessMm + p.flangeThicknessMm + gasket.thicknessMm,
+        withWasher: true,
+      }),
+      layers: [
+        flangeLayer("cover", p.coverThicknessMm, "Carbon steel plate"),
+        { role: "gasket" },
+        flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"),
+      ],
+    },
+    p.boltCount,
+  );
 }
 
 export function buildRectangularCover(meta: DocumentMeta, p: RectangularCoverParams): JointDesign {
   const k = coverBandLayout(p).boreOffsetMm;
-  const opening = p.widthMm - 2 * k > 0 && p.heightMm - 2 * k > 0
-    ? { kind: "rectangle" as const, widthMm: p.widthMm - 2 * k, heightMm: p.heightMm - 2 * k, cornerRadiusMm: Math.max(p.cornerRadiusMm - k, 0) }
-    : null;
-  return buildCover(meta, p, { kind: "rectangle", widthMm: p.widthMm, heightMm: p.heightMm, cornerRadiusMm: p.cornerRadiusMm }, opening);
+  const opening =
+    p.widthMm - 2 * k > 0 && p.heightMm - 2 * k > 0
+      ? {
+          kind: "rectangle" as const,
+          widthMm: p.widthMm - 2 * k,
+          heightMm: p.heightMm - 2 * k,
+          cornerRadiusMm: Math.max(p.cornerRadiusMm - k, 0),
+        }
+      : null;
+  return buildCover(
+    meta,
+    p,
+    { kind: "rectangle", widthMm: p.widthMm, heightMm: p.heightMm, cornerRadiusMm: p.cornerRadiusMm },
+    opening,
+  );
 }
 
 export function buildObroundManway(meta: DocumentMeta, p: ObroundManwayParams): JointDesign {
   const k = coverBandLayout(p).boreOffsetMm;
-  const opening = p.lengthMm - 2 * k > 0 && p.widthMm - 2 * k > 0 ? { kind: "obround" as const, lengthMm: p.lengthMm - 2 * k, widthMm: p.widthMm - 2 * k } : null;
+  const opening =
+    p.lengthMm - 2 * k > 0 && p.widthMm - 2 * k > 0
+      ? { kind: "obround" as const, lengthMm: p.lengthMm - 2 * k, widthMm: p.widthMm - 2 * k }
+      : null;
   return buildCover(meta, p, { kind: "obround", lengthMm: p.lengthMm, widthMm: p.widthMm }, opening);
 }
 
@@ -141,10 +269,15 @@ export function buildPolygonCover(meta: DocumentMeta, p: PolygonCoverParams): Jo
 
 export function buildDesignFromTemplate(meta: DocumentMeta, input: TemplateInput): JointDesign {
   switch (input.kind) {
-    case "circular-flange": return buildCircularFlange(meta, input);
-    case "pipe-flange": return buildPipeFlange(meta, input);
-    case "rectangular-cover": return buildRectangularCover(meta, input);
-    case "obround-manway": return buildObroundManway(meta, input);
-    case "polygon-cover": return buildPolygonCover(meta, input);
+    case "circular-flange":
+      return buildCircularFlange(meta, input);
+    case "pipe-flange":
+      return buildPipeFlange(meta, input);
+    case "rectangular-cover":
+      return buildRectangularCover(meta, input);
+    case "obround-manway":
+      return buildObroundManway(meta, input);
+    case "polygon-cover":
+      return buildPolygonCover(meta, input);
   }
 }

@@ -9,7 +9,15 @@ export function AssemblyPlanView({ analysis, units }: { analysis: JointAnalysis;
   return (
     <div className="space-y-2 text-table">
       <table className="w-full" aria-label="Tightening passes">
-        <thead className="text-left text-micro text-ink-500"><tr><th>Pass</th><th>Pattern</th><th className="text-right">Of target</th><th className="text-right">Torque</th><th>Note</th></tr></thead>
+        <thead className="text-left text-micro text-ink-500">
+          <tr>
+            <th>Pass</th>
+            <th>Pattern</th>
+            <th className="text-right">Of target</th>
+            <th className="text-right">Torque</th>
+            <th>Note</th>
+          </tr>
+        </thead>
         <tbody>
           {plan.passes.map((p) => (
             <tr key={p.pass} className="border-t border-ink-100 align-top">
@@ -24,9 +32,13 @@ export function AssemblyPlanView({ analysis, units }: { analysis: JointAnalysis;
       </table>
       <p>
         <span className="text-ink-600">Sequence ({plan.sequenceRule}): </span>
-        <span className="num" data-testid="tightening-sequence">{plan.sequence.join(" → ")}</span>
+        <span className="num" data-testid="tightening-sequence">
+          {plan.sequence.join(" → ")}
+        </span>
       </p>
-      <p className="text-micro text-ink-500">Nut factor {plan.nutFactor} ({plan.nutFactorSource}). {plan.source}</p>
+      <p className="text-micro text-ink-500">
+        Nut factor {plan.nutFactor} ({plan.nutFactorSource}). {plan.source}
+      </p>
     </div>
   );
 }

@@ -4,17 +4,36 @@ import { Circle } from "react-konva";
 import type { PointMm } from "@/features/analysis/core/design";
 import { boltNodeId } from "./canvas-ids";
 
-export interface BoltDot { id: string; p: PointMm; offPath: boolean }
+export interface BoltDot {
+  id: string;
+  p: PointMm;
+  offPath: boolean;
+}
 
 type HoleProps = { bolt: BoltDot; r: number; selected: boolean; draggable: boolean };
 
 /** Same hole, same place: the scene rebuilds its bolt objects every move, so compare the values. */
 const sameHole = (a: HoleProps, b: HoleProps) =>
-  a.r === b.r && a.selected === b.selected && a.draggable === b.draggable &&
-  a.bolt.id === b.bolt.id && a.bolt.p.x === b.bolt.p.x && a.bolt.p.y === b.bolt.p.y && a.bolt.offPath === b.bolt.offPath;
+  a.r === b.r &&
+  a.selected === b.selected &&
+  a.draggable === b.draggable &&
+  a.bolt.id === b.bolt.id &&
+  a.bolt.p.x === b.bolt.p.x &&
+  a.bolt.p.y === b.bolt.p.y &&
+  a.bolt.offPath === b.bolt.offPath;
 
 /** One bolt hole to scale, in model coordinates. */
-const BoltHole = memo(function BoltHole({ bolt, r, selected, draggable }: { bolt: BoltDot; r: number; selected: boolean; draggable: boolean }) {
+const BoltHole = memo(function BoltHole({
+  bolt,
+  r,
+  selected,
+  draggable,
+}: {
+  bolt: BoltDot;
+  r: number;
+  selected: boolean;
+  draggable: boolean;
+}) {
   return (
     <Circle
       id={boltNodeId(bolt.id)}
@@ -35,7 +54,17 @@ const BoltHole = memo(function BoltHole({ bolt, r, selected, draggable }: { bolt
   );
 }, sameHole);
 
-export function BoltNodes({ bolts, r, selectedId, readOnly }: { bolts: BoltDot[]; r: number; selectedId: string | null; readOnly: boolean }) {
+export function BoltNodes({
+  bolts,
+  r,
+  selectedId,
+  readOnly,
+}: {
+  bolts: BoltDot[];
+  r: number;
+  selectedId: string | null;
+  readOnly: boolean;
+}) {
   return (
     <>
       {bolts.map((b) => (

@@ -8,7 +8,12 @@ const STATUS_STYLE: Record<CheckView["status"], string> = {
   fail: "bg-verdict-fail-bg text-verdict-fail",
   "not-applicable": "bg-verdict-na-bg text-verdict-na",
 };
-const STATUS_TEXT: Record<CheckView["status"], string> = { pass: "pass", warn: "warn", fail: "fail", "not-applicable": "n/a" };
+const STATUS_TEXT: Record<CheckView["status"], string> = {
+  pass: "pass",
+  warn: "warn",
+  fail: "fail",
+  "not-applicable": "n/a",
+};
 const ORDER: Record<CheckView["status"], number> = { fail: 0, warn: 1, pass: 2, "not-applicable": 3 };
 
 function shown(v: number | null, unit: string, units: UnitSystem): string {
@@ -19,12 +24,28 @@ function shown(v: number | null, unit: string, units: UnitSystem): string {
 }
 
 /** The check list, failures first. Clicking a row highlights its bolts on the drawing. */
-export function CheckList({ checks, units, activeId, onPick }: { checks: CheckView[]; units: UnitSystem; activeId: string | null; onPick?: (id: string | null) => void }) {
+export function CheckList({
+  checks,
+  units,
+  activeId,
+  onPick,
+}: {
+  checks: CheckView[];
+  units: UnitSystem;
+  activeId: string | null;
+  onPick?: (id: string | null) => void;
+}) {
   const rows = [...checks].sort((a, b) => ORDER[a.status] - ORDER[b.status]);
   return (
     <table className="w-full text-table" aria-label="Checks">
       <thead className="text-left text-micro text-ink-500">
-        <tr><th className="py-1">Status</th><th>Check</th><th className="text-right">Value</th><th className="text-right">Limit</th><th>Unit</th></tr>
+        <tr>
+          <th className="py-1">Status</th>
+          <th>Check</th>
+          <th className="text-right">Value</th>
+          <th className="text-right">Limit</th>
+          <th>Unit</th>
+        </tr>
       </thead>
       <tbody>
         {rows.map((c) => {
@@ -32,15 +53,35 @@ export function CheckList({ checks, units, activeId, onPick }: { checks: CheckVi
           const unit = q ? unitLabel(q, units) : c.unit;
           const active = c.id === activeId;
           return (
-            <tr key={c.id} data-check-id={c.id} data-status={c.status} aria-selected={active}
+            <tr
+              key={c.id}
+              data-check-id={c.id}
+              data-status={c.status}
+              aria-selected={active}
               className={`cursor-pointer border-t border-ink-100 align-top ${active ? "bg-brass-50" : "hover:bg-steel-50"}`}
-              onClick={() => onPick?.(active ? null : c.id)}>
-              <td className="py-1"><span className={`rounded px-1.5 py-0.5 text-micro font-semibold ${STATUS_STYLE[c.status]}`}>{STATUS_TEXT[c.status]}</span></td>
+              onClick={() => onPick?.(active ? null : c.id)}
+            >
+              <td className="py-1">
+                <span className={`rounded px-1.5 py-0.5 text-micro font-semibold ${STATUS_STYLE[c.status]}`}>
+                  {STATUS_TEXT[c.status]}
+                </span>
+              </td>
               <td>
-                <button type="button" className="text-left text-ink-800 hover:underline" onClick={(e) => { e.stopPropagation(); onPick?.(active ? null : c.id); }}>
-                  {c.title}{c.boltIds.length > 0 && <span className="num text-ink-500"> · {c.boltIds.join("–")}</span>}
+                <button
+                  type="button"
+                  className="text-left text-ink-800 hover:underline"
+                  onClick={(e) => {
+                    e.stopPropagation();
+                    onPick?.(active ? null : c.id);
+                  }}
+                >
+                  {c.title}
+                  {c.boltIds.length > 0 && <span className="num text-ink-500"> · {c.boltIds.join("–")}</span>}
                 </button>
-                <p className="text-micro text-ink-500">{c.source}{c.note ? ` — ${c.note}` : ""}</p>
+                <p className="text-micro text-ink-500">
+                  {c.source}
+                  {c.note ? ` — ${c.note}` : ""}
+                </p>
               </td>
               <td className="num text-right">{shown(c.value, c.unit, units)}</td>
               <td className="num text-right">{shown(c.limit, c.unit, units)}</td>

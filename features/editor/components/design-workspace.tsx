@@ -38,7 +38,13 @@ export interface DesignWorkspaceProps {
 }
 
 /** The "Layout desk": drawing, pattern bench, joint data, readout and saving for one working revision. */
-export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSystemAction, readOnly }: DesignWorkspaceProps) {
+export function DesignWorkspace({
+  design: dto,
+  saveAction,
+  unitSystem,
+  setUnitSystemAction,
+  readOnly,
+}: DesignWorkspaceProps) {
   const ro = readOnly ?? !dto.canEdit;
   const editor = useEditorHistory(dto.document);
   const { design, dispatch } = editor;
@@ -68,7 +74,7 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   const readoutView = useDeferredValue(useHeldWhile(view, editor.dragging));
   const readoutIssues = useDeferredValue(useHeldWhile(live.issues, editor.dragging));
   // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
-  const heat = useHeatMap(design, editor.dragging ? view ?? lastView.current : view, editor.dragging);
+  const heat = useHeatMap(design, editor.dragging ? (view ?? lastView.current) : view, editor.dragging);
 
   const setInvalid = useCallback((path: string, bad: boolean) => {
     setInvalidState((cur) => {
@@ -80,18 +86,34 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
     });
   }, []);
 
-  const onSaved = useCallback((result: JointAnalysis, doc: JointDesign) => setStored({ document: doc, result }), []);
+  const onSaved = useCallback(
+    (result: JointAnalysis, doc: JointDesign) => setStored({ document: doc, result }),
+    [],
+  );
   const invalidCount = Object.keys(invalid).length;
   const docErrors = useDocumentErrors(design, editor.dragging, null);
-  const blockedReason = invalidCount > 0
-    ? "Fix the marked fields before saving; nothing with a refused value is written."
-    : docErrors.schemaErrorCount > 0 ? `Not saved: ${docErrors.schemaMessages.slice(0, 3).join("; ")}` : null;
+  const blockedReason =
+    invalidCount > 0
+      ? "Fix the marked fields before saving; nothing with a refused value is written."
+      : docErrors.schemaErrorCount > 0
+        ? `Not saved: ${docErrors.schemaMessages.slice(0, 3).join("; ")}`
+        : null;
   const save = useSave({
-    designId: dto.designId, initialVersion: dto.version, initialDocument: dto.document, document: design, meta,
-    saveAction, blocked: !!blockedReason || editor.dragging, enabled: !ro, onSaved,
+    designId: dto.designId,
+    initialVersion: dto.version,
+    initialDocument: dto.document,
+    document: design,
+    meta,
+    saveAction,
+    blocked: !!blockedReason || editor.dragging,
+    enabled: !ro,
+    onSaved,
   });
   const serverErrors = useDocumentErrors(design, true, save.fieldErrors);
-  const errorFor = useCallback((p: string) => docErrors.errorFor(p) ?? serverErrors.errorFor(p), [docErrors, serverErrors]);
+  const errorFor = useCallback(
+    (p: string) => docErrors.errorFor(p) ?? serverErrors.errorFor(p),
+    [docErrors, serverErrors],
+  );
   useLeaveGuard(save.dirty, discarding);
 
   const act = useCallback((a: DesignAction) => dispatch(a), [dispatch]);
@@ -107,16 +129,27 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
   };
   const boltCount = useRef(design.bolts.length);
   boltCount.current = design.bolts.length;
-  const deleteBolt = useCallback((id: string) => {
-    if (boltCount.current <= 1) return;
-    act({ type: "delete-bolts", boltIds: [id] });
-    setSelected(null);
-  }, [act]);
-  useEditorShortcuts({
-    undo: editor.undo, redo: editor.redo, save: () => void save.save(), fit: () => setFitToken((t) => t + 1),
-    deleteSelected: () => selected && deleteBolt(selected),
-    nudge: (steps) => selected && act({ type: "nudge-bolt", boltId: selected, deltaMm: steps * (units === "US" ? 25.4 / 16 : 1) }),
-  }, !ro);
+  const deleteBolt = useCallback(
+    (id: string) => {
+      if (boltCount.current <= 1) return;
+      act({ type: "delete-bolts", boltIds: [id] });
+      setSelected(null);
+    },
+    [act],
+  );
+  useEditorShortcuts(
+    {
+      undo: editor.undo,
+      redo: editor.redo,
+      save: () => void save.save(),
+      fit: () => setFitToken((t) => t + 1),
+      deleteSelected: () => selected && deleteBolt(selected),
+      nudge: (steps) =>
+        selected &&
+        act({ type: "nudge-bolt", boltId: selected, deltaMm: steps * (units === "US" ? 25.4 / 16 : 1) }),
+    },
+    !ro,
+  );
 
   const changeUnits = (u: UnitSystem) => {
     setUnits(u);
@@ -129,7 +162,10 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
 
   const checks = (view ?? lastView.current)?.checks ?? [];
   const highlight = highlightedBolts(view, { checkId: activeCheck ?? undefined });
-  const ctx = useMemo(() => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }), [design, units, ro, act, setInvalid, errorFor]);
+  const ctx = useMemo(
+    () => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }),
+    [design, units, ro, act, setInvalid, errorFor],
+  );
   const sectionsCtx = useHeldWhile(ctx, editor.dragging);
 
   return (
@@ -138,41 +174,97 @@ export function DesignWorkspace({ design: dto, saveAction, unitSystem, setUnitSy
         <div>
           <h1 className="text-heading font-semibold text-ink-900">{meta.name}</h1>
           <p className="text-table text-ink-600">
-            {meta.equipmentTag && <span className="num">{meta.equipmentTag} · </span>}revision {dto.revisionNumber} · {dto.status.replace("_", " ")} · {dto.ownerName}
+            {meta.equipmentTag && <span className="num">{meta.equipmentTag} · </span>}revision{" "}
+            {dto.revisionNumber} · {dto.status.replace("_", " ")} · {dto.ownerName}
             {ro && <span className="ml-2 rounded bg-ink-100 px-1.5 text-micro">read only</span>}
           </p>
         </div>
         <div className="flex flex-col items-end gap-1">
           <UnitSwitch units={units} onChange={changeUnits} pending={unitPending} />
-          {unitMessage && <p role="alert" className="text-micro text-verdict-warn">{unitMessage}</p>}
+          {unitMessage && (
+            <p role="alert" className="text-micro text-verdict-warn">
+              {unitMessage}
+            </p>
+          )}
         </div>
         <div className="w-full max-w-xl">
-          <SaveBar state={save.saveState} version={save.version} message={save.message} blockedReason={save.dirty ? blockedReason : null} readOnly={ro}
-            onSave={() => void save.save()} onReloadTheirs={reloadTheirs} />
+          <SaveBar
+            state={save.saveState}
+            version={save.version}
+            message={save.message}
+            blockedReason={save.dirty ? blockedReason : null}
+            readOnly={ro}
+            onSave={() => void save.save()}
+            onReloadTheirs={reloadTheirs}
+          />
         </div>
       </header>
       <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_24rem]">
         <div className="min-w-0 space-y-3">
           <div className="overflow-hidden rounded-plate bg-white shadow-plate">
-            <PatternToolbar boltCount={design.bolts.length} readOnly={ro} canUndo={editor.canUndo} canRedo={editor.canRedo}
-              onPlace={(n, onCentre) => { act({ type: "place-equally", count: n, options: { phase: onCentre ? 0 : 0.5 } }); setSelected(null); }}
+            <PatternToolbar
+              boltCount={design.bolts.length}
+              readOnly={ro}
+              canUndo={editor.canUndo}
+              canRedo={editor.canRedo}
+              onPlace={(n, onCentre) => {
+                act({ type: "place-equally", count: n, options: { phase: onCentre ? 0 : 0.5 } });
+                setSelected(null);
+              }}
               onRotate={(deg) => act({ type: "rotate-pattern", deltaMm: degreesToArcMm(design, deg) })}
-              onRenumber={() => { const { idMap } = renumberBolts(design); act({ type: "renumber" }); setSelected((s) => (s ? idMap[s] ?? null : null)); }}
-              onUndo={editor.undo} onRedo={editor.redo} onFit={() => setFitToken((t) => t + 1)} />
+              onRenumber={() => {
+                const { idMap } = renumberBolts(design);
+                act({ type: "renumber" });
+                setSelected((s) => (s ? (idMap[s] ?? null) : null));
+              }}
+              onUndo={editor.undo}
+              onRedo={editor.redo}
+              onFit={() => setFitToken((t) => t + 1)}
+            />
             <div className="relative h-[560px]">
-              <JointCanvas design={design} checks={checks} heat={heat.stage} units={units} selectedId={selected} highlightBoltIds={highlight}
-                readOnly={ro} fitToken={fitToken} onSelect={setSelected} onDragStart={drag.onDragStart} onDragMove={drag.onDragMove}
-                onDragEnd={drag.onDragEnd} onDrawn={drag.onDrawn}
-                onAddBolt={(s) => { const id = nextBoltId(design); act({ type: "add-bolt", sMm: s }); setSelected(id); }} />
+              <JointCanvas
+                design={design}
+                checks={checks}
+                heat={heat.stage}
+                units={units}
+                selectedId={selected}
+                highlightBoltIds={highlight}
+                readOnly={ro}
+                fitToken={fitToken}
+                onSelect={setSelected}
+                onDragStart={drag.onDragStart}
+                onDragMove={drag.onDragMove}
+                onDragEnd={drag.onDragEnd}
+                onDrawn={drag.onDrawn}
+                onAddBolt={(s) => {
+                  const id = nextBoltId(design);
+                  act({ type: "add-bolt", sMm: s });
+                  setSelected(id);
+                }}
+              />
               {heat.scale && <StressLegend scale={heat.scale} units={units} basis="minimum preload" />}
               {editor.dragging && <DragGauge view={view} issues={live.issues} units={units} />}
             </div>
           </div>
-          <ReadoutPanel view={readoutView} issues={readoutIssues} units={units} activeCheckId={activeCheck} onPickCheck={setActiveCheck}
-            onPickBolt={setSelected} basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"} />
+          <ReadoutPanel
+            view={readoutView}
+            issues={readoutIssues}
+            units={units}
+            activeCheckId={activeCheck}
+            onPickCheck={setActiveCheck}
+            onPickBolt={setSelected}
+            basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"}
+          />
         </div>
         <aside aria-label="Joint data" className="space-y-4 rounded-plate bg-white p-3 shadow-plate">
-          <JointForm ctx={ctx} sectionsCtx={sectionsCtx} meta={meta} onMeta={setMeta} selectedBoltId={selected} onDeleteBolt={deleteBolt} />
+          <JointForm
+            ctx={ctx}
+            sectionsCtx={sectionsCtx}
+            meta={meta}
+            onMeta={setMeta}
+            selectedBoltId={selected}
+            onDeleteBolt={deleteBolt}
+          />
         </aside>
       </div>
     </div>

@@ -20,29 +20,101 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
     const t = THREADS.find((x) => x.id === id);
     if (!t) return;
     // A new size brings its usual clearance hole (ISO 273 medium ≈ d + 2/3 mm; inch d + 1/8 in) [practice].
-    const hole = t.series === "metric-coarse" ? t.nominalDiameterMm + (t.nominalDiameterMm <= 24 ? 2 : 3) : t.nominalDiameterMm + inToMm(0.125);
-    const washer = f.washer && f.washer.outerDiameterMm <= hole ? { ...f.washer, outerDiameterMm: 2 * t.nominalDiameterMm } : f.washer;
+    const hole =
+      t.series === "metric-coarse"
+        ? t.nominalDiameterMm + (t.nominalDiameterMm <= 24 ? 2 : 3)
+        : t.nominalDiameterMm + inToMm(0.125);
+    const washer =
+      f.washer && f.washer.outerDiameterMm <= hole
+        ? { ...f.washer, outerDiameterMm: 2 * t.nominalDiameterMm }
+        : f.washer;
     setFastener({ ...f, designation: t.designation, threadSeries: t.series, holeDiameterMm: hole, washer });
   };
   const nominal = findThread(f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
   return (
     <fieldset className="grid grid-cols-2 gap-2">
       <legend className="mb-1 text-table font-semibold text-ink-800">Bolting</legend>
-      <SelectField path="fastener.designation" label="Bolt size" value={size} disabled={ctx.readOnly} onChange={chooseSize}
-        options={THREADS.map((t) => ({ value: t.id, label: `${t.designation} (${SERIES_LABEL[t.series]})` }))} />
-      <SelectField path="fastener.materialId" label="Bolt material" value={f.materialId} disabled={ctx.readOnly}
-        onChange={(materialId) => setFastener({ ...f, materialId })} options={BOLT_MATERIALS.map((m) => ({ value: m.id, label: m.name }))} />
-      <NumberField ctx={ctx} spec={FIELD_SPECS.boltCount} value={d.bolts.length} onCommit={(n) => ctx.dispatch({ type: "place-equally", count: n })} />
-      <SelectField path="fastener.form" label="Bolt form" value={f.form} disabled={ctx.readOnly} onChange={(form) => setFastener({ ...f, form })}
-        options={[{ value: "stud", label: "Stud (threaded full length)" }, { value: "hex-bolt", label: "Hex bolt" }]} />
+      <SelectField
+        path="fastener.designation"
+        label="Bolt size"
+        value={size}
+        disabled={ctx.readOnly}
+        onChange={chooseSize}
+        options={THREADS.map((t) => ({ value: t.id, label: `${t.designation} (${SERIES_LABEL[t.series]})` }))}
+      />
+      <SelectField
+        path="fastener.materialId"
+        label="Bolt material"
+        value={f.materialId}
+        disabled={ctx.readOnly}
+        onChange={(materialId) => setFastener({ ...f, materialId })}
+        options={BOLT_MATERIALS.map((m) => ({ value: m.id, label: m.name }))}
+      />
+      <NumberField
+        ctx={ctx}
+        spec={FIELD_SPECS.boltCount}
+        value={d.bolts.length}
+        onCommit={(n) => ctx.dispatch({ type: "place-equally", count: n })}
+      />
+      <SelectField
+        path="fastener.form"
+        label="Bolt form"
+        value={f.form}
+        disabled={ctx.readOnly}
+        onChange={(form) => setFastener({ ...f, form })}
+        options={[
+          { value: "stud", label: "Stud (threaded full length)" },
+          { value: "hex-bolt", label: "Hex bolt" },
+        ]}
+      />
       <NumberField ctx={ctx} spec={FIELD_SPECS.boltLength} value={f.lengthMm} />
       <NumberField ctx={ctx} spec={FIELD_SPECS.holeDiameter} value={f.holeDiameterMm} />
-      <SelectField path="fastener.washer" label="Washers" value={f.washer ? "yes" : "no"} disabled={ctx.readOnly}
-        onChange={(v) => setFastener({ ...f, washer: v === "yes" ? { thicknessMm: Math.max(2, 0.15 * nominal), outerDiameterMm: Math.max(2 * nominal, f.holeDiameterMm + 4) } : null })}
-        options={[{ value: "no", label: "None" }, { value: "yes", label: "One under each nut/head" }]} />
-      <SelectField path="fastener.termination.kind" label="Nut or tapped hole" value={f.termination.kind} disabled={ctx.readOnly}
-        onChange={(k) => setFastener({ ...f, termination: k === "nut" ? { kind: "nut" } : { kind: "tapped-hole", engagementMm: 1.5 * nominal, memberThicknessMm: 3 * nominal, memberModulusMpa: 200_000 } })}
-        options={[{ value: "nut", label: "Nut" }, { value: "tapped-hole", label: "Tapped hole" }]} />
+      <SelectField
+        path="fastener.washer"
+        label="Washers"
+        value={f.washer ? "yes" : "no"}
+        disabled={ctx.readOnly}
+        onChange={(v) =>
+          setFastener({
+            ...f,
+            washer:
+              v === "yes"
+                ? {
+                    thicknessMm: Math.max(2, 0.15 * nominal),
+                    outerDiameterMm: Math.max(2 * nominal, f.holeDiameterMm + 4),
+                  }
+                : null,
+          })
+        }
+        options={[
+          { value: "no", label: "None" },
+          { value: "yes", label: "One under each nut/head" },
+        ]}
+      />
+      <SelectField
+        path="fastener.termination.kind"
+        label="Nut or tapped hole"
+        value={f.termination.kind}
+        disabled={ctx.readOnly}
+        onChange={(k) =>
+          setFastener({
+            ...f,
+            termination:
+              k === "nut"
+                ? { kind: "nut" }
+                : {
+                    kind: "tapped-hole",
+                    engagementMm: 1.5 * nominal,
+                    memberThicknessMm: 3 * nominal,
+                    memberModulusMpa: 200_000,
+                  },
+          })
+        }
+        options={[
+          { value: "nut", label: "Nut" },
+          { value: "tapped-hole", label: "Tapped hole" },
+        ]}
+      />
       {f.washer && (
         <>
           <NumberField ctx={ctx} spec={FIELD_SPECS.washerThickness} value={f.washer.thicknessMm} />

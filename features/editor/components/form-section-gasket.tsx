@@ -31,7 +31,11 @@ export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
   const hasTightness = !!row && LEAKAGE_CLASSES.some((c) => row.tightness[c]?.qMinMpa != null);
   const leakage = copiedClass(row, mat.qMinMpa);
   const pick = (r: GasketChoiceDto, cls: LeakageClass) =>
-    ctx.dispatch({ type: "set-field", path: "gasket", value: { ...g, material: toGasketMaterial(r, cls) } as Gasket });
+    ctx.dispatch({
+      type: "set-field",
+      path: "gasket",
+      value: { ...g, material: toGasketMaterial(r, cls) } as Gasket,
+    });
   const own = choices.rows.filter((r) => r.origin === "organization");
   const builtin = choices.rows.filter((r) => r.origin === "builtin");
   const id = fieldDomId("gasket.material.catalogueId");
@@ -39,35 +43,77 @@ export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
     <fieldset className="grid grid-cols-2 gap-2">
       <legend className="mb-1 text-table font-semibold text-ink-800">Gasket</legend>
       <div className="col-span-2 flex flex-col gap-0.5">
-        <label htmlFor={id} className="text-micro text-ink-600">Gasket material</label>
-        <select id={id} className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table" value={row ? row.id : CUSTOM} disabled={ctx.readOnly}
-          onChange={(e) => { const r = choices.rows.find((x) => x.id === e.target.value); if (r) pick(r, "L0.1"); }}>
+        <label htmlFor={id} className="text-micro text-ink-600">
+          Gasket material
+        </label>
+        <select
+          id={id}
+          className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table"
+          value={row ? row.id : CUSTOM}
+          disabled={ctx.readOnly}
+          onChange={(e) => {
+            const r = choices.rows.find((x) => x.id === e.target.value);
+            if (r) pick(r, "L0.1");
+          }}
+        >
           {!row && <option value={CUSTOM}>{mat.name} (copied into this design)</option>}
           {own.length > 0 && (
             <optgroup label="Our Stockroom">
-              {own.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
+              {own.map((r) => (
+                <option key={r.id} value={r.id}>
+                  {r.name}
+                </option>
+              ))}
             </optgroup>
           )}
           <optgroup label="Built-in generic values">
-            {builtin.map((r) => <option key={r.id} value={r.id}>{r.name}</option>)}
+            {builtin.map((r) => (
+              <option key={r.id} value={r.id}>
+                {r.name}
+              </option>
+            ))}
           </optgroup>
         </select>
-        {choices.error && <p className="text-micro text-verdict-warn">{choices.error} The built-in rows are listed meanwhile.</p>}
+        {choices.error && (
+          <p className="text-micro text-verdict-warn">
+            {choices.error} The built-in rows are listed meanwhile.
+          </p>
+        )}
         <p className="num mt-0.5 text-micro text-ink-600" data-testid="gasket-factors">
-          m = {mat.m}, y = {formatQuantity("stress", mat.yMpa, ctx.units)}{mat.qMinMpa !== undefined ? `, Qmin = ${formatQuantity("stress", mat.qMinMpa, ctx.units)}` : ""}
+          m = {mat.m}, y = {formatQuantity("stress", mat.yMpa, ctx.units)}
+          {mat.qMinMpa !== undefined ? `, Qmin = ${formatQuantity("stress", mat.qMinMpa, ctx.units)}` : ""}
           {mat.qsMinMpa !== undefined ? `, QSmin = ${formatQuantity("stress", mat.qsMinMpa, ctx.units)}` : ""}
-          {mat.qsMaxMpa !== undefined ? `, Qsmax = ${formatQuantity("stress", mat.qsMaxMpa, ctx.units)}` : ""} — {mat.source}
+          {mat.qsMaxMpa !== undefined
+            ? `, Qsmax = ${formatQuantity("stress", mat.qsMaxMpa, ctx.units)}`
+            : ""}{" "}
+          — {mat.source}
         </p>
-        <p className="text-micro text-ink-500">Generic values are design values only; the gasket maker&apos;s data supersede them.</p>
+        <p className="text-micro text-ink-500">
+          Generic values are design values only; the gasket maker&apos;s data supersede them.
+        </p>
       </div>
       {hasTightness && row && (
         <div className="col-span-2">
-          <SelectField path="gasket.material.tightnessClass" label="Tightness class for Qmin and QSmin" value={leakage} disabled={ctx.readOnly}
-            options={LEAKAGE_CLASSES.filter((c) => row.tightness[c]?.qMinMpa != null).map((c) => ({ value: c, label: `${c} mg/(s·m)` }))}
-            onChange={(c) => pick(row, c)} />
+          <SelectField
+            path="gasket.material.tightnessClass"
+            label="Tightness class for Qmin and QSmin"
+            value={leakage}
+            disabled={ctx.readOnly}
+            options={LEAKAGE_CLASSES.filter((c) => row.tightness[c]?.qMinMpa != null).map((c) => ({
+              value: c,
+              label: `${c} mg/(s·m)`,
+            }))}
+            onChange={(c) => pick(row, c)}
+          />
         </div>
       )}
-      <p className="col-span-2 text-micro text-ink-500">{g.kind === "full-face" ? "Full-face gasket: covers the face inside the outline, less the bore and the holes." : g.geometry.kind === "annulus" ? "Ring gasket (circular)." : "Ring gasket band along the outline."}</p>
+      <p className="col-span-2 text-micro text-ink-500">
+        {g.kind === "full-face"
+          ? "Full-face gasket: covers the face inside the outline, less the bore and the holes."
+          : g.geometry.kind === "annulus"
+            ? "Ring gasket (circular)."
+            : "Ring gasket band along the outline."}
+      </p>
       {g.kind === "ring" && g.geometry.kind === "annulus" && (
         <>
           <NumberField ctx={ctx} spec={FIELD_SPECS.gasketInner} value={g.geometry.innerDiameterMm} />

@@ -7,7 +7,10 @@ const flat = (pts: PointMm[]) => pts.flatMap((p) => [p.x, p.y]);
 
 /** Flange plate, bore and gasket edges, in model coordinates. */
 export const FlangeShapes = memo(function FlangeShapes(props: {
-  outline: PointMm[]; bore: PointMm[] | null; gasketOuter: PointMm[]; gasketInner: PointMm[] | null;
+  outline: PointMm[];
+  bore: PointMm[] | null;
+  gasketOuter: PointMm[];
+  gasketInner: PointMm[] | null;
 }) {
   const { outline, bore, gasketOuter, gasketInner } = props;
   return (
@@ -29,10 +32,48 @@ export const FlangeShapes = memo(function FlangeShapes(props: {
           void shape;
         }}
       />
-      <Line id="flange-outline" points={flat(outline)} closed stroke="#1d2739" strokeWidth={1.5} strokeScaleEnabled={false} listening={false} />
-      {bore && <Line id="bore" points={flat(bore)} closed stroke="#394864" strokeWidth={1} strokeScaleEnabled={false} listening={false} />}
-      <Line id="gasket-outer" points={flat(gasketOuter)} closed stroke="#845616" strokeWidth={1} dash={[6, 3]} strokeScaleEnabled={false} listening={false} />
-      {gasketInner && <Line id="gasket-inner" points={flat(gasketInner)} closed stroke="#845616" strokeWidth={1} dash={[6, 3]} strokeScaleEnabled={false} listening={false} />}
+      <Line
+        id="flange-outline"
+        points={flat(outline)}
+        closed
+        stroke="#1d2739"
+        strokeWidth={1.5}
+        strokeScaleEnabled={false}
+        listening={false}
+      />
+      {bore && (
+        <Line
+          id="bore"
+          points={flat(bore)}
+          closed
+          stroke="#394864"
+          strokeWidth={1}
+          strokeScaleEnabled={false}
+          listening={false}
+        />
+      )}
+      <Line
+        id="gasket-outer"
+        points={flat(gasketOuter)}
+        closed
+        stroke="#845616"
+        strokeWidth={1}
+        dash={[6, 3]}
+        strokeScaleEnabled={false}
+        listening={false}
+      />
+      {gasketInner && (
+        <Line
+          id="gasket-inner"
+          points={flat(gasketInner)}
+          closed
+          stroke="#845616"
+          strokeWidth={1}
+          dash={[6, 3]}
+          strokeScaleEnabled={false}
+          listening={false}
+        />
+      )}
     </>
   );
 });

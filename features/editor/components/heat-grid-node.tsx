@@ -4,7 +4,10 @@ import { Image as KonvaImage } from "react-konva";
 
 export interface HeatGridPicture {
   canvas: HTMLCanvasElement;
-  xMinMm: number; xMaxMm: number; yMinMm: number; yMaxMm: number;
+  xMinMm: number;
+  xMaxMm: number;
+  yMinMm: number;
+  yMaxMm: number;
 }
 
 /**
@@ -15,7 +18,16 @@ export const HeatGridNode = memo(function HeatGridNode({ picture }: { picture: H
   const w = picture.xMaxMm - picture.xMinMm;
   const h = picture.yMaxMm - picture.yMinMm;
   return (
-    <KonvaImage id="heat-map" image={picture.canvas} x={picture.xMinMm} y={picture.yMaxMm} width={w} height={h} scaleY={-1}
-      listening={false} imageSmoothingEnabled={false} />
+    <KonvaImage
+      id="heat-map"
+      image={picture.canvas}
+      x={picture.xMinMm}
+      y={picture.yMaxMm}
+      width={w}
+      height={h}
+      scaleY={-1}
+      listening={false}
+      imageSmoothingEnabled={false}
+    />
   );
 });

@@ -8,7 +8,13 @@ import type { HeatQuad } from "../model/heat-band";
  * Filled only: the strips overlap a little (model/heat-band.ts), so no stroke is needed, and a
  * fill is the cheap operation for the software rasteriser of a headless or GPU-less browser.
  */
-export const HeatLayerShape = memo(function HeatLayerShape({ quads, colour }: { quads: HeatQuad[]; colour: (mpa: number) => string }) {
+export const HeatLayerShape = memo(function HeatLayerShape({
+  quads,
+  colour,
+}: {
+  quads: HeatQuad[];
+  colour: (mpa: number) => string;
+}) {
   return (
     <Shape
       id="heat-map"

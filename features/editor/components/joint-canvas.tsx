@@ -16,14 +16,23 @@ export function JointCanvas(props: Omit<JointStageProps, "width" | "height"> & {
   useEffect(() => {
     const el = box.current;
     if (!el) return;
-    const measure = () => setSize({ w: Math.max(200, Math.floor(el.clientWidth)), h: Math.max(240, Math.floor(el.clientHeight)) });
+    const measure = () =>
+      setSize({
+        w: Math.max(200, Math.floor(el.clientWidth)),
+        h: Math.max(240, Math.floor(el.clientHeight)),
+      });
     measure();
     const ro = new ResizeObserver(measure);
     ro.observe(el);
     return () => ro.disconnect();
   }, []);
   return (
-    <div ref={box} data-testid="joint-canvas" className="relative h-full w-full overflow-hidden bg-white" style={{ minHeight: props.minHeight ?? 420 }}>
+    <div
+      ref={box}
+      data-testid="joint-canvas"
+      className="relative h-full w-full overflow-hidden bg-white"
+      style={{ minHeight: props.minHeight ?? 420 }}
+    >
       {size && <JointStage {...props} width={size.w} height={size.h} />}
     </div>
   );

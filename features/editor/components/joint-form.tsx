@@ -28,7 +28,11 @@ export function JointForm({ ctx, sectionsCtx, meta, onMeta, selectedBoltId, onDe
 }
 
 // Memoised: a drag frame that changes only bolt positions does not re-render the form fields.
-const JointDataSections = memo(function JointDataSections({ ctx, meta, onMeta }: Pick<Props, "ctx" | "meta" | "onMeta">) {
+const JointDataSections = memo(function JointDataSections({
+  ctx,
+  meta,
+  onMeta,
+}: Pick<Props, "ctx" | "meta" | "onMeta">) {
   return (
     <>
       <FormSectionService ctx={ctx} meta={meta} onMeta={onMeta} />

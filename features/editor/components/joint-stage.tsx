@@ -40,7 +40,9 @@ export interface JointStageProps {
   onDrawn?: (drawMs: number) => void;
 }
 
-type Gesture = { kind: "bolt"; id: string; x: number; y: number; moved: boolean } | { kind: "pan"; x: number; y: number; moved: boolean };
+type Gesture =
+  | { kind: "bolt"; id: string; x: number; y: number; moved: boolean }
+  | { kind: "pan"; x: number; y: number; moved: boolean };
 
 export default function JointStage(props: JointStageProps) {
   const { design, width, height, readOnly } = props;
@@ -48,22 +50,38 @@ export default function JointStage(props: JointStageProps) {
   const layerRef = useRef<Konva.Layer>(null);
   const baseLayerRef = useRef<Konva.Layer>(null);
   const lineLayerRef = useRef<Konva.Layer>(null);
-  const staticScene = useMemo(() => buildStaticScene(design), [design.outline, design.bore, design.gasket, design.boltPath]); // eslint-disable-line react-hooks/exhaustive-deps
-  const boltScene = useMemo(() => buildBoltScene(design, staticScene.boltPath), [design, staticScene.boltPath]);
+  const staticScene = useMemo(
+    () => buildStaticScene(design),
+    [design.outline, design.bore, design.gasket, design.boltPath],
+  ); // eslint-disable-line react-hooks/exhaustive-deps
+  const boltScene = useMemo(
+    () => buildBoltScene(design, staticScene.boltPath),
+    [design, staticScene.boltPath],
+  );
   const [view, setView] = useState<ViewTransform>(() => fitView(staticScene.bounds, width, height));
   const gesture = useRef<Gesture | null>(null);
   const space = useRef(false);
   const viewRef = useRef(view);
   viewRef.current = view;
 
-  useEffect(() => setView(fitView(staticScene.bounds, width, height)), [props.fitToken, width, height, staticScene.bounds]);
+  useEffect(
+    () => setView(fitView(staticScene.bounds, width, height)),
+    [props.fitToken, width, height, staticScene.bounds],
+  );
 
   useEffect(() => {
-    const down = (e: KeyboardEvent) => { if (e.key === " " && !isTyping(e)) space.current = true; };
-    const up = (e: KeyboardEvent) => { if (e.key === " ") space.current = false; };
+    const down = (e: KeyboardEvent) => {
+      if (e.key === " " && !isTyping(e)) space.current = true;
+    };
+    const up = (e: KeyboardEvent) => {
+      if (e.key === " ") space.current = false;
+    };
     window.addEventListener("keydown", down);
     window.addEventListener("keyup", up);
-    return () => { window.removeEventListener("keydown", down); window.removeEventListener("keyup", up); };
+    return () => {
+      window.removeEventListener("keydown", down);
+      window.removeEventListener("keyup", up);
+    };
   }, []);
 
   // Draw time for the drag benchmark: the moving layer's draw, plus any draw of the still layers
@@ -72,22 +90,42 @@ export default function JointStage(props: JointStageProps) {
     const layer = layerRef.current;
     const still = [baseLayerRef.current, lineLayerRef.current].filter((l): l is Konva.Layer => !!l);
     if (!layer || !props.onDrawn) return;
-    let t0 = 0, s0 = 0, stillMs = 0;
-    const before = () => { t0 = performance.now(); };
-    const after = () => { props.onDrawn?.(performance.now() - t0 + stillMs); stillMs = 0; };
-    const stillBefore = () => { s0 = performance.now(); };
-    const stillAfter = () => { stillMs += performance.now() - s0; };
+    let t0 = 0,
+      s0 = 0,
+      stillMs = 0;
+    const before = () => {
+      t0 = performance.now();
+    };
+    const after = () => {
+      props.onDrawn?.(performance.now() - t0 + stillMs);
+      stillMs = 0;
+    };
+    const stillBefore = () => {
+      s0 = performance.now();
+    };
+    const stillAfter = () => {
+      stillMs += performance.now() - s0;
+    };
     layer.on("beforeDraw", before);
     layer.on("draw", after);
-    for (const l of still) { l.on("beforeDraw", stillBefore); l.on("draw", stillAfter); }
+    for (const l of still) {
+      l.on("beforeDraw", stillBefore);
+      l.on("draw", stillAfter);
+    }
     return () => {
       layer.off("beforeDraw", before);
       layer.off("draw", after);
-      for (const l of still) { l.off("beforeDraw", stillBefore); l.off("draw", stillAfter); }
+      for (const l of still) {
+        l.off("beforeDraw", stillBefore);
+        l.off("draw", stillAfter);
+      }
     };
   }, [props.onDrawn]);
 
-  useEffect(() => (stageRef.current ? installStageProbe(stageRef.current, () => viewRef.current) : undefined), []);
+  useEffect(
+    () => (stageRef.current ? installStageProbe(stageRef.current, () => viewRef.current) : undefined),
+    [],
+  );
 
   const pointer = () => stageRef.current?.getPointerPosition() ?? { x: 0, y: 0 };
 
@@ -117,7 +155,8 @@ export default function JointStage(props: JointStageProps) {
       return;
     }
     g.moved = true;
-    const dx = p.x - g.x, dy = p.y - g.y;
+    const dx = p.x - g.x,
+      dy = p.y - g.y;
     g.x = p.x;
     g.y = p.y;
     setView((v) => panBy(v, dx, dy));
@@ -132,7 +171,9 @@ export default function JointStage(props: JointStageProps) {
   }
 
   useEffect(() => {
-    const up = () => { if (gesture.current) onPointerUp(); };
+    const up = () => {
+      if (gesture.current) onPointerUp();
+    };
     window.addEventListener("pointerup", up);
     return () => window.removeEventListener("pointerup", up);
   });
@@ -150,31 +191,81 @@ export default function JointStage(props: JointStageProps) {
   }
 
   const highlight = useMemo(() => new Set(props.highlightBoltIds), [props.highlightBoltIds]);
-  const pathPoints = useMemo(() => staticScene.boltPathLine.flatMap((q) => [q.x, q.y]), [staticScene.boltPathLine]);
+  const pathPoints = useMemo(
+    () => staticScene.boltPathLine.flatMap((q) => [q.x, q.y]),
+    [staticScene.boltPathLine],
+  );
 
   return (
-    <Stage ref={stageRef} width={width} height={height} onPointerDown={onPointerDown} onPointerMove={onPointerMove} onPointerUp={onPointerUp}
-      onDblClick={onDblClick} onWheel={onWheel} style={{ touchAction: "none", cursor: readOnly ? "default" : "crosshair" }}>
+    <Stage
+      ref={stageRef}
+      width={width}
+      height={height}
+      onPointerDown={onPointerDown}
+      onPointerMove={onPointerMove}
+      onPointerUp={onPointerUp}
+      onDblClick={onDblClick}
+      onWheel={onWheel}
+      style={{ touchAction: "none", cursor: readOnly ? "default" : "crosshair" }}
+    >
       {/* Three canvases, so a drag frame redraws only what moves: the plate and the hit line for
           adding bolts below; heat map, bolts and marks in the middle; the bolt path drawn as a
           centre line through the holes on top (it takes no pointer events). */}
       <Layer ref={baseLayerRef}>
         <Group x={view.ox} y={view.oy} scaleX={view.k} scaleY={-view.k}>
-          <FlangeShapes outline={staticScene.outline} bore={staticScene.bore} gasketOuter={staticScene.gasketOuter} gasketInner={staticScene.gasketInner} />
-          <Line name="bolt-path-hit" points={pathPoints} closed stroke="transparent" strokeWidth={1} hitStrokeWidth={14} strokeScaleEnabled={false} />
+          <FlangeShapes
+            outline={staticScene.outline}
+            bore={staticScene.bore}
+            gasketOuter={staticScene.gasketOuter}
+            gasketInner={staticScene.gasketInner}
+          />
+          <Line
+            name="bolt-path-hit"
+            points={pathPoints}
+            closed
+            stroke="transparent"
+            strokeWidth={1}
+            hitStrokeWidth={14}
+            strokeScaleEnabled={false}
+          />
         </Group>
       </Layer>
       <Layer ref={layerRef}>
         <Group x={view.ox} y={view.oy} scaleX={view.k} scaleY={-view.k}>
-          {props.heat?.grid ? <HeatGridNode picture={props.heat.grid} /> : props.heat?.quads ? <HeatLayerShape quads={props.heat.quads} colour={props.heat.colour} /> : null}
-          <BoltNodes bolts={boltScene.bolts} r={boltScene.holeRadiusMm} selectedId={props.selectedId} readOnly={readOnly} />
+          {props.heat?.grid ? (
+            <HeatGridNode picture={props.heat.grid} />
+          ) : props.heat?.quads ? (
+            <HeatLayerShape quads={props.heat.quads} colour={props.heat.colour} />
+          ) : null}
+          <BoltNodes
+            bolts={boltScene.bolts}
+            r={boltScene.holeRadiusMm}
+            selectedId={props.selectedId}
+            readOnly={readOnly}
+          />
         </Group>
-        <CanvasOverlays view={view} bolts={boltScene.bolts} holeRadiusMm={boltScene.holeRadiusMm} pitches={boltScene.pitches}
-          checks={props.checks} units={props.units} highlightBoltIds={highlight} />
+        <CanvasOverlays
+          view={view}
+          bolts={boltScene.bolts}
+          holeRadiusMm={boltScene.holeRadiusMm}
+          pitches={boltScene.pitches}
+          checks={props.checks}
+          units={props.units}
+          highlightBoltIds={highlight}
+        />
       </Layer>
       <Layer ref={lineLayerRef} listening={false}>
         <Group x={view.ox} y={view.oy} scaleX={view.k} scaleY={-view.k}>
-          <Line id="path-of-bolts" points={pathPoints} closed stroke="#6b7c9c" strokeWidth={1} dash={[4, 4]} strokeScaleEnabled={false} listening={false} />
+          <Line
+            id="path-of-bolts"
+            points={pathPoints}
+            closed
+            stroke="#6b7c9c"
+            strokeWidth={1}
+            dash={[4, 4]}
+            strokeScaleEnabled={false}
+            listening={false}
+          />
         </Group>
       </Layer>
     </Stage>
@@ -183,7 +274,10 @@ export default function JointStage(props: JointStageProps) {
 
 function isTyping(e: KeyboardEvent): boolean {
   const t = e.target as HTMLElement | null;
-  return !!t && (t.tagName === "INPUT" || t.tagName === "TEXTAREA" || t.tagName === "SELECT" || t.isContentEditable);
+  return (
+    !!t &&
+    (t.tagName === "INPUT" || t.tagName === "TEXTAREA" || t.tagName === "SELECT" || t.isContentEditable)
+  );
 }
 
 export { boltNodeId, toScreen };

@@ -19,7 +19,8 @@ interface Props {
  */
 export function NumberField({ ctx, spec, value, onCommit }: Props) {
   const { units } = ctx;
-  const shown = spec.quantity === "count" ? String(value) : formatInputNumber(toDisplay(spec.quantity, value, units));
+  const shown =
+    spec.quantity === "count" ? String(value) : formatInputNumber(toDisplay(spec.quantity, value, units));
   const [raw, setRaw] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   const [focused, setFocused] = useState(false);
@@ -43,13 +44,17 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
     }
     setError(null);
     ctx.setInvalid(spec.path, false);
-    if (r.value !== value) (onCommit ?? ((v: number) => ctx.dispatch({ type: "set-field", path: spec.path, value: v })))(r.value);
+    if (r.value !== value)
+      (onCommit ?? ((v: number) => ctx.dispatch({ type: "set-field", path: spec.path, value: v })))(r.value);
     else setRaw(shown);
   };
   const unit = unitLabel(spec.quantity, units);
   return (
     <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-micro text-ink-600">{spec.label}{unit ? ` (${unit})` : ""}</label>
+      <label htmlFor={id} className="text-micro text-ink-600">
+        {spec.label}
+        {unit ? ` (${unit})` : ""}
+      </label>
       <input
         id={id}
         inputMode="decimal"
@@ -73,7 +78,11 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
           if (e.key === "Enter") commit();
         }}
       />
-      {message && <p id={`${id}-error`} role="alert" className="text-micro text-verdict-fail">{message}</p>}
+      {message && (
+        <p id={`${id}-error`} role="alert" className="text-micro text-verdict-fail">
+          {message}
+        </p>
+      )}
     </div>
   );
 }

@@ -42,32 +42,80 @@ export function PatternToolbar(p: Props) {
     p.onRotate(sign * d);
   };
   return (
-    <div role="toolbar" aria-label="Pattern bench" className="flex flex-wrap items-end gap-2 border-b border-ink-100 bg-steel-50 px-3 py-2 text-table">
+    <div
+      role="toolbar"
+      aria-label="Pattern bench"
+      className="flex flex-wrap items-end gap-2 border-b border-ink-100 bg-steel-50 px-3 py-2 text-table"
+    >
       {!p.readOnly && (
         <>
           <label className="flex flex-col">
             <span className="text-micro text-ink-600">Bolts</span>
-            <input aria-label="Bolts to place" aria-describedby={error ? "pattern-error" : undefined} aria-invalid={!!error} className="num w-16 rounded border border-ink-200 px-1.5 py-1" value={count} onChange={(e) => setCount(e.target.value)} onKeyDown={(e) => e.key === "Enter" && place()} />
+            <input
+              aria-label="Bolts to place"
+              aria-describedby={error ? "pattern-error" : undefined}
+              aria-invalid={!!error}
+              className="num w-16 rounded border border-ink-200 px-1.5 py-1"
+              value={count}
+              onChange={(e) => setCount(e.target.value)}
+              onKeyDown={(e) => e.key === "Enter" && place()}
+            />
           </label>
           <label className="flex items-center gap-1 pb-1.5 text-micro">
-            <input type="checkbox" checked={straddle} onChange={(e) => setStraddle(e.target.checked)} /> straddle centre lines
+            <input type="checkbox" checked={straddle} onChange={(e) => setStraddle(e.target.checked)} />{" "}
+            straddle centre lines
           </label>
-          <button type="button" className={buttonStyles.secondary} onClick={place}>Place equally</button>
+          <button type="button" className={buttonStyles.secondary} onClick={place}>
+            Place equally
+          </button>
           <label className="flex flex-col">
             <span className="text-micro text-ink-600">Turn, °</span>
-            <input aria-label="Turn pattern by degrees" className="num w-14 rounded border border-ink-200 px-1.5 py-1" value={rotate} onChange={(e) => setRotate(e.target.value)} />
+            <input
+              aria-label="Turn pattern by degrees"
+              className="num w-14 rounded border border-ink-200 px-1.5 py-1"
+              value={rotate}
+              onChange={(e) => setRotate(e.target.value)}
+            />
           </label>
-          <button type="button" className={buttonStyles.quiet} aria-label="Turn pattern anticlockwise" onClick={() => rot(-1)}>⟲</button>
-          <button type="button" className={buttonStyles.quiet} aria-label="Turn pattern clockwise" onClick={() => rot(1)}>⟳</button>
-          <button type="button" className={buttonStyles.quiet} onClick={p.onRenumber}>Renumber</button>
+          <button
+            type="button"
+            className={buttonStyles.quiet}
+            aria-label="Turn pattern anticlockwise"
+            onClick={() => rot(-1)}
+          >
+            ⟲
+          </button>
+          <button
+            type="button"
+            className={buttonStyles.quiet}
+            aria-label="Turn pattern clockwise"
+            onClick={() => rot(1)}
+          >
+            ⟳
+          </button>
+          <button type="button" className={buttonStyles.quiet} onClick={p.onRenumber}>
+            Renumber
+          </button>
           <span className="mx-1 h-6 w-px bg-ink-200" />
-          <button type="button" className={buttonStyles.quiet} disabled={!p.canUndo} onClick={p.onUndo}>Undo</button>
-          <button type="button" className={buttonStyles.quiet} disabled={!p.canRedo} onClick={p.onRedo}>Redo</button>
+          <button type="button" className={buttonStyles.quiet} disabled={!p.canUndo} onClick={p.onUndo}>
+            Undo
+          </button>
+          <button type="button" className={buttonStyles.quiet} disabled={!p.canRedo} onClick={p.onRedo}>
+            Redo
+          </button>
         </>
       )}
-      <button type="button" className={buttonStyles.quiet} onClick={p.onFit}>Fit</button>
-      <div className="ml-auto"><ShortcutHelp /></div>
-      {error && <p id="pattern-error" role="alert" className="w-full text-micro text-verdict-fail">{error}</p>}
+      <button type="button" className={buttonStyles.quiet} onClick={p.onFit}>
+        Fit
+      </button>
+      <div className="ml-auto">
+        <ShortcutHelp />
+      </div>
+      {error && (
+        <p id="pattern-error" role="alert" className="w-full text-micro text-verdict-fail">
+          {error}
+        </p>
+      )}
     </div>
   );
 }

@@ -29,12 +29,35 @@ export function ReadOnlyJointView({ document, result, unitSystem, highlight }: R
   return (
     <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_26rem]">
       <div className="relative h-[560px] rounded-plate shadow-plate">
-        <JointCanvas design={document} checks={view?.checks ?? []} heat={heat.stage} units={unitSystem} selectedId={selected} highlightBoltIds={bolts}
-          readOnly fitToken={fitToken} onSelect={setSelected} />
+        <JointCanvas
+          design={document}
+          checks={view?.checks ?? []}
+          heat={heat.stage}
+          units={unitSystem}
+          selectedId={selected}
+          highlightBoltIds={bolts}
+          readOnly
+          fitToken={fitToken}
+          onSelect={setSelected}
+        />
         {heat.scale && <StressLegend scale={heat.scale} units={unitSystem} basis="minimum preload" />}
-        <button type="button" className="absolute right-2 top-2 rounded bg-white/90 px-2 py-1 text-micro shadow-plate" onClick={() => setFitToken((t) => t + 1)}>Fit</button>
+        <button
+          type="button"
+          className="absolute right-2 top-2 rounded bg-white/90 px-2 py-1 text-micro shadow-plate"
+          onClick={() => setFitToken((t) => t + 1)}
+        >
+          Fit
+        </button>
       </div>
-      <ReadoutPanel view={view} issues={[]} units={unitSystem} activeCheckId={picked} onPickCheck={setPicked} onPickBolt={setSelected} basis="stored" />
+      <ReadoutPanel
+        view={view}
+        issues={[]}
+        units={unitSystem}
+        activeCheckId={picked}
+        onPickCheck={setPicked}
+        onPickBolt={setSelected}
+        basis="stored"
+      />
     </div>
   );
 }

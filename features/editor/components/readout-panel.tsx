@@ -32,34 +32,80 @@ function Section({ title, children }: { title: string; children: React.ReactNode
   );
 }
 
-const BASIS_TEXT = { stored: "stored result", preview: "live preview", held: "held while you drag; updates on release" } as const;
+const BASIS_TEXT = {
+  stored: "stored result",
+  preview: "live preview",
+  held: "held while you drag; updates on release",
+} as const;
 
 /** The "Readout": everything the core says about the joint, beside the drawing. Memoised: held views cost nothing per frame. */
-export const ReadoutPanel = memo(function ReadoutPanel({ view, issues, units, activeCheckId, onPickCheck, onPickBolt, basis }: Props) {
+export const ReadoutPanel = memo(function ReadoutPanel({
+  view,
+  issues,
+  units,
+  activeCheckId,
+  onPickCheck,
+  onPickBolt,
+  basis,
+}: Props) {
   const s = view?.analysis.summary;
   return (
     <div className="space-y-3" aria-label="Readout" role="region">
       <div className="flex items-baseline justify-between">
         <h2 className="text-lead font-semibold text-ink-900">Readout</h2>
-        <span className="text-micro text-ink-500" data-testid="readout-basis">{BASIS_TEXT[basis]}</span>
+        <span className="text-micro text-ink-500" data-testid="readout-basis">
+          {BASIS_TEXT[basis]}
+        </span>
       </div>
       {issues.length > 0 && (
-        <div role="alert" className="rounded-plate border border-verdict-fail bg-verdict-fail-bg p-2 text-table text-verdict-fail">
+        <div
+          role="alert"
+          className="rounded-plate border border-verdict-fail bg-verdict-fail-bg p-2 text-table text-verdict-fail"
+        >
           <p className="font-semibold">The core cannot analyse this layout yet:</p>
-          <ul className="list-disc pl-5">{issues.slice(0, 8).map((i) => <li key={i.path + i.message}>{i.path}: {i.message}</li>)}</ul>
+          <ul className="list-disc pl-5">
+            {issues.slice(0, 8).map((i) => (
+              <li key={i.path + i.message}>
+                {i.path}: {i.message}
+              </li>
+            ))}
+          </ul>
         </div>
       )}
       {view && s && (
         <>
           <p className="num text-table" data-testid="check-summary">
-            <span className="text-verdict-fail">{s.failCount} fail</span> · <span className="text-verdict-warn">{s.warnCount} warn</span> · <span className="text-verdict-pass">{s.passCount} pass</span>
+            <span className="text-verdict-fail">{s.failCount} fail</span> ·{" "}
+            <span className="text-verdict-warn">{s.warnCount} warn</span> ·{" "}
+            <span className="text-verdict-pass">{s.passCount} pass</span>
           </p>
-          {view.analysis.warnings.length > 0 && <ul className="list-disc pl-5 text-table text-verdict-warn">{view.analysis.warnings.map((w) => <li key={w}>{w}</li>)}</ul>}
-          <Section title="Seat trace"><StressProfileChart profile={view.profile} seatingMpa={view.seatingMpa} crushMpa={view.crushMpa} units={units} /></Section>
-          <Section title="Checks"><CheckList checks={view.checks} units={units} activeId={activeCheckId} onPick={onPickCheck} /></Section>
-          <Section title="Bolts"><BoltTable analysis={view.analysis} units={units} onPick={onPickBolt} /></Section>
-          <Section title="Tightening plan"><AssemblyPlanView analysis={view.analysis} units={units} /></Section>
-          <Section title="Estimator"><EstimatorNote analysis={view.analysis} units={units} /></Section>
+          {view.analysis.warnings.length > 0 && (
+            <ul className="list-disc pl-5 text-table text-verdict-warn">
+              {view.analysis.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
+          )}
+          <Section title="Seat trace">
+            <StressProfileChart
+              profile={view.profile}
+              seatingMpa={view.seatingMpa}
+              crushMpa={view.crushMpa}
+              units={units}
+            />
+          </Section>
+          <Section title="Checks">
+            <CheckList checks={view.checks} units={units} activeId={activeCheckId} onPick={onPickCheck} />
+          </Section>
+          <Section title="Bolts">
+            <BoltTable analysis={view.analysis} units={units} onPick={onPickBolt} />
+          </Section>
+          <Section title="Tightening plan">
+            <AssemblyPlanView analysis={view.analysis} units={units} />
+          </Section>
+          <Section title="Estimator">
+            <EstimatorNote analysis={view.analysis} units={units} />
+          </Section>
         </>
       )}
       <CautionPanel compact />

@@ -31,24 +31,45 @@ interface Props {
 export function SaveBar({ state, version, message, blockedReason, readOnly, onSave, onReloadTheirs }: Props) {
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <span role="status" aria-live="polite" data-testid="save-state" data-state={state} className={`text-table font-medium ${TONE[state]}`}>
+      <span
+        role="status"
+        aria-live="polite"
+        data-testid="save-state"
+        data-state={state}
+        className={`text-table font-medium ${TONE[state]}`}
+      >
         {LABEL[state]}
       </span>
-      <span className="num text-micro text-ink-500" data-testid="design-version">v{version}</span>
+      <span className="num text-micro text-ink-500" data-testid="design-version">
+        v{version}
+      </span>
       {!readOnly && (
-        <button type="button" className={buttonStyles.primary} onClick={onSave} disabled={state === "saving" || state === "conflict"} title="Ctrl+S">
+        <button
+          type="button"
+          className={buttonStyles.primary}
+          onClick={onSave}
+          disabled={state === "saving" || state === "conflict"}
+          title="Ctrl+S"
+        >
           Save
         </button>
       )}
       <div aria-live="assertive" className="w-full empty:hidden">
-        {blockedReason && state !== "conflict" && <p className="text-micro text-verdict-warn">{blockedReason}</p>}
+        {blockedReason && state !== "conflict" && (
+          <p className="text-micro text-verdict-warn">{blockedReason}</p>
+        )}
         {message && (
-          <div role="alert" className="mt-1 rounded-plate border border-verdict-fail bg-verdict-fail-bg p-2 text-table text-verdict-fail">
+          <div
+            role="alert"
+            className="mt-1 rounded-plate border border-verdict-fail bg-verdict-fail-bg p-2 text-table text-verdict-fail"
+          >
             <p>{message}</p>
             {state === "conflict" && (
               <p className="mt-1 text-ink-800">
                 Your edits are still on screen and were not written. Copy what you need, then{" "}
-                <button type="button" className={buttonStyles.danger} onClick={onReloadTheirs}>Reload theirs</button>
+                <button type="button" className={buttonStyles.danger} onClick={onReloadTheirs}>
+                  Reload theirs
+                </button>
               </p>
             )}
           </div>

@@ -11,16 +11,40 @@ interface Props<T extends string> {
   hint?: string;
 }
 
-export function SelectField<T extends string>({ path, label, value, options, disabled, onChange, hint }: Props<T>) {
+export function SelectField<T extends string>({
+  path,
+  label,
+  value,
+  options,
+  disabled,
+  onChange,
+  hint,
+}: Props<T>) {
   const id = fieldDomId(path);
   return (
     <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-micro text-ink-600">{label}</label>
-      <select id={id} className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table" value={value} disabled={disabled}
-        aria-describedby={hint ? `${id}-hint` : undefined} onChange={(e) => onChange(e.target.value as T)}>
-        {options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+      <label htmlFor={id} className="text-micro text-ink-600">
+        {label}
+      </label>
+      <select
+        id={id}
+        className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table"
+        value={value}
+        disabled={disabled}
+        aria-describedby={hint ? `${id}-hint` : undefined}
+        onChange={(e) => onChange(e.target.value as T)}
+      >
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
       </select>
-      {hint && <p id={`${id}-hint`} className="text-micro text-ink-500">{hint}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="text-micro text-ink-500">
+          {hint}
+        </p>
+      )}
     </div>
   );
 }

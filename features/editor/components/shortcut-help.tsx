@@ -21,11 +21,22 @@ export function ShortcutHelp() {
   const [open, setOpen] = useState(false);
   return (
     <div className="relative">
-      <button type="button" className={buttonStyles.quiet} aria-expanded={open} aria-controls="shortcut-help" onClick={() => setOpen((o) => !o)}>
+      <button
+        type="button"
+        className={buttonStyles.quiet}
+        aria-expanded={open}
+        aria-controls="shortcut-help"
+        onClick={() => setOpen((o) => !o)}
+      >
         Keys
       </button>
       {open && (
-        <div id="shortcut-help" role="dialog" aria-label="Keyboard shortcuts" className="absolute right-0 z-20 mt-1 w-80 rounded-plate bg-white p-3 text-table shadow-plate">
+        <div
+          id="shortcut-help"
+          role="dialog"
+          aria-label="Keyboard shortcuts"
+          className="absolute right-0 z-20 mt-1 w-80 rounded-plate bg-white p-3 text-table shadow-plate"
+        >
           <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
             {SHORTCUTS.map(([k, v]) => (
               <div key={k} className="contents">

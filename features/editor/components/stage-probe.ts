@@ -16,7 +16,9 @@ export interface StageProbe {
 }
 
 declare global {
-  interface Window { __sealpitchStage?: StageProbe }
+  interface Window {
+    __sealpitchStage?: StageProbe;
+  }
 }
 
 export function installStageProbe(stage: Konva.Stage, getView: () => ViewTransform): () => void {

@@ -4,48 +4,112 @@ import { decimateMinMax } from "../model/decimate";
 import type { ProfileView } from "../model/readout-view";
 import { formatQuantity, toDisplay, unitLabel } from "../model/quantities";
 
-const W = 520, H = 190, M = { l: 52, r: 10, t: 12, b: 26 };
+const W = 520,
+  H = 190,
+  M = { l: 52, r: 10, t: 12, b: 26 };
 
 /**
  * The "Seat trace": gasket stress along the gasket path at minimum and target preload, with the
  * required seating stress and the crush limit as lines and the bolt positions as ticks.
  */
-export function StressProfileChart({ profile, seatingMpa, crushMpa, units }: { profile: ProfileView; seatingMpa: number; crushMpa: number | null; units: UnitSystem }) {
+export function StressProfileChart({
+  profile,
+  seatingMpa,
+  crushMpa,
+  units,
+}: {
+  profile: ProfileView;
+  seatingMpa: number;
+  crushMpa: number | null;
+  units: UnitSystem;
+}) {
   const top = Math.max(profile.maxMpa, seatingMpa, crushMpa ?? 0) * 1.08 || 1;
-  const x = scaleLinear().domain([0, profile.pathLengthMm]).range([M.l, W - M.r]);
-  const y = scaleLinear().domain([0, top]).range([H - M.b, M.t]);
+  const x = scaleLinear()
+    .domain([0, profile.pathLengthMm])
+    .range([M.l, W - M.r]);
+  const y = scaleLinear()
+    .domain([0, top])
+    .range([H - M.b, M.t]);
   // Two points per pixel column at most (every peak and trough kept): thousands of samples otherwise.
   const trace = decimateMinMax(profile.sMm, profile.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r);
-  const line = (f: number) => trace.xs.map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(trace.ys[i] * f).toFixed(1)}`).join("");
+  const line = (f: number) =>
+    trace.xs.map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(trace.ys[i] * f).toFixed(1)}`).join("");
   const yTicks = y.ticks(4);
   const unit = unitLabel("stress", units);
   const minAtMin = profile.minMpa * profile.minFactor;
   return (
     <figure aria-label="Gasket stress along the path">
-      <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={`Minimum ${formatQuantity("stress", minAtMin, units)} at minimum preload, maximum ${formatQuantity("stress", profile.maxMpa, units)} at target preload`}>
+      <svg
+        viewBox={`0 0 ${W} ${H}`}
+        className="w-full"
+        role="img"
+        aria-label={`Minimum ${formatQuantity("stress", minAtMin, units)} at minimum preload, maximum ${formatQuantity("stress", profile.maxMpa, units)} at target preload`}
+      >
         {yTicks.map((t) => (
           <g key={t}>
             <line x1={M.l} x2={W - M.r} y1={y(t)} y2={y(t)} stroke="#e2e7ef" />
-            <text x={M.l - 4} y={y(t) + 3} textAnchor="end" fontSize="9" fill="#4c5d7d">{Number(toDisplay("stress", t, units).toPrecision(3))}</text>
+            <text x={M.l - 4} y={y(t) + 3} textAnchor="end" fontSize="9" fill="#4c5d7d">
+              {Number(toDisplay("stress", t, units).toPrecision(3))}
+            </text>
           </g>
         ))}
-        <text x={4} y={M.t + 2} fontSize="9" fill="#4c5d7d">{unit}</text>
-        {profile.boltSOnPathMm.map((s, i) => <line key={i} x1={x(s)} x2={x(s)} y1={H - M.b} y2={H - M.b + 5} stroke="#1d2739" />)}
-        <line x1={M.l} x2={W - M.r} y1={y(seatingMpa)} y2={y(seatingMpa)} stroke="#b3261e" strokeDasharray="5 3" data-line="seating" />
-        <text x={W - M.r} y={y(seatingMpa) - 3} textAnchor="end" fontSize="9" fill="#b3261e">required seating {formatQuantity("stress", seatingMpa, units, 3)}</text>
+        <text x={4} y={M.t + 2} fontSize="9" fill="#4c5d7d">
+          {unit}
+        </text>
+        {profile.boltSOnPathMm.map((s, i) => (
+          <line key={i} x1={x(s)} x2={x(s)} y1={H - M.b} y2={H - M.b + 5} stroke="#1d2739" />
+        ))}
+        <line
+          x1={M.l}
+          x2={W - M.r}
+          y1={y(seatingMpa)}
+          y2={y(seatingMpa)}
+          stroke="#b3261e"
+          strokeDasharray="5 3"
+          data-line="seating"
+        />
+        <text x={W - M.r} y={y(seatingMpa) - 3} textAnchor="end" fontSize="9" fill="#b3261e">
+          required seating {formatQuantity("stress", seatingMpa, units, 3)}
+        </text>
         {crushMpa !== null && (
           <>
-            <line x1={M.l} x2={W - M.r} y1={y(crushMpa)} y2={y(crushMpa)} stroke="#1d2739" strokeDasharray="2 2" data-line="crush" />
-            <text x={W - M.r} y={y(crushMpa) - 3} textAnchor="end" fontSize="9" fill="#1d2739">crush limit {formatQuantity("stress", crushMpa, units, 3)}</text>
+            <line
+              x1={M.l}
+              x2={W - M.r}
+              y1={y(crushMpa)}
+              y2={y(crushMpa)}
+              stroke="#1d2739"
+              strokeDasharray="2 2"
+              data-line="crush"
+            />
+            <text x={W - M.r} y={y(crushMpa) - 3} textAnchor="end" fontSize="9" fill="#1d2739">
+              crush limit {formatQuantity("stress", crushMpa, units, 3)}
+            </text>
           </>
         )}
         <path d={line(1)} fill="none" stroke="#c98d2b" strokeWidth="1.2" data-series="target" />
-        <path d={line(profile.minFactor)} fill="none" stroke="#2b3850" strokeWidth="1.5" data-series="minimum" />
-        <text x={(M.l + W - M.r) / 2} y={H - 4} textAnchor="middle" fontSize="9" fill="#4c5d7d">position along the gasket path ({unitLabel("length", units)}), bolts ticked</text>
+        <path
+          d={line(profile.minFactor)}
+          fill="none"
+          stroke="#2b3850"
+          strokeWidth="1.5"
+          data-series="minimum"
+        />
+        <text x={(M.l + W - M.r) / 2} y={H - 4} textAnchor="middle" fontSize="9" fill="#4c5d7d">
+          position along the gasket path ({unitLabel("length", units)}), bolts ticked
+        </text>
       </svg>
       <figcaption className="num flex flex-wrap gap-x-4 text-micro text-ink-600">
-        <span><span className="text-ink-800">━</span> minimum preload: min {formatQuantity("stress", minAtMin, units)}</span>
-        <span><span className="text-brass-500">━</span> target preload: min {formatQuantity("stress", profile.minMpa, units)}, max {formatQuantity("stress", profile.maxMpa, units)}, mean {formatQuantity("stress", profile.meanMpa, units)}</span>
+        <span>
+          <span className="text-ink-800">━</span> minimum preload: min{" "}
+          {formatQuantity("stress", minAtMin, units)}
+        </span>
+        <span>
+          <span className="text-brass-500">━</span> target preload: min{" "}
+          {formatQuantity("stress", profile.minMpa, units)}, max{" "}
+          {formatQuantity("stress", profile.maxMpa, units)}, mean{" "}
+          {formatQuantity("stress", profile.meanMpa, units)}
+        </span>
       </figcaption>
     </figure>
   );

@@ -27,12 +27,18 @@ export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, e
     let left = WARMUP_RUNS;
     let handle = 0;
     const idle = (cb: () => void) =>
-      typeof window.requestIdleCallback === "function" ? window.requestIdleCallback(cb, { timeout: 2000 }) : window.setTimeout(cb, 50);
-    const cancel = (h: number) => (typeof window.cancelIdleCallback === "function" ? window.cancelIdleCallback(h) : window.clearTimeout(h));
+      typeof window.requestIdleCallback === "function"
+        ? window.requestIdleCallback(cb, { timeout: 2000 })
+        : window.setTimeout(cb, 50);
+    const cancel = (h: number) =>
+      typeof window.cancelIdleCallback === "function" ? window.cancelIdleCallback(h) : window.clearTimeout(h);
     const step = () => {
       const { design: d, base: full } = latest.current;
       const b = d.bolts[0];
-      const moved = left % 2 === 0 || !b ? d : moveBolt(d, b.id, { sMm: b.sMm + 0.1, offPathMm: (b.offPathMm ?? 0) + 0.1 });
+      const moved =
+        left % 2 === 0 || !b
+          ? d
+          : moveBolt(d, b.id, { sMm: b.sMm + 0.1, offPathMm: (b.offPathMm ?? 0) + 0.1 });
       try {
         const preview = previewJoint(moved);
         if (full) {

@@ -5,14 +5,21 @@ import { jointDesignSchema } from "@/features/analysis/schema";
 
 /** "layers[0].thicknessMm" and "document.layers.0.thicknessMm" both become "layers.0.thicknessMm". */
 export function normalisePath(p: string): string {
-  return p.replace(/\[(\d+)\]/g, ".$1").replace(/^document\./, "").replace(/^\./, "");
+  return p
+    .replace(/\[(\d+)\]/g, ".$1")
+    .replace(/^document\./, "")
+    .replace(/^\./, "");
 }
 
 /**
  * The shared zod schema over the whole document (the same one the server action uses), as
  * messages by field path; skipped while dragging (the readout shows the core's own issues then).
  */
-export function useDocumentErrors(design: JointDesign, skip: boolean, serverErrors: Record<string, string[]> | null) {
+export function useDocumentErrors(
+  design: JointDesign,
+  skip: boolean,
+  serverErrors: Record<string, string[]> | null,
+) {
   const schemaErrors = useMemo(() => {
     if (skip) return null;
     const r = jointDesignSchema.safeParse(design);
@@ -33,6 +40,10 @@ export function useDocumentErrors(design: JointDesign, skip: boolean, serverErro
   return useMemo(() => {
     const errorFor = (path: string) => schemaErrors?.[path] ?? server[path];
     const count = schemaErrors ? Object.keys(schemaErrors).length : 0;
-    return { errorFor, schemaErrorCount: count, schemaMessages: schemaErrors ? Object.entries(schemaErrors).map(([k, v]) => `${k}: ${v}`) : [] };
+    return {
+      errorFor,
+      schemaErrorCount: count,
+      schemaMessages: schemaErrors ? Object.entries(schemaErrors).map(([k, v]) => `${k}: ${v}`) : [],
+    };
   }, [schemaErrors, server]);
 }

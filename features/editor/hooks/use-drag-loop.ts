@@ -10,28 +10,48 @@ import { resolveMoveTarget } from "../model/move-bolt";
  * their sum, ms; `analysed` is false when the core refused the layout (a hole over a neighbour's
  * or over the gasket), which makes a frame cheap and must not count as a fast one.
  */
-export interface FrameTiming { reactMs: number; computeMs: number; drawMs: number; totalMs: number; analysed: boolean }
-
-/** What the workspace reports of the frame it just rendered. */
-export interface FrameCompute { computeMs: number; analysed: boolean }
-
-declare global {
-  interface Window { __sealpitchPerf?: { frames: FrameTiming[]; releases?: number[] } }
+export interface FrameTiming {
+  reactMs: number;
+  computeMs: number;
+  drawMs: number;
+  totalMs: number;
+  analysed: boolean;
 }
 
-interface Move { id: string; point: PointMm; free: boolean; snapMm: number }
+/** What the workspace reports of the frame it just rendered. */
+export interface FrameCompute {
+  computeMs: number;
+  analysed: boolean;
+}
+
+declare global {
+  interface Window {
+    __sealpitchPerf?: { frames: FrameTiming[]; releases?: number[] };
+  }
+}
+
+interface Move {
+  id: string;
+  point: PointMm;
+  free: boolean;
+  snapMm: number;
+}
 
 /**
  * Turns pointer moves into at most one document change per animation frame. Each frame is
  * rendered synchronously (flushSync) so the recompute + React work can be timed, and the Konva
  * draw that follows is added to it: `window.__sealpitchPerf.frames` (read by bench/editor-drag).
  */
-export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) => void, compute: { current: FrameCompute }) {
+export function useDragLoop(
+  design: JointDesign,
+  dispatch: (a: HistoryAction) => void,
+  compute: { current: FrameCompute },
+) {
   const designRef = useRef(design);
   designRef.current = design;
   const pending = useRef<Move | null>(null);
   const raf = useRef(0);
-  const frame = useRef<{ reactMs: number } & FrameCompute | null>(null);
+  const frame = useRef<({ reactMs: number } & FrameCompute) | null>(null);
 
   const flush = useCallback(() => {
     raf.current = 0;
@@ -45,10 +65,13 @@ export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) =>
   }, [dispatch, compute]);
 
   const onDragStart = useCallback(() => dispatch({ type: "drag-start" }), [dispatch]);
-  const onDragMove = useCallback((id: string, point: PointMm, free: boolean, snapMm: number) => {
-    pending.current = { id, point, free, snapMm };
-    if (!raf.current) raf.current = requestAnimationFrame(flush);
-  }, [flush]);
+  const onDragMove = useCallback(
+    (id: string, point: PointMm, free: boolean, snapMm: number) => {
+      pending.current = { id, point, free, snapMm };
+      if (!raf.current) raf.current = requestAnimationFrame(flush);
+    },
+    [flush],
+  );
   // Release: the full analysis and the drawing catch up in one synchronous update, timed too (the
   // Readout follows in a deferred render, see design-workspace.tsx).
   const onDragEnd = useCallback(() => {
@@ -64,9 +87,20 @@ export function useDragLoop(design: JointDesign, dispatch: (a: HistoryAction) =>
     if (!f) return;
     frame.current = null;
     const perf = (window.__sealpitchPerf ??= { frames: [] });
-    perf.frames.push({ reactMs: f.reactMs, computeMs: f.computeMs, analysed: f.analysed, drawMs, totalMs: f.reactMs + drawMs });
+    perf.frames.push({
+      reactMs: f.reactMs,
+      computeMs: f.computeMs,
+      analysed: f.analysed,
+      drawMs,
+      totalMs: f.reactMs + drawMs,
+    });
     if (perf.frames.length > 5000) perf.frames.splice(0, perf.frames.length - 5000);
   }, []);
-  useEffect(() => () => { if (raf.current) cancelAnimationFrame(raf.current); }, []);
+  useEffect(
+    () => () => {
+      if (raf.current) cancelAnimationFrame(raf.current);
+    },
+    [],
+  );
   return { onDragStart, onDragMove, onDragEnd, onDrawn };
 }

@@ -13,7 +13,10 @@ export interface ShortcutHandlers {
 
 function isTyping(t: EventTarget | null): boolean {
   const el = t as HTMLElement | null;
-  return !!el && (el.tagName === "INPUT" || el.tagName === "TEXTAREA" || el.tagName === "SELECT" || el.isContentEditable);
+  return (
+    !!el &&
+    (el.tagName === "INPUT" || el.tagName === "TEXTAREA" || el.tagName === "SELECT" || el.isContentEditable)
+  );
 }
 
 /** Keyboard shortcuts of the editor (listed in shortcut-help.tsx). Typing in a field is left alone, except Ctrl+S. */
@@ -32,12 +35,25 @@ export function useEditorShortcuts(handlers: ShortcutHandlers, enabled: boolean)
         return;
       }
       if (!enabled || isTyping(e.target)) return;
-      if (mod && key === "z" && !e.shiftKey) { e.preventDefault(); h.current.undo(); }
-      else if (mod && ((key === "z" && e.shiftKey) || key === "y")) { e.preventDefault(); h.current.redo(); }
-      else if (!mod && key === "f") { e.preventDefault(); h.current.fit(); }
-      else if (key === "delete" || key === "backspace") { e.preventDefault(); h.current.deleteSelected(); }
-      else if (key === "arrowright" || key === "arrowup") { e.preventDefault(); h.current.nudge(e.shiftKey ? 10 : 1); }
-      else if (key === "arrowleft" || key === "arrowdown") { e.preventDefault(); h.current.nudge(e.shiftKey ? -10 : -1); }
+      if (mod && key === "z" && !e.shiftKey) {
+        e.preventDefault();
+        h.current.undo();
+      } else if (mod && ((key === "z" && e.shiftKey) || key === "y")) {
+        e.preventDefault();
+        h.current.redo();
+      } else if (!mod && key === "f") {
+        e.preventDefault();
+        h.current.fit();
+      } else if (key === "delete" || key === "backspace") {
+        e.preventDefault();
+        h.current.deleteSelected();
+      } else if (key === "arrowright" || key === "arrowup") {
+        e.preventDefault();
+        h.current.nudge(e.shiftKey ? 10 : 1);
+      } else if (key === "arrowleft" || key === "arrowdown") {
+        e.preventDefault();
+        h.current.nudge(e.shiftKey ? -10 : -1);
+      }
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);

@@ -20,7 +20,11 @@ export function useHeatMap(design: JointDesign, view: ReadoutView | null, draggi
     if (!view) return null;
     return buildHeatScale(view.profile.maxMpa * view.profile.minFactor, view.seatingMpa, view.crushMpa);
   }, [view]);
-  const quads = useMemo(() => (view ? buildHeatQuads(design, view.profile.sMm, view.profile.stressMpa, view.profile.minFactor) : null), [design, view]);
+  const quads = useMemo(
+    () =>
+      view ? buildHeatQuads(design, view.profile.sMm, view.profile.stressMpa, view.profile.minFactor) : null,
+    [design, view],
+  );
   const [grid, setGrid] = useState<{ design: JointDesign; picture: HeatGridPicture } | null>(null);
   useEffect(() => {
     if (dragging || !view || !scale) return;
@@ -29,7 +33,16 @@ export function useHeatMap(design: JointDesign, view: ReadoutView | null, draggi
         const g = computeGasketStressGrid(design, design.estimator.grid.nx, design.estimator.grid.ny);
         const f = view.profile.minFactor;
         const scaled = { ...g, values: g.values.map((v) => (v < 0 ? v : v * f)), maxMpa: g.maxMpa * f };
-        setGrid({ design, picture: { canvas: paintGrid(scaled, scale.colour), xMinMm: g.xMinMm, xMaxMm: g.xMaxMm, yMinMm: g.yMinMm, yMaxMm: g.yMaxMm } });
+        setGrid({
+          design,
+          picture: {
+            canvas: paintGrid(scaled, scale.colour),
+            xMinMm: g.xMinMm,
+            xMaxMm: g.xMaxMm,
+            yMinMm: g.yMinMm,
+            yMaxMm: g.yMaxMm,
+          },
+        });
       } catch {
         setGrid(null);
       }

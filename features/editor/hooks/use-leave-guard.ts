@@ -6,7 +6,11 @@ import { useEffect } from "react";
  * confirm for in-app links (Next's client navigation does not fire beforeunload). Links are
  * caught in the capture phase so the router never sees a refused click.
  */
-export function useLeaveGuard(dirty: boolean, bypass?: { current: boolean }, message = "This design has unsaved changes. Leave and lose them?") {
+export function useLeaveGuard(
+  dirty: boolean,
+  bypass?: { current: boolean },
+  message = "This design has unsaved changes. Leave and lose them?",
+) {
   useEffect(() => {
     if (!dirty) return;
     const onBeforeUnload = (e: BeforeUnloadEvent) => {
@@ -15,11 +19,21 @@ export function useLeaveGuard(dirty: boolean, bypass?: { current: boolean }, mes
       e.returnValue = "";
     };
     const onClick = (e: MouseEvent) => {
-      if (bypass?.current || e.defaultPrevented || e.button !== 0 || e.metaKey || e.ctrlKey || e.shiftKey || e.altKey) return;
+      if (
+        bypass?.current ||
+        e.defaultPrevented ||
+        e.button !== 0 ||
+        e.metaKey ||
+        e.ctrlKey ||
+        e.shiftKey ||
+        e.altKey
+      )
+        return;
       const a = (e.target as Element | null)?.closest?.("a[href]") as HTMLAnchorElement | null;
       if (!a || a.target === "_blank" || a.hasAttribute("download")) return;
       const url = new URL(a.href, window.location.href);
-      if (url.origin !== window.location.origin || (url.pathname === window.location.pathname && url.hash)) return;
+      if (url.origin !== window.location.origin || (url.pathname === window.location.pathname && url.hash))
+        return;
       if (!window.confirm(message)) {
         e.preventDefault();
         e.stopPropagation();

@@ -26,7 +26,11 @@ export interface LiveAnalysis {
  * laid over the last full result (model/merge-preview.ts); the full analysis runs again as soon
  * as the drag ends.
  */
-export function useLiveAnalysis(design: JointDesign, stored: { document: JointDesign; result: JointAnalysis } | null, dragging = false): LiveAnalysis {
+export function useLiveAnalysis(
+  design: JointDesign,
+  stored: { document: JointDesign; result: JointAnalysis } | null,
+  dragging = false,
+): LiveAnalysis {
   const lastFull = useRef<JointAnalysis | null>(null);
   return useMemo(() => {
     if (stored && stored.document === design) {
@@ -47,7 +51,10 @@ export function useLiveAnalysis(design: JointDesign, stored: { document: JointDe
       const issues = validateJointDesign(design);
       return {
         result: null,
-        issues: issues.length > 0 ? issues : [{ path: "design", message: err instanceof Error ? err.message : String(err) }],
+        issues:
+          issues.length > 0
+            ? issues
+            : [{ path: "design", message: err instanceof Error ? err.message : String(err) }],
         computeMs: performance.now() - t0,
         stored: false,
       };

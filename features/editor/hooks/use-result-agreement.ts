@@ -5,10 +5,16 @@ import { analyzeJoint, type JointAnalysis } from "@/features/analysis/core/analy
 import { CORE_VERSION } from "@/features/analysis/core/version";
 import { firstDifference } from "../model/results-agree";
 
-export interface AgreementRecord { checkedAt: number; agree: boolean; difference: string | null }
+export interface AgreementRecord {
+  checkedAt: number;
+  agree: boolean;
+  difference: string | null;
+}
 
 declare global {
-  interface Window { __sealpitchAgreement?: AgreementRecord[] }
+  interface Window {
+    __sealpitchAgreement?: AgreementRecord[];
+  }
 }
 
 /**
@@ -25,12 +31,20 @@ export function useResultAgreement(stored: { document: JointDesign; result: Join
       let difference: string | null;
       try {
         // Compare as JSON values: the stored copy has been through JSON and jsonb.
-        difference = firstDifference(JSON.parse(JSON.stringify(analyzeJoint(stored.document))), stored.result);
+        difference = firstDifference(
+          JSON.parse(JSON.stringify(analyzeJoint(stored.document))),
+          stored.result,
+        );
       } catch (err) {
         difference = `analyzeJoint threw: ${err instanceof Error ? err.message : String(err)}`;
       }
-      (window.__sealpitchAgreement ??= []).push({ checkedAt: Date.now(), agree: difference === null, difference });
-      if (difference) console.error(`Sealpitch: the browser's analysis differs from the stored result at ${difference}`);
+      (window.__sealpitchAgreement ??= []).push({
+        checkedAt: Date.now(),
+        agree: difference === null,
+        difference,
+      });
+      if (difference)
+        console.error(`Sealpitch: the browser's analysis differs from the stored result at ${difference}`);
     }, 50);
     return () => window.clearTimeout(id);
   }, [stored]);

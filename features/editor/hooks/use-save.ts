@@ -37,7 +37,10 @@ export function useSave(o: SaveOptions) {
   const latest = useRef(o);
   latest.current = o;
 
-  const dirty = o.document !== savedDoc || o.meta.name !== savedMeta.name || o.meta.equipmentTag !== savedMeta.equipmentTag;
+  const dirty =
+    o.document !== savedDoc ||
+    o.meta.name !== savedMeta.name ||
+    o.meta.equipmentTag !== savedMeta.equipmentTag;
 
   const save = useCallback(async () => {
     const cur = latest.current;
@@ -47,7 +50,13 @@ export function useSave(o: SaveOptions) {
     const doc = cur.document;
     const meta = cur.meta;
     try {
-      const res = await cur.saveAction({ designId: cur.designId, baseVersion: versionRef.current, document: doc, name: meta.name, equipmentTag: meta.equipmentTag });
+      const res = await cur.saveAction({
+        designId: cur.designId,
+        baseVersion: versionRef.current,
+        document: doc,
+        name: meta.name,
+        equipmentTag: meta.equipmentTag,
+      });
       if (res.ok) {
         versionRef.current = res.data.version;
         setVersion(res.data.version);
@@ -90,6 +99,15 @@ export function useSave(o: SaveOptions) {
     setFieldErrors(null);
   }, []);
 
-  const saveState: SaveState = state === "saving" ? "saving" : state === "conflict" ? "conflict" : state === "error" ? "error" : dirty ? "unsaved" : "saved";
+  const saveState: SaveState =
+    state === "saving"
+      ? "saving"
+      : state === "conflict"
+        ? "conflict"
+        : state === "error"
+          ? "error"
+          : dirty
+            ? "unsaved"
+            : "saved";
   return { save, adopt, saveState, dirty, version, message, fieldErrors, savedAt };
 }

@@ -3,13 +3,24 @@
  * edges, bolt path, bolt centres and the pitch label positions. Pure; the Konva tree only draws it.
  */
 import type { JointDesign, PointMm } from "@/features/analysis/core/design";
-import { getBoltPoint, getNeighbourSpacings, outlineToPolyline, pointAtArcLength } from "@/features/analysis/core/geometry";
+import {
+  getBoltPoint,
+  getNeighbourSpacings,
+  outlineToPolyline,
+  pointAtArcLength,
+} from "@/features/analysis/core/geometry";
 import { pathToPolyline, shapeToPath, type ClosedPath } from "@/features/analysis/core/path";
 import { offsetShape, outlineToShape, shapeBounds } from "@/features/analysis/core/shape";
 import { getDesignBoltPath, wrapArc } from "./bolt-path";
 import type { Bounds } from "./view-transform";
 
-export interface PitchLabel { fromId: string; toId: string; pitchMm: number; chordMm: number; at: PointMm }
+export interface PitchLabel {
+  fromId: string;
+  toId: string;
+  pitchMm: number;
+  chordMm: number;
+  at: PointMm;
+}
 
 export interface CanvasScene {
   outline: PointMm[];
@@ -26,11 +37,16 @@ export interface CanvasScene {
 }
 
 function circle(r: number): PointMm[] {
-  return pathToPolyline(shapeToPath({ kind: "rounded-rect", halfWidthMm: r, halfHeightMm: r, radiusMm: r }), Math.max(0.5, r / 90));
+  return pathToPolyline(
+    shapeToPath({ kind: "rounded-rect", halfWidthMm: r, halfHeightMm: r, radiusMm: r }),
+    Math.max(0.5, r / 90),
+  );
 }
 
 /** Geometry that does not change while bolts move (memoise on outline, bore, gasket, path). */
-export function buildStaticScene(design: JointDesign): Omit<CanvasScene, "bolts" | "pitches" | "holeRadiusMm"> {
+export function buildStaticScene(
+  design: JointDesign,
+): Omit<CanvasScene, "bolts" | "pitches" | "holeRadiusMm"> {
   const shape = outlineToShape(design.outline);
   const bounds = shapeBounds(shape);
   const step = Math.max(0.5, Math.max(bounds.xMaxMm - bounds.xMinMm, bounds.yMaxMm - bounds.yMinMm) / 600);
@@ -48,12 +64,24 @@ export function buildStaticScene(design: JointDesign): Omit<CanvasScene, "bolts"
     gasketInner = pathToPolyline(shapeToPath(offsetShape(shape, c + w / 2)), step);
   }
   const boltPath = getDesignBoltPath(design);
-  return { outline, bore, gasketOuter, gasketInner, boltPath, boltPathLine: pathToPolyline(boltPath, step), bounds };
+  return {
+    outline,
+    bore,
+    gasketOuter,
+    gasketInner,
+    boltPath,
+    boltPathLine: pathToPolyline(boltPath, step),
+    bounds,
+  };
 }
 
 /** Bolt centres and pitch labels (recomputed on every move). */
 export function buildBoltScene(design: JointDesign, boltPath: ClosedPath) {
-  const bolts = design.bolts.map((b) => ({ id: b.id, p: getBoltPoint(boltPath, b), offPath: (b.offPathMm ?? 0) !== 0 }));
+  const bolts = design.bolts.map((b) => ({
+    id: b.id,
+    p: getBoltPoint(boltPath, b),
+    offPath: (b.offPathMm ?? 0) !== 0,
+  }));
   const L = boltPath.lengthMm;
   const byId = new Map(design.bolts.map((b) => [b.id, b]));
   const pitches: PitchLabel[] = getNeighbourSpacings(design).map((s) => {

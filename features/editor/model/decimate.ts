@@ -6,19 +6,31 @@
  *
  * Example: 6 144 samples over 460 columns → at most 920 points.
  */
-export function decimateMinMax(xs: readonly number[], ys: readonly number[], x0: number, x1: number, columns: number): { xs: number[]; ys: number[] } {
+export function decimateMinMax(
+  xs: readonly number[],
+  ys: readonly number[],
+  x0: number,
+  x1: number,
+  columns: number,
+): { xs: number[]; ys: number[] } {
   const n = Math.min(xs.length, ys.length);
   if (n <= 2 * columns || !(x1 > x0)) return { xs: xs.slice(0, n), ys: ys.slice(0, n) };
   const outX: number[] = [];
   const outY: number[] = [];
   const width = (x1 - x0) / columns;
   let col = -1;
-  let lo = -1, hi = -1;
+  let lo = -1,
+    hi = -1;
   const flush = () => {
     if (lo < 0) return;
-    const a = Math.min(lo, hi), b = Math.max(lo, hi);
-    outX.push(xs[a]); outY.push(ys[a]);
-    if (b !== a) { outX.push(xs[b]); outY.push(ys[b]); }
+    const a = Math.min(lo, hi),
+      b = Math.max(lo, hi);
+    outX.push(xs[a]);
+    outY.push(ys[a]);
+    if (b !== a) {
+      outX.push(xs[b]);
+      outY.push(ys[b]);
+    }
   };
   for (let i = 0; i < n; i++) {
     const c = Math.min(columns - 1, Math.max(0, Math.floor((xs[i] - x0) / width)));

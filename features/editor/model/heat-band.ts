@@ -10,7 +10,11 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { buildGasketRegion } from "@/features/analysis/core/gasket-region";
 import { pointAtArcLength } from "@/features/analysis/core/path";
 
-export interface HeatQuad { x: number[]; y: number[]; stressMpa: number }
+export interface HeatQuad {
+  x: number[];
+  y: number[];
+  stressMpa: number;
+}
 
 /** Width across the path of the coloured band, mm. */
 function bandWidthMm(design: JointDesign, region: ReturnType<typeof buildGasketRegion>): number {
@@ -24,7 +28,13 @@ function bandWidthMm(design: JointDesign, region: ReturnType<typeof buildGasketR
 export const MAX_HEAT_QUADS = 512;
 
 /** `factor` scales the stresses (minimum over target preload) without copying the array. */
-export function buildHeatQuads(design: JointDesign, sMm: number[], stressMpa: number[], factor = 1, maxQuads = MAX_HEAT_QUADS): HeatQuad[] {
+export function buildHeatQuads(
+  design: JointDesign,
+  sMm: number[],
+  stressMpa: number[],
+  factor = 1,
+  maxQuads = MAX_HEAT_QUADS,
+): HeatQuad[] {
   if (sMm.length < 2) return [];
   const region = buildGasketRegion(design);
   const hw = bandWidthMm(design, region) / 2;
@@ -32,7 +42,8 @@ export function buildHeatQuads(design: JointDesign, sMm: number[], stressMpa: nu
   const quads: HeatQuad[] = [];
   const edge = (s: number) => {
     const q = pointAtArcLength(region.path, s);
-    const nx = -q.ty, ny = q.tx;
+    const nx = -q.ty,
+      ny = q.tx;
     return { ox: q.x + nx * hw, oy: q.y + ny * hw, ix: q.x - nx * hw, iy: q.y - ny * hw };
   };
   const n = sMm.length;

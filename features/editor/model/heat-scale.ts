@@ -17,7 +17,11 @@ const BELOW = "#e7bd6e";
 const SEATED = "#2f7d4f";
 const HIGH = "#1d2739";
 
-export function buildHeatScale(maxStressMpa: number, seatingMpa: number | null, crushMpa: number | null): HeatScale {
+export function buildHeatScale(
+  maxStressMpa: number,
+  seatingMpa: number | null,
+  crushMpa: number | null,
+): HeatScale {
   const y = seatingMpa && seatingMpa > 0 ? seatingMpa : null;
   const top = Math.max(maxStressMpa, (y ?? 0) * 1.5, crushMpa ?? 0, 1e-3);
   const stops: HeatScale["stops"] = [{ stressMpa: 0, colour: UNLOADED, label: "0" }];
@@ -32,6 +36,9 @@ export function buildHeatScale(maxStressMpa: number, seatingMpa: number | null, 
   } else {
     stops.push({ stressMpa: top, colour: SEATED, label: "max" });
   }
-  const s = scaleLinear<string>().domain(stops.map((x) => x.stressMpa)).range(stops.map((x) => x.colour)).clamp(true);
+  const s = scaleLinear<string>()
+    .domain(stops.map((x) => x.stressMpa))
+    .range(stops.map((x) => x.colour))
+    .clamp(true);
   return { colour: (v) => s(Math.max(0, v)), stops, maxMpa: top };
 }

@@ -27,7 +27,12 @@ export function withHistory(reducer: (d: JointDesign, a: DesignAction) => JointD
       case "undo": {
         if (state.dragBase || state.past.length === 0) return state;
         const prev = state.past[state.past.length - 1];
-        return { ...state, past: state.past.slice(0, -1), present: prev, future: [state.present, ...state.future] };
+        return {
+          ...state,
+          past: state.past.slice(0, -1),
+          present: prev,
+          future: [state.present, ...state.future],
+        };
       }
       case "redo": {
         if (state.dragBase || state.future.length === 0) return state;

@@ -21,7 +21,12 @@ export interface MoveTarget {
  * nearest equal-pitch position within `snapMm`: the slots of an equal pattern of the current
  * count (straddling the centre lines), or the midpoint between the bolt's two neighbours.
  */
-export function resolveMoveTarget(design: JointDesign, boltId: string, point: PointMm, options: MoveOptions = {}): MoveTarget {
+export function resolveMoveTarget(
+  design: JointDesign,
+  boltId: string,
+  point: PointMm,
+  options: MoveOptions = {},
+): MoveTarget {
   const path = getDesignBoltPath(design);
   const proj = projectOntoPath(path, point);
   if (options.free) return { sMm: proj.sMm, offPathMm: proj.offPathMm, snapped: false };
@@ -50,7 +55,10 @@ export function resolveMoveTarget(design: JointDesign, boltId: string, point: Po
 
 /** Midpoint between the two bolts that would neighbour a bolt at s (the dragged bolt excluded). */
 function neighbourMidpoint(design: JointDesign, boltId: string, s: number, L: number): number | null {
-  const others = design.bolts.filter((b) => b.id !== boltId).map((b) => wrapArc(b.sMm, L)).sort((a, b) => a - b);
+  const others = design.bolts
+    .filter((b) => b.id !== boltId)
+    .map((b) => wrapArc(b.sMm, L))
+    .sort((a, b) => a - b);
   if (others.length < 2) return null;
   const before = others.filter((o) => o <= s);
   const after = others.filter((o) => o > s);
@@ -60,7 +68,11 @@ function neighbourMidpoint(design: JointDesign, boltId: string, s: number, L: nu
 }
 
 /** Moves one bolt to an arc position (and off-path distance). Unknown ids change nothing. */
-export function moveBolt(design: JointDesign, boltId: string, target: { sMm: number; offPathMm?: number }): JointDesign {
+export function moveBolt(
+  design: JointDesign,
+  boltId: string,
+  target: { sMm: number; offPathMm?: number },
+): JointDesign {
   const i = design.bolts.findIndex((b) => b.id === boltId);
   if (i < 0 || !Number.isFinite(target.sMm)) return design;
   const L = getDesignBoltPath(design).lengthMm;

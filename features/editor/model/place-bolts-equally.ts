@@ -15,7 +15,11 @@ export interface PlaceEquallyOptions {
  * Replaces every bolt by `count` bolts at equal pitch along the bolt path (ids b1…bn, clockwise
  * from the top). Off-path offsets are dropped. A count outside 1…MAX_BOLT_COUNT changes nothing.
  */
-export function placeBoltsEqually(design: JointDesign, count: number, options: PlaceEquallyOptions = {}): JointDesign {
+export function placeBoltsEqually(
+  design: JointDesign,
+  count: number,
+  options: PlaceEquallyOptions = {},
+): JointDesign {
   if (!Number.isInteger(count) || count < 1 || count > MAX_BOLT_COUNT) return design;
   const L = getDesignBoltPath(design).lengthMm;
   if (!(L > 0)) return design;

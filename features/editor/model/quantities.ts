@@ -4,10 +4,20 @@
  */
 import type { UnitSystem } from "@/features/analysis/core/design";
 import {
-  inToMm, lbfToN, mmToIn, mpaToPsi, nmmToFtLb, nmmToNm, nToLbf, nmToNmm, ftLbToNmm, psiToMpa,
+  inToMm,
+  lbfToN,
+  mmToIn,
+  mpaToPsi,
+  nmmToFtLb,
+  nmmToNm,
+  nToLbf,
+  nmToNmm,
+  ftLbToNmm,
+  psiToMpa,
 } from "@/features/analysis/core/units";
 
-export type Quantity = "length" | "stress" | "force" | "moment" | "torque" | "temperature" | "ratio" | "angle" | "count";
+export type Quantity =
+  "length" | "stress" | "force" | "moment" | "torque" | "temperature" | "ratio" | "angle" | "count";
 
 interface Conversion {
   unit: string;
@@ -19,19 +29,43 @@ const same = (v: number) => v;
 
 // Temperatures are not in the core's units.ts; °F = °C·9/5 + 32 is an exact definition.
 const TABLE: Record<Quantity, Record<UnitSystem, Conversion>> = {
-  length: { SI: { unit: "mm", toDisplay: same, fromDisplay: same }, US: { unit: "in", toDisplay: mmToIn, fromDisplay: inToMm } },
-  stress: { SI: { unit: "MPa", toDisplay: same, fromDisplay: same }, US: { unit: "psi", toDisplay: mpaToPsi, fromDisplay: psiToMpa } },
-  force: { SI: { unit: "N", toDisplay: same, fromDisplay: same }, US: { unit: "lbf", toDisplay: nToLbf, fromDisplay: lbfToN } },
+  length: {
+    SI: { unit: "mm", toDisplay: same, fromDisplay: same },
+    US: { unit: "in", toDisplay: mmToIn, fromDisplay: inToMm },
+  },
+  stress: {
+    SI: { unit: "MPa", toDisplay: same, fromDisplay: same },
+    US: { unit: "psi", toDisplay: mpaToPsi, fromDisplay: psiToMpa },
+  },
+  force: {
+    SI: { unit: "N", toDisplay: same, fromDisplay: same },
+    US: { unit: "lbf", toDisplay: nToLbf, fromDisplay: lbfToN },
+  },
   // Moments and torques are stored in N·mm and shown in N·m or ft·lb.
-  moment: { SI: { unit: "N·m", toDisplay: nmmToNm, fromDisplay: nmToNmm }, US: { unit: "ft·lb", toDisplay: nmmToFtLb, fromDisplay: ftLbToNmm } },
-  torque: { SI: { unit: "N·m", toDisplay: nmmToNm, fromDisplay: nmToNmm }, US: { unit: "ft·lb", toDisplay: nmmToFtLb, fromDisplay: ftLbToNmm } },
+  moment: {
+    SI: { unit: "N·m", toDisplay: nmmToNm, fromDisplay: nmToNmm },
+    US: { unit: "ft·lb", toDisplay: nmmToFtLb, fromDisplay: ftLbToNmm },
+  },
+  torque: {
+    SI: { unit: "N·m", toDisplay: nmmToNm, fromDisplay: nmToNmm },
+    US: { unit: "ft·lb", toDisplay: nmmToFtLb, fromDisplay: ftLbToNmm },
+  },
   temperature: {
     SI: { unit: "°C", toDisplay: same, fromDisplay: same },
     US: { unit: "°F", toDisplay: (c) => (c * 9) / 5 + 32, fromDisplay: (f) => ((f - 32) * 5) / 9 },
   },
-  ratio: { SI: { unit: "", toDisplay: same, fromDisplay: same }, US: { unit: "", toDisplay: same, fromDisplay: same } },
-  angle: { SI: { unit: "°", toDisplay: same, fromDisplay: same }, US: { unit: "°", toDisplay: same, fromDisplay: same } },
-  count: { SI: { unit: "", toDisplay: same, fromDisplay: same }, US: { unit: "", toDisplay: same, fromDisplay: same } },
+  ratio: {
+    SI: { unit: "", toDisplay: same, fromDisplay: same },
+    US: { unit: "", toDisplay: same, fromDisplay: same },
+  },
+  angle: {
+    SI: { unit: "°", toDisplay: same, fromDisplay: same },
+    US: { unit: "°", toDisplay: same, fromDisplay: same },
+  },
+  count: {
+    SI: { unit: "", toDisplay: same, fromDisplay: same },
+    US: { unit: "", toDisplay: same, fromDisplay: same },
+  },
 };
 
 export function unitLabel(q: Quantity, units: UnitSystem): string {
@@ -49,12 +83,20 @@ export function fromDisplay(q: Quantity, display: number, units: UnitSystem): nu
 /** Maps the unit strings the core writes into check records ("mm", "MPa", "N") to a quantity. */
 export function quantityOfUnit(unit: string): Quantity | null {
   switch (unit) {
-    case "mm": return "length";
-    case "MPa": return "stress";
-    case "N": return "force";
-    case "N·mm": case "N*mm": case "Nmm": return "moment";
-    case "°C": return "temperature";
-    default: return null;
+    case "mm":
+      return "length";
+    case "MPa":
+      return "stress";
+    case "N":
+      return "force";
+    case "N·mm":
+    case "N*mm":
+    case "Nmm":
+      return "moment";
+    case "°C":
+      return "temperature";
+    default:
+      return null;
   }
 }
 

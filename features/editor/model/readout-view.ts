@@ -50,7 +50,16 @@ export function toReadoutView(result: JointAnalysis): ReadoutView {
   return {
     // Results carry boltIds already (the core adds them); older stored ones get them from subject.
     checks: result.checks.map((c) => (c.boltIds ? c : { ...c, boltIds: c.subject ?? [] })),
-    profile: { pathLengthMm: gs.pathLengthMm, sMm: s, stressMpa: v, minFactor, minMpa: gs.minMpa, maxMpa: gs.maxMpa, meanMpa: gs.meanMpa, boltSOnPathMm: gs.boltSOnPathMm },
+    profile: {
+      pathLengthMm: gs.pathLengthMm,
+      sMm: s,
+      stressMpa: v,
+      minFactor,
+      minMpa: gs.minMpa,
+      maxMpa: gs.maxMpa,
+      meanMpa: gs.meanMpa,
+      boltSOnPathMm: gs.boltSOnPathMm,
+    },
     seatingMpa: gs.seatingMpa,
     crushMpa: gs.crushMpa,
     analysis: result,
@@ -58,8 +67,12 @@ export function toReadoutView(result: JointAnalysis): ReadoutView {
 }
 
 /** Bolt ids a check concerns, or those given directly (highlight from the review screen). */
-export function highlightedBolts(view: ReadoutView | null, highlight?: { boltIds?: string[]; checkId?: string }): string[] {
+export function highlightedBolts(
+  view: ReadoutView | null,
+  highlight?: { boltIds?: string[]; checkId?: string },
+): string[] {
   if (!highlight) return [];
-  const fromCheck = highlight.checkId && view ? view.checks.find((c) => c.id === highlight.checkId)?.boltIds ?? [] : [];
+  const fromCheck =
+    highlight.checkId && view ? (view.checks.find((c) => c.id === highlight.checkId)?.boltIds ?? []) : [];
   return [...new Set([...(highlight.boltIds ?? []), ...fromCheck])];
 }

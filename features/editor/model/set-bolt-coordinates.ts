@@ -44,7 +44,10 @@ export function setBoltCoordinates(design: JointDesign, boltId: string, edit: Co
     case "xy": {
       if (!Number.isFinite(edit.xMm) || !Number.isFinite(edit.yMm)) return design;
       const r = projectOntoPath(path, { x: edit.xMm, y: edit.yMm });
-      return moveBolt(design, boltId, { sMm: r.sMm, offPathMm: Math.abs(r.offPathMm) < 1e-9 ? 0 : r.offPathMm });
+      return moveBolt(design, boltId, {
+        sMm: r.sMm,
+        offPathMm: Math.abs(r.offPathMm) < 1e-9 ? 0 : r.offPathMm,
+      });
     }
     case "angle": {
       if (!Number.isFinite(edit.angleDeg)) return design;

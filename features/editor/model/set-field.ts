@@ -7,7 +7,11 @@ import type { JointDesign } from "@/features/analysis/core/design";
  */
 export function setField(design: JointDesign, path: string, value: unknown): JointDesign {
   const keys = path.split(".");
-  if (keys.length === 0 || keys.some((k) => k === "" || k === "__proto__" || k === "constructor" || k === "prototype")) return design;
+  if (
+    keys.length === 0 ||
+    keys.some((k) => k === "" || k === "__proto__" || k === "constructor" || k === "prototype")
+  )
+    return design;
   const out = setIn(design as unknown as Record<string, unknown>, keys, value);
   return out === null ? design : (out as unknown as JointDesign);
 }
@@ -35,6 +39,10 @@ function setIn(obj: unknown, keys: string[], value: unknown): unknown | null {
 }
 
 /** Replaces a whole sub-object (gasket material from the catalogue, a new termination). */
-export function replacePart<K extends keyof JointDesign>(design: JointDesign, key: K, value: JointDesign[K]): JointDesign {
+export function replacePart<K extends keyof JointDesign>(
+  design: JointDesign,
+  key: K,
+  value: JointDesign[K],
+): JointDesign {
   return design[key] === value ? design : { ...design, [key]: value };
 }

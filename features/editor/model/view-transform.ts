@@ -12,7 +12,12 @@ export interface ViewTransform {
   oy: number;
 }
 
-export interface Bounds { xMinMm: number; xMaxMm: number; yMinMm: number; yMaxMm: number }
+export interface Bounds {
+  xMinMm: number;
+  xMaxMm: number;
+  yMinMm: number;
+  yMaxMm: number;
+}
 
 export const MIN_ZOOM = 0.02;
 export const MAX_ZOOM = 200;

@@ -4,7 +4,14 @@ import { useState } from "react";
 import useSWR from "swr";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { fetchJson } from "@/features/ui/fetch-json";
-import { BACKGROUND_SHEET_MIN_BOLTS, JOB_POLL_MS, drillingTemplateUrl, holeListUrl, jobStatusKey, sheetPdfUrl } from "../cache-keys";
+import {
+  BACKGROUND_SHEET_MIN_BOLTS,
+  JOB_POLL_MS,
+  drillingTemplateUrl,
+  holeListUrl,
+  jobStatusKey,
+  sheetPdfUrl,
+} from "../cache-keys";
 
 export interface ExportButtonsProps {
   designId: string;
@@ -29,7 +36,13 @@ interface JobStatus {
 const fetchJob = (url: string) => fetchJson<JobStatus>(url, (status) => `HTTP ${status}`);
 
 /** Sheet (PDF), hole list (CSV) and drilling template (DXF) of one stored revision. */
-export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem, hasResult = true }: ExportButtonsProps) {
+export function ExportButtons({
+  designId,
+  revisionNumber,
+  boltCount,
+  unitSystem,
+  hasResult = true,
+}: ExportButtonsProps) {
   const [paper, setPaper] = useState<"a4" | "letter">("a4");
   const [units, setUnits] = useState<"SI" | "US">(unitSystem);
   const [jobId, setJobId] = useState<string | null>(null);
@@ -37,7 +50,8 @@ export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem,
   const [queueing, setQueueing] = useState(false);
   const queued = boltCount >= BACKGROUND_SHEET_MIN_BOLTS;
   const { data: job, error: pollError } = useSWR<JobStatus>(jobId ? jobStatusKey(jobId) : null, fetchJob, {
-    refreshInterval: (latest) => (latest && (latest.status === "done" || latest.status === "failed") ? 0 : JOB_POLL_MS),
+    refreshInterval: (latest) =>
+      latest && (latest.status === "done" || latest.status === "failed") ? 0 : JOB_POLL_MS,
   });
   const pdfUrl = sheetPdfUrl(designId, revisionNumber, paper, units);
 
@@ -48,7 +62,8 @@ export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem,
     try {
       const res = await fetch(pdfUrl, { method: "POST" });
       const body = (await res.json()) as { jobId?: string; error?: { message?: string } };
-      if (res.status !== 202 || !body.jobId) throw new Error(body.error?.message ?? `The sheet could not be queued (HTTP ${res.status}).`);
+      if (res.status !== 202 || !body.jobId)
+        throw new Error(body.error?.message ?? `The sheet could not be queued (HTTP ${res.status}).`);
       setJobId(body.jobId);
     } catch (e) {
       setQueueError(e instanceof Error ? e.message : String(e));
@@ -59,27 +74,46 @@ export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem,
 
   const disabled = !hasResult;
   const linkClass = (style: string) => `${style}${disabled ? " pointer-events-none opacity-50" : ""}`;
-  const message = queueError ?? pollError?.message ?? (job?.status === "failed" ? job.error ?? "The sheet could not be made." : null);
+  const message =
+    queueError ??
+    pollError?.message ??
+    (job?.status === "failed" ? (job.error ?? "The sheet could not be made.") : null);
 
   return (
-    <section aria-label="Shop files" className="flex flex-col gap-2 rounded-plate border border-ink-200 bg-white p-3 shadow-plate">
+    <section
+      aria-label="Shop files"
+      className="flex flex-col gap-2 rounded-plate border border-ink-200 bg-white p-3 shadow-plate"
+    >
       <div className="flex flex-wrap items-end gap-3">
         <label className="flex flex-col text-micro text-ink-600">
           Paper
-          <select className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900" value={paper} onChange={(e) => setPaper(e.target.value as "a4" | "letter")}>
+          <select
+            className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900"
+            value={paper}
+            onChange={(e) => setPaper(e.target.value as "a4" | "letter")}
+          >
             <option value="a4">A4</option>
             <option value="letter">Letter</option>
           </select>
         </label>
         <label className="flex flex-col text-micro text-ink-600">
           Units
-          <select className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900" value={units} onChange={(e) => setUnits(e.target.value as "SI" | "US")}>
+          <select
+            className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900"
+            value={units}
+            onChange={(e) => setUnits(e.target.value as "SI" | "US")}
+          >
             <option value="SI">SI (mm, MPa, N·m)</option>
             <option value="US">US (in, psi, ft·lb)</option>
           </select>
         </label>
         {queued ? (
-          <button type="button" className={buttonStyles.primary} disabled={disabled || queueing || job?.status === "queued" || job?.status === "running"} onClick={prepareSheet}>
+          <button
+            type="button"
+            className={buttonStyles.primary}
+            disabled={disabled || queueing || job?.status === "queued" || job?.status === "running"}
+            onClick={prepareSheet}
+          >
             {queueing ? "Queuing…" : "Prepare spacing sheet (PDF)"}
           </button>
         ) : (
@@ -87,19 +121,33 @@ export function ExportButtons({ designId, revisionNumber, boltCount, unitSystem,
             Spacing sheet (PDF)
           </a>
         )}
-        <a className={linkClass(buttonStyles.secondary)} href={holeListUrl(designId, revisionNumber)} aria-disabled={disabled} download>
+        <a
+          className={linkClass(buttonStyles.secondary)}
+          href={holeListUrl(designId, revisionNumber)}
+          aria-disabled={disabled}
+          download
+        >
           Hole list (CSV)
         </a>
-        <a className={linkClass(buttonStyles.secondary)} href={drillingTemplateUrl(designId, revisionNumber)} aria-disabled={disabled} download>
+        <a
+          className={linkClass(buttonStyles.secondary)}
+          href={drillingTemplateUrl(designId, revisionNumber)}
+          aria-disabled={disabled}
+          download
+        >
           Drilling template (DXF)
         </a>
       </div>
       <div aria-live="polite" className="text-table text-ink-700">
-        {queued && !jobId && !message ? <p>{boltCount} bolts: the sheet is prepared in the background.</p> : null}
+        {queued && !jobId && !message ? (
+          <p>{boltCount} bolts: the sheet is prepared in the background.</p>
+        ) : null}
         {job && (job.status === "queued" || job.status === "running") ? (
           <div className="flex items-center gap-2">
             <progress className="h-2 w-48" max={100} value={job.progress} aria-label="Sheet progress" />
-            <span className="num">{job.status === "queued" ? "Waiting in the queue…" : `Rendering ${job.progress} %`}</span>
+            <span className="num">
+              {job.status === "queued" ? "Waiting in the queue…" : `Rendering ${job.progress} %`}
+            </span>
           </div>
         ) : null}
         {job?.status === "done" && job.downloadUrl ? (

@@ -60,7 +60,10 @@ export function buildDrillingTemplateDxf(design: JointDesign, rows: readonly Bol
       const { centreOffsetMm, widthMm } = g.geometry;
       for (const inward of [centreOffsetMm - widthMm / 2, centreOffsetMm + widthMm / 2]) {
         const pts = pathToPolyline(getBoltPath(design.outline, { kind: "offset", offsetMm: inward }), 1);
-        d.drawPolyline(pts.map((p) => [k(p.x), k(p.y)] as [number, number]), true);
+        d.drawPolyline(
+          pts.map((p) => [k(p.x), k(p.y)] as [number, number]),
+          true,
+        );
       }
     }
   }
@@ -68,7 +71,10 @@ export function buildDrillingTemplateDxf(design: JointDesign, rows: readonly Bol
   if (design.boltPath.kind === "circle") d.drawCircle(0, 0, k(design.boltPath.diameterMm / 2));
   else {
     const pts = pathToPolyline(getBoltPath(design.outline, design.boltPath), 1);
-    d.drawPolyline(pts.map((p) => [k(p.x), k(p.y)] as [number, number]), true);
+    d.drawPolyline(
+      pts.map((p) => [k(p.x), k(p.y)] as [number, number]),
+      true,
+    );
   }
 
   const r = k(design.fastener.holeDiameterMm / 2);
@@ -83,6 +89,7 @@ export function buildDrillingTemplateDxf(design: JointDesign, rows: readonly Bol
     d.drawLine(x, y - arm, x, y + arm);
   }
   d.setActiveLayer(DXF_LAYERS.labels);
-  for (const row of rows) d.drawText(k(row.xMm) + r * 1.1, k(row.yMm) + r * 1.1, r * 0.9, 0, String(row.number));
+  for (const row of rows)
+    d.drawText(k(row.xMm) + r * 1.1, k(row.yMm) + r * 1.1, r * 0.9, 0, String(row.number));
   return d.toDxfString();
 }

@@ -7,7 +7,10 @@ import { fixed, lengthUnitFor } from "./length-unit";
  * The hole list: one CSV row per bolt hole for drilling and CAD, in the design's length unit
  * (named in the header, e.g. `x_mm`). Angles are clockwise from 12 o'clock seen from the face.
  */
-export function buildHoleListCsv(design: Pick<JointDesign, "units" | "fastener">, rows: readonly BoltRow[]): string {
+export function buildHoleListCsv(
+  design: Pick<JointDesign, "units" | "fastener">,
+  rows: readonly BoltRow[],
+): string {
   const u = lengthUnitFor(design.units);
   const header = [
     "number",

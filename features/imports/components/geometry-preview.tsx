@@ -12,17 +12,50 @@ export function GeometryPreview({ design, holeDiameterMm }: { design: JointDesig
   const xs = outline.map((p) => p.x);
   const ys = outline.map((p) => p.y);
   const pad = 0.06 * Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys));
-  const vb = [Math.min(...xs) - pad, -(Math.max(...ys) + pad), Math.max(...xs) - Math.min(...xs) + 2 * pad, Math.max(...ys) - Math.min(...ys) + 2 * pad];
+  const vb = [
+    Math.min(...xs) - pad,
+    -(Math.max(...ys) + pad),
+    Math.max(...xs) - Math.min(...xs) + 2 * pad,
+    Math.max(...ys) - Math.min(...ys) + 2 * pad,
+  ];
   const stroke = vb[2] / 400;
   const pts = (list: { x: number; y: number }[]) => list.map((p) => `${p.x},${p.y}`).join(" ");
   return (
-    <svg viewBox={vb.join(" ")} role="img" aria-label={`Preview: ${bolts.length} bolt holes`} className="h-80 w-full rounded-plate border border-ink-100 bg-white" data-testid="import-preview">
+    <svg
+      viewBox={vb.join(" ")}
+      role="img"
+      aria-label={`Preview: ${bolts.length} bolt holes`}
+      className="h-80 w-full rounded-plate border border-ink-100 bg-white"
+      data-testid="import-preview"
+    >
       <g transform="scale(1,-1)">
         <polygon points={pts(outline)} fill="#eeeeea" stroke="#1d2739" strokeWidth={stroke * 1.5} />
-        {design.bore ? <polygon points={pts(outlineToPolyline(design.bore, 2))} fill="#ffffff" stroke="#394864" strokeWidth={stroke} /> : null}
-        <polygon points={pts(path)} fill="none" stroke="#c98d2b" strokeWidth={stroke} strokeDasharray={`${stroke * 6} ${stroke * 4}`} />
+        {design.bore ? (
+          <polygon
+            points={pts(outlineToPolyline(design.bore, 2))}
+            fill="#ffffff"
+            stroke="#394864"
+            strokeWidth={stroke}
+          />
+        ) : null}
+        <polygon
+          points={pts(path)}
+          fill="none"
+          stroke="#c98d2b"
+          strokeWidth={stroke}
+          strokeDasharray={`${stroke * 6} ${stroke * 4}`}
+        />
         {bolts.map((b, i) => (
-          <circle key={i} cx={b.x} cy={b.y} r={holeDiameterMm / 2} fill="#ffffff" stroke="#121a28" strokeWidth={stroke} data-testid="import-hole" />
+          <circle
+            key={i}
+            cx={b.x}
+            cy={b.y}
+            r={holeDiameterMm / 2}
+            fill="#ffffff"
+            stroke="#121a28"
+            strokeWidth={stroke}
+            data-testid="import-hole"
+          />
         ))}
       </g>
     </svg>

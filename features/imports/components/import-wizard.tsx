@@ -18,52 +18,114 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
   const [csvUnit, setCsvUnit] = useState<"mm" | "in">("mm");
   const [name, setName] = useState("");
   const prepared = useMemo(
-    () => (dxfText ? prepareImport({ dxfText, csvText, csvUnit, name: name || "Imported flange", units }) : null),
+    () =>
+      dxfText ? prepareImport({ dxfText, csvText, csvUnit, name: name || "Imported flange", units }) : null,
     [dxfText, csvText, csvUnit, name, units],
   );
-  const e = state && !state.ok ? state.fieldErrors ?? {} : {};
+  const e = state && !state.ok ? (state.fieldErrors ?? {}) : {};
   return (
     // Submitted through onSubmit, not the action prop: React resets a form after an action, which
     // would wipe what the user typed when the server refuses a field.
-    <form onSubmit={(ev) => { ev.preventDefault(); const data = new FormData(ev.currentTarget); startTransition(() => action(data)); }} className="grid gap-6 lg:grid-cols-[22rem_1fr]">
+    <form
+      onSubmit={(ev) => {
+        ev.preventDefault();
+        const data = new FormData(ev.currentTarget);
+        startTransition(() => action(data));
+      }}
+      className="grid gap-6 lg:grid-cols-[22rem_1fr]"
+    >
       <div className="flex flex-col gap-4">
         <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
           DXF drawing (outline and holes)
-          <input type="file" name="dxf" accept=".dxf" required onChange={async (ev) => setDxfText((await ev.target.files?.[0]?.text()) ?? null)} />
+          <input
+            type="file"
+            name="dxf"
+            accept=".dxf"
+            required
+            onChange={async (ev) => setDxfText((await ev.target.files?.[0]?.text()) ?? null)}
+          />
           {e.dxf ? <span className="text-verdict-fail">{e.dxf[0]}</span> : null}
         </label>
         <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
           Bolt positions CSV (optional: columns x, y, d; replaces the DXF holes)
-          <input type="file" name="csv" accept=".csv,text/csv" onChange={async (ev) => setCsvText((await ev.target.files?.[0]?.text()) ?? null)} />
+          <input
+            type="file"
+            name="csv"
+            accept=".csv,text/csv"
+            onChange={async (ev) => setCsvText((await ev.target.files?.[0]?.text()) ?? null)}
+          />
           {e.csv ? <span className="text-verdict-fail">{e.csv[0]}</span> : null}
         </label>
         <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
           CSV units
-          <select name="csvUnit" value={csvUnit} onChange={(ev) => setCsvUnit(ev.target.value as "mm" | "in")} className="rounded-plate border border-ink-200 bg-white px-2 py-1.5">
+          <select
+            name="csvUnit"
+            value={csvUnit}
+            onChange={(ev) => setCsvUnit(ev.target.value as "mm" | "in")}
+            className="rounded-plate border border-ink-200 bg-white px-2 py-1.5"
+          >
             <option value="mm">mm</option>
             <option value="in">inches</option>
           </select>
         </label>
-        <TextField label="Design name" name="name" required value={name} onChange={(ev) => setName(ev.target.value)} errors={e.name} />
+        <TextField
+          label="Design name"
+          name="name"
+          required
+          value={name}
+          onChange={(ev) => setName(ev.target.value)}
+          errors={e.name}
+        />
         <TextField label="Equipment tag" name="equipmentTag" errors={e.equipmentTag} hint="e.g. E-2107" />
-        <button type="submit" className={buttonStyles.primary} disabled={pending || !prepared?.ok}>Create design</button>
+        <button type="submit" className={buttonStyles.primary} disabled={pending || !prepared?.ok}>
+          Create design
+        </button>
         <FormStatus state={state} />
       </div>
       <div className="flex flex-col gap-3" aria-live="polite">
-        {!prepared ? <p className="text-body text-ink-500">Choose a DXF drawing to see what will be imported.</p> : null}
-        {prepared && !prepared.ok ? <p className="text-body text-verdict-fail" role="alert">{prepared.message}</p> : null}
+        {!prepared ? (
+          <p className="text-body text-ink-500">Choose a DXF drawing to see what will be imported.</p>
+        ) : null}
+        {prepared && !prepared.ok ? (
+          <p className="text-body text-verdict-fail" role="alert">
+            {prepared.message}
+          </p>
+        ) : null}
         {prepared?.ok ? (
           <>
             <GeometryPreview design={prepared.built.design} holeDiameterMm={prepared.built.holeDiameterMm} />
-            <dl className="grid grid-cols-[10rem_1fr] gap-x-4 gap-y-1 text-table" data-testid="import-summary">
-              <dt className="text-ink-600">Drawing units</dt><dd>{prepared.summary.unitsLabel}</dd>
-              <dt className="text-ink-600">Outline</dt><dd className="num">{prepared.summary.outlineText}</dd>
-              <dt className="text-ink-600">Bolt holes</dt><dd className="num">{prepared.summary.holeCount} × Ø {Math.round(prepared.summary.holeDiameterMm * 100) / 100} mm ({prepared.summary.boltsFrom === "csv" ? "from the CSV" : "from the DXF"})</dd>
-              <dt className="text-ink-600">Bore</dt><dd className="num">{prepared.summary.boreDiameterMm ? `Ø ${Math.round(prepared.summary.boreDiameterMm * 10) / 10} mm` : "none found"}</dd>
-              <dt className="text-ink-600">Bolt path</dt><dd className="num">{prepared.summary.boltPathText}</dd>
-              <dt className="text-ink-600">Bolts</dt><dd>{prepared.built.design.fastener.designation} (largest size that fits the holes; change it in the editor)</dd>
+            <dl
+              className="grid grid-cols-[10rem_1fr] gap-x-4 gap-y-1 text-table"
+              data-testid="import-summary"
+            >
+              <dt className="text-ink-600">Drawing units</dt>
+              <dd>{prepared.summary.unitsLabel}</dd>
+              <dt className="text-ink-600">Outline</dt>
+              <dd className="num">{prepared.summary.outlineText}</dd>
+              <dt className="text-ink-600">Bolt holes</dt>
+              <dd className="num">
+                {prepared.summary.holeCount} × Ø {Math.round(prepared.summary.holeDiameterMm * 100) / 100} mm
+                ({prepared.summary.boltsFrom === "csv" ? "from the CSV" : "from the DXF"})
+              </dd>
+              <dt className="text-ink-600">Bore</dt>
+              <dd className="num">
+                {prepared.summary.boreDiameterMm
+                  ? `Ø ${Math.round(prepared.summary.boreDiameterMm * 10) / 10} mm`
+                  : "none found"}
+              </dd>
+              <dt className="text-ink-600">Bolt path</dt>
+              <dd className="num">{prepared.summary.boltPathText}</dd>
+              <dt className="text-ink-600">Bolts</dt>
+              <dd>
+                {prepared.built.design.fastener.designation} (largest size that fits the holes; change it in
+                the editor)
+              </dd>
             </dl>
-            {prepared.summary.warnings.map((w) => <p key={w} className="text-table text-verdict-warn">{w}</p>)}
+            {prepared.summary.warnings.map((w) => (
+              <p key={w} className="text-table text-verdict-warn">
+                {w}
+              </p>
+            ))}
           </>
         ) : null}
       </div>

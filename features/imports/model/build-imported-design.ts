@@ -4,7 +4,11 @@
 import type { Gasket, JointDesign, Outline, UnitSystem } from "@/features/analysis/core/design";
 import { THREADS } from "@/features/analysis/core/catalogue/threads";
 import {
-  DEFAULT_GASKET_TYPE_ID, STEEL_MODULUS_MPA, buildFastener, defaultJointSettings, gasketMaterialFromCatalogue,
+  DEFAULT_GASKET_TYPE_ID,
+  STEEL_MODULUS_MPA,
+  buildFastener,
+  defaultJointSettings,
+  gasketMaterialFromCatalogue,
 } from "@/features/designs/model/template-defaults";
 import { fitBoltPath, type FittedBolts } from "./fit-bolt-path";
 import type { ImportedHole, ImportedOutline } from "./parse-dxf-flange";
@@ -28,13 +32,23 @@ export interface BuiltImport {
 /** Largest thread (metric for SI, unified for US) that fits the hole with ≥ 1 mm clearance. */
 export function pickBoltSize(holeDiameterMm: number, units: UnitSystem): string {
   const series = units === "US" ? ["unc", "unified-8un"] : ["metric-coarse"];
-  const fitting = THREADS.filter((t) => series.includes(t.series) && t.nominalDiameterMm <= holeDiameterMm - 1 + 1e-9);
-  const smallest = THREADS.filter((t) => series.includes(t.series)).sort((a, b) => a.nominalDiameterMm - b.nominalDiameterMm)[0];
+  const fitting = THREADS.filter(
+    (t) => series.includes(t.series) && t.nominalDiameterMm <= holeDiameterMm - 1 + 1e-9,
+  );
+  const smallest = THREADS.filter((t) => series.includes(t.series)).sort(
+    (a, b) => a.nominalDiameterMm - b.nominalDiameterMm,
+  )[0];
   return (fitting.sort((a, b) => b.nominalDiameterMm - a.nominalDiameterMm)[0] ?? smallest).designation;
 }
 
-export function buildImportedDesign(meta: { name: string; units: UnitSystem; equipmentTag?: string }, geo: ImportedGeometry): BuiltImport {
-  const outline: Outline = geo.outline.kind === "circle" ? { kind: "circle", diameterMm: geo.outline.diameterMm } : { kind: "polygon", points: geo.outline.points };
+export function buildImportedDesign(
+  meta: { name: string; units: UnitSystem; equipmentTag?: string },
+  geo: ImportedGeometry,
+): BuiltImport {
+  const outline: Outline =
+    geo.outline.kind === "circle"
+      ? { kind: "circle", diameterMm: geo.outline.diameterMm }
+      : { kind: "polygon", points: geo.outline.points };
   const centres = geo.boltHoles.map((h) => ({ x: h.xMm, y: h.yMm }));
   const fit = fitBoltPath(outline, centres);
   const holeDiameterMm = Math.max(...geo.boltHoles.map((h) => h.diameterMm));
@@ -46,10 +60,22 @@ export function buildImportedDesign(meta: { name: string; units: UnitSystem; equ
   if (fit.boltPath.kind === "circle") {
     const outer = fit.boltPath.diameterMm - holeDiameterMm - 2 * GAP_MM;
     const inner = geo.bore ? geo.bore.diameterMm + 2 * GAP_MM : Math.max(outer - 80, outer / 2);
-    gasket = { kind: "ring", geometry: { kind: "annulus", innerDiameterMm: Math.min(inner, outer - 2), outerDiameterMm: outer }, material };
+    gasket = {
+      kind: "ring",
+      geometry: { kind: "annulus", innerDiameterMm: Math.min(inner, outer - 2), outerDiameterMm: outer },
+      material,
+    };
   } else {
     const width = 20;
-    gasket = { kind: "ring", geometry: { kind: "band", centreOffsetMm: fit.boltPath.offsetMm + holeDiameterMm / 2 + GAP_MM + width / 2, widthMm: width }, material };
+    gasket = {
+      kind: "ring",
+      geometry: {
+        kind: "band",
+        centreOffsetMm: fit.boltPath.offsetMm + holeDiameterMm / 2 + GAP_MM + width / 2,
+        widthMm: width,
+      },
+      material,
+    };
   }
 
   const design: JointDesign = {
@@ -63,13 +89,26 @@ export function buildImportedDesign(meta: { name: string; units: UnitSystem; equ
     boltPath: fit.boltPath,
     bolts: fit.bolts,
     fastener: buildFastener({
-      designation, materialId: meta.units === "US" ? "astm-a193-b7" : "iso-898-1-8.8", holeDiameterMm,
-      clampedMm: 2 * DEFAULT_THICKNESS_MM + material.thicknessMm, withWasher: false,
+      designation,
+      materialId: meta.units === "US" ? "astm-a193-b7" : "iso-898-1-8.8",
+      holeDiameterMm,
+      clampedMm: 2 * DEFAULT_THICKNESS_MM + material.thicknessMm,
+      withWasher: false,
     }),
     layers: [
-      { role: "flange", thicknessMm: DEFAULT_THICKNESS_MM, materialName: "Carbon steel", modulusMpa: STEEL_MODULUS_MPA },
+      {
+        role: "flange",
+        thicknessMm: DEFAULT_THICKNESS_MM,
+        materialName: "Carbon steel",
+        modulusMpa: STEEL_MODULUS_MPA,
+      },
       { role: "gasket" },
-      { role: "flange", thicknessMm: DEFAULT_THICKNESS_MM, materialName: "Carbon steel", modulusMpa: STEEL_MODULUS_MPA },
+      {
+        role: "flange",
+        thicknessMm: DEFAULT_THICKNESS_MM,
+        materialName: "Carbon steel",
+        modulusMpa: STEEL_MODULUS_MPA,
+      },
     ],
     ...defaultJointSettings(),
   };

@@ -62,7 +62,13 @@ export function collectClosedContours(entities: IEntity[]): { contours: Contour[
   for (const e of entities) {
     const any = e as unknown as Record<string, any>;
     if (e.type === "CIRCLE" && any.center && any.radius > 0) {
-      contours.push({ kind: "circle", cx: any.center.x, cy: any.center.y, r: any.radius, layer: e.layer ?? "0" });
+      contours.push({
+        kind: "circle",
+        cx: any.center.x,
+        cy: any.center.y,
+        r: any.radius,
+        layer: e.layer ?? "0",
+      });
     } else if (e.type === "LWPOLYLINE" || e.type === "POLYLINE") {
       const pts = polylinePoints((any.vertices ?? []) as BulgeVertex[], Boolean(any.shape));
       if (pts) contours.push({ kind: "polyline", points: pts, layer: e.layer ?? "0" });

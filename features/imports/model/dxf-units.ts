@@ -13,6 +13,9 @@ const MM_PER_UNIT: Record<number, { mm: number; label: string }> = {
 export function resolveDxfUnits(insunits: unknown): { mmPerUnit: number; label: string } | { error: string } {
   const code = insunits === undefined || insunits === null ? 0 : Number(insunits);
   const hit = MM_PER_UNIT[code];
-  if (!hit) return { error: `The drawing's units ($INSUNITS = ${String(insunits)}) are not supported; save it in mm or inches.` };
+  if (!hit)
+    return {
+      error: `The drawing's units ($INSUNITS = ${String(insunits)}) are not supported; save it in mm or inches.`,
+    };
   return { mmPerUnit: hit.mm, label: hit.label };
 }

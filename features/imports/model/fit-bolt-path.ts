@@ -23,11 +23,25 @@ export interface CircleFit {
 /** Algebraic least-squares circle (solves x² + y² + Dx + Ey + F = 0). Example: the 4 corners of a 2×2 square → centre (0,0), r = √2. */
 export function fitCircle(points: PointMm[]): CircleFit | null {
   if (points.length < 3) return null;
-  let sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0, sxz = 0, syz = 0, sz = 0;
+  let sx = 0,
+    sy = 0,
+    sxx = 0,
+    syy = 0,
+    sxy = 0,
+    sxz = 0,
+    syz = 0,
+    sz = 0;
   const n = points.length;
   for (const { x, y } of points) {
     const z = x * x + y * y;
-    sx += x; sy += y; sxx += x * x; syy += y * y; sxy += x * y; sxz += x * z; syz += y * z; sz += z;
+    sx += x;
+    sy += y;
+    sxx += x * x;
+    syy += y * y;
+    sxy += x * y;
+    sxz += x * z;
+    syz += y * z;
+    sz += z;
   }
   // Normal equations [sxx sxy sx; sxy syy sy; sx sy n]·[D E F] = −[sxz syz sz].
   const m = [

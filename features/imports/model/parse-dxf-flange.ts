@@ -22,8 +22,7 @@ export interface ImportedHole {
 }
 
 export type ImportedOutline =
-  | { kind: "circle"; diameterMm: number }
-  | { kind: "polygon"; points: { x: number; y: number }[] };
+  { kind: "circle"; diameterMm: number } | { kind: "polygon"; points: { x: number; y: number }[] };
 
 export interface DxfFlangeImport {
   unitsLabel: string;
@@ -47,7 +46,10 @@ export function parseDxfFlange(text: string): ParseResult<DxfFlangeImport> {
   try {
     parsed = new DxfParser().parseSync(text);
   } catch (err) {
-    return { ok: false, message: `This file could not be read as a DXF drawing (${(err as Error).message}).` };
+    return {
+      ok: false,
+      message: `This file could not be read as a DXF drawing (${(err as Error).message}).`,
+    };
   }
   if (!parsed) return { ok: false, message: "This file could not be read as a DXF drawing." };
   const units = resolveDxfUnits((parsed.header as Record<string, unknown> | undefined)?.$INSUNITS);
@@ -55,14 +57,23 @@ export function parseDxfFlange(text: string): ParseResult<DxfFlangeImport> {
   const k = units.mmPerUnit;
 
   const { contours, skipped } = collectClosedContours(parsed.entities ?? []);
-  if (contours.length === 0) return { ok: false, message: "The drawing has no closed outline: draw the flange as a closed polyline or a circle." };
+  if (contours.length === 0)
+    return {
+      ok: false,
+      message: "The drawing has no closed outline: draw the flange as a closed polyline or a circle.",
+    };
 
   const outline = contours.reduce((best, c) => (contourArea(c) > contourArea(best) ? c : best));
   const centre = contourCentre(outline);
   const inside = (x: number, y: number) =>
-    outline.kind === "circle" ? Math.hypot(x - outline.cx, y - outline.cy) < outline.r : pointInPolygon(outline.points, x, y);
+    outline.kind === "circle"
+      ? Math.hypot(x - outline.cx, y - outline.cy) < outline.r
+      : pointInPolygon(outline.points, x, y);
 
-  const circles = contours.filter((c): c is Extract<Contour, { kind: "circle" }> => c !== outline && c.kind === "circle" && inside(c.cx, c.cy));
+  const circles = contours.filter(
+    (c): c is Extract<Contour, { kind: "circle" }> =>
+      c !== outline && c.kind === "circle" && inside(c.cx, c.cy),
+  );
   const otherContours = contours.length - 1 - circles.length;
 
   const groups = new Map<number, typeof circles>();
@@ -73,7 +84,11 @@ export function parseDxfFlange(text: string): ParseResult<DxfFlangeImport> {
   const ranked = [...groups.entries()].sort((a, b) => b[1].length - a[1].length || a[0] - b[0]);
   const warnings: string[] = [];
   if (ranked.length === 0 || ranked[0][1].length < 2) {
-    return { ok: false, message: "No bolt holes found: the drawing needs at least two circles of one diameter inside the outline." };
+    return {
+      ok: false,
+      message:
+        "No bolt holes found: the drawing needs at least two circles of one diameter inside the outline.",
+    };
   }
   const [, holes] = ranked[0];
   const rest = ranked.slice(1).flatMap(([, cs]) => cs);
@@ -81,12 +96,17 @@ export function parseDxfFlange(text: string): ParseResult<DxfFlangeImport> {
     .filter((c) => Math.hypot(c.cx - centre.x, c.cy - centre.y) < c.r && c.r > holes[0].r)
     .sort((a, b) => b.r - a.r)[0];
   const ignoredCircles = rest.length - (boreCircle ? 1 : 0);
-  if (ignoredCircles > 0) warnings.push(`${ignoredCircles} other circle(s) inside the outline were not used (neither bolt holes nor the bore).`);
+  if (ignoredCircles > 0)
+    warnings.push(
+      `${ignoredCircles} other circle(s) inside the outline were not used (neither bolt holes nor the bore).`,
+    );
   if (otherContours > 0) warnings.push(`${otherContours} other closed contour(s) were not used.`);
 
   const toMm = (p: Pt) => ({ x: (p.x - centre.x) * k, y: (p.y - centre.y) * k });
   const importedOutline: ImportedOutline =
-    outline.kind === "circle" ? { kind: "circle", diameterMm: 2 * outline.r * k } : { kind: "polygon", points: outline.points.map(toMm) };
+    outline.kind === "circle"
+      ? { kind: "circle", diameterMm: 2 * outline.r * k }
+      : { kind: "polygon", points: outline.points.map(toMm) };
 
   return {
     ok: true,

@@ -24,26 +24,47 @@ export type PreparedImport =
 
 const r1 = (v: number) => Math.round(v * 10) / 10;
 
-export function prepareImport(input: { dxfText: string; csvText?: string | null; csvUnit?: "mm" | "in"; name: string; units: UnitSystem; equipmentTag?: string }): PreparedImport {
+export function prepareImport(input: {
+  dxfText: string;
+  csvText?: string | null;
+  csvUnit?: "mm" | "in";
+  name: string;
+  units: UnitSystem;
+  equipmentTag?: string;
+}): PreparedImport {
   const parsed = parseDxfFlange(input.dxfText);
   if (!parsed.ok) return { ok: false, message: parsed.message, field: "dxf" };
   const dxf = parsed.value;
   let holes = dxf.boltHoles;
   let boltsFrom: ImportSummary["boltsFrom"] = "dxf";
   if (input.csvText && input.csvText.trim()) {
-    const csv = parseBoltCsv(input.csvText, { unit: input.csvUnit ?? "mm", defaultDiameterMm: dxf.boltHoles[0]?.diameterMm });
+    const csv = parseBoltCsv(input.csvText, {
+      unit: input.csvUnit ?? "mm",
+      defaultDiameterMm: dxf.boltHoles[0]?.diameterMm,
+    });
     if (!csv.ok) return { ok: false, message: csv.message, field: "csv", rowErrors: csv.rowErrors };
     // CSV coordinates are taken relative to the flange centre (the origin of the design).
     holes = csv.holes;
     boltsFrom = "csv";
   }
-  const built = buildImportedDesign({ name: input.name || "Imported flange", units: input.units, equipmentTag: input.equipmentTag }, { outline: dxf.outline, boltHoles: holes, bore: dxf.bore });
+  const built = buildImportedDesign(
+    { name: input.name || "Imported flange", units: input.units, equipmentTag: input.equipmentTag },
+    { outline: dxf.outline, boltHoles: holes, bore: dxf.bore },
+  );
   const issues = validateJointDesign(built.design);
-  if (issues.length > 0) return { ok: false, message: `The imported geometry is not a valid joint: ${issues.slice(0, 3).map(formatIssue).join("; ")}`, field: "design" };
+  if (issues.length > 0)
+    return {
+      ok: false,
+      message: `The imported geometry is not a valid joint: ${issues.slice(0, 3).map(formatIssue).join("; ")}`,
+      field: "design",
+    };
   const o = dxf.outline;
   const xs = o.kind === "polygon" ? o.points.map((p) => p.x) : [];
   const ys = o.kind === "polygon" ? o.points.map((p) => p.y) : [];
-  const outlineText = o.kind === "circle" ? `circle Ø ${r1(o.diameterMm)} mm` : `polygon, ${o.points.length} points, ${r1(Math.max(...xs) - Math.min(...xs))} × ${r1(Math.max(...ys) - Math.min(...ys))} mm`;
+  const outlineText =
+    o.kind === "circle"
+      ? `circle Ø ${r1(o.diameterMm)} mm`
+      : `polygon, ${o.points.length} points, ${r1(Math.max(...xs) - Math.min(...xs))} × ${r1(Math.max(...ys) - Math.min(...ys))} mm`;
   const bp = built.design.boltPath;
   return {
     ok: true,
@@ -55,9 +76,19 @@ export function prepareImport(input: { dxfText: string; csvText?: string | null;
       holeCount: holes.length,
       holeDiameterMm: built.holeDiameterMm,
       boreDiameterMm: dxf.bore?.diameterMm ?? null,
-      boltPathText: bp.kind === "circle" ? `bolt circle Ø ${r1(bp.diameterMm)} mm (fitted through the hole centres)` : `outline offset ${r1(bp.offsetMm)} mm inward (mean edge distance of the holes)`,
+      boltPathText:
+        bp.kind === "circle"
+          ? `bolt circle Ø ${r1(bp.diameterMm)} mm (fitted through the hole centres)`
+          : `outline offset ${r1(bp.offsetMm)} mm inward (mean edge distance of the holes)`,
       boltsFrom,
-      warnings: [...dxf.warnings, ...(built.fit.maxOffPathMm > 0.05 ? [`Holes sit up to ${r1(built.fit.maxOffPathMm)} mm off the fitted bolt path; they keep their drawn positions.`] : [])],
+      warnings: [
+        ...dxf.warnings,
+        ...(built.fit.maxOffPathMm > 0.05
+          ? [
+              `Holes sit up to ${r1(built.fit.maxOffPathMm)} mm off the fitted bolt path; they keep their drawn positions.`,
+            ]
+          : []),
+      ],
     },
   };
 }

@@ -14,7 +14,10 @@ const TAG_TEXT: Record<RowConfidence, string> = {
 export function OriginBadge({ confidence, hidden }: { confidence: RowConfidence; hidden: boolean }) {
   const ours = confidence === "organisation";
   return (
-    <span className={`inline-block whitespace-nowrap rounded-plate px-1.5 py-0.5 text-micro ${ours ? "bg-brass-100 text-brass-700" : "bg-steel-100 text-ink-600"}`} title={`confidence: ${confidence}`}>
+    <span
+      className={`inline-block whitespace-nowrap rounded-plate px-1.5 py-0.5 text-micro ${ours ? "bg-brass-100 text-brass-700" : "bg-steel-100 text-ink-600"}`}
+      title={`confidence: ${confidence}`}
+    >
       {TAG_TEXT[confidence]}
       {hidden ? " · hidden" : ""}
     </span>

@@ -9,7 +9,8 @@ export const GASKET_CHOICES_KEY = "/api/v1/library/gaskets";
 const BUILTIN = builtinGaskets();
 
 async function fetchChoices(url: string): Promise<GasketChoiceDto[]> {
-  return (await fetchJson<{ rows: GasketChoiceDto[] }>(url, "The Stockroom gaskets could not be loaded.")).rows;
+  return (await fetchJson<{ rows: GasketChoiceDto[] }>(url, "The Stockroom gaskets could not be loaded."))
+    .rows;
 }
 
 /**
@@ -17,13 +18,22 @@ async function fetchChoices(url: string): Promise<GasketChoiceDto[]> {
  * own Stockroom rows (GET /api/v1/library/gaskets). Until the list arrives, or when it cannot be
  * loaded, the built-in rows stand in (`loaded` false) so the form never waits on the network.
  */
-export function useGasketChoices(enabled = true): { rows: GasketChoiceDto[]; loaded: boolean; error: string | null } {
-  const { data, error } = useSWR(enabled ? GASKET_CHOICES_KEY : null, fetchChoices, { revalidateOnFocus: true, dedupingInterval: 10_000 });
+export function useGasketChoices(enabled = true): {
+  rows: GasketChoiceDto[];
+  loaded: boolean;
+  error: string | null;
+} {
+  const { data, error } = useSWR(enabled ? GASKET_CHOICES_KEY : null, fetchChoices, {
+    revalidateOnFocus: true,
+    dedupingInterval: 10_000,
+  });
   return { rows: data ?? BUILTIN, loaded: !!data, error: error ? (error as Error).message : null };
 }
 
 /** The id of the choice a design's copied material came from ("org:…" kept; a catalogue id gets "builtin:"). */
 export function choiceIdOfMaterial(catalogueId: string | undefined): string | null {
   if (!catalogueId) return null;
-  return catalogueId.startsWith("org:") || catalogueId.startsWith("builtin:") ? catalogueId : `builtin:${catalogueId}`;
+  return catalogueId.startsWith("org:") || catalogueId.startsWith("builtin:")
+    ? catalogueId
+    : `builtin:${catalogueId}`;
 }

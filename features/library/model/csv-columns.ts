@@ -5,21 +5,67 @@ import type { LibraryKind } from "./dto";
 
 export const CSV_COLUMNS: Record<LibraryKind, readonly string[]> = {
   gasket: [
-    "name", "gasket_type", "m", "y_mpa", "qmin_l1", "qsmin_l1", "qmin_l01", "qsmin_l01", "qmin_l001", "qsmin_l001",
-    "qsmax_mpa", "pqr", "eg_mpa", "modulus_mpa", "thickness_mm", "source", "edition",
+    "name",
+    "gasket_type",
+    "m",
+    "y_mpa",
+    "qmin_l1",
+    "qsmin_l1",
+    "qmin_l01",
+    "qsmin_l01",
+    "qmin_l001",
+    "qsmin_l001",
+    "qsmax_mpa",
+    "pqr",
+    "eg_mpa",
+    "modulus_mpa",
+    "thickness_mm",
+    "source",
+    "edition",
   ],
   // One line per size range; lines with the same name form one material.
-  bolting: ["name", "modulus_mpa", "max_diameter_mm", "proof_mpa", "yield_mpa", "tensile_mpa", "allowable_mpa", "source", "edition"],
+  bolting: [
+    "name",
+    "modulus_mpa",
+    "max_diameter_mm",
+    "proof_mpa",
+    "yield_mpa",
+    "tensile_mpa",
+    "allowable_mpa",
+    "source",
+    "edition",
+  ],
   flange: [
-    "standard", "pressure_class", "size", "outside_diameter_mm", "bore_diameter_mm", "bolt_circle_diameter_mm", "bolt_count",
-    "bolt_designation", "bolt_diameter_mm", "hole_diameter_mm", "source", "edition",
+    "standard",
+    "pressure_class",
+    "size",
+    "outside_diameter_mm",
+    "bore_diameter_mm",
+    "bolt_circle_diameter_mm",
+    "bolt_count",
+    "bolt_designation",
+    "bolt_diameter_mm",
+    "hole_diameter_mm",
+    "source",
+    "edition",
   ],
 };
 
 export const REQUIRED_COLUMNS: Record<LibraryKind, readonly string[]> = {
   gasket: ["name", "gasket_type", "m", "y_mpa", "modulus_mpa", "thickness_mm", "source"],
   bolting: ["name", "modulus_mpa", "max_diameter_mm", "yield_mpa", "tensile_mpa", "source"],
-  flange: ["standard", "pressure_class", "size", "outside_diameter_mm", "bolt_circle_diameter_mm", "bolt_count", "bolt_designation", "bolt_diameter_mm", "hole_diameter_mm", "source"],
+  flange: [
+    "standard",
+    "pressure_class",
+    "size",
+    "outside_diameter_mm",
+    "bolt_circle_diameter_mm",
+    "bolt_count",
+    "bolt_designation",
+    "bolt_diameter_mm",
+    "hole_diameter_mm",
+    "source",
+  ],
 };
 
 export const KIND_LABELS: Record<LibraryKind, { plural: string; file: string }> = {

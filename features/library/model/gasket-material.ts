@@ -9,7 +9,10 @@ import type { GasketChoiceDto, LeakageClass } from "./dto";
  * core catalogue's own id (so the analysis lists its catalogue edition); an organisation's row
  * keeps its "org:<uuid>" id, which names where the copy came from.
  */
-export function toGasketMaterial(choice: GasketChoiceDto, leakageClass: LeakageClass = "L0.1"): GasketMaterial {
+export function toGasketMaterial(
+  choice: GasketChoiceDto,
+  leakageClass: LeakageClass = "L0.1",
+): GasketMaterial {
   const t = choice.tightness[leakageClass];
   return {
     name: choice.name,

@@ -3,7 +3,14 @@
 import { parse } from "csv-parse/sync";
 import { stringify } from "csv-stringify/sync";
 import { z } from "zod";
-import { boltingInputSchema, flangeInputSchema, gasketInputSchema, type BoltingInput, type FlangeInput, type GasketInput } from "../schema";
+import {
+  boltingInputSchema,
+  flangeInputSchema,
+  gasketInputSchema,
+  type BoltingInput,
+  type FlangeInput,
+  type GasketInput,
+} from "../schema";
 import { CSV_COLUMNS, REQUIRED_COLUMNS } from "./csv-columns";
 import type { BoltingChoiceDto, FlangeTemplateChoiceDto, GasketChoiceDto, LibraryKind } from "./dto";
 
@@ -20,13 +27,21 @@ export interface CsvPreviewRow {
   errors: CsvFieldError[];
 }
 
-type InputOf<K extends LibraryKind> = K extends "gasket" ? GasketInput : K extends "bolting" ? BoltingInput : FlangeInput;
+type InputOf<K extends LibraryKind> = K extends "gasket"
+  ? GasketInput
+  : K extends "bolting"
+    ? BoltingInput
+    : FlangeInput;
 
 export type ParsedLibraryCsv<K extends LibraryKind> =
   | { ok: true; rows: CsvPreviewRow[]; inputs: { line: number; input: InputOf<K> }[] }
   | { ok: false; message: string; rows: CsvPreviewRow[]; errors: CsvFieldError[] };
 
-const SCHEMAS = { gasket: gasketInputSchema, bolting: boltingInputSchema, flange: flangeInputSchema } as const;
+const SCHEMAS = {
+  gasket: gasketInputSchema,
+  bolting: boltingInputSchema,
+  flange: flangeInputSchema,
+} as const;
 export const MAX_CSV_ROWS = 2000;
 
 export function describeCsvError(e: CsvFieldError): string {
@@ -38,15 +53,39 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
   try {
     records = parse(text, { skip_empty_lines: true, trim: true, bom: true, relax_column_count: true });
   } catch (err) {
-    return { ok: false, message: `The file could not be read as CSV: ${(err as Error).message}`, rows: [], errors: [] };
+    return {
+      ok: false,
+      message: `The file could not be read as CSV: ${(err as Error).message}`,
+      rows: [],
+      errors: [],
+    };
   }
-  if (records.length < 2) return { ok: false, message: "The file has no rows under its header.", rows: [], errors: [] };
+  if (records.length < 2)
+    return { ok: false, message: "The file has no rows under its header.", rows: [], errors: [] };
   const header = records[0].map((h) => h.trim().toLowerCase());
   const missing = REQUIRED_COLUMNS[kind].filter((c) => !header.includes(c));
-  if (missing.length > 0) return { ok: false, message: `The header is missing the column(s): ${missing.join(", ")}.`, rows: [], errors: [] };
+  if (missing.length > 0)
+    return {
+      ok: false,
+      message: `The header is missing the column(s): ${missing.join(", ")}.`,
+      rows: [],
+      errors: [],
+    };
   const unknown = header.filter((h) => !CSV_COLUMNS[kind].includes(h));
-  if (unknown.length > 0) return { ok: false, message: `Unknown column(s): ${unknown.join(", ")}. Expected: ${CSV_COLUMNS[kind].join(", ")}.`, rows: [], errors: [] };
-  if (records.length - 1 > MAX_CSV_ROWS) return { ok: false, message: `The file has more than ${MAX_CSV_ROWS} rows; split it.`, rows: [], errors: [] };
+  if (unknown.length > 0)
+    return {
+      ok: false,
+      message: `Unknown column(s): ${unknown.join(", ")}. Expected: ${CSV_COLUMNS[kind].join(", ")}.`,
+      rows: [],
+      errors: [],
+    };
+  if (records.length - 1 > MAX_CSV_ROWS)
+    return {
+      ok: false,
+      message: `The file has more than ${MAX_CSV_ROWS} rows; split it.`,
+      rows: [],
+      errors: [],
+    };
 
   const schema = SCHEMAS[kind] as unknown as z.ZodType<InputOf<K>>;
   const rows: CsvPreviewRow[] = [];
@@ -56,16 +95,24 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
     const line = i + 2;
     const cells = Object.fromEntries(header.map((h, j) => [h, record[j] ?? ""]));
     const errors: CsvFieldError[] = [];
-    if (record.length > header.length) errors.push({ line, field: "(row)", message: `has ${record.length} cells, the header has ${header.length}` });
+    if (record.length > header.length)
+      errors.push({
+        line,
+        field: "(row)",
+        message: `has ${record.length} cells, the header has ${header.length}`,
+      });
     const result = schema.safeParse(cells);
     if (!result.success) {
-      for (const [field, messages] of Object.entries(z.flattenError(result.error).fieldErrors as Record<string, string[]>)) {
+      for (const [field, messages] of Object.entries(
+        z.flattenError(result.error).fieldErrors as Record<string, string[]>,
+      )) {
         errors.push({ line, field, message: messages[0] });
       }
     } else {
       const key = duplicateKey(kind, result.data);
       const earlier = seen.get(key);
-      if (earlier !== undefined) errors.push({ line, field: kind === "flange" ? "size" : "name", message: `repeats row ${earlier}` });
+      if (earlier !== undefined)
+        errors.push({ line, field: kind === "flange" ? "size" : "name", message: `repeats row ${earlier}` });
       else seen.set(key, line);
       if (errors.length === 0) inputs.push({ line, input: result.data });
     }
@@ -73,8 +120,14 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
   });
   const errors = rows.flatMap((r) => r.errors);
   if (errors.length > 0) {
-    const more = errors.length > 1 ? ` (and ${errors.length - 1} more problem${errors.length > 2 ? "s" : ""})` : "";
-    return { ok: false, message: `${describeCsvError(errors[0])}${more}. Nothing was imported.`, rows, errors };
+    const more =
+      errors.length > 1 ? ` (and ${errors.length - 1} more problem${errors.length > 2 ? "s" : ""})` : "";
+    return {
+      ok: false,
+      message: `${describeCsvError(errors[0])}${more}. Nothing was imported.`,
+      rows,
+      errors,
+    };
   }
   return { ok: true, rows, inputs };
 }
@@ -97,11 +150,23 @@ const cell = (v: number | string | null | undefined) => (v === null || v === und
 export function gasketsToCsv(rows: GasketChoiceDto[]): string {
   return stringify(
     rows.map((g) => [
-      g.name, g.gasketType, g.m, g.yMpa,
-      cell(g.tightness["L1.0"]?.qMinMpa), cell(g.tightness["L1.0"]?.qsMinMpa),
-      cell(g.tightness["L0.1"]?.qMinMpa), cell(g.tightness["L0.1"]?.qsMinMpa),
-      cell(g.tightness["L0.01"]?.qMinMpa), cell(g.tightness["L0.01"]?.qsMinMpa),
-      cell(g.qsMaxMpa), cell(g.pqr), cell(g.egMpa), g.modulusMpa, g.thicknessMm, g.source, g.edition,
+      g.name,
+      g.gasketType,
+      g.m,
+      g.yMpa,
+      cell(g.tightness["L1.0"]?.qMinMpa),
+      cell(g.tightness["L1.0"]?.qsMinMpa),
+      cell(g.tightness["L0.1"]?.qMinMpa),
+      cell(g.tightness["L0.1"]?.qsMinMpa),
+      cell(g.tightness["L0.01"]?.qMinMpa),
+      cell(g.tightness["L0.01"]?.qsMinMpa),
+      cell(g.qsMaxMpa),
+      cell(g.pqr),
+      cell(g.egMpa),
+      g.modulusMpa,
+      g.thicknessMm,
+      g.source,
+      g.edition,
     ]),
     { header: true, columns: [...CSV_COLUMNS.gasket] },
   );
@@ -109,7 +174,19 @@ export function gasketsToCsv(rows: GasketChoiceDto[]): string {
 
 export function boltingToCsv(rows: BoltingChoiceDto[]): string {
   return stringify(
-    rows.flatMap((b) => b.ranges.map((r) => [b.name, b.modulusMpa, r.maxDiameterMm, cell(r.proofMpa), r.yieldMpa, r.tensileMpa, cell(r.allowableMpa), b.source, b.edition])),
+    rows.flatMap((b) =>
+      b.ranges.map((r) => [
+        b.name,
+        b.modulusMpa,
+        r.maxDiameterMm,
+        cell(r.proofMpa),
+        r.yieldMpa,
+        r.tensileMpa,
+        cell(r.allowableMpa),
+        b.source,
+        b.edition,
+      ]),
+    ),
     { header: true, columns: [...CSV_COLUMNS.bolting] },
   );
 }
@@ -117,8 +194,18 @@ export function boltingToCsv(rows: BoltingChoiceDto[]): string {
 export function flangesToCsv(rows: FlangeTemplateChoiceDto[]): string {
   return stringify(
     rows.map((f) => [
-      f.standard, f.pressureClass, f.size, f.outsideDiameterMm, cell(f.boreDiameterMm), f.boltCircleDiameterMm, f.boltCount,
-      f.boltDesignation, f.boltDiameterMm, f.holeDiameterMm, f.source, f.edition,
+      f.standard,
+      f.pressureClass,
+      f.size,
+      f.outsideDiameterMm,
+      cell(f.boreDiameterMm),
+      f.boltCircleDiameterMm,
+      f.boltCount,
+      f.boltDesignation,
+      f.boltDiameterMm,
+      f.holeDiameterMm,
+      f.source,
+      f.edition,
     ]),
     { header: true, columns: [...CSV_COLUMNS.flange] },
   );

@@ -7,7 +7,10 @@ import { FormStatus } from "@/features/ui/form-status";
 import type { ReviewCheck } from "../model/review-checks";
 import type { CommentDto } from "../review-dto";
 
-export type AddCommentAction = (previous: ActionResult<CommentDto> | null, formData: FormData) => Promise<ActionResult<CommentDto>>;
+export type AddCommentAction = (
+  previous: ActionResult<CommentDto> | null,
+  formData: FormData,
+) => Promise<ActionResult<CommentDto>>;
 
 /** The revision's comment thread. A comment pointing at a bolt or check highlights it when clicked. */
 export function CommentThread(props: {
@@ -28,19 +31,38 @@ export function CommentThread(props: {
 
   return (
     <section aria-labelledby="comments-heading" className="flex flex-col gap-3">
-      <h2 id="comments-heading" className="text-lead font-semibold text-ink-900">Comments</h2>
-      {props.comments.length === 0 ? <p className="text-body text-ink-500">No comments on this revision yet.</p> : null}
+      <h2 id="comments-heading" className="text-lead font-semibold text-ink-900">
+        Comments
+      </h2>
+      {props.comments.length === 0 ? (
+        <p className="text-body text-ink-500">No comments on this revision yet.</p>
+      ) : null}
       <ol className="flex flex-col gap-2" aria-label="Comment thread">
         {props.comments.map((c) => {
           const active = c.id === props.activeCommentId;
-          const label = c.targetKind === "bolt" ? `Bolt ${c.targetId}` : c.targetKind === "check" ? `Check: ${checkTitles.get(c.targetId ?? "") ?? c.targetId}` : null;
+          const label =
+            c.targetKind === "bolt"
+              ? `Bolt ${c.targetId}`
+              : c.targetKind === "check"
+                ? `Check: ${checkTitles.get(c.targetId ?? "") ?? c.targetId}`
+                : null;
           return (
-            <li key={c.id} data-testid="comment" className={`rounded-plate border p-2 ${active ? "border-brass-500 bg-brass-50" : "border-ink-100 bg-white"}`}>
+            <li
+              key={c.id}
+              data-testid="comment"
+              className={`rounded-plate border p-2 ${active ? "border-brass-500 bg-brass-50" : "border-ink-100 bg-white"}`}
+            >
               <p className="text-micro text-ink-500">
-                <span className="font-medium text-ink-800">{c.authorName}</span> · <time dateTime={c.at}>{c.at.slice(0, 16).replace("T", " ")}</time>
+                <span className="font-medium text-ink-800">{c.authorName}</span> ·{" "}
+                <time dateTime={c.at}>{c.at.slice(0, 16).replace("T", " ")}</time>
               </p>
               {label ? (
-                <button type="button" aria-pressed={active} className="mt-1 text-micro font-semibold text-brass-700 underline" onClick={() => props.onPickComment(active ? null : c)}>
+                <button
+                  type="button"
+                  aria-pressed={active}
+                  className="mt-1 text-micro font-semibold text-brass-700 underline"
+                  onClick={() => props.onPickComment(active ? null : c)}
+                >
                   Show {label} on the drawing
                 </button>
               ) : null}
@@ -57,22 +79,46 @@ export function CommentThread(props: {
           <input type="hidden" name="targetId" value={id} />
           <label className="text-table text-ink-700">
             Points at
-            <select className="mt-1 block w-full rounded-plate border border-ink-200 bg-white p-1.5 text-body" value={target} onChange={(e) => setTarget(e.target.value)}>
+            <select
+              className="mt-1 block w-full rounded-plate border border-ink-200 bg-white p-1.5 text-body"
+              value={target}
+              onChange={(e) => setTarget(e.target.value)}
+            >
               <option value="">The whole revision</option>
               <optgroup label="Bolts">
-                {props.boltIds.map((b) => <option key={b} value={`bolt:${b}`}>Bolt {b}</option>)}
+                {props.boltIds.map((b) => (
+                  <option key={b} value={`bolt:${b}`}>
+                    Bolt {b}
+                  </option>
+                ))}
               </optgroup>
               <optgroup label="Checks">
-                {props.checks.map((c) => <option key={c.id} value={`check:${c.id}`}>{c.title} ({c.id})</option>)}
+                {props.checks.map((c) => (
+                  <option key={c.id} value={`check:${c.id}`}>
+                    {c.title} ({c.id})
+                  </option>
+                ))}
               </optgroup>
             </select>
           </label>
           <label className="text-table text-ink-700">
             Comment
-            <textarea name="body" required rows={3} maxLength={5000} className="mt-1 block w-full rounded-plate border border-ink-200 bg-white p-1.5 text-body" />
+            <textarea
+              name="body"
+              required
+              rows={3}
+              maxLength={5000}
+              className="mt-1 block w-full rounded-plate border border-ink-200 bg-white p-1.5 text-body"
+            />
           </label>
-          {state && !state.ok && state.fieldErrors ? <p className="text-table text-verdict-fail">{Object.values(state.fieldErrors).flat().join(" ")}</p> : null}
-          <button type="submit" className={buttonStyles.secondary} disabled={pending}>Post comment</button>
+          {state && !state.ok && state.fieldErrors ? (
+            <p className="text-table text-verdict-fail">
+              {Object.values(state.fieldErrors).flat().join(" ")}
+            </p>
+          ) : null}
+          <button type="submit" className={buttonStyles.secondary} disabled={pending}>
+            Post comment
+          </button>
           <FormStatus state={state} success="Comment posted." />
         </form>
       ) : null}

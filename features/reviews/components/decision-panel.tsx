@@ -15,7 +15,10 @@ export interface TransitionSummaryView {
   status: ReviewStatus;
   href: string;
 }
-export type ReviewTransitionAction = (previous: ActionResult<TransitionSummaryView> | null, formData: FormData) => Promise<ActionResult<TransitionSummaryView>>;
+export type ReviewTransitionAction = (
+  previous: ActionResult<TransitionSummaryView> | null,
+  formData: FormData,
+) => Promise<ActionResult<TransitionSummaryView>>;
 
 export interface DecisionActions {
   submitRevisionAction: ReviewTransitionAction;
@@ -57,21 +60,33 @@ export function DecisionPanel(props: {
 
   const needing = checksNeedingJustification(props.checks);
   const { canSubmit, canApprove, canReturn, canStartNew } = props.permissions;
-  const fieldError = (state: ActionResult<unknown> | null, key: string) => (state && !state.ok ? state.fieldErrors?.[key]?.join(" ") : undefined);
+  const fieldError = (state: ActionResult<unknown> | null, key: string) =>
+    state && !state.ok ? state.fieldErrors?.[key]?.join(" ") : undefined;
 
   return (
-    <section aria-labelledby="decision-heading" className="flex flex-col gap-4 rounded-plate bg-white p-panel shadow-plate">
-      <h2 id="decision-heading" className="text-lead font-semibold text-ink-900">Sign-off</h2>
+    <section
+      aria-labelledby="decision-heading"
+      className="flex flex-col gap-4 rounded-plate bg-white p-panel shadow-plate"
+    >
+      <h2 id="decision-heading" className="text-lead font-semibold text-ink-900">
+        Sign-off
+      </h2>
       {!canSubmit && !canApprove && !canReturn && !canStartNew ? (
-        <p className="text-body text-ink-600">{props.independenceNote ?? "Nothing for you to decide on this revision."}</p>
+        <p className="text-body text-ink-600">
+          {props.independenceNote ?? "Nothing for you to decide on this revision."}
+        </p>
       ) : null}
 
       {canSubmit ? (
         <form action={submitAction} className="flex flex-col gap-2" aria-label="Submit for review">
           <RevisionRef designId={props.designId} number={props.number} />
           <input type="hidden" name="baseVersion" value={props.version} />
-          <p className="text-table text-ink-700">Submitting freezes this revision: the server recomputes the result and records its content hash.</p>
-          <button type="submit" className={buttonStyles.primary} disabled={submitting}>{props.status === "returned" ? "Resubmit for review" : "Submit for review"}</button>
+          <p className="text-table text-ink-700">
+            Submitting freezes this revision: the server recomputes the result and records its content hash.
+          </p>
+          <button type="submit" className={buttonStyles.primary} disabled={submitting}>
+            {props.status === "returned" ? "Resubmit for review" : "Submit for review"}
+          </button>
           <FormStatus state={submitState} success="Submitted for review." />
         </form>
       ) : null}
@@ -82,13 +97,24 @@ export function DecisionPanel(props: {
           {needing.length > 0 ? (
             <fieldset className="flex flex-col gap-2">
               <legend className="text-table font-semibold text-ink-800">
-                {needing.length} check{needing.length === 1 ? "" : "s"} warn or fail: write why each is acceptable
+                {needing.length} check{needing.length === 1 ? "" : "s"} warn or fail: write why each is
+                acceptable
               </legend>
               {needing.map((c) => (
                 <label key={c.id} className="text-table text-ink-700">
                   Justification for {c.title} ({c.id})
-                  <textarea name={`justification:${c.id}`} required rows={2} maxLength={5000} className={fieldClass} />
-                  {fieldError(approveState, `justifications.${c.id}`) ? <span className="text-verdict-fail">{fieldError(approveState, `justifications.${c.id}`)}</span> : null}
+                  <textarea
+                    name={`justification:${c.id}`}
+                    required
+                    rows={2}
+                    maxLength={5000}
+                    className={fieldClass}
+                  />
+                  {fieldError(approveState, `justifications.${c.id}`) ? (
+                    <span className="text-verdict-fail">
+                      {fieldError(approveState, `justifications.${c.id}`)}
+                    </span>
+                  ) : null}
                 </label>
               ))}
             </fieldset>
@@ -99,20 +125,30 @@ export function DecisionPanel(props: {
             Approval note (optional)
             <textarea name="comment" rows={2} maxLength={5000} className={fieldClass} />
           </label>
-          <button type="submit" className={buttonStyles.primary} disabled={approving}>Approve revision</button>
+          <button type="submit" className={buttonStyles.primary} disabled={approving}>
+            Approve revision
+          </button>
           <FormStatus state={approveState} success="Approved." />
         </form>
       ) : null}
 
       {canReturn ? (
-        <form action={returnAction} className="flex flex-col gap-2 border-t border-ink-100 pt-3" aria-label="Return to designer">
+        <form
+          action={returnAction}
+          className="flex flex-col gap-2 border-t border-ink-100 pt-3"
+          aria-label="Return to designer"
+        >
           <RevisionRef designId={props.designId} number={props.number} />
           <label className="text-table text-ink-700">
             What needs to change
             <textarea name="comment" required rows={3} maxLength={5000} className={fieldClass} />
           </label>
-          {fieldError(returnState, "comment") ? <p className="text-table text-verdict-fail">{fieldError(returnState, "comment")}</p> : null}
-          <button type="submit" className={buttonStyles.danger} disabled={returning}>Return to designer</button>
+          {fieldError(returnState, "comment") ? (
+            <p className="text-table text-verdict-fail">{fieldError(returnState, "comment")}</p>
+          ) : null}
+          <button type="submit" className={buttonStyles.danger} disabled={returning}>
+            Return to designer
+          </button>
           <FormStatus state={returnState} success="Returned to the designer." />
         </form>
       ) : null}
@@ -120,12 +156,16 @@ export function DecisionPanel(props: {
       {canStartNew ? (
         <form action={newAction} className="flex flex-col gap-2" aria-label="Start a new revision">
           <RevisionRef designId={props.designId} number={props.number} />
-          <button type="submit" className={buttonStyles.secondary} disabled={starting}>Start revision {props.number + 1}</button>
+          <button type="submit" className={buttonStyles.secondary} disabled={starting}>
+            Start revision {props.number + 1}
+          </button>
           <FormStatus state={newState} success="Revision started." />
         </form>
       ) : null}
 
-      {props.independenceNote && (canSubmit || canStartNew) ? <p className="text-micro text-ink-500">{props.independenceNote}</p> : null}
+      {props.independenceNote && (canSubmit || canStartNew) ? (
+        <p className="text-micro text-ink-500">{props.independenceNote}</p>
+      ) : null}
     </section>
   );
 }

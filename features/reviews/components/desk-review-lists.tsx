@@ -11,9 +11,25 @@ async function fetchDesk(url: string): Promise<DeskListsDto> {
   return (await response.json()) as DeskListsDto;
 }
 
-function DeskList({ id, title, empty, items, kind }: { id: string; title: string; empty: string; items: DeskItemDto[]; kind: "waiting" | "returned" }) {
+function DeskList({
+  id,
+  title,
+  empty,
+  items,
+  kind,
+}: {
+  id: string;
+  title: string;
+  empty: string;
+  items: DeskItemDto[];
+  kind: "waiting" | "returned";
+}) {
   return (
-    <section aria-labelledby={id} className="rounded-plate bg-white p-5 shadow-plate" data-testid={`desk-${kind}`}>
+    <section
+      aria-labelledby={id}
+      className="rounded-plate bg-white p-5 shadow-plate"
+      data-testid={`desk-${kind}`}
+    >
       <h2 id={id} className="text-lead font-semibold">
         {title} <span className="num text-ink-500">({items.length})</span>
       </h2>
@@ -31,7 +47,9 @@ function DeskList({ id, title, empty, items, kind }: { id: string; title: string
                 {kind === "waiting" ? `submitted by ${item.personName}` : `returned by ${item.personName}`}
                 {item.at ? ` · ${item.at.slice(0, 16).replace("T", " ")}` : ""}
               </p>
-              {kind === "returned" && item.comment ? <p className="text-table text-ink-800">“{item.comment}”</p> : null}
+              {kind === "returned" && item.comment ? (
+                <p className="text-table text-ink-800">“{item.comment}”</p>
+              ) : null}
             </li>
           ))}
         </ul>
@@ -42,15 +60,35 @@ function DeskList({ id, title, empty, items, kind }: { id: string; title: string
 
 /** "Waiting for my review" and "Returned to me", polled with SWR so they change without a reload. */
 export function DeskReviewLists({ fallback }: { fallback: DeskListsDto }) {
-  const { data, error } = useSWR(DESK_LISTS_KEY, fetchDesk, { fallbackData: fallback, refreshInterval: DESK_REFRESH_MS, revalidateOnFocus: true });
+  const { data, error } = useSWR(DESK_LISTS_KEY, fetchDesk, {
+    fallbackData: fallback,
+    refreshInterval: DESK_REFRESH_MS,
+    revalidateOnFocus: true,
+  });
   const lists = data ?? fallback;
   return (
     <div className="grid gap-4 md:grid-cols-2">
       {lists.isApprover ? (
-        <DeskList id="desk-waiting" kind="waiting" title="Waiting for my review" empty="Nothing is waiting for your review." items={lists.waitingForMyReview} />
+        <DeskList
+          id="desk-waiting"
+          kind="waiting"
+          title="Waiting for my review"
+          empty="Nothing is waiting for your review."
+          items={lists.waitingForMyReview}
+        />
       ) : null}
-      <DeskList id="desk-returned" kind="returned" title="Returned to me" empty="Nothing has been returned to you." items={lists.returnedToMe} />
-      {error ? <p role="status" className="text-table text-verdict-fail">{error instanceof Error ? error.message : "The desk lists could not be refreshed."}</p> : null}
+      <DeskList
+        id="desk-returned"
+        kind="returned"
+        title="Returned to me"
+        empty="Nothing has been returned to you."
+        items={lists.returnedToMe}
+      />
+      {error ? (
+        <p role="status" className="text-table text-verdict-fail">
+          {error instanceof Error ? error.message : "The desk lists could not be refreshed."}
+        </p>
+      ) : null}
     </div>
   );
 }

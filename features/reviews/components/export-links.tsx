@@ -5,9 +5,15 @@ export function ExportLinks({ designId, number }: { designId: string; number: nu
   const base = `/api/v1/designs/${designId}/revisions/${number}`;
   return (
     <nav aria-label="Shop documents" className="flex flex-wrap gap-2">
-      <a className={buttonStyles.secondary} href={`${base}/sheet.pdf`}>Bolt-spacing sheet (PDF)</a>
-      <a className={buttonStyles.secondary} href={`${base}/holes.csv`}>Hole table (CSV)</a>
-      <a className={buttonStyles.secondary} href={`${base}/drilling.dxf`}>Drilling drawing (DXF)</a>
+      <a className={buttonStyles.secondary} href={`${base}/sheet.pdf`}>
+        Bolt-spacing sheet (PDF)
+      </a>
+      <a className={buttonStyles.secondary} href={`${base}/holes.csv`}>
+        Hole table (CSV)
+      </a>
+      <a className={buttonStyles.secondary} href={`${base}/drilling.dxf`}>
+        Drilling drawing (DXF)
+      </a>
     </nav>
   );
 }

@@ -6,7 +6,11 @@ export function IntegrityNotice({ integrity }: { integrity: SnapshotIntegrity })
   const text = describeIntegrity(integrity);
   if (integrity.state === "mismatch") {
     return (
-      <p role="alert" data-testid="snapshot-integrity" className="rounded-plate border-2 border-verdict-fail bg-verdict-fail-bg p-3 text-body font-semibold text-verdict-fail break-all">
+      <p
+        role="alert"
+        data-testid="snapshot-integrity"
+        className="rounded-plate border-2 border-verdict-fail bg-verdict-fail-bg p-3 text-body font-semibold text-verdict-fail break-all"
+      >
         {text}
       </p>
     );

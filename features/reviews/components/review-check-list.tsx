@@ -23,7 +23,8 @@ export function ReviewCheckList(props: {
 }) {
   const byCheck = new Map(props.justifications.map((j) => [j.checkId, j]));
   const rows = [...props.checks].sort((a, b) => ORDER[a.status] - ORDER[b.status]);
-  if (rows.length === 0) return <p className="text-body text-ink-500">No checks were stored with this revision.</p>;
+  if (rows.length === 0)
+    return <p className="text-body text-ink-500">No checks were stored with this revision.</p>;
   return (
     <table className="w-full text-table" aria-label="Checks of this revision">
       <thead className="text-left text-micro text-ink-500">
@@ -39,19 +40,34 @@ export function ReviewCheckList(props: {
           const active = c.id === props.activeCheckId;
           const justification = byCheck.get(c.id);
           return (
-            <tr key={c.id} data-check-id={c.id} aria-selected={active} className={`border-t border-ink-100 align-top ${active ? "bg-brass-50" : ""}`}>
+            <tr
+              key={c.id}
+              data-check-id={c.id}
+              aria-selected={active}
+              className={`border-t border-ink-100 align-top ${active ? "bg-brass-50" : ""}`}
+            >
               <td className="py-1 pr-2">
-                <span className={`rounded px-1.5 py-0.5 text-micro font-semibold ${STATUS_STYLE[c.status]}`}>{CHECK_STATUS_LABELS[c.status]}</span>
+                <span className={`rounded px-1.5 py-0.5 text-micro font-semibold ${STATUS_STYLE[c.status]}`}>
+                  {CHECK_STATUS_LABELS[c.status]}
+                </span>
               </td>
               <td>
-                <button type="button" className="text-left text-ink-800 hover:underline" aria-pressed={active} onClick={() => props.onPick(active ? null : c)}>
+                <button
+                  type="button"
+                  className="text-left text-ink-800 hover:underline"
+                  aria-pressed={active}
+                  onClick={() => props.onPick(active ? null : c)}
+                >
                   {c.title}
                 </button>
                 <span className="ml-1 break-all text-micro text-ink-400">{c.id}</span>
                 {c.note ? <p className="text-micro text-ink-500">{c.note}</p> : null}
                 {c.source ? <p className="text-micro text-ink-400">Source: {c.source}</p> : null}
                 {justification ? (
-                  <p className="mt-1 rounded bg-steel-100 px-2 py-1 text-micro text-ink-800" data-testid="justification">
+                  <p
+                    className="mt-1 rounded bg-steel-100 px-2 py-1 text-micro text-ink-800"
+                    data-testid="justification"
+                  >
                     Justified by {justification.authorName}: {justification.text}
                   </p>
                 ) : null}

@@ -26,29 +26,67 @@ export function ReviewWorkspace(props: {
   actions: DecisionActions;
 }) {
   const { review } = props;
-  const [highlight, setHighlight] = useState<{ source: string; value: ReviewHighlight; label: string } | null>(null);
+  const [highlight, setHighlight] = useState<{
+    source: string;
+    value: ReviewHighlight;
+    label: string;
+  } | null>(null);
 
   const pickCheck = (check: ReviewCheck | null) =>
-    setHighlight(check ? { source: `check:${check.id}`, value: { checkId: check.id, boltIds: check.boltIds }, label: `check ${check.title}` } : null);
+    setHighlight(
+      check
+        ? {
+            source: `check:${check.id}`,
+            value: { checkId: check.id, boltIds: check.boltIds },
+            label: `check ${check.title}`,
+          }
+        : null,
+    );
   const pickComment = (comment: CommentDto | null) => {
     if (!comment || !comment.targetId) return setHighlight(null);
-    if (comment.targetKind === "bolt") return setHighlight({ source: `comment:${comment.id}`, value: { boltIds: [comment.targetId] }, label: `bolt ${comment.targetId}` });
+    if (comment.targetKind === "bolt")
+      return setHighlight({
+        source: `comment:${comment.id}`,
+        value: { boltIds: [comment.targetId] },
+        label: `bolt ${comment.targetId}`,
+      });
     const check = review.checks.find((c) => c.id === comment.targetId);
-    setHighlight({ source: `comment:${comment.id}`, value: { checkId: comment.targetId, boltIds: check?.boltIds ?? [] }, label: `check ${check?.title ?? comment.targetId}` });
+    setHighlight({
+      source: `comment:${comment.id}`,
+      value: { checkId: comment.targetId, boltIds: check?.boltIds ?? [] },
+      label: `check ${check?.title ?? comment.targetId}`,
+    });
   };
-  const activeCommentId = highlight?.source.startsWith("comment:") ? highlight.source.slice("comment:".length) : null;
+  const activeCommentId = highlight?.source.startsWith("comment:")
+    ? highlight.source.slice("comment:".length)
+    : null;
 
   return (
     <div className="flex min-w-0 flex-col gap-gutter">
-      <div className="min-w-0 overflow-x-auto rounded-plate bg-white p-2 shadow-plate" data-testid="review-drawing" data-highlight-bolts={(highlight?.value.boltIds ?? []).join(" ")} data-highlight-check={highlight?.value.checkId ?? ""}>
+      <div
+        className="min-w-0 overflow-x-auto rounded-plate bg-white p-2 shadow-plate"
+        data-testid="review-drawing"
+        data-highlight-bolts={(highlight?.value.boltIds ?? []).join(" ")}
+        data-highlight-check={highlight?.value.checkId ?? ""}
+      >
         {props.renderDrawing(highlight?.value)}
-        <p role="status" aria-live="polite" className="min-h-5 px-1 text-table text-brass-700" data-testid="highlight-status">
+        <p
+          role="status"
+          aria-live="polite"
+          className="min-h-5 px-1 text-table text-brass-700"
+          data-testid="highlight-status"
+        >
           {highlight ? `Highlighted on the drawing: ${highlight.label}` : ""}
         </p>
       </div>
       <div className="grid gap-gutter lg:grid-cols-[minmax(0,1fr)_24rem]">
-        <section aria-labelledby="checks-heading" className="min-w-0 overflow-x-auto rounded-plate bg-white p-panel shadow-plate">
-          <h2 id="checks-heading" className="text-lead font-semibold text-ink-900">Checks and justifications</h2>
+        <section
+          aria-labelledby="checks-heading"
+          className="min-w-0 overflow-x-auto rounded-plate bg-white p-panel shadow-plate"
+        >
+          <h2 id="checks-heading" className="text-lead font-semibold text-ink-900">
+            Checks and justifications
+          </h2>
           <ReviewCheckList
             checks={review.checks}
             justifications={review.justifications}

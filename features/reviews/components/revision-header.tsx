@@ -22,19 +22,43 @@ export function RevisionHeader({ review }: { review: RevisionReviewDto }) {
       <p className="text-body text-ink-700">
         {review.equipmentTag ? <>{review.equipmentTag} · </> : null}
         Created by {review.createdByName} · last edited by {review.lastEditedByName}
-        {review.submittedByName ? <> · submitted by {review.submittedByName} {when(review.submittedAt)}</> : null}
-        {review.decidedByName ? <> · decided by {review.decidedByName} {when(review.decidedAt)}</> : null}
+        {review.submittedByName ? (
+          <>
+            {" "}
+            · submitted by {review.submittedByName} {when(review.submittedAt)}
+          </>
+        ) : null}
+        {review.decidedByName ? (
+          <>
+            {" "}
+            · decided by {review.decidedByName} {when(review.decidedAt)}
+          </>
+        ) : null}
         {review.coreVersion ? <> · core {review.coreVersion}</> : null}
       </p>
       <IntegrityNotice integrity={review.integrity} />
       <div className="flex flex-wrap items-center gap-3 text-table">
-        <Link className="underline text-ink-700" href={`/designs/${review.designId}`}>Open the design</Link>
-        {previous ? <Link className="underline text-ink-700" href={comparePath(review.designId, previous, review.number)}>Compare with revision {previous}</Link> : null}
+        <Link className="underline text-ink-700" href={`/designs/${review.designId}`}>
+          Open the design
+        </Link>
+        {previous ? (
+          <Link
+            className="underline text-ink-700"
+            href={comparePath(review.designId, previous, review.number)}
+          >
+            Compare with revision {previous}
+          </Link>
+        ) : null}
         {review.revisionNumbers.length > 1 ? (
           <span className="text-ink-500">
             Revisions:{" "}
             {review.revisionNumbers.map((n) => (
-              <Link key={n} href={revisionPath(review.designId, n)} aria-current={n === review.number ? "page" : undefined} className={`ml-1 underline ${n === review.number ? "font-semibold text-ink-900" : ""}`}>
+              <Link
+                key={n}
+                href={revisionPath(review.designId, n)}
+                aria-current={n === review.number ? "page" : undefined}
+                className={`ml-1 underline ${n === review.number ? "font-semibold text-ink-900" : ""}`}
+              >
                 {n}
               </Link>
             ))}
@@ -46,7 +70,8 @@ export function RevisionHeader({ review }: { review: RevisionReviewDto }) {
         <ol aria-label="Decisions" className="flex flex-col gap-1 text-table text-ink-700">
           {review.decisions.map((d, i) => (
             <li key={i}>
-              <span className="font-medium">{d.actorName}</span> {d.kind === "approved" ? "approved" : "returned"} it {when(d.at)}
+              <span className="font-medium">{d.actorName}</span>{" "}
+              {d.kind === "approved" ? "approved" : "returned"} it {when(d.at)}
               {d.comment ? <>: “{d.comment}”</> : null}
             </li>
           ))}

@@ -9,7 +9,10 @@ const STYLE: Record<ReviewStatus, string> = {
 
 export function StatusBadge({ status }: { status: ReviewStatus }) {
   return (
-    <span data-testid="revision-status" className={`inline-block rounded-plate px-2 py-0.5 text-table font-semibold ${STYLE[status]}`}>
+    <span
+      data-testid="revision-status"
+      className={`inline-block rounded-plate px-2 py-0.5 text-table font-semibold ${STYLE[status]}`}
+    >
       {STATUS_LABELS[status]}
     </span>
   );

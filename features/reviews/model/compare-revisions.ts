@@ -28,8 +28,10 @@ export interface CheckChange {
   after: CheckStatus | null;
 }
 
-const isObject = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
-const isIdList = (v: unknown): v is { id: string }[] => Array.isArray(v) && v.length > 0 && v.every((x) => isObject(x) && typeof x.id === "string");
+const isObject = (v: unknown): v is Record<string, unknown> =>
+  typeof v === "object" && v !== null && !Array.isArray(v);
+const isIdList = (v: unknown): v is { id: string }[] =>
+  Array.isArray(v) && v.length > 0 && v.every((x) => isObject(x) && typeof x.id === "string");
 
 function walk(before: unknown, after: unknown, path: string, out: FieldChange[]): void {
   if (Object.is(before, after)) return;
@@ -44,11 +46,13 @@ function walk(before: unknown, after: unknown, path: string, out: FieldChange[])
     const byId = (list: unknown[]) => new Map((list as { id: string }[]).map((x) => [x.id, x]));
     const a = byId(before);
     const b = byId(after);
-    for (const id of [...new Set([...a.keys(), ...b.keys()])]) walk(a.get(id), b.get(id), `${path}[${id}]`, out);
+    for (const id of [...new Set([...a.keys(), ...b.keys()])])
+      walk(a.get(id), b.get(id), `${path}[${id}]`, out);
     return;
   }
   if (Array.isArray(before) && Array.isArray(after)) {
-    for (let i = 0; i < Math.max(before.length, after.length); i++) walk(before[i], after[i], `${path}[${i}]`, out);
+    for (let i = 0; i < Math.max(before.length, after.length); i++)
+      walk(before[i], after[i], `${path}[${i}]`, out);
     return;
   }
   out.push({ path, before: before ?? null, after: after ?? null });
@@ -67,10 +71,16 @@ function boltPointsById(design: JointDesign): Map<string, { x: number; y: number
   } catch {
     // A document the geometry cannot place (older or damaged snapshot): compare arc lengths only.
   }
-  return new Map(design.bolts.map((bolt, i) => [bolt.id, { x: points[i]?.x ?? Number.NaN, y: points[i]?.y ?? Number.NaN, s: bolt.sMm }]));
+  return new Map(
+    design.bolts.map((bolt, i) => [
+      bolt.id,
+      { x: points[i]?.x ?? Number.NaN, y: points[i]?.y ?? Number.NaN, s: bolt.sMm },
+    ]),
+  );
 }
 
-const delta = (a: number, b: number): number | null => (Number.isFinite(a) && Number.isFinite(b) ? b - a : null);
+const delta = (a: number, b: number): number | null =>
+  Number.isFinite(a) && Number.isFinite(b) ? b - a : null;
 
 /** Bolts whose position changed by more than `toleranceMm`, plus added and removed bolts. */
 export function listBoltMoves(before: JointDesign, after: JointDesign, toleranceMm = 1e-6): BoltMove[] {
@@ -100,7 +110,8 @@ export function listCheckChanges(beforeResult: unknown, afterResult: unknown): C
   for (const id of [...new Set([...a.keys(), ...b.keys()])]) {
     const before = a.get(id)?.status ?? null;
     const after = b.get(id)?.status ?? null;
-    if (before !== after) changes.push({ checkId: id, title: (b.get(id) ?? a.get(id))!.title, before, after });
+    if (before !== after)
+      changes.push({ checkId: id, title: (b.get(id) ?? a.get(id))!.title, before, after });
   }
   return changes;
 }

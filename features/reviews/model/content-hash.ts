@@ -36,7 +36,11 @@ export interface SnapshotParts {
 
 /** sha-256 (lower-case hex) of canonicalJson({ document, result, coreVersion }). */
 export function computeContentHash(snapshot: SnapshotParts): string {
-  const text = canonicalJson({ document: snapshot.document, result: snapshot.result, coreVersion: snapshot.coreVersion });
+  const text = canonicalJson({
+    document: snapshot.document,
+    result: snapshot.result,
+    coreVersion: snapshot.coreVersion,
+  });
   return createHash("sha256").update(text, "utf8").digest("hex");
 }
 
@@ -46,9 +50,19 @@ export type SnapshotIntegrity =
   | { state: "mismatch"; storedHash: string | null; recomputedHash: string };
 
 /** Recomputes the hash of a stored snapshot and compares it with the stored one. */
-export function verifySnapshot(stored: { document: unknown; result: unknown; coreVersion: string | null; contentHash: string | null }): SnapshotIntegrity {
-  const recomputedHash = computeContentHash({ document: stored.document, result: stored.result, coreVersion: stored.coreVersion ?? "" });
-  if (stored.contentHash !== null && stored.contentHash === recomputedHash) return { state: "intact", storedHash: stored.contentHash };
+export function verifySnapshot(stored: {
+  document: unknown;
+  result: unknown;
+  coreVersion: string | null;
+  contentHash: string | null;
+}): SnapshotIntegrity {
+  const recomputedHash = computeContentHash({
+    document: stored.document,
+    result: stored.result,
+    coreVersion: stored.coreVersion ?? "",
+  });
+  if (stored.contentHash !== null && stored.contentHash === recomputedHash)
+    return { state: "intact", storedHash: stored.contentHash };
   return { state: "mismatch", storedHash: stored.contentHash, recomputedHash };
 }
 

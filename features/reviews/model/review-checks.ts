@@ -30,7 +30,8 @@ function normaliseStatus(raw: unknown): CheckStatus {
   return "fail";
 }
 
-const scalar = (v: unknown): number | string | null => (typeof v === "number" || typeof v === "string" ? v : null);
+const scalar = (v: unknown): number | string | null =>
+  typeof v === "number" || typeof v === "string" ? v : null;
 const text = (v: unknown): string => (typeof v === "string" ? v : "");
 
 function boltIdsOf(check: Record<string, unknown>): string[] {
@@ -46,7 +47,10 @@ export function readChecks(result: unknown): ReviewCheck[] {
   const list = (result as { checks?: unknown } | null)?.checks;
   if (!Array.isArray(list)) return [];
   return list
-    .filter((c): c is Record<string, unknown> => typeof c === "object" && c !== null && typeof (c as { id?: unknown }).id === "string")
+    .filter(
+      (c): c is Record<string, unknown> =>
+        typeof c === "object" && c !== null && typeof (c as { id?: unknown }).id === "string",
+    )
     .map((c) => ({
       id: c.id as string,
       title: text(c.title) || (c.id as string),
@@ -66,7 +70,10 @@ export function checksNeedingJustification(checks: ReviewCheck[]): ReviewCheck[]
 }
 
 /** Ids of the warn/fail checks that have no non-blank justification. */
-export function missingJustifications(checks: ReviewCheck[], justifications: Record<string, string>): string[] {
+export function missingJustifications(
+  checks: ReviewCheck[],
+  justifications: Record<string, string>,
+): string[] {
   return checksNeedingJustification(checks)
     .filter((c) => !(justifications[c.id] ?? "").trim())
     .map((c) => c.id);

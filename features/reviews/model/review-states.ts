@@ -29,9 +29,7 @@ export interface RevisionFacts {
   isWorking: boolean;
 }
 
-export type TransitionVerdict =
-  | { allowed: true; to: ReviewStatus }
-  | { allowed: false; reason: string };
+export type TransitionVerdict = { allowed: true; to: ReviewStatus } | { allowed: false; reason: string };
 
 const refuse = (reason: string): TransitionVerdict => ({ allowed: false, reason });
 
@@ -53,27 +51,39 @@ export function isIndependentOf(actor: ReviewActor, revision: RevisionFacts): bo
   return ![revision.createdBy, revision.lastEditedBy, revision.submittedBy].includes(actor.userId);
 }
 
-export function decideTransition(command: ReviewCommand, actor: ReviewActor, revision: RevisionFacts): TransitionVerdict {
+export function decideTransition(
+  command: ReviewCommand,
+  actor: ReviewActor,
+  revision: RevisionFacts,
+): TransitionVerdict {
   const label = STATUS_LABELS[revision.status];
   switch (command) {
     case "submit":
-      if (!actor.roles.includes("designer")) return refuse("Only a designer can submit a revision for review.");
+      if (!actor.roles.includes("designer"))
+        return refuse("Only a designer can submit a revision for review.");
       if (!revision.isWorking) return refuse("Only the working revision can be submitted.");
-      if (!isEditableStatus(revision.status)) return refuse(`This revision is ${label}; only a Draft or Returned revision can be submitted.`);
+      if (!isEditableStatus(revision.status))
+        return refuse(`This revision is ${label}; only a Draft or Returned revision can be submitted.`);
       return { allowed: true, to: "in_review" };
     case "approve":
     case "return": {
       const verb = command === "approve" ? "approve" : "return";
       if (!actor.roles.includes("approver")) return refuse(`Only an approver can ${verb} a revision.`);
-      if (revision.status !== "in_review") return refuse(`This revision is ${label}; only a revision In review can be ${verb === "approve" ? "approved" : "returned"}.`);
+      if (revision.status !== "in_review")
+        return refuse(
+          `This revision is ${label}; only a revision In review can be ${verb === "approve" ? "approved" : "returned"}.`,
+        );
       if (!isIndependentOf(actor, revision)) {
-        return refuse(`You created, last edited or submitted this revision, so you cannot ${verb} it: another approver must decide (four-eyes rule).`);
+        return refuse(
+          `You created, last edited or submitted this revision, so you cannot ${verb} it: another approver must decide (four-eyes rule).`,
+        );
       }
       return { allowed: true, to: command === "approve" ? "approved" : "returned" };
     }
     case "start-new-revision":
       if (!actor.roles.includes("designer")) return refuse("Only a designer can start a new revision.");
-      if (revision.status !== "approved") return refuse(`This revision is ${label}; a new revision starts from an Approved one.`);
+      if (revision.status !== "approved")
+        return refuse(`This revision is ${label}; a new revision starts from an Approved one.`);
       if (!revision.isWorking) return refuse("A newer revision of this design already exists.");
       return { allowed: true, to: "draft" };
   }

@@ -12,11 +12,17 @@ export function OrganizationSwitcher({
 }) {
   const active = organizations.find((o) => o.id === activeId);
   if (organizations.length < 2) {
-    return <span className="text-table text-ink-200" data-testid="active-organization">{active?.name}</span>;
+    return (
+      <span className="text-table text-ink-200" data-testid="active-organization">
+        {active?.name}
+      </span>
+    );
   }
   return (
     <form action={switchOrganizationAction} className="flex items-center gap-1">
-      <label htmlFor="organization-switch" className="sr-only">Organisation</label>
+      <label htmlFor="organization-switch" className="sr-only">
+        Organisation
+      </label>
       <select
         id="organization-switch"
         name="organizationId"
@@ -24,10 +30,14 @@ export function OrganizationSwitcher({
         className="rounded-plate border border-ink-600 bg-ink-800 px-2 py-1 text-table text-ink-50"
       >
         {organizations.map((o) => (
-          <option key={o.id} value={o.id}>{o.name}</option>
+          <option key={o.id} value={o.id}>
+            {o.name}
+          </option>
         ))}
       </select>
-      <button type="submit" className="rounded-plate px-2 py-1 text-table text-brass-300 hover:bg-ink-700">Switch</button>
+      <button type="submit" className="rounded-plate px-2 py-1 text-table text-brass-300 hover:bg-ink-700">
+        Switch
+      </button>
     </form>
   );
 }

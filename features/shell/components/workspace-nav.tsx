@@ -8,7 +8,11 @@ export function WorkspaceNav({ roles }: { roles: Role[] }) {
   return (
     <nav aria-label="Workspace" className="flex items-center gap-1">
       {items.map((item) => (
-        <Link key={item.href} href={item.href} className="rounded-plate px-3 py-1.5 text-body text-ink-100 hover:bg-ink-700 hover:text-white">
+        <Link
+          key={item.href}
+          href={item.href}
+          className="rounded-plate px-3 py-1.5 text-body text-ink-100 hover:bg-ink-700 hover:text-white"
+        >
           {item.label}
         </Link>
       ))}

@@ -3,14 +3,22 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { authenticate, WRONG_CREDENTIALS } from "@/features/accounts/credentials";
 import { requestPasswordReset, RESET_REQUESTED } from "@/features/accounts/password-reset";
 import { clientAddressKey, RATE_LIMITS, tooManyAttemptsMessage } from "@/server/auth/rate-limit";
-import { createOrganizationWithMembers, FIXTURE_PASSWORD, type OrganizationFixture } from "../../setup/fixtures";
+import {
+  createOrganizationWithMembers,
+  FIXTURE_PASSWORD,
+  type OrganizationFixture,
+} from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";
 
 const db = getTestDb();
 let org: OrganizationFixture<"locked" | "other" | "resetter">;
 
 beforeAll(async () => {
-  org = await createOrganizationWithMembers(db, { locked: ["designer"], other: ["designer"], resetter: ["approver"] });
+  org = await createOrganizationWithMembers(db, {
+    locked: ["designer"],
+    other: ["designer"],
+    resetter: ["approver"],
+  });
 });
 afterAll(async () => {
   await db.deleteFrom("auth_attempts").where("key", "like", "%fixture%").execute();
@@ -23,33 +31,81 @@ describe("sign-in rate limits", () => {
     const email = org.users.locked.email;
     for (let i = 0; i < RATE_LIMITS.signInAccount.max; i += 1) {
       // A different address each time: only the account limit can trip.
-      expect(await authenticate(db, { email, password: "wrong", addressKey: `rl-${randomUUID()}` })).toEqual({ ok: false, message: WRONG_CREDENTIALS, limited: false });
+      expect(await authenticate(db, { email, password: "wrong", addressKey: `rl-${randomUUID()}` })).toEqual({
+        ok: false,
+        message: WRONG_CREDENTIALS,
+        limited: false,
+      });
     }
-    const refused = await authenticate(db, { email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` });
-    expect(refused).toEqual({ ok: false, message: "Too many attempts. Try again in 15 minutes.", limited: true });
+    const refused = await authenticate(db, {
+      email,
+      password: FIXTURE_PASSWORD,
+      addressKey: `rl-${randomUUID()}`,
+    });
+    expect(refused).toEqual({
+      ok: false,
+      message: "Too many attempts. Try again in 15 minutes.",
+      limited: true,
+    });
     // 14 minutes later the oldest failure is still inside the window: 1 minute to go.
     const later = new Date(Date.now() + 14 * 60_000 + 1000);
-    expect(await authenticate(db, { email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` }, later)).toMatchObject({ message: "Too many attempts. Try again in 1 minute." });
+    expect(
+      await authenticate(db, { email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` }, later),
+    ).toMatchObject({ message: "Too many attempts. Try again in 1 minute." });
     // Another account is not affected.
-    expect(await authenticate(db, { email: org.users.other.email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` })).toMatchObject({ ok: true });
+    expect(
+      await authenticate(db, {
+        email: org.users.other.email,
+        password: FIXTURE_PASSWORD,
+        addressKey: `rl-${randomUUID()}`,
+      }),
+    ).toMatchObject({ ok: true });
     // After the window the account may sign in again.
     const after = new Date(Date.now() + 16 * 60_000);
-    expect(await authenticate(db, { email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` }, after)).toMatchObject({ ok: true });
+    expect(
+      await authenticate(db, { email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` }, after),
+    ).toMatchObject({ ok: true });
   });
 
   it("per address: 30 failures from one address over many accounts lock that address only", async () => {
     const addressKey = `rl-${randomUUID()}`;
     for (let i = 0; i < RATE_LIMITS.signInAddress.max; i += 1) {
-      await authenticate(db, { email: `ghost-${i}-${randomUUID().slice(0, 6)}@fixture.example`, password: "guess", addressKey });
+      await authenticate(db, {
+        email: `ghost-${i}-${randomUUID().slice(0, 6)}@fixture.example`,
+        password: "guess",
+        addressKey,
+      });
     }
-    const refused = await authenticate(db, { email: org.users.other.email, password: FIXTURE_PASSWORD, addressKey });
-    expect(refused).toMatchObject({ ok: false, limited: true, message: expect.stringMatching(/^Too many attempts\. Try again in \d+ minutes?\.$/) });
-    expect(await authenticate(db, { email: org.users.other.email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` })).toMatchObject({ ok: true });
+    const refused = await authenticate(db, {
+      email: org.users.other.email,
+      password: FIXTURE_PASSWORD,
+      addressKey,
+    });
+    expect(refused).toMatchObject({
+      ok: false,
+      limited: true,
+      message: expect.stringMatching(/^Too many attempts\. Try again in \d+ minutes?\.$/),
+    });
+    expect(
+      await authenticate(db, {
+        email: org.users.other.email,
+        password: FIXTURE_PASSWORD,
+        addressKey: `rl-${randomUUID()}`,
+      }),
+    ).toMatchObject({ ok: true });
   });
 
   it("answers an unknown address exactly like a wrong password", async () => {
-    const unknown = await authenticate(db, { email: `nobody-${randomUUID()}@fixture.example`, password: "x", addressKey: `rl-${randomUUID()}` });
-    const wrong = await authenticate(db, { email: org.users.other.email, password: "x", addressKey: `rl-${randomUUID()}` });
+    const unknown = await authenticate(db, {
+      email: `nobody-${randomUUID()}@fixture.example`,
+      password: "x",
+      addressKey: `rl-${randomUUID()}`,
+    });
+    const wrong = await authenticate(db, {
+      email: org.users.other.email,
+      password: "x",
+      addressKey: `rl-${randomUUID()}`,
+    });
     expect(unknown).toEqual(wrong);
   });
 });
@@ -57,20 +113,38 @@ describe("sign-in rate limits", () => {
 describe("reset request rate limits", () => {
   it("per account: the 4th request in 15 minutes is refused and sends nothing", async () => {
     for (let i = 0; i < RATE_LIMITS.resetAccount.max; i += 1) {
-      expect(await requestPasswordReset(db, { email: org.users.resetter.email, addressKey: `rl-${randomUUID()}` })).toEqual({ ok: true, message: RESET_REQUESTED });
+      expect(
+        await requestPasswordReset(db, { email: org.users.resetter.email, addressKey: `rl-${randomUUID()}` }),
+      ).toEqual({ ok: true, message: RESET_REQUESTED });
     }
-    const before = await db.selectFrom("password_reset_tokens").select("id").where("user_id", "=", org.users.resetter.userId).execute();
-    expect(await requestPasswordReset(db, { email: org.users.resetter.email, addressKey: `rl-${randomUUID()}` })).toEqual({ ok: false, message: tooManyAttemptsMessage(15) });
-    const after = await db.selectFrom("password_reset_tokens").select("id").where("user_id", "=", org.users.resetter.userId).execute();
+    const before = await db
+      .selectFrom("password_reset_tokens")
+      .select("id")
+      .where("user_id", "=", org.users.resetter.userId)
+      .execute();
+    expect(
+      await requestPasswordReset(db, { email: org.users.resetter.email, addressKey: `rl-${randomUUID()}` }),
+    ).toEqual({ ok: false, message: tooManyAttemptsMessage(15) });
+    const after = await db
+      .selectFrom("password_reset_tokens")
+      .select("id")
+      .where("user_id", "=", org.users.resetter.userId)
+      .execute();
     expect(after).toHaveLength(before.length);
   });
 
   it("per address: 20 requests from one address lock it, for unknown addresses too", async () => {
     const addressKey = `rl-${randomUUID()}`;
     for (let i = 0; i < RATE_LIMITS.resetAddress.max; i += 1) {
-      await requestPasswordReset(db, { email: `ghost-${i}-${randomUUID().slice(0, 6)}@fixture.example`, addressKey });
+      await requestPasswordReset(db, {
+        email: `ghost-${i}-${randomUUID().slice(0, 6)}@fixture.example`,
+        addressKey,
+      });
     }
-    expect(await requestPasswordReset(db, { email: org.users.other.email, addressKey })).toMatchObject({ ok: false, message: expect.stringMatching(/^Too many attempts/) });
+    expect(await requestPasswordReset(db, { email: org.users.other.email, addressKey })).toMatchObject({
+      ok: false,
+      message: expect.stringMatching(/^Too many attempts/),
+    });
   });
 });
 

@@ -22,7 +22,13 @@ describe("password hashing", () => {
     const match = /^\$(argon2(?:id|i|d))\$v=(\d+)\$m=(\d+),t=(\d+),p=(\d+)\$/.exec(stored);
     expect(match).not.toBeNull();
     const [, variant, version, m, t, p] = match!;
-    expect({ variant, version, m: Number(m), t: Number(t), p: Number(p) }).toEqual({ variant: "argon2id", version: "19", m: 19456, t: 2, p: 1 });
+    expect({ variant, version, m: Number(m), t: Number(t), p: Number(p) }).toEqual({
+      variant: "argon2id",
+      version: "19",
+      m: 19456,
+      t: 2,
+      p: 1,
+    });
     expect(PASSWORD_HASH_OPTIONS.memoryCost).toBeGreaterThanOrEqual(19456);
     expect(await verifyPassword(stored, "a long enough secret")).toBe(true);
     expect(await verifyPassword(stored, "a long enough secreT")).toBe(false);
@@ -36,32 +42,68 @@ describe("the Kysely adapter over sessions/users", () => {
   it("round-trips a session and never carries the password hash", async () => {
     const expiresAt = new Date(Date.now() + 3_600_000);
     const id = `adapter-${Date.now()}`;
-    await adapter.setSession({ id, userId: org.users.dana.userId, expiresAt, attributes: { active_organization_id: org.organizationId } });
+    await adapter.setSession({
+      id,
+      userId: org.users.dana.userId,
+      expiresAt,
+      attributes: { active_organization_id: org.organizationId },
+    });
     const [session, user] = await adapter.getSessionAndUser(id);
-    expect(session).toEqual({ id, userId: org.users.dana.userId, expiresAt, attributes: { active_organization_id: org.organizationId } });
-    expect(user).toEqual({ id: org.users.dana.userId, attributes: { email: org.users.dana.email, display_name: org.users.dana.displayName, unit_system: "SI" } });
+    expect(session).toEqual({
+      id,
+      userId: org.users.dana.userId,
+      expiresAt,
+      attributes: { active_organization_id: org.organizationId },
+    });
+    expect(user).toEqual({
+      id: org.users.dana.userId,
+      attributes: {
+        email: org.users.dana.email,
+        display_name: org.users.dana.displayName,
+        unit_system: "SI",
+      },
+    });
     expect(JSON.stringify([session, user])).not.toContain("$argon2");
 
     const later = new Date(expiresAt.getTime() + 86_400_000);
     await adapter.updateSessionExpiration(id, later);
-    expect((await adapter.getUserSessions(org.users.dana.userId)).find((s) => s.id === id)?.expiresAt).toEqual(later);
+    expect(
+      (await adapter.getUserSessions(org.users.dana.userId)).find((s) => s.id === id)?.expiresAt,
+    ).toEqual(later);
     await adapter.deleteSession(id);
     expect(await adapter.getSessionAndUser(id)).toEqual([null, null]);
   });
 
   it("drops sessions of a disabled account", async () => {
-    const session = await getLucia().createSession(org.users.arlo.userId, { active_organization_id: org.organizationId });
-    await db.updateTable("users").set({ disabled_at: new Date() }).where("id", "=", org.users.arlo.userId).execute();
+    const session = await getLucia().createSession(org.users.arlo.userId, {
+      active_organization_id: org.organizationId,
+    });
+    await db
+      .updateTable("users")
+      .set({ disabled_at: new Date() })
+      .where("id", "=", org.users.arlo.userId)
+      .execute();
     try {
       expect((await getLucia().validateSession(session.id)).session).toBeNull();
-      expect(await db.selectFrom("sessions").select("id").where("id", "=", session.id).executeTakeFirst()).toBeUndefined();
+      expect(
+        await db.selectFrom("sessions").select("id").where("id", "=", session.id).executeTakeFirst(),
+      ).toBeUndefined();
     } finally {
-      await db.updateTable("users").set({ disabled_at: null }).where("id", "=", org.users.arlo.userId).execute();
+      await db
+        .updateTable("users")
+        .set({ disabled_at: null })
+        .where("id", "=", org.users.arlo.userId)
+        .execute();
     }
   });
 
   it("deletes only expired sessions", async () => {
-    await adapter.setSession({ id: `old-${Date.now()}`, userId: org.users.dana.userId, expiresAt: new Date(Date.now() - 1000), attributes: { active_organization_id: null } });
+    await adapter.setSession({
+      id: `old-${Date.now()}`,
+      userId: org.users.dana.userId,
+      expiresAt: new Date(Date.now() - 1000),
+      attributes: { active_organization_id: null },
+    });
     const live = await getLucia().createSession(org.users.dana.userId, { active_organization_id: null });
     await adapter.deleteExpiredSessions();
     const ids = (await adapter.getUserSessions(org.users.dana.userId)).map((s) => s.id);
@@ -74,7 +116,9 @@ describe("sliding expiry", () => {
   it("pushes expires_at forward once less than half of SESSION_IDLE_DAYS is left, and refuses an expired one", async () => {
     const lucia = getLucia();
     const idleMs = getEnv().SESSION_IDLE_DAYS * 86_400_000;
-    const session = await lucia.createSession(org.users.dana.userId, { active_organization_id: org.organizationId });
+    const session = await lucia.createSession(org.users.dana.userId, {
+      active_organization_id: org.organizationId,
+    });
     // Still more than half left: unchanged.
     const fresh = await lucia.validateSession(session.id);
     expect(fresh.session?.fresh).toBe(false);
@@ -83,28 +127,46 @@ describe("sliding expiry", () => {
     await db.updateTable("sessions").set({ expires_at: nearlyIdle }).where("id", "=", session.id).execute();
     const slid = await lucia.validateSession(session.id);
     expect(slid.session?.fresh).toBe(true);
-    const stored = await db.selectFrom("sessions").select("expires_at").where("id", "=", session.id).executeTakeFirstOrThrow();
+    const stored = await db
+      .selectFrom("sessions")
+      .select("expires_at")
+      .where("id", "=", session.id)
+      .executeTakeFirstOrThrow();
     expect(new Date(stored.expires_at).getTime()).toBeGreaterThan(Date.now() + idleMs - 60_000);
 
-    await db.updateTable("sessions").set({ expires_at: new Date(Date.now() - 1000) }).where("id", "=", session.id).execute();
+    await db
+      .updateTable("sessions")
+      .set({ expires_at: new Date(Date.now() - 1000) })
+      .where("id", "=", session.id)
+      .execute();
     expect((await lucia.validateSession(session.id)).session).toBeNull();
-    expect(await db.selectFrom("sessions").select("id").where("id", "=", session.id).executeTakeFirst()).toBeUndefined();
+    expect(
+      await db.selectFrom("sessions").select("id").where("id", "=", session.id).executeTakeFirst(),
+    ).toBeUndefined();
   });
 });
 
 describe("sign-out everywhere", () => {
   it("ends every session of the user and none of anybody else's", async () => {
     const lucia = getLucia();
-    const a = await lucia.createSession(org.users.dana.userId, { active_organization_id: org.organizationId });
-    const b = await lucia.createSession(org.users.dana.userId, { active_organization_id: org.organizationId });
-    const other = await lucia.createSession(org.users.arlo.userId, { active_organization_id: org.organizationId });
+    const a = await lucia.createSession(org.users.dana.userId, {
+      active_organization_id: org.organizationId,
+    });
+    const b = await lucia.createSession(org.users.dana.userId, {
+      active_organization_id: org.organizationId,
+    });
+    const other = await lucia.createSession(org.users.arlo.userId, {
+      active_organization_id: org.organizationId,
+    });
     await lucia.invalidateSession(a.id);
     expect((await lucia.validateSession(a.id)).session).toBeNull();
     expect((await lucia.validateSession(b.id)).session).not.toBeNull();
     await lucia.invalidateUserSessions(org.users.dana.userId);
     expect((await lucia.validateSession(b.id)).session).toBeNull();
     expect((await lucia.validateSession(other.id)).session).not.toBeNull();
-    const response = (await authorizeApi(appRequest("/api/v1/me", { cookie: `${SESSION_COOKIE_NAME}=${b.id}` })));
+    const response = await authorizeApi(
+      appRequest("/api/v1/me", { cookie: `${SESSION_COOKIE_NAME}=${b.id}` }),
+    );
     expect(response.ok).toBe(false);
     if (!response.ok) expect(response.response.status).toBe(401);
   });
@@ -125,7 +187,9 @@ describe("session cookie attributes (decision: Secure except plain http on loopb
 
   it("is Secure on https and on a non-loopback http host", () => {
     for (const url of ["https://sealpitch.example", "http://10.0.0.5:3000"]) {
-      const header = createLucia(db, parseEnv({ ...base, APP_URL: url })).createSessionCookie("abc").serialize();
+      const header = createLucia(db, parseEnv({ ...base, APP_URL: url }))
+        .createSessionCookie("abc")
+        .serialize();
       expect(header, url).toContain("Secure");
       expect(header, url).toContain("HttpOnly");
     }
@@ -136,7 +200,9 @@ describe("active organisation", () => {
   it("falls back to a membership when the session points at an organisation the user left", async () => {
     const second = await createOrganizationWithMembers(db, { other: ["admin"] });
     try {
-      const session = await getLucia().createSession(org.users.dana.userId, { active_organization_id: second.organizationId });
+      const session = await getLucia().createSession(org.users.dana.userId, {
+        active_organization_id: second.organizationId,
+      });
       const context = await resolveViewerContext(db, session.id);
       expect(context?.viewer.organizationId).toBe(org.organizationId);
       expect(context?.viewer.roles).toEqual(["designer"]);

@@ -38,7 +38,9 @@ describe("jointDesignSchema rejects bad designs with messages that name the fiel
   it("overlapping bolt holes", () => {
     const d = circularFlange();
     d.bolts[5] = { ...d.bolts[5], sMm: d.bolts[4].sMm + 10 };
-    expect(errors(d).some((e) => e.startsWith("bolts[5].position: bolt hole overlaps the hole of bolt"))).toBe(true);
+    expect(
+      errors(d).some((e) => e.startsWith("bolts[5].position: bolt hole overlaps the hole of bolt")),
+    ).toBe(true);
   });
   it("a ring gasket that overlaps a bolt hole", () => {
     const d = circularFlange({ gasket: { innerDiameterMm: 182.6, outerDiameterMm: 240 } });

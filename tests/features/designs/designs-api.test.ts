@@ -1,7 +1,11 @@
 import { sql } from "kysely";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { POST as analysesPost } from "@/app/api/v1/analyses/route";
-import { DELETE as designDelete, GET as designGet, PUT as designPut } from "@/app/api/v1/designs/[designId]/route";
+import {
+  DELETE as designDelete,
+  GET as designGet,
+  PUT as designPut,
+} from "@/app/api/v1/designs/[designId]/route";
 import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/route";
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
 import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
@@ -14,10 +18,27 @@ let foreign: OrganizationFixture<"other">;
 const cookies: Record<string, string> = {};
 const params = (designId: string) => ({ params: Promise.resolve({ designId }) });
 
-const coverTemplate = { kind: "rectangular-cover", widthMm: 600, heightMm: 400, cornerRadiusMm: 40, boltEdgeDistanceMm: 35, boltCount: 16, boltSize: "M20", coverThicknessMm: 30, flangeThicknessMm: 30, gasketWidthMm: 20 };
+const coverTemplate = {
+  kind: "rectangular-cover",
+  widthMm: 600,
+  heightMm: 400,
+  cornerRadiusMm: 40,
+  boltEdgeDistanceMm: 35,
+  boltCount: 16,
+  boltSize: "M20",
+  coverThicknessMm: 30,
+  flangeThicknessMm: 30,
+  gasketWidthMm: 20,
+};
 
 async function createViaApi(name: string, cookie = cookies.dana): Promise<string> {
-  const response = await designsPost(appRequest("/api/v1/designs", { method: "POST", cookie, body: { name, equipmentTag: "E-2107", template: coverTemplate } }));
+  const response = await designsPost(
+    appRequest("/api/v1/designs", {
+      method: "POST",
+      cookie,
+      body: { name, equipmentTag: "E-2107", template: coverTemplate },
+    }),
+  );
   expect(response.status).toBe(201);
   return (await response.json()).designId;
 }
@@ -28,15 +49,24 @@ async function readDesign(id: string, cookie = cookies.dana) {
 }
 
 beforeAll(async () => {
-  home = await createOrganizationWithMembers(db, { dana: ["designer"], piet: ["designer"], arlo: ["approver"] });
+  home = await createOrganizationWithMembers(db, {
+    dana: ["designer"],
+    piet: ["designer"],
+    arlo: ["approver"],
+  });
   foreign = await createOrganizationWithMembers(db, { other: ["designer", "admin"] });
   for (const key of ["dana", "piet", "arlo"] as const) cookies[key] = await home.cookieFor(key);
   cookies.other = await foreign.cookieFor("other");
 });
 afterAll(async () => {
   await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(trx);
-    await trx.deleteFrom("designs").where("organization_id", "in", [home.organizationId, foreign.organizationId]).execute();
+    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
+      trx,
+    );
+    await trx
+      .deleteFrom("designs")
+      .where("organization_id", "in", [home.organizationId, foreign.organizationId])
+      .execute();
     await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
   await home.cleanup();
@@ -47,46 +77,100 @@ describe("designs API", () => {
   it("signed out is 401 everywhere; an approver may read but not create", async () => {
     expect((await designsGet(appRequest("/api/v1/designs"))).status).toBe(401);
     expect((await schemaGet(appRequest("/api/v1/schema/design"))).status).toBe(401);
-    expect((await analysesPost(appRequest("/api/v1/analyses", { method: "POST", body: {} }))).status).toBe(401);
+    expect((await analysesPost(appRequest("/api/v1/analyses", { method: "POST", body: {} }))).status).toBe(
+      401,
+    );
     expect((await designsGet(appRequest("/api/v1/designs", { cookie: cookies.arlo }))).status).toBe(200);
-    const denied = await designsPost(appRequest("/api/v1/designs", { method: "POST", cookie: cookies.arlo, body: { name: "x", template: coverTemplate } }));
+    const denied = await designsPost(
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: cookies.arlo,
+        body: { name: "x", template: coverTemplate },
+      }),
+    );
     expect(denied.status).toBe(403);
     expect(await denied.json()).toEqual({ error: { message: expect.any(String) } });
   });
 
   it("create, list with query parameters, read, and a foreign organisation gets 404", async () => {
     const id = await createViaApi("API hatch alpha");
-    const list = await designsGet(appRequest("/api/v1/designs?q=api%20hatch&sort=name", { cookie: cookies.dana }));
+    const list = await designsGet(
+      appRequest("/api/v1/designs?q=api%20hatch&sort=name", { cookie: cookies.dana }),
+    );
     const body = await list.json();
     expect(body.items.map((d: { designId: string }) => d.designId)).toContain(id);
     const read = await readDesign(id);
     expect(read.status).toBe(200);
-    expect(read.body).toMatchObject({ name: "API hatch alpha", equipmentTag: "E-2107", workingRevision: { number: 1, status: "draft", version: 1 } });
+    expect(read.body).toMatchObject({
+      name: "API hatch alpha",
+      equipmentTag: "E-2107",
+      workingRevision: { number: 1, status: "draft", version: 1 },
+    });
     expect(read.body.workingRevision.result.summary.minGasketStressMpa).toBeGreaterThan(0);
     expect((await readDesign(id, cookies.other)).status).toBe(404);
     expect((await readDesign("not-a-uuid")).status).toBe(404);
-    const foreignList = await (await designsGet(appRequest("/api/v1/designs", { cookie: cookies.other }))).json();
+    const foreignList = await (
+      await designsGet(appRequest("/api/v1/designs", { cookie: cookies.other }))
+    ).json();
     expect(foreignList.items.map((d: { designId: string }) => d.designId)).not.toContain(id);
   });
 
   it("bad input in each template field is a 422 naming the field path, and nothing is created", async () => {
-    const before = (await (await designsGet(appRequest("/api/v1/designs", { cookie: cookies.dana }))).json()).total;
-    const cases: [string, unknown][] = [["widthMm", ""], ["heightMm", -4], ["boltEdgeDistanceMm", 1e12], ["boltCount", "sixteen"], ["gasketWidthMm", null], ["boltEdgeDistanceMm", 5]];
+    const before = (await (await designsGet(appRequest("/api/v1/designs", { cookie: cookies.dana }))).json())
+      .total;
+    const cases: [string, unknown][] = [
+      ["widthMm", ""],
+      ["heightMm", -4],
+      ["boltEdgeDistanceMm", 1e12],
+      ["boltCount", "sixteen"],
+      ["gasketWidthMm", null],
+      ["boltEdgeDistanceMm", 5],
+    ];
     for (const [field, value] of cases) {
-      const response = await designsPost(appRequest("/api/v1/designs", { method: "POST", cookie: cookies.dana, body: { name: "Bad", template: { ...coverTemplate, [field]: value } } }));
+      const response = await designsPost(
+        appRequest("/api/v1/designs", {
+          method: "POST",
+          cookie: cookies.dana,
+          body: { name: "Bad", template: { ...coverTemplate, [field]: value } },
+        }),
+      );
       expect(response.status, `${field}=${String(value)}`).toBe(422);
       const { error } = await response.json();
       expect(Object.keys(error.fieldErrors)).toEqual([`template.${field}`]);
     }
-    const noName = await designsPost(appRequest("/api/v1/designs", { method: "POST", cookie: cookies.dana, body: { name: "", template: coverTemplate } }));
+    const noName = await designsPost(
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: cookies.dana,
+        body: { name: "", template: coverTemplate },
+      }),
+    );
     expect((await noName.json()).error.fieldErrors).toHaveProperty("name");
-    const notJson = await designsPost(new Request(new URL("/api/v1/designs", process.env.APP_URL ?? "http://127.0.0.1:3100"), { method: "POST", headers: { cookie: cookies.dana, origin: new URL(process.env.APP_URL ?? "http://127.0.0.1:3100").origin }, body: "{" }));
+    const notJson = await designsPost(
+      new Request(new URL("/api/v1/designs", process.env.APP_URL ?? "http://127.0.0.1:3100"), {
+        method: "POST",
+        headers: {
+          cookie: cookies.dana,
+          origin: new URL(process.env.APP_URL ?? "http://127.0.0.1:3100").origin,
+        },
+        body: "{",
+      }),
+    );
     expect(notJson.status).toBe(400);
-    expect((await (await designsGet(appRequest("/api/v1/designs", { cookie: cookies.dana }))).json()).total).toBe(before);
+    expect(
+      (await (await designsGet(appRequest("/api/v1/designs", { cookie: cookies.dana }))).json()).total,
+    ).toBe(before);
   });
 
   it("a request from a foreign origin is refused", async () => {
-    const response = await designsPost(appRequest("/api/v1/designs", { method: "POST", cookie: cookies.dana, origin: "http://evil.example", body: { name: "x", template: coverTemplate } }));
+    const response = await designsPost(
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: cookies.dana,
+        origin: "http://evil.example",
+        body: { name: "x", template: coverTemplate },
+      }),
+    );
     expect(response.status).toBe(403);
   });
 
@@ -94,15 +178,38 @@ describe("designs API", () => {
     const id = await createViaApi("API put cover");
     const { body } = await readDesign(id);
     const document = body.workingRevision.document;
-    const outside = { ...document, bolts: document.bolts.map((b: { sMm: number }, i: number) => (i === 4 ? { ...b, offPathMm: 300 } : b)) };
-    const bad = await designPut(appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies.dana, body: { baseVersion: 1, document: outside } }), params(id));
+    const outside = {
+      ...document,
+      bolts: document.bolts.map((b: { sMm: number }, i: number) => (i === 4 ? { ...b, offPathMm: 300 } : b)),
+    };
+    const bad = await designPut(
+      appRequest(`/api/v1/designs/${id}`, {
+        method: "PUT",
+        cookie: cookies.dana,
+        body: { baseVersion: 1, document: outside },
+      }),
+      params(id),
+    );
     expect(bad.status).toBe(422);
     expect((await bad.json()).error.fieldErrors).toHaveProperty(["document.bolts[4].position"]);
-    const good = await designPut(appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies.dana, body: { baseVersion: 1, document, name: "API put cover, saved" } }), params(id));
+    const good = await designPut(
+      appRequest(`/api/v1/designs/${id}`, {
+        method: "PUT",
+        cookie: cookies.dana,
+        body: { baseVersion: 1, document, name: "API put cover, saved" },
+      }),
+      params(id),
+    );
     expect(good.status).toBe(200);
     expect(await good.json()).toMatchObject({ version: 2, savedAt: expect.any(String) });
-    expect((await readDesign(id)).body).toMatchObject({ name: "API put cover, saved", workingRevision: { version: 2 } });
-    const noVersion = await designPut(appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies.dana, body: { document } }), params(id));
+    expect((await readDesign(id)).body).toMatchObject({
+      name: "API put cover, saved",
+      workingRevision: { version: 2 },
+    });
+    const noVersion = await designPut(
+      appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies.dana, body: { document } }),
+      params(id),
+    );
     expect((await noVersion.json()).error.fieldErrors).toHaveProperty("baseVersion");
   });
 
@@ -110,16 +217,38 @@ describe("designs API", () => {
     const id = await createViaApi("API concurrent cover");
     const [asDana, asPiet] = await Promise.all([readDesign(id, cookies.dana), readDesign(id, cookies.piet)]);
     expect(asDana.body.workingRevision.version).toBe(asPiet.body.workingRevision.version);
-    const danaDoc = { ...asDana.body.workingRevision.document, loads: { ...asDana.body.workingRevision.document.loads, designPressureMpa: 1.6 } };
-    const pietDoc = { ...asPiet.body.workingRevision.document, loads: { ...asPiet.body.workingRevision.document.loads, designPressureMpa: 0.4 } };
-    const first = await designPut(appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies.dana, body: { baseVersion: 1, document: danaDoc } }), params(id));
+    const danaDoc = {
+      ...asDana.body.workingRevision.document,
+      loads: { ...asDana.body.workingRevision.document.loads, designPressureMpa: 1.6 },
+    };
+    const pietDoc = {
+      ...asPiet.body.workingRevision.document,
+      loads: { ...asPiet.body.workingRevision.document.loads, designPressureMpa: 0.4 },
+    };
+    const first = await designPut(
+      appRequest(`/api/v1/designs/${id}`, {
+        method: "PUT",
+        cookie: cookies.dana,
+        body: { baseVersion: 1, document: danaDoc },
+      }),
+      params(id),
+    );
     expect(first.status).toBe(200);
-    const second = await designPut(appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies.piet, body: { baseVersion: 1, document: pietDoc } }), params(id));
+    const second = await designPut(
+      appRequest(`/api/v1/designs/${id}`, {
+        method: "PUT",
+        cookie: cookies.piet,
+        body: { baseVersion: 1, document: pietDoc },
+      }),
+      params(id),
+    );
     expect(second.status).toBe(409);
     const { error } = await second.json();
     expect(error.conflict).toBe(true);
     expect(error.message).toContain(`This design was changed by ${home.users.dana.displayName} at `);
-    expect(error.message).toContain("(version 2). Your edits are kept here; reload to see theirs, or copy your changes.");
+    expect(error.message).toContain(
+      "(version 2). Your edits are kept here; reload to see theirs, or copy your changes.",
+    );
     const stored = (await readDesign(id, cookies.piet)).body.workingRevision;
     expect(stored.version).toBe(2);
     expect(stored.document.loads.designPressureMpa).toBe(1.6);
@@ -131,7 +260,14 @@ describe("designs API", () => {
     const doc = body.workingRevision.document;
     const responses = await Promise.all(
       ["dana", "piet"].map((who, i) =>
-        designPut(appRequest(`/api/v1/designs/${id}`, { method: "PUT", cookie: cookies[who], body: { baseVersion: 1, document: { ...doc, loads: { ...doc.loads, designPressureMpa: 1 + i } } } }), params(id)),
+        designPut(
+          appRequest(`/api/v1/designs/${id}`, {
+            method: "PUT",
+            cookie: cookies[who],
+            body: { baseVersion: 1, document: { ...doc, loads: { ...doc.loads, designPressureMpa: 1 + i } } },
+          }),
+          params(id),
+        ),
       ),
     );
     expect(responses.map((r) => r.status).sort()).toEqual([200, 409]);
@@ -140,15 +276,43 @@ describe("designs API", () => {
 
   it("DELETE removes a never-submitted draft (204) and refuses a submitted one (409)", async () => {
     const draft = await createViaApi("API delete draft");
-    expect((await designDelete(appRequest(`/api/v1/designs/${draft}`, { method: "DELETE", cookie: cookies.piet }), params(draft))).status).toBe(403);
-    expect((await designDelete(appRequest(`/api/v1/designs/${draft}`, { method: "DELETE", cookie: cookies.dana }), params(draft))).status).toBe(204);
+    expect(
+      (
+        await designDelete(
+          appRequest(`/api/v1/designs/${draft}`, { method: "DELETE", cookie: cookies.piet }),
+          params(draft),
+        )
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await designDelete(
+          appRequest(`/api/v1/designs/${draft}`, { method: "DELETE", cookie: cookies.dana }),
+          params(draft),
+        )
+      ).status,
+    ).toBe(204);
     expect((await readDesign(draft)).status).toBe(404);
     const submitted = await createViaApi("API delete submitted");
-    await db.updateTable("design_revisions").set({ status: "in_review", submitted_by: home.users.dana.userId, submitted_at: new Date() }).where("design_id", "=", submitted).execute();
-    const refused = await designDelete(appRequest(`/api/v1/designs/${submitted}`, { method: "DELETE", cookie: cookies.dana }), params(submitted));
+    await db
+      .updateTable("design_revisions")
+      .set({ status: "in_review", submitted_by: home.users.dana.userId, submitted_at: new Date() })
+      .where("design_id", "=", submitted)
+      .execute();
+    const refused = await designDelete(
+      appRequest(`/api/v1/designs/${submitted}`, { method: "DELETE", cookie: cookies.dana }),
+      params(submitted),
+    );
     expect(refused.status).toBe(409);
     expect((await refused.json()).error.message).toMatch(/never submitted/);
-    const frozenPut = await designPut(appRequest(`/api/v1/designs/${submitted}`, { method: "PUT", cookie: cookies.dana, body: { baseVersion: 1, document: (await readDesign(submitted)).body.workingRevision.document } }), params(submitted));
+    const frozenPut = await designPut(
+      appRequest(`/api/v1/designs/${submitted}`, {
+        method: "PUT",
+        cookie: cookies.dana,
+        body: { baseVersion: 1, document: (await readDesign(submitted)).body.workingRevision.document },
+      }),
+      params(submitted),
+    );
     expect(frozenPut.status).toBe(409);
     expect((await frozenPut.json()).error.message).toBe("This revision is in review and cannot be edited.");
   });
@@ -156,13 +320,23 @@ describe("designs API", () => {
   it("POST /api/v1/analyses returns the core's result for a document and 422 with field paths for a bad one", async () => {
     const id = await createViaApi("API analysis source");
     const document = (await readDesign(id)).body.workingRevision.document;
-    const ok = await analysesPost(appRequest("/api/v1/analyses", { method: "POST", cookie: cookies.arlo, body: document }));
+    const ok = await analysesPost(
+      appRequest("/api/v1/analyses", { method: "POST", cookie: cookies.arlo, body: document }),
+    );
     expect(ok.status).toBe(200);
     const result = await ok.json();
     expect(result).toEqual((await readDesign(id)).body.workingRevision.result);
-    const wrapped = await analysesPost(appRequest("/api/v1/analyses", { method: "POST", cookie: cookies.arlo, body: { document } }));
+    const wrapped = await analysesPost(
+      appRequest("/api/v1/analyses", { method: "POST", cookie: cookies.arlo, body: { document } }),
+    );
     expect(wrapped.status).toBe(200);
-    const bad = await analysesPost(appRequest("/api/v1/analyses", { method: "POST", cookie: cookies.arlo, body: { ...document, fastener: { ...document.fastener, holeDiameterMm: "wide" } } }));
+    const bad = await analysesPost(
+      appRequest("/api/v1/analyses", {
+        method: "POST",
+        cookie: cookies.arlo,
+        body: { ...document, fastener: { ...document.fastener, holeDiameterMm: "wide" } },
+      }),
+    );
     expect(bad.status).toBe(422);
     expect((await bad.json()).error.fieldErrors).toHaveProperty(["document.fastener.holeDiameterMm"]);
   });

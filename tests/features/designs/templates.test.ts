@@ -13,13 +13,19 @@ const meta = { name: "Template check", equipmentTag: "E-2107", units: "SI" as co
 
 function defaultsOf(kind: string): Record<string, string> {
   const choice = TEMPLATE_CHOICES.find((c) => c.kind === kind)!;
-  return { name: "Template check", equipmentTag: "E-2107", kind, ...Object.fromEntries(choice.fields.map((f) => [f.name, f.defaultValue])) };
+  return {
+    name: "Template check",
+    equipmentTag: "E-2107",
+    kind,
+    ...Object.fromEntries(choice.fields.map((f) => [f.name, f.defaultValue])),
+  };
 }
 
 function nonFiniteNumbers(value: unknown, path = "", out: string[] = []): string[] {
   if (typeof value === "number" && !Number.isFinite(value)) out.push(path);
   else if (Array.isArray(value)) value.forEach((v, i) => nonFiniteNumbers(v, `${path}[${i}]`, out));
-  else if (value && typeof value === "object") for (const [k, v] of Object.entries(value)) nonFiniteNumbers(v, `${path}.${k}`, out);
+  else if (value && typeof value === "object")
+    for (const [k, v] of Object.entries(value)) nonFiniteNumbers(v, `${path}.${k}`, out);
   return out;
 }
 
@@ -41,14 +47,26 @@ describe("design templates", () => {
   }
 
   it("places the bolts at equal pitch straddling the top centre line (first bolt half a pitch from s = 0)", () => {
-    const d = buildDesignFromTemplate(meta, { kind: "circular-flange", outsideDiameterMm: 400, boreDiameterMm: 200, boltCircleDiameterMm: 340, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 });
+    const d = buildDesignFromTemplate(meta, {
+      kind: "circular-flange",
+      outsideDiameterMm: 400,
+      boreDiameterMm: 200,
+      boltCircleDiameterMm: 340,
+      boltCount: 12,
+      boltSize: "M20",
+      flangeThicknessMm: 30,
+    });
     const pitch = (Math.PI * 340) / 12;
     expect(d.bolts[0].sMm).toBeCloseTo(pitch / 2, 6);
     expect(d.bolts[11].sMm - d.bolts[10].sMm).toBeCloseTo(pitch, 6);
   });
 
   it("takes OD, bolt circle and bolting of a catalogue pipe flange from the ASME B16.5 Class 150 row", () => {
-    const d = buildDesignFromTemplate(meta, { kind: "pipe-flange", flangeTemplateId: "asme-b16.5-cl150-nps6", flangeThicknessMm: 25 });
+    const d = buildDesignFromTemplate(meta, {
+      kind: "pipe-flange",
+      flangeTemplateId: "asme-b16.5-cl150-nps6",
+      flangeThicknessMm: 25,
+    });
     expect(d.outline).toEqual({ kind: "circle", diameterMm: 11 * 25.4 });
     expect(d.boltPath).toEqual({ kind: "circle", diameterMm: 9.5 * 25.4 });
     expect(d.bolts).toHaveLength(8);
@@ -58,7 +76,15 @@ describe("design templates", () => {
 });
 
 describe("new-design form validation", () => {
-  const numberFields = ["widthMm", "heightMm", "boltEdgeDistanceMm", "boltCount", "coverThicknessMm", "flangeThicknessMm", "gasketWidthMm"];
+  const numberFields = [
+    "widthMm",
+    "heightMm",
+    "boltEdgeDistanceMm",
+    "boltCount",
+    "coverThicknessMm",
+    "flangeThicknessMm",
+    "gasketWidthMm",
+  ];
   const badValues: [string, string, RegExp][] = [
     ["empty", "", /is required/],
     ["negative", "-20", /greater than zero|at least/],
@@ -78,20 +104,31 @@ describe("new-design form validation", () => {
   }
 
   it("an empty name, an unknown bolt size and an unknown template are each named", () => {
-    const r1 = newDesignFormSchema.safeParse({ ...defaultsOf("obround-manway"), name: "  ", boltSize: "M99" });
+    const r1 = newDesignFormSchema.safeParse({
+      ...defaultsOf("obround-manway"),
+      name: "  ",
+      boltSize: "M99",
+    });
     expect(Object.keys(z.flattenError(r1.error!).fieldErrors).sort()).toEqual(["boltSize", "name"]);
     const r2 = newDesignFormSchema.safeParse({ name: "x", kind: "teapot" });
     expect(z.flattenError(r2.error!).fieldErrors).toHaveProperty("kind");
   });
 
   it("bolt holes outside the flange: a bolt circle too close to the edge is refused at the bolt circle", () => {
-    const r = newDesignFormSchema.safeParse({ ...defaultsOf("circular-flange"), boltCircleDiameterMm: "395" });
-    expect(z.flattenError(r.error!).fieldErrors).toEqual({ boltCircleDiameterMm: [expect.stringMatching(/inside the outside diameter/)] });
+    const r = newDesignFormSchema.safeParse({
+      ...defaultsOf("circular-flange"),
+      boltCircleDiameterMm: "395",
+    });
+    expect(z.flattenError(r.error!).fieldErrors).toEqual({
+      boltCircleDiameterMm: [expect.stringMatching(/inside the outside diameter/)],
+    });
   });
 
   it("bolt holes outside the cover: an edge distance smaller than the hole radius is refused at the edge distance", () => {
     const r = newDesignFormSchema.safeParse({ ...defaultsOf("rectangular-cover"), boltEdgeDistanceMm: "8" });
-    expect(z.flattenError(r.error!).fieldErrors).toEqual({ boltEdgeDistanceMm: [expect.stringMatching(/stay inside the edge/)] });
+    expect(z.flattenError(r.error!).fieldErrors).toEqual({
+      boltEdgeDistanceMm: [expect.stringMatching(/stay inside the edge/)],
+    });
   });
 
   it("too many bolts for the path is refused once, at the bolt count", () => {

@@ -44,7 +44,12 @@ describe("move a bolt", () => {
     const r = 170;
     // Slot 1 (b2) is at 1.5 pitches = 67.5°; drop b2 at 69° on a point 3 mm outside the path.
     const a = (69 * Math.PI) / 180;
-    const t = resolveMoveTarget(d, "b2", { x: (r + 3) * Math.sin(a), y: (r + 3) * Math.cos(a) }, { snapMm: 10 });
+    const t = resolveMoveTarget(
+      d,
+      "b2",
+      { x: (r + 3) * Math.sin(a), y: (r + 3) * Math.cos(a) },
+      { snapMm: 10 },
+    );
     expect(t.snapped).toBe(true);
     expect(t.sMm).toBeCloseTo(1.5 * (L / 8), 9);
     expect(t.offPathMm).toBe(0);
@@ -57,7 +62,12 @@ describe("move a bolt", () => {
     expect(onPath.snapped).toBe(false);
     expect(onPath.sMm).toBeCloseTo((80 / 360) * Math.PI * 340, 6);
     expect(onPath.offPathMm).toBe(0);
-    const free = resolveMoveTarget(d, "b2", { x: 175 * Math.sin(a), y: 175 * Math.cos(a) }, { free: true, snapMm: 50 });
+    const free = resolveMoveTarget(
+      d,
+      "b2",
+      { x: 175 * Math.sin(a), y: 175 * Math.cos(a) },
+      { free: true, snapMm: 50 },
+    );
     expect(free.offPathMm).toBeCloseTo(5, 9);
   });
 
@@ -116,8 +126,12 @@ describe("add, delete, renumber, rotate", () => {
   it("rotates the whole pattern and keeps every pitch", () => {
     const d = placeBoltsEqually(makeCover(), 16);
     const r = rotatePattern(d, 17);
-    const before = getNeighbourSpacings(d).map((s) => s.pitchMm).sort();
-    const after = getNeighbourSpacings(r).map((s) => s.pitchMm).sort();
+    const before = getNeighbourSpacings(d)
+      .map((s) => s.pitchMm)
+      .sort();
+    const after = getNeighbourSpacings(r)
+      .map((s) => s.pitchMm)
+      .sort();
     after.forEach((p, i) => expect(p).toBeCloseTo(before[i], 9));
     expect(r.bolts[0].sMm).toBeCloseTo(d.bolts[0].sMm + 17, 9);
   });

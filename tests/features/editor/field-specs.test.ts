@@ -6,10 +6,19 @@ describe("number fields", () => {
   it("refuses empty, non-numeric, negative and absurdly large values with a message naming the field", () => {
     const spec = FIELD_SPECS.boltLength;
     expect(parseNumberField(spec, "", "SI")).toEqual({ ok: false, message: "Bolt length is required." });
-    expect(parseNumberField(spec, "abc", "SI")).toEqual({ ok: false, message: "Bolt length must be a number." });
+    expect(parseNumberField(spec, "abc", "SI")).toEqual({
+      ok: false,
+      message: "Bolt length must be a number.",
+    });
     expect(parseNumberField(spec, "12abc", "SI").ok).toBe(false);
-    expect(parseNumberField(spec, "-5", "SI")).toEqual({ ok: false, message: "Bolt length must be greater than zero." });
-    expect(parseNumberField(spec, "1e9", "SI")).toEqual({ ok: false, message: "Bolt length must be at most 5000 mm." });
+    expect(parseNumberField(spec, "-5", "SI")).toEqual({
+      ok: false,
+      message: "Bolt length must be greater than zero.",
+    });
+    expect(parseNumberField(spec, "1e9", "SI")).toEqual({
+      ok: false,
+      message: "Bolt length must be at most 5000 mm.",
+    });
     expect(parseNumberField(spec, "Infinity", "SI").ok).toBe(false);
   });
 

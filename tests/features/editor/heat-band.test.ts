@@ -15,7 +15,9 @@ describe("heat strip along the gasket path", () => {
     expect(quads.length).toBe(MAX_HEAT_QUADS);
     const low = Math.min(...stressMpa) * view.profile.minFactor;
     expect(Math.min(...quads.map((q) => q.stressMpa))).toBe(low);
-    expect(Math.max(...quads.map((q) => q.stressMpa))).toBeLessThanOrEqual(Math.max(...stressMpa) * view.profile.minFactor);
+    expect(Math.max(...quads.map((q) => q.stressMpa))).toBeLessThanOrEqual(
+      Math.max(...stressMpa) * view.profile.minFactor,
+    );
   });
 
   it("keeps one strip per sample when there are few, and lays them round the whole ring", () => {

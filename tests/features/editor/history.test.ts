@@ -27,7 +27,8 @@ describe("undo and redo", () => {
     const d = makeCover();
     let h = createHistory(d);
     h = reduce(h, { type: "drag-start" });
-    for (let i = 1; i <= 30; i++) h = reduce(h, { type: "move-bolt", boltId: "b1", sMm: 60 + i, offPathMm: 0 });
+    for (let i = 1; i <= 30; i++)
+      h = reduce(h, { type: "move-bolt", boltId: "b1", sMm: 60 + i, offPathMm: 0 });
     expect(h.past).toHaveLength(0);
     expect(canUndo(h)).toBe(false);
     h = reduce(h, { type: "drag-end" });

@@ -31,7 +31,9 @@ describe("mergePreview (drag-time result)", () => {
     const merged = mergePreview(base, previewJoint(after));
     const ids = (cs: { id: string }[]) => cs.map((c) => c.id);
     expect(ids(merged.checks)).toEqual(ids(analyzeJoint(after).checks));
-    for (const c of merged.checks.filter((x) => !x.id.startsWith("spacing.") && !x.id.startsWith("gasket."))) {
+    for (const c of merged.checks.filter(
+      (x) => !x.id.startsWith("spacing.") && !x.id.startsWith("gasket."),
+    )) {
       expect(c).toBe(base.checks.find((b) => b.id === c.id));
     }
     const { failCount, warnCount, passCount } = merged.summary;

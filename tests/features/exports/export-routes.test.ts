@@ -5,7 +5,10 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as jobGet } from "@/app/api/v1/jobs/[jobId]/route";
 import { GET as dxfGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/drilling.dxf/route";
 import { GET as csvGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/holes.csv/route";
-import { GET as pdfGet, POST as pdfPost } from "@/app/api/v1/designs/[designId]/revisions/[number]/sheet.pdf/route";
+import {
+  GET as pdfGet,
+  POST as pdfPost,
+} from "@/app/api/v1/designs/[designId]/revisions/[number]/sheet.pdf/route";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { CORE_VERSION } from "@/features/analysis/core/version";
 import { computeContentHash } from "@/features/reviews/model/content-hash";
@@ -22,10 +25,23 @@ let rival: OrganizationFixture<"outsider">;
 let smallId: string;
 let bigId: string;
 
-async function insertDesign(org: OrganizationFixture<string>, ownerId: string, approverId: string, document: JointDesign, tag: string, status: "in_review" | "approved") {
+async function insertDesign(
+  org: OrganizationFixture<string>,
+  ownerId: string,
+  approverId: string,
+  document: JointDesign,
+  tag: string,
+  status: "in_review" | "approved",
+) {
   const design = await db
     .insertInto("designs")
-    .values({ organization_id: org.organizationId, name: document.name, equipment_tag: tag, outline_kind: document.outline.kind, owner_id: ownerId })
+    .values({
+      organization_id: org.organizationId,
+      name: document.name,
+      equipment_tag: tag,
+      outline_kind: document.outline.kind,
+      owner_id: ownerId,
+    })
     .returning("id")
     .executeTakeFirstOrThrow();
   const result = analyse(document);
@@ -53,7 +69,9 @@ async function insertDesign(org: OrganizationFixture<string>, ownerId: string, a
 
 async function dropOrg(org: OrganizationFixture<string>) {
   await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(trx);
+    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
+      trx,
+    );
     await trx.deleteFrom("export_files").where("organization_id", "=", org.organizationId).execute();
     await trx.deleteFrom("design_revisions").where("organization_id", "=", org.organizationId).execute();
     await trx.deleteFrom("designs").where("organization_id", "=", org.organizationId).execute();
@@ -63,13 +81,28 @@ async function dropOrg(org: OrganizationFixture<string>) {
 }
 
 const ctx = (designId: string, number = "1") => ({ params: Promise.resolve({ designId, number }) });
-const url = (designId: string, file: string, query = "") => `/api/v1/designs/${designId}/revisions/1/${file}${query}`;
+const url = (designId: string, file: string, query = "") =>
+  `/api/v1/designs/${designId}/revisions/1/${file}${query}`;
 
 beforeAll(async () => {
   works = await createOrganizationWithMembers(db, { designer: ["designer"], approver: ["approver"] });
   rival = await createOrganizationWithMembers(db, { outsider: ["designer", "approver", "admin"] });
-  smallId = await insertDesign(works, works.users.designer.userId, works.users.approver.userId, loadExample("pipe-flange-nps6-spiral-wound"), "E-2107", "approved");
-  bigId = await insertDesign(works, works.users.designer.userId, works.users.approver.userId, manyBoltFlange(96), "E-3301", "in_review");
+  smallId = await insertDesign(
+    works,
+    works.users.designer.userId,
+    works.users.approver.userId,
+    loadExample("pipe-flange-nps6-spiral-wound"),
+    "E-2107",
+    "approved",
+  );
+  bigId = await insertDesign(
+    works,
+    works.users.designer.userId,
+    works.users.approver.userId,
+    manyBoltFlange(96),
+    "E-3301",
+    "in_review",
+  );
 });
 
 afterAll(async () => {
@@ -81,10 +114,15 @@ afterAll(async () => {
 describe("export routes", () => {
   it("streams the sheet to any member with our file name, in the viewer's units, and logs the export", async () => {
     const cookie = await works.cookieFor("approver");
-    const res = await pdfGet(appRequest(url(smallId, "sheet.pdf", "?paper=letter&units=US"), { cookie }), ctx(smallId));
+    const res = await pdfGet(
+      appRequest(url(smallId, "sheet.pdf", "?paper=letter&units=US"), { cookie }),
+      ctx(smallId),
+    );
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
-    expect(res.headers.get("content-disposition")).toBe('attachment; filename="e-2107-rev1-spacing-sheet.pdf"');
+    expect(res.headers.get("content-disposition")).toBe(
+      'attachment; filename="e-2107-rev1-spacing-sheet.pdf"',
+    );
     const pdf = Buffer.from(await res.arrayBuffer());
     const text = pdfToText(pdf);
     expect(text).toContain("APPROVED");
@@ -92,7 +130,11 @@ describe("export routes", () => {
     expect(text).toContain(works.users.approver.displayName);
     expect(text).toContain("x in");
     expect(text).toContain("Snapshot integrity: verified");
-    const log = await db.selectFrom("design_activity").select(["kind", "detail"]).where("design_id", "=", smallId).execute();
+    const log = await db
+      .selectFrom("design_activity")
+      .select(["kind", "detail"])
+      .where("design_id", "=", smallId)
+      .execute();
     expect(log.some((l) => l.kind === "exported" && l.detail.includes("spacing-sheet.pdf"))).toBe(true);
   });
 
@@ -113,32 +155,62 @@ describe("export routes", () => {
 
   it("is a 404 for another organisation's design, a 401 signed out, a 400 for bad options", async () => {
     const outsider = await rival.cookieFor("outsider");
-    for (const [handler, file] of [[pdfGet, "sheet.pdf"], [csvGet, "holes.csv"], [dxfGet, "drilling.dxf"]] as const) {
+    for (const [handler, file] of [
+      [pdfGet, "sheet.pdf"],
+      [csvGet, "holes.csv"],
+      [dxfGet, "drilling.dxf"],
+    ] as const) {
       const res = await handler(appRequest(url(smallId, file), { cookie: outsider }), ctx(smallId));
       expect(res.status).toBe(404);
-      expect(((await res.json()) as { error: { message: string } }).error.message).toBe("This revision does not exist.");
+      expect(((await res.json()) as { error: { message: string } }).error.message).toBe(
+        "This revision does not exist.",
+      );
     }
-    expect((await pdfPost(appRequest(url(bigId, "sheet.pdf"), { method: "POST", cookie: outsider }), ctx(bigId))).status).toBe(404);
+    expect(
+      (await pdfPost(appRequest(url(bigId, "sheet.pdf"), { method: "POST", cookie: outsider }), ctx(bigId)))
+        .status,
+    ).toBe(404);
     expect((await pdfGet(appRequest(url(smallId, "sheet.pdf")), ctx(smallId))).status).toBe(401);
     const cookie = await works.cookieFor("designer");
-    expect((await pdfGet(appRequest(url(smallId, "sheet.pdf"), { cookie }), ctx(smallId, "9"))).status).toBe(404);
+    expect((await pdfGet(appRequest(url(smallId, "sheet.pdf"), { cookie }), ctx(smallId, "9"))).status).toBe(
+      404,
+    );
     const bad = await pdfGet(appRequest(url(smallId, "sheet.pdf", "?paper=a3"), { cookie }), ctx(smallId));
     expect(bad.status).toBe(400);
-    expect(((await bad.json()) as { error: { fieldErrors: Record<string, string[]> } }).error.fieldErrors.paper).toEqual(["Paper must be a4 or letter."]);
+    expect(
+      ((await bad.json()) as { error: { fieldErrors: Record<string, string[]> } }).error.fieldErrors.paper,
+    ).toEqual(["Paper must be a4 or letter."]);
     // A post from another site is refused before anything is queued.
-    expect((await pdfPost(appRequest(url(bigId, "sheet.pdf"), { method: "POST", cookie, origin: "http://evil.example" }), ctx(bigId))).status).toBe(403);
+    expect(
+      (
+        await pdfPost(
+          appRequest(url(bigId, "sheet.pdf"), { method: "POST", cookie, origin: "http://evil.example" }),
+          ctx(bigId),
+        )
+      ).status,
+    ).toBe(403);
   });
 
   it("renders a 96-bolt sheet in the background job queue and hands it out when done", async () => {
     const cookie = await works.cookieFor("designer");
-    const res = await pdfPost(appRequest(url(bigId, "sheet.pdf", "?paper=a4&units=SI"), { method: "POST", cookie }), ctx(bigId));
+    const res = await pdfPost(
+      appRequest(url(bigId, "sheet.pdf", "?paper=a4&units=SI"), { method: "POST", cookie }),
+      ctx(bigId),
+    );
     expect(res.status).toBe(202);
     const { jobId, statusUrl } = (await res.json()) as { jobId: string; statusUrl: string };
     expect(statusUrl).toBe(`/api/v1/jobs/${jobId}`);
     const jobCtx = { params: Promise.resolve({ jobId }) };
     // Another organisation cannot see the job.
-    expect((await jobGet(appRequest(statusUrl, { cookie: await rival.cookieFor("outsider") }), jobCtx)).status).toBe(404);
-    let status: { status: string; progress: number; downloadUrl: string | null; error: string | null } = { status: "queued", progress: 0, downloadUrl: null, error: null };
+    expect(
+      (await jobGet(appRequest(statusUrl, { cookie: await rival.cookieFor("outsider") }), jobCtx)).status,
+    ).toBe(404);
+    let status: { status: string; progress: number; downloadUrl: string | null; error: string | null } = {
+      status: "queued",
+      progress: 0,
+      downloadUrl: null,
+      error: null,
+    };
     const seen = new Set<string>();
     for (let i = 0; i < 120 && status.status !== "done" && status.status !== "failed"; i++) {
       const poll = await jobGet(appRequest(statusUrl, { cookie }), jobCtx);
@@ -153,7 +225,9 @@ describe("export routes", () => {
     expect(status.downloadUrl).toBe(`/api/v1/jobs/${jobId}?download=1`);
     const file = await jobGet(appRequest(status.downloadUrl!, { cookie }), jobCtx);
     expect(file.status).toBe(200);
-    expect(file.headers.get("content-disposition")).toBe('attachment; filename="e-3301-rev1-spacing-sheet.pdf"');
+    expect(file.headers.get("content-disposition")).toBe(
+      'attachment; filename="e-3301-rev1-spacing-sheet.pdf"',
+    );
     const text = pdfToText(Buffer.from(await file.arrayBuffer()));
     expect(text).toContain("NOT APPROVED");
     for (let i = 1; i <= 96; i++) expect(text).toMatch(new RegExp(`^${i}\\s+b${i}\\b`, "m"));

@@ -10,8 +10,12 @@ import type { SheetInput } from "@/server/pdf/sheet-input";
 
 // Shared helpers of the export suites: the example documents, a 96-bolt flange built from one by
 // re-placing its bolts with the core's geometry helper, and poppler (pdftotext/pdftoppm) wrappers.
-export function loadExample(name: "pipe-flange-nps6-spiral-wound" | "obround-manway" | "rectangular-cover-full-face"): JointDesign {
-  return JSON.parse(readFileSync(path.join(process.cwd(), "examples", `${name}.json`), "utf8")) as JointDesign;
+export function loadExample(
+  name: "pipe-flange-nps6-spiral-wound" | "obround-manway" | "rectangular-cover-full-face",
+): JointDesign {
+  return JSON.parse(
+    readFileSync(path.join(process.cwd(), "examples", `${name}.json`), "utf8"),
+  ) as JointDesign;
 }
 
 /** A large girth flange: the NPS 6 example scaled up and re-drilled with `count` bolts. */
@@ -23,7 +27,10 @@ export function manyBoltFlange(count = 96): JointDesign {
     units: "SI",
     outline: { kind: "circle", diameterMm: 2300 },
     bore: { kind: "circle", diameterMm: 2000 },
-    gasket: base.gasket.kind === "ring" ? { ...base.gasket, geometry: { kind: "annulus", innerDiameterMm: 2010, outerDiameterMm: 2120 } } : base.gasket,
+    gasket:
+      base.gasket.kind === "ring"
+        ? { ...base.gasket, geometry: { kind: "annulus", innerDiameterMm: 2010, outerDiameterMm: 2120 } }
+        : base.gasket,
     boltPath: { kind: "circle", diameterMm: 2200 },
     bolts: [],
   };
@@ -34,7 +41,10 @@ export function analyse(design: JointDesign): JointAnalysis {
   return analyzeJoint(design);
 }
 
-export function sheetInputFor(design: JointDesign, overrides: Partial<SheetInput> & { status?: SheetInput["revision"]["status"] } = {}): SheetInput {
+export function sheetInputFor(
+  design: JointDesign,
+  overrides: Partial<SheetInput> & { status?: SheetInput["revision"]["status"] } = {},
+): SheetInput {
   const { status, ...rest } = overrides;
   return {
     design: { name: design.name, equipmentTag: "E-2107" },
@@ -66,11 +76,20 @@ export function withTempDir<T>(fn: (dir: string) => T): T {
   }
 }
 
-export function pdfToText(pdf: Buffer, options: { first?: number; last?: number; layout?: boolean } = {}): string {
+export function pdfToText(
+  pdf: Buffer,
+  options: { first?: number; last?: number; layout?: boolean } = {},
+): string {
   return withTempDir((dir) => {
     const file = path.join(dir, "sheet.pdf");
     writeFileSync(file, pdf);
-    const args = [...(options.layout ? ["-layout"] : []), ...(options.first ? ["-f", String(options.first)] : []), ...(options.last ? ["-l", String(options.last)] : []), file, "-"];
+    const args = [
+      ...(options.layout ? ["-layout"] : []),
+      ...(options.first ? ["-f", String(options.first)] : []),
+      ...(options.last ? ["-l", String(options.last)] : []),
+      file,
+      "-",
+    ];
     return execFileSync("/usr/bin/pdftotext", args, { encoding: "utf8" });
   });
 }
@@ -88,12 +107,15 @@ export function pdfWords(pdf: Buffer, page: number): { width: number; height: nu
   const html = withTempDir((dir) => {
     const file = path.join(dir, "sheet.pdf");
     writeFileSync(file, pdf);
-    return execFileSync("/usr/bin/pdftotext", ["-bbox", "-f", String(page), "-l", String(page), file, "-"], { encoding: "utf8" });
+    return execFileSync("/usr/bin/pdftotext", ["-bbox", "-f", String(page), "-l", String(page), file, "-"], {
+      encoding: "utf8",
+    });
   });
   const pageTag = /<page width="([\d.]+)" height="([\d.]+)"/.exec(html);
   const words: PdfWord[] = [];
   const re = /<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g;
-  for (let m = re.exec(html); m; m = re.exec(html)) words.push({ xMin: +m[1], yMin: +m[2], xMax: +m[3], yMax: +m[4], text: m[5] });
+  for (let m = re.exec(html); m; m = re.exec(html))
+    words.push({ xMin: +m[1], yMin: +m[2], xMax: +m[3], yMax: +m[4], text: m[5] });
   return { width: pageTag ? +pageTag[1] : 0, height: pageTag ? +pageTag[2] : 0, words };
 }
 
@@ -118,7 +140,18 @@ export function renderFirstPagePng(pdf: Buffer, dpi = 50): { png: Buffer; raster
   const png = withTempDir((dir) => {
     const file = path.join(dir, "sheet.pdf");
     writeFileSync(file, pdf);
-    execFileSync("/usr/bin/pdftoppm", ["-r", String(dpi), "-png", "-f", "1", "-l", "1", "-singlefile", file, path.join(dir, "page")]);
+    execFileSync("/usr/bin/pdftoppm", [
+      "-r",
+      String(dpi),
+      "-png",
+      "-f",
+      "1",
+      "-l",
+      "1",
+      "-singlefile",
+      file,
+      path.join(dir, "page"),
+    ]);
     return readFileSync(path.join(dir, "page.png"));
   });
   return { png, raster: decodePng(png) };
@@ -143,7 +176,8 @@ export function decodePng(png: Buffer): Raster {
     } else if (type === "IDAT") idat.push(data);
     offset += 12 + length;
   }
-  const channels = colourType === 2 ? 3 : colourType === 6 ? 4 : colourType === 0 ? 1 : colourType === 4 ? 2 : 0;
+  const channels =
+    colourType === 2 ? 3 : colourType === 6 ? 4 : colourType === 0 ? 1 : colourType === 4 ? 2 : 0;
   if (!channels) throw new Error(`PNG colour type ${colourType} not handled`);
   const raw = inflateSync(Buffer.concat(idat));
   const stride = width * channels;

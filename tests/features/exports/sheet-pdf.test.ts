@@ -1,10 +1,25 @@
 import { describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { getBoltPath, getBoltPoints, getNeighbourSpacings, pointAtArcLength } from "@/features/analysis/core/geometry";
+import {
+  getBoltPath,
+  getBoltPoints,
+  getNeighbourSpacings,
+  pointAtArcLength,
+} from "@/features/analysis/core/geometry";
 import { flangeTransform } from "@/server/pdf/draw-flange";
 import { drawingBox, renderSpacingSheet } from "@/server/pdf/render-sheet";
 import type { SheetInput } from "@/server/pdf/sheet-input";
-import { analyse, loadExample, manyBoltFlange, pdfPageCount, pdfToText, pdfWords, renderFirstPagePng, sheetInputFor, type Raster } from "./fixtures";
+import {
+  analyse,
+  loadExample,
+  manyBoltFlange,
+  pdfPageCount,
+  pdfToText,
+  pdfWords,
+  renderFirstPagePng,
+  sheetInputFor,
+  type Raster,
+} from "./fixtures";
 
 // The bolt-spacing sheet read back the way a person or a script would: text extraction
 // (pdftotext), the first page as a 50 dpi PNG (pdftoppm), and the raw bytes.
@@ -27,7 +42,11 @@ function rimInk(raster: Raster, input: SheetInput, xMm: number, yMm: number, dpi
 }
 
 /** How many of the design's bolt positions show a drawn hole on page 1 (and how many gaps do). */
-function countDrawnHoles(pdf: Buffer, input: SheetInput, expected: JointDesign): { holes: number; gaps: number; blank: boolean } {
+function countDrawnHoles(
+  pdf: Buffer,
+  input: SheetInput,
+  expected: JointDesign,
+): { holes: number; gaps: number; blank: boolean } {
   const { raster } = renderFirstPagePng(pdf, 50);
   const blank = raster.gray.every((v) => v > 250);
   const holes = getBoltPoints(expected).filter((p) => rimInk(raster, input, p.x, p.y, 50) >= 0.5).length;
@@ -58,7 +77,8 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     expect(text).toContain("2026-11-30");
     expect(text).not.toContain("NOT APPROVED");
     // Every bolt is a row of the bolt table: "<number> b<number>" at the start of a line.
-    for (let i = 1; i <= design.bolts.length; i++) expect(text).toMatch(new RegExp(`^${i}\\s+${design.bolts[i - 1].id}\\b`, "m"));
+    for (let i = 1; i <= design.bolts.length; i++)
+      expect(text).toMatch(new RegExp(`^${i}\\s+${design.bolts[i - 1].id}\\b`, "m"));
     const result = input.result as ReturnType<typeof analyse>;
     // One row per check kind (pair and per-bolt checks grouped): each row shows the worst stored
     // status of its kind, and its tally names every stored status of the kind.
@@ -76,8 +96,11 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
       if (list.length > 1) expect(flat).toContain(`${list.length} checks:`);
     }
     // Stored counts appear as stored (no recomputation): "<p> pass · <w> warn · <f> fail".
-    expect(text.replace(/\s+/g, " ")).toContain(`${result.summary.passCount} pass · ${result.summary.warnCount} warn · ${result.summary.failCount} fail`);
-    for (const caution of ["engineering estimates", "governing code", "gasket manufacturer", "licensed"]) expect(text).toContain(caution);
+    expect(text.replace(/\s+/g, " ")).toContain(
+      `${result.summary.passCount} pass · ${result.summary.warnCount} warn · ${result.summary.failCount} fail`,
+    );
+    for (const caution of ["engineering estimates", "governing code", "gasket manufacturer", "licensed"])
+      expect(text).toContain(caution);
     expect(text).toContain("TABLES AND EDITIONS USED");
     expect(text).toContain("ASSEMBLY PLAN");
     expect(text).toContain("GASKET STRESS ALONG THE PATH");
@@ -88,12 +111,17 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
       const pdf = await renderSpacingSheet(sheetInputFor(loadExample("obround-manway"), { status }));
       const pages = pdfPageCount(pdf);
       expect(pages).toBeGreaterThan(1);
-      for (let p = 1; p <= pages; p++) expect(pdfToText(pdf, { first: p, last: p })).toContain("NOT APPROVED");
+      for (let p = 1; p <= pages; p++)
+        expect(pdfToText(pdf, { first: p, last: p })).toContain("NOT APPROVED");
     }
   });
 
   it("draws a hole at every bolt position of page 1 (50 dpi PNG), and the measure misses a removed bolt", async () => {
-    for (const design of [loadExample("pipe-flange-nps6-spiral-wound"), loadExample("obround-manway"), loadExample("rectangular-cover-full-face")]) {
+    for (const design of [
+      loadExample("pipe-flange-nps6-spiral-wound"),
+      loadExample("obround-manway"),
+      loadExample("rectangular-cover-full-face"),
+    ]) {
       const input = sheetInputFor(design);
       const full = countDrawnHoles(await renderSpacingSheet(input), input, design);
       expect(full.blank).toBe(false);
@@ -102,7 +130,9 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
       // The same sheet with the third bolt taken out of the document: one hole fewer is found.
       const fewer = { ...design, bolts: design.bolts.filter((_, i) => i !== 2) };
       const inputFewer = sheetInputFor(fewer);
-      expect(countDrawnHoles(await renderSpacingSheet(inputFewer), inputFewer, design).holes).toBe(design.bolts.length - 1);
+      expect(countDrawnHoles(await renderSpacingSheet(inputFewer), inputFewer, design).holes).toBe(
+        design.bolts.length - 1,
+      );
     }
   });
 
@@ -122,7 +152,14 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     const box = drawingBox("a4");
     const { words } = pdfWords(pdf, 1);
     const labels = words
-      .filter((w) => /^\d+$/.test(w.text) && w.xMin >= box.x && w.xMax <= box.x + box.w && w.yMin >= box.y && w.yMax <= box.y + box.h - 12)
+      .filter(
+        (w) =>
+          /^\d+$/.test(w.text) &&
+          w.xMin >= box.x &&
+          w.xMax <= box.x + box.w &&
+          w.yMin >= box.y &&
+          w.yMax <= box.y + box.h - 12,
+      )
       .map((w) => Number(w.text))
       .sort((a, b) => a - b);
     expect(labels).toEqual(Array.from({ length: 96 }, (_, i) => i + 1));
@@ -165,7 +202,15 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     if (!open) return; // the example passes everything: nothing to justify
     const input = sheetInputFor(design, {
       result,
-      justifications: [{ checkId: open.id, status: open.status as "warn" | "fail", text: "Accepted by the shop: studs replaced by B16 stock.", by: "Arlo Approver", at: "2026-11-30T09:00:00.000Z" }],
+      justifications: [
+        {
+          checkId: open.id,
+          status: open.status as "warn" | "fail",
+          text: "Accepted by the shop: studs replaced by B16 stock.",
+          by: "Arlo Approver",
+          at: "2026-11-30T09:00:00.000Z",
+        },
+      ],
     });
     const text = pdfToText(await renderSpacingSheet(input)).replace(/\s+/g, " ");
     expect(text).toContain("Accepted by the shop: studs replaced by B16 stock.");

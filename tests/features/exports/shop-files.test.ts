@@ -29,14 +29,25 @@ describe.each(cases)("shop files of the %s", (_label, design) => {
   it("hole list: a header naming the unit and every hole at its coordinates", () => {
     const csv = holeListFor(design, result);
     const rows = parse(csv, { columns: true, skip_empty_lines: true }) as Record<string, string>[];
-    expect(Object.keys(rows[0])).toEqual(["number", "id", "angle_deg_cw_from_top", `x_${unit}`, `y_${unit}`, `hole_diameter_${unit}`, "bolt_size", "tightening_order"]);
+    expect(Object.keys(rows[0])).toEqual([
+      "number",
+      "id",
+      "angle_deg_cw_from_top",
+      `x_${unit}`,
+      `y_${unit}`,
+      `hole_diameter_${unit}`,
+      "bolt_size",
+      "tightening_order",
+    ]);
     expect(rows).toHaveLength(design.bolts.length);
     rows.forEach((row, i) => {
       expect(row.number).toBe(String(i + 1));
       expect(row.id).toBe(design.bolts[i].id);
       expect(Math.abs(Number(row[`x_${unit}`]) * k - expected[i].x)).toBeLessThan(TOL_MM);
       expect(Math.abs(Number(row[`y_${unit}`]) * k - expected[i].y)).toBeLessThan(TOL_MM);
-      expect(Math.abs(Number(row[`hole_diameter_${unit}`]) * k - design.fastener.holeDiameterMm)).toBeLessThan(TOL_MM);
+      expect(
+        Math.abs(Number(row[`hole_diameter_${unit}`]) * k - design.fastener.holeDiameterMm),
+      ).toBeLessThan(TOL_MM);
       expect(row.bolt_size).toBe(design.fastener.designation);
     });
     // The tightening order is the stored plan's sequence, each position used once.
@@ -56,7 +67,12 @@ describe.each(cases)("shop files of the %s", (_label, design) => {
       if (name === "GASKET" && design.gasket.kind !== "ring") continue;
       expect(layers).toContain(name);
     }
-    const entities = dxf!.entities as { type: string; layer: string; center?: { x: number; y: number }; radius?: number }[];
+    const entities = dxf!.entities as {
+      type: string;
+      layer: string;
+      center?: { x: number; y: number };
+      radius?: number;
+    }[];
     const holes = entities.filter((e) => e.type === "CIRCLE" && e.layer === "HOLES");
     expect(holes).toHaveLength(design.bolts.length);
     for (const p of expected) {
@@ -64,7 +80,9 @@ describe.each(cases)("shop files of the %s", (_label, design) => {
       expect(hit).toHaveLength(1);
       expect(Math.abs(hit[0].radius! * k * 2 - design.fastener.holeDiameterMm)).toBeLessThan(TOL_MM);
     }
-    expect(entities.filter((e) => e.type === "LINE" && e.layer === "CENTRE-MARKS")).toHaveLength(2 * design.bolts.length);
+    expect(entities.filter((e) => e.type === "LINE" && e.layer === "CENTRE-MARKS")).toHaveLength(
+      2 * design.bolts.length,
+    );
     expect(entities.some((e) => e.layer === "OUTLINE")).toBe(true);
     expect(entities.some((e) => e.layer === "BOLT-PATH")).toBe(true);
   });
@@ -72,9 +90,17 @@ describe.each(cases)("shop files of the %s", (_label, design) => {
 
 describe("export file names", () => {
   it("use the equipment tag, else the design name, with the revision and the kind", () => {
-    expect(exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "spacing-sheet")).toBe("e-2107-rev3-spacing-sheet.pdf");
-    expect(exportFileName({ equipmentTag: " ", designName: "Manway M1 / north" }, 12, "hole-list")).toBe("manway-m1-north-rev12-hole-list.csv");
-    expect(exportFileName({ equipmentTag: "", designName: "Flänge ½" }, 1, "drilling-template")).toBe("flange-1-2-rev1-drilling-template.dxf");
-    expect(exportFileName({ equipmentTag: "", designName: "Ø" }, 2, "hole-list")).toBe("design-rev2-hole-list.csv");
+    expect(exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "spacing-sheet")).toBe(
+      "e-2107-rev3-spacing-sheet.pdf",
+    );
+    expect(exportFileName({ equipmentTag: " ", designName: "Manway M1 / north" }, 12, "hole-list")).toBe(
+      "manway-m1-north-rev12-hole-list.csv",
+    );
+    expect(exportFileName({ equipmentTag: "", designName: "Flänge ½" }, 1, "drilling-template")).toBe(
+      "flange-1-2-rev1-drilling-template.dxf",
+    );
+    expect(exportFileName({ equipmentTag: "", designName: "Ø" }, 2, "hole-list")).toBe(
+      "design-rev2-hole-list.csv",
+    );
   });
 });

@@ -7,9 +7,22 @@ import { prepareImport } from "@/features/imports/model/prepare-import";
 describe("bolt positions from CSV", () => {
   it("reads x, y and d columns in mm, or inches when asked", () => {
     const r = parseBoltCsv("x,y,d\n100,0,22\n0,100,22\n-100,0,22\n");
-    expect(r).toEqual({ ok: true, holes: [{ xMm: 100, yMm: 0, diameterMm: 22 }, { xMm: 0, yMm: 100, diameterMm: 22 }, { xMm: -100, yMm: 0, diameterMm: 22 }] });
+    expect(r).toEqual({
+      ok: true,
+      holes: [
+        { xMm: 100, yMm: 0, diameterMm: 22 },
+        { xMm: 0, yMm: 100, diameterMm: 22 },
+        { xMm: -100, yMm: 0, diameterMm: 22 },
+      ],
+    });
     const inches = parseBoltCsv("X,Y\n1,2\n3,4\n", { unit: "in", defaultDiameterMm: 20 });
-    expect(inches).toEqual({ ok: true, holes: [{ xMm: 25.4, yMm: 2 * 25.4, diameterMm: 20 }, { xMm: 3 * 25.4, yMm: 4 * 25.4, diameterMm: 20 }] });
+    expect(inches).toEqual({
+      ok: true,
+      holes: [
+        { xMm: 25.4, yMm: 2 * 25.4, diameterMm: 20 },
+        { xMm: 3 * 25.4, yMm: 4 * 25.4, diameterMm: 20 },
+      ],
+    });
   });
 
   it("names the row and the column of every bad value", () => {
@@ -24,13 +37,20 @@ describe("bolt positions from CSV", () => {
   });
 
   it("refuses a file without x and y columns", () => {
-    expect(parseBoltCsv("a,b\n1,2\n")).toMatchObject({ ok: false, message: expect.stringMatching(/columns x and y/) });
+    expect(parseBoltCsv("a,b\n1,2\n")).toMatchObject({
+      ok: false,
+      message: expect.stringMatching(/columns x and y/),
+    });
   });
 
   it("in the intake, CSV bolt positions replace the DXF holes and keep their exact coordinates", () => {
     const d = new Drawing();
     d.drawCircle(0, 0, 200);
-    for (const [x, y] of [[150, 0], [-150, 0]]) d.drawCircle(x, y, 9);
+    for (const [x, y] of [
+      [150, 0],
+      [-150, 0],
+    ])
+      d.drawCircle(x, y, 9);
     const rows = Array.from({ length: 6 }, (_, i) => {
       const a = (i * Math.PI) / 3;
       return [Math.round(160 * Math.cos(a) * 1000) / 1000, Math.round(160 * Math.sin(a) * 1000) / 1000];
@@ -40,8 +60,14 @@ describe("bolt positions from CSV", () => {
     if (!r.ok) throw new Error(r.message);
     expect(r.summary).toMatchObject({ boltsFrom: "csv", holeCount: 6, holeDiameterMm: 18 });
     const pts = getBoltPoints(r.built.design);
-    for (const [x, y] of rows) expect(Math.min(...pts.map((p) => Math.hypot(p.x - x, p.y - y)))).toBeLessThan(1e-3);
-    const bad = prepareImport({ dxfText: d.toDxfString(), csvText: "x,y\n1,2\n3,oops\n", name: "x", units: "SI" });
+    for (const [x, y] of rows)
+      expect(Math.min(...pts.map((p) => Math.hypot(p.x - x, p.y - y)))).toBeLessThan(1e-3);
+    const bad = prepareImport({
+      dxfText: d.toDxfString(),
+      csvText: "x,y\n1,2\n3,oops\n",
+      name: "x",
+      units: "SI",
+    });
     expect(bad).toMatchObject({ ok: false, field: "csv", message: 'row 3: y "oops" is not a number' });
   });
 });

@@ -12,7 +12,16 @@ import { sniffContent } from "@/features/attachments/model/sniff-content";
 // exercise the move to the outline's centre.
 const TOL_MM = 1e-3;
 
-function circularFlange(opts: { cx: number; cy: number; od: number; bc: number; n: number; hole: number; bore?: number; units?: "Millimeters" | "Inches" }) {
+function circularFlange(opts: {
+  cx: number;
+  cy: number;
+  od: number;
+  bc: number;
+  n: number;
+  hole: number;
+  bore?: number;
+  units?: "Millimeters" | "Inches";
+}) {
   const d = new Drawing();
   d.setUnits(opts.units ?? "Millimeters");
   d.drawCircle(opts.cx, opts.cy, opts.od / 2);
@@ -38,7 +47,15 @@ function expectSameHoles(actual: { xMm: number; yMm: number }[], expected: { x: 
 
 describe("DXF flange import (drawings written by dxf-writer)", () => {
   it("recovers every bolt hole of a circular flange within 0.001 mm, the outline, and the bore", () => {
-    const { text, holes } = circularFlange({ cx: 150, cy: -40, od: 280, bc: 241.3, n: 8, hole: 22.2, bore: 168.3 });
+    const { text, holes } = circularFlange({
+      cx: 150,
+      cy: -40,
+      od: 280,
+      bc: 241.3,
+      n: 8,
+      hole: 22.2,
+      bore: 168.3,
+    });
     expect(sniffContent(new TextEncoder().encode(text))).toBe("dxf");
     const r = parseDxfFlange(text);
     if (!r.ok) throw new Error(r.message);
@@ -49,20 +66,48 @@ describe("DXF flange import (drawings written by dxf-writer)", () => {
   });
 
   it("reads $INSUNITS inches and converts to mm", () => {
-    const { text, holes } = circularFlange({ cx: 0, cy: 0, od: 11, bc: 9.5, n: 8, hole: 0.875, units: "Inches" });
+    const { text, holes } = circularFlange({
+      cx: 0,
+      cy: 0,
+      od: 11,
+      bc: 9.5,
+      n: 8,
+      hole: 0.875,
+      units: "Inches",
+    });
     const r = parseDxfFlange(text);
     if (!r.ok) throw new Error(r.message);
     expect(r.value.unitsLabel).toBe("inches");
-    expectSameHoles(r.value.boltHoles, holes.map((h) => ({ x: h.x * 25.4, y: h.y * 25.4 })));
+    expectSameHoles(
+      r.value.boltHoles,
+      holes.map((h) => ({ x: h.x * 25.4, y: h.y * 25.4 })),
+    );
     expect(r.value.boltHoles[0].diameterMm).toBeCloseTo(22.225, 6);
   });
 
   it("takes the largest closed polyline as the outline and the most common diameter as bolt holes", () => {
     const d = new Drawing();
     d.setUnits("Millimeters");
-    d.drawPolyline([[10, 10], [710, 10], [710, 510], [10, 510]], true); // 700 × 500 cover, bolts 50 mm from every edge
+    d.drawPolyline(
+      [
+        [10, 10],
+        [710, 10],
+        [710, 510],
+        [10, 510],
+      ],
+      true,
+    ); // 700 × 500 cover, bolts 50 mm from every edge
     const expected: { x: number; y: number }[] = [];
-    for (const [x, y] of [[50, 50], [350, 50], [650, 50], [650, 450], [350, 450], [50, 450], [50, 250], [650, 250]]) {
+    for (const [x, y] of [
+      [50, 50],
+      [350, 50],
+      [650, 50],
+      [650, 450],
+      [350, 450],
+      [50, 450],
+      [50, 250],
+      [650, 250],
+    ]) {
       d.drawCircle(x + 10, y + 10, 9);
       expected.push({ x: x + 10 - 360, y: y + 10 - 260 });
     }
@@ -84,14 +129,25 @@ describe("DXF flange import (drawings written by dxf-writer)", () => {
   });
 
   it("fits a bolt circle through the centres of a circular pattern and keeps every hole", () => {
-    const { text, holes } = circularFlange({ cx: 3, cy: 4, od: 279.4, bc: 241.3, n: 8, hole: 22.225, bore: 168.3 });
+    const { text, holes } = circularFlange({
+      cx: 3,
+      cy: 4,
+      od: 279.4,
+      bc: 241.3,
+      n: 8,
+      hole: 22.225,
+      bore: 168.3,
+    });
     const r = parseDxfFlange(text);
     if (!r.ok) throw new Error(r.message);
     const built = buildImportedDesign({ name: "E-2107 inlet", units: "SI" }, r.value);
     expect(built.fit.rule).toBe("circle-fit");
     expect(built.design.boltPath).toEqual({ kind: "circle", diameterMm: expect.closeTo(241.3, 6) });
     expect(built.design.fastener.designation).toBe("M20");
-    expectSameHoles(getBoltPoints(built.design).map((p) => ({ xMm: p.x, yMm: p.y })), holes);
+    expectSameHoles(
+      getBoltPoints(built.design).map((p) => ({ xMm: p.x, yMm: p.y })),
+      holes,
+    );
     expect(validateJointDesign(built.design)).toEqual([]);
   });
 
@@ -103,12 +159,20 @@ describe("DXF flange import (drawings written by dxf-writer)", () => {
     const lonely = new Drawing();
     lonely.drawCircle(0, 0, 100);
     lonely.drawCircle(50, 0, 5);
-    expect(parseDxfFlange(lonely.toDxfString())).toEqual({ ok: false, message: expect.stringMatching(/No bolt holes/) });
+    expect(parseDxfFlange(lonely.toDxfString())).toEqual({
+      ok: false,
+      message: expect.stringMatching(/No bolt holes/),
+    });
     expect(parseDxfFlange("not a drawing at all").ok).toBe(false);
   });
 
   it("circle fit: decision pinned on an exact square", () => {
-    const fit = fitCircle([{ x: 1, y: 1 }, { x: -1, y: 1 }, { x: -1, y: -1 }, { x: 1, y: -1 }]);
+    const fit = fitCircle([
+      { x: 1, y: 1 },
+      { x: -1, y: 1 },
+      { x: -1, y: -1 },
+      { x: 1, y: -1 },
+    ]);
     expect(fit?.r).toBeCloseTo(Math.SQRT2, 12);
     expect(Math.hypot(fit!.cx, fit!.cy)).toBeLessThan(1e-12);
   });

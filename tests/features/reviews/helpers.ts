@@ -11,10 +11,18 @@ import { getTestDb } from "../../setup/test-db";
 export async function createReviewOrg(label: string) {
   const db = getTestDb();
   const tag = `${label}-${randomUUID().slice(0, 8)}`;
-  const org = await db.insertInto("organizations").values({ name: `Org ${tag}`, slug: tag }).returning("id").executeTakeFirstOrThrow();
+  const org = await db
+    .insertInto("organizations")
+    .values({ name: `Org ${tag}`, slug: tag })
+    .returning("id")
+    .executeTakeFirstOrThrow();
   const person = async (who: string, roles: Role[]): Promise<TransitionActor & { email: string }> => {
     const email = `${who}.${tag}@test.example`;
-    const u = await db.insertInto("users").values({ email, display_name: `${who} ${tag}`, password_hash: null }).returning("id").executeTakeFirstOrThrow();
+    const u = await db
+      .insertInto("users")
+      .values({ email, display_name: `${who} ${tag}`, password_hash: null })
+      .returning("id")
+      .executeTakeFirstOrThrow();
     await db.insertInto("memberships").values({ organization_id: org.id, user_id: u.id, roles }).execute();
     return { userId: u.id, organizationId: org.id, roles, email };
   };
@@ -30,23 +38,54 @@ export async function createReviewOrg(label: string) {
 export function sampleDocument(name = "E-2107 channel cover") {
   return buildCircularFlange(
     { name, equipmentTag: "E-2107", units: "SI" },
-    { outsideDiameterMm: 340, boreDiameterMm: 170, boltCircleDiameterMm: 290, boltCount: 12, boltSize: "M20", flangeThicknessMm: 30 },
+    {
+      outsideDiameterMm: 340,
+      boreDiameterMm: 170,
+      boltCircleDiameterMm: 290,
+      boltCount: 12,
+      boltSize: "M20",
+      flangeThicknessMm: 30,
+    },
   );
 }
 
-export async function createSampleDesign(organizationId: string, ownerId: string, name = "E-2107 channel cover") {
-  return createDesign(getTestDb(), { organizationId, ownerId, name, equipmentTag: "E-2107", document: sampleDocument(name) });
+export async function createSampleDesign(
+  organizationId: string,
+  ownerId: string,
+  name = "E-2107 channel cover",
+) {
+  return createDesign(getTestDb(), {
+    organizationId,
+    ownerId,
+    name,
+    equipmentTag: "E-2107",
+    document: sampleDocument(name),
+  });
 }
 
 /** Removes the suite's organisation; approved revisions refuse DELETE, so that trigger is off inside the one transaction. */
 export async function dropReviewOrg(organizationId: string) {
   const db = getTestDb();
-  const members = await db.selectFrom("memberships").select("user_id").where("organization_id", "=", organizationId).execute();
+  const members = await db
+    .selectFrom("memberships")
+    .select("user_id")
+    .where("organization_id", "=", organizationId)
+    .execute();
   await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(trx);
+    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
+      trx,
+    );
     await trx.deleteFrom("design_revisions").where("organization_id", "=", organizationId).execute();
     await trx.deleteFrom("organizations").where("id", "=", organizationId).execute();
     await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
-  if (members.length) await db.deleteFrom("users").where("id", "in", members.map((m) => m.user_id)).execute();
+  if (members.length)
+    await db
+      .deleteFrom("users")
+      .where(
+        "id",
+        "in",
+        members.map((m) => m.user_id),
+      )
+      .execute();
 }

@@ -37,10 +37,18 @@ describe("review notifications (fake SMTP)", () => {
       expect(message?.text).toContain(link);
     }
     // The lead is an approver too, but submitted it: no request to review their own work.
-    expect((await messagesTo(org.lead.email)).filter((m) => m.subject.startsWith("Review requested"))).toHaveLength(0);
-    expect((await messagesTo(org.designer.email)).filter((m) => m.subject.startsWith("Review requested"))).toHaveLength(0);
+    expect(
+      (await messagesTo(org.lead.email)).filter((m) => m.subject.startsWith("Review requested")),
+    ).toHaveLength(0);
+    expect(
+      (await messagesTo(org.designer.email)).filter((m) => m.subject.startsWith("Review requested")),
+    ).toHaveLength(0);
 
-    const returned = await returnRevision(db, org.approver, { designId, number: 1, comment: "Seating stress at b7 is marginal." });
+    const returned = await returnRevision(db, org.approver, {
+      designId,
+      number: 1,
+      comment: "Seating stress at b7 is marginal.",
+    });
     if (!returned.ok) throw new Error(returned.message);
     await notifyReviewOutcome(db, org.organizationId, returned.data);
     const [back] = await waitFor(org.lead.email, "Returned: Mail cover revision 1");
@@ -49,13 +57,26 @@ describe("review notifications (fake SMTP)", () => {
 
     const again = await submitRevision(db, org.lead, { designId, number: 1 });
     if (!again.ok) throw new Error(again.message);
-    const row = await db.selectFrom("design_revisions").select("result").where("design_id", "=", designId).executeTakeFirstOrThrow();
-    const justifications = Object.fromEntries(checksNeedingJustification(readChecks(row.result)).map((c) => [c.id, "accepted"]));
-    const approved = await approveRevision(db, org.approver2, { designId, number: 1, comment: "", justifications });
+    const row = await db
+      .selectFrom("design_revisions")
+      .select("result")
+      .where("design_id", "=", designId)
+      .executeTakeFirstOrThrow();
+    const justifications = Object.fromEntries(
+      checksNeedingJustification(readChecks(row.result)).map((c) => [c.id, "accepted"]),
+    );
+    const approved = await approveRevision(db, org.approver2, {
+      designId,
+      number: 1,
+      comment: "",
+      justifications,
+    });
     if (!approved.ok) throw new Error(approved.message);
     await notifyReviewOutcome(db, org.organizationId, approved.data);
     const [done] = await waitFor(org.lead.email, "Approved: Mail cover revision 1");
     expect(done?.text).toContain(link);
-    expect((await messagesTo(org.approver2.email)).filter((m) => m.subject.startsWith("Approved"))).toHaveLength(0);
+    expect(
+      (await messagesTo(org.approver2.email)).filter((m) => m.subject.startsWith("Approved")),
+    ).toHaveLength(0);
   });
 });

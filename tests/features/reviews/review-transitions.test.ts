@@ -8,7 +8,13 @@ import { computeContentHash } from "@/features/reviews/model/content-hash";
 import { checksNeedingJustification, readChecks } from "@/features/reviews/model/review-checks";
 import { getDeskLists, getRevisionReview, listJustifications } from "@/features/reviews/queries";
 import { returnRevisionSchema } from "@/features/reviews/schema";
-import { addComment, approveRevision, returnRevision, startNewRevision, submitRevision } from "@/features/reviews/transitions";
+import {
+  addComment,
+  approveRevision,
+  returnRevision,
+  startNewRevision,
+  submitRevision,
+} from "@/features/reviews/transitions";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getTestDb } from "../../setup/test-db";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
@@ -26,11 +32,21 @@ afterAll(async () => {
 });
 
 async function revisionRow(designId: string, number = 1) {
-  return db.selectFrom("design_revisions").selectAll().where("design_id", "=", designId).where("number", "=", number).executeTakeFirstOrThrow();
+  return db
+    .selectFrom("design_revisions")
+    .selectAll()
+    .where("design_id", "=", designId)
+    .where("number", "=", number)
+    .executeTakeFirstOrThrow();
 }
 
 function justifyAll(result: unknown): Record<string, string> {
-  return Object.fromEntries(checksNeedingJustification(readChecks(result)).map((c) => [c.id, `Accepted for ${c.id}: confirmed by hydrotest`]));
+  return Object.fromEntries(
+    checksNeedingJustification(readChecks(result)).map((c) => [
+      c.id,
+      `Accepted for ${c.id}: confirmed by hydrotest`,
+    ]),
+  );
 }
 
 describe("review transitions (real PostgreSQL)", () => {
@@ -44,41 +60,84 @@ describe("review transitions (real PostgreSQL)", () => {
     expect(row.submitted_by).toBe(org.designer.userId);
     expect(row.core_version).toMatch(/^\d+\.\d+\.\d+$/);
     expect(readChecks(row.result).length).toBeGreaterThan(0);
-    expect(row.content_hash).toBe(computeContentHash({ document: row.document, result: row.result, coreVersion: row.core_version! }));
+    expect(row.content_hash).toBe(
+      computeContentHash({ document: row.document, result: row.result, coreVersion: row.core_version! }),
+    );
     const review = await getRevisionReview(db, org.approver, designId, 1);
     expect(review?.integrity).toEqual({ state: "intact", storedHash: row.content_hash });
     expect(review?.permissions).toMatchObject({ canApprove: true, canReturn: true, canSubmit: false });
 
     // Return without a comment: refused by the schema and by the transition itself.
     expect(returnRevisionSchema.safeParse({ designId, number: 1, comment: "   " }).success).toBe(false);
-    expect(await returnRevision(db, org.approver, { designId, number: 1, comment: "  " })).toMatchObject({ ok: false });
+    expect(await returnRevision(db, org.approver, { designId, number: 1, comment: "  " })).toMatchObject({
+      ok: false,
+    });
     expect((await revisionRow(designId)).status).toBe("in_review");
 
-    const returned = await returnRevision(db, org.approver, { designId, number: 1, comment: "Bolt b4 sits too close to the pass partition." });
+    const returned = await returnRevision(db, org.approver, {
+      designId,
+      number: 1,
+      comment: "Bolt b4 sits too close to the pass partition.",
+    });
     expect(returned).toMatchObject({ ok: true, data: { status: "returned" } });
     expect((await getDeskLists(db, org.designer)).returnedToMe.map((i) => i.designId)).toContain(designId);
 
     // Returned is editable like a draft, through the designs save path.
     row = await revisionRow(designId);
-    const fixed: JointDesign = { ...(row.document as JointDesign), bolts: (row.document as JointDesign).bolts.map((b) => (b.id === "b4" ? { ...b, sMm: b.sMm + 2 } : b)) };
-    const saved = await saveWorkingRevision(db, { organizationId: org.organizationId, userId: org.designer.userId, designId, baseVersion: row.version, document: fixed });
+    const fixed: JointDesign = {
+      ...(row.document as JointDesign),
+      bolts: (row.document as JointDesign).bolts.map((b) => (b.id === "b4" ? { ...b, sMm: b.sMm + 2 } : b)),
+    };
+    const saved = await saveWorkingRevision(db, {
+      organizationId: org.organizationId,
+      userId: org.designer.userId,
+      designId,
+      baseVersion: row.version,
+      document: fixed,
+    });
     expect(saved.kind).toBe("saved");
-    expect(await submitRevision(db, org.designer, { designId, number: 1 })).toMatchObject({ ok: true, data: { status: "in_review" } });
-    expect((await getDeskLists(db, org.approver)).waitingForMyReview.map((i) => i.designId)).toContain(designId);
-    expect((await getDeskLists(db, org.designer)).returnedToMe.map((i) => i.designId)).not.toContain(designId);
+    expect(await submitRevision(db, org.designer, { designId, number: 1 })).toMatchObject({
+      ok: true,
+      data: { status: "in_review" },
+    });
+    expect((await getDeskLists(db, org.approver)).waitingForMyReview.map((i) => i.designId)).toContain(
+      designId,
+    );
+    expect((await getDeskLists(db, org.designer)).returnedToMe.map((i) => i.designId)).not.toContain(
+      designId,
+    );
 
     row = await revisionRow(designId);
     const needing = checksNeedingJustification(readChecks(row.result));
     expect(needing.length).toBeGreaterThan(0); // the sample has warnings (max pitch), so justifications are exercised
-    const bare = await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: {} });
+    const bare = await approveRevision(db, org.approver, {
+      designId,
+      number: 1,
+      comment: "",
+      justifications: {},
+    });
     expect(bare).toMatchObject({ ok: false, message: expect.stringContaining("justification") });
-    const partial = await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: { [needing[0]!.id]: "fine" } });
+    const partial = await approveRevision(db, org.approver, {
+      designId,
+      number: 1,
+      comment: "",
+      justifications: { [needing[0]!.id]: "fine" },
+    });
     expect(partial).toMatchObject({ ok: false });
     expect((await revisionRow(designId)).status).toBe("in_review");
-    const approved = await approveRevision(db, org.approver, { designId, number: 1, comment: "Seating margin fine.", justifications: justifyAll(row.result) });
+    const approved = await approveRevision(db, org.approver, {
+      designId,
+      number: 1,
+      comment: "Seating margin fine.",
+      justifications: justifyAll(row.result),
+    });
     expect(approved).toMatchObject({ ok: true, data: { status: "approved" } });
-    expect((await listJustifications(db, org.organizationId, row.id)).map((j) => j.checkId).sort()).toEqual(needing.map((c) => c.id).sort());
-    expect((await getDeskLists(db, org.approver)).waitingForMyReview.map((i) => i.designId)).not.toContain(designId);
+    expect((await listJustifications(db, org.organizationId, row.id)).map((j) => j.checkId).sort()).toEqual(
+      needing.map((c) => c.id).sort(),
+    );
+    expect((await getDeskLists(db, org.approver)).waitingForMyReview.map((i) => i.designId)).not.toContain(
+      designId,
+    );
 
     // A new revision: number 2, a draft copy of the approved document; only once.
     const next = await startNewRevision(db, org.designer, { designId, number: 1 });
@@ -86,30 +145,71 @@ describe("review transitions (real PostgreSQL)", () => {
     const two = await revisionRow(designId, 2);
     expect(two.status).toBe("draft");
     expect(two.document).toEqual((await revisionRow(designId)).document);
-    expect(await startNewRevision(db, org.designer, { designId, number: 1 })).toMatchObject({ ok: false, message: expect.stringContaining("newer revision") });
+    expect(await startNewRevision(db, org.designer, { designId, number: 1 })).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("newer revision"),
+    });
 
     const kinds = (await listActivity(db, org.organizationId, designId)).map((a) => a.kind).reverse();
-    expect(kinds).toEqual(["created", "submitted", "returned", "saved", "submitted", "approved", "new-revision"]);
+    expect(kinds).toEqual([
+      "created",
+      "submitted",
+      "returned",
+      "saved",
+      "submitted",
+      "approved",
+      "new-revision",
+    ]);
   });
 
   it("refuses approving a draft, approving your own, the wrong role, and returning without being independent", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.lead.userId, "Own work");
-    expect(await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: {} })).toMatchObject({ ok: false, message: expect.stringContaining("Draft") });
-    expect(await submitRevision(db, org.approver, { designId, number: 1 })).toMatchObject({ ok: false, message: expect.stringContaining("designer") });
+    expect(
+      await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: {} }),
+    ).toMatchObject({ ok: false, message: expect.stringContaining("Draft") });
+    expect(await submitRevision(db, org.approver, { designId, number: 1 })).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("designer"),
+    });
     expect(await submitRevision(db, org.lead, { designId, number: 1 })).toMatchObject({ ok: true });
     const row = await revisionRow(designId);
-    const own = await approveRevision(db, org.lead, { designId, number: 1, comment: "", justifications: justifyAll(row.result) });
+    const own = await approveRevision(db, org.lead, {
+      designId,
+      number: 1,
+      comment: "",
+      justifications: justifyAll(row.result),
+    });
     expect(own).toMatchObject({ ok: false, message: expect.stringContaining("four-eyes") });
-    expect(await returnRevision(db, org.lead, { designId, number: 1, comment: "withdrawn" })).toMatchObject({ ok: false });
-    expect(await approveRevision(db, org.designer, { designId, number: 1, comment: "", justifications: justifyAll(row.result) })).toMatchObject({ ok: false, message: expect.stringContaining("approver") });
+    expect(await returnRevision(db, org.lead, { designId, number: 1, comment: "withdrawn" })).toMatchObject({
+      ok: false,
+    });
+    expect(
+      await approveRevision(db, org.designer, {
+        designId,
+        number: 1,
+        comment: "",
+        justifications: justifyAll(row.result),
+      }),
+    ).toMatchObject({ ok: false, message: expect.stringContaining("approver") });
     expect((await revisionRow(designId)).status).toBe("in_review");
     // The lead does not see their own submission as waiting for review; another approver does.
-    expect((await getDeskLists(db, org.lead)).waitingForMyReview.map((i) => i.designId)).not.toContain(designId);
-    expect((await getDeskLists(db, org.approver2)).waitingForMyReview.map((i) => i.designId)).toContain(designId);
+    expect((await getDeskLists(db, org.lead)).waitingForMyReview.map((i) => i.designId)).not.toContain(
+      designId,
+    );
+    expect((await getDeskLists(db, org.approver2)).waitingForMyReview.map((i) => i.designId)).toContain(
+      designId,
+    );
     // Another organisation's member cannot even find it.
     const other = await createReviewOrg("reviews-other");
     try {
-      expect(await approveRevision(db, other.approver, { designId, number: 1, comment: "", justifications: justifyAll(row.result) })).toMatchObject({ ok: false, message: expect.stringContaining("does not exist") });
+      expect(
+        await approveRevision(db, other.approver, {
+          designId,
+          number: 1,
+          comment: "",
+          justifications: justifyAll(row.result),
+        }),
+      ).toMatchObject({ ok: false, message: expect.stringContaining("does not exist") });
       expect(await getRevisionReview(db, other.approver, designId, 1)).toBeUndefined();
     } finally {
       await dropReviewOrg(other.organizationId);
@@ -121,8 +221,12 @@ describe("review transitions (real PostgreSQL)", () => {
     await submitRevision(db, org.designer, { designId, number: 1 });
     const row = await revisionRow(designId);
     const url = process.env.DATABASE_URL!;
-    const a = new Kysely<Database>({ dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: url, max: 1 }) }) });
-    const b = new Kysely<Database>({ dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: url, max: 1 }) }) });
+    const a = new Kysely<Database>({
+      dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: url, max: 1 }) }),
+    });
+    const b = new Kysely<Database>({
+      dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: url, max: 1 }) }),
+    });
     try {
       const justifications = justifyAll(row.result);
       const outcomes = await Promise.all([
@@ -133,7 +237,11 @@ describe("review transitions (real PostgreSQL)", () => {
       expect(outcomes.filter((o) => !o.ok)).toHaveLength(1);
       const loser = outcomes.find((o) => !o.ok);
       expect(loser).toMatchObject({ message: expect.stringContaining("Approved") });
-      const decisions = await db.selectFrom("revision_decisions").select("kind").where("revision_id", "=", row.id).execute();
+      const decisions = await db
+        .selectFrom("revision_decisions")
+        .select("kind")
+        .where("revision_id", "=", row.id)
+        .execute();
       expect(decisions).toEqual([{ kind: "approved" }]);
     } finally {
       await a.destroy();
@@ -145,13 +253,30 @@ describe("review transitions (real PostgreSQL)", () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Frozen");
     await submitRevision(db, org.designer, { designId, number: 1 });
     const before = await revisionRow(designId);
-    expect(await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: justifyAll(before.result) })).toMatchObject({ ok: true });
+    expect(
+      await approveRevision(db, org.approver, {
+        designId,
+        number: 1,
+        comment: "",
+        justifications: justifyAll(before.result),
+      }),
+    ).toMatchObject({ ok: true });
     const row = await revisionRow(designId);
 
-    const save = await saveWorkingRevision(db, { organizationId: org.organizationId, userId: org.designer.userId, designId, baseVersion: row.version, document: row.document as JointDesign });
+    const save = await saveWorkingRevision(db, {
+      organizationId: org.organizationId,
+      userId: org.designer.userId,
+      designId,
+      baseVersion: row.version,
+      document: row.document as JointDesign,
+    });
     expect(save).toEqual({ kind: "frozen", status: "approved" });
-    await expect(sql`update design_revisions set result = '{}'::jsonb where id = ${row.id}`.execute(db)).rejects.toThrow(/approved and cannot change/);
-    await expect(sql`delete from design_revisions where id = ${row.id}`.execute(db)).rejects.toThrow(/approved and cannot change/);
+    await expect(
+      sql`update design_revisions set result = '{}'::jsonb where id = ${row.id}`.execute(db),
+    ).rejects.toThrow(/approved and cannot change/);
+    await expect(sql`delete from design_revisions where id = ${row.id}`.execute(db)).rejects.toThrow(
+      /approved and cannot change/,
+    );
     const after = await revisionRow(designId);
     expect(after.content_hash).toBe(row.content_hash);
     expect(after.result).toEqual(row.result);
@@ -159,9 +284,17 @@ describe("review transitions (real PostgreSQL)", () => {
 
   it("refuses skipping review steps and a self-approval written straight into the database", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Shortcut");
-    await expect(sql`update design_revisions set status = 'approved', decided_by = ${org.approver.userId} where design_id = ${designId}`.execute(db)).rejects.toThrow(/cannot go from draft to approved/);
+    await expect(
+      sql`update design_revisions set status = 'approved', decided_by = ${org.approver.userId} where design_id = ${designId}`.execute(
+        db,
+      ),
+    ).rejects.toThrow(/cannot go from draft to approved/);
     await submitRevision(db, org.designer, { designId, number: 1 });
-    await expect(sql`update design_revisions set status = 'approved', decided_by = ${org.designer.userId} where design_id = ${designId}`.execute(db)).rejects.toThrow(/design_revisions_four_eyes/);
+    await expect(
+      sql`update design_revisions set status = 'approved', decided_by = ${org.designer.userId} where design_id = ${designId}`.execute(
+        db,
+      ),
+    ).rejects.toThrow(/design_revisions_four_eyes/);
     expect((await revisionRow(designId)).status).toBe("in_review");
   });
 
@@ -169,11 +302,20 @@ describe("review transitions (real PostgreSQL)", () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Tampered");
     await submitRevision(db, org.designer, { designId, number: 1 });
     const row = await revisionRow(designId);
-    await sql`update design_revisions set result = jsonb_set(result, '{tampered}', 'true'::jsonb) where id = ${row.id}`.execute(db);
+    await sql`update design_revisions set result = jsonb_set(result, '{tampered}', 'true'::jsonb) where id = ${row.id}`.execute(
+      db,
+    );
     const review = await getRevisionReview(db, org.approver, designId, 1);
     expect(review?.integrity).toMatchObject({ state: "mismatch", storedHash: row.content_hash });
-    expect(review?.integrity.state === "mismatch" && review.integrity.recomputedHash).not.toBe(row.content_hash);
-    const refused = await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: justifyAll(row.result) });
+    expect(review?.integrity.state === "mismatch" && review.integrity.recomputedHash).not.toBe(
+      row.content_hash,
+    );
+    const refused = await approveRevision(db, org.approver, {
+      designId,
+      number: 1,
+      comment: "",
+      justifications: justifyAll(row.result),
+    });
     expect(refused).toMatchObject({ ok: false, message: expect.stringContaining("content hash") });
   });
 
@@ -182,9 +324,33 @@ describe("review transitions (real PostgreSQL)", () => {
     await submitRevision(db, org.designer, { designId, number: 1 });
     const row = await revisionRow(designId);
     const checkId = readChecks(row.result)[0]!.id;
-    expect(await addComment(db, org.approver, { designId, number: 1, body: "Check the pitch here", targetKind: "bolt", targetId: "b3" })).toMatchObject({ ok: true, data: { targetKind: "bolt", targetId: "b3" } });
-    expect(await addComment(db, org.approver, { designId, number: 1, body: "Why is this fine?", targetKind: "check", targetId: checkId })).toMatchObject({ ok: true });
-    expect(await addComment(db, org.approver, { designId, number: 1, body: "Ghost", targetKind: "bolt", targetId: "b999" })).toMatchObject({ ok: false, fieldErrors: { targetId: expect.any(Array) } });
+    expect(
+      await addComment(db, org.approver, {
+        designId,
+        number: 1,
+        body: "Check the pitch here",
+        targetKind: "bolt",
+        targetId: "b3",
+      }),
+    ).toMatchObject({ ok: true, data: { targetKind: "bolt", targetId: "b3" } });
+    expect(
+      await addComment(db, org.approver, {
+        designId,
+        number: 1,
+        body: "Why is this fine?",
+        targetKind: "check",
+        targetId: checkId,
+      }),
+    ).toMatchObject({ ok: true });
+    expect(
+      await addComment(db, org.approver, {
+        designId,
+        number: 1,
+        body: "Ghost",
+        targetKind: "bolt",
+        targetId: "b999",
+      }),
+    ).toMatchObject({ ok: false, fieldErrors: { targetId: expect.any(Array) } });
     const review = await getRevisionReview(db, org.designer, designId, 1);
     expect(review?.comments.map((c) => [c.targetKind, c.targetId, c.body])).toEqual([
       ["bolt", "b3", "Check the pitch here"],
@@ -194,13 +360,25 @@ describe("review transitions (real PostgreSQL)", () => {
 
   it("keeps the activity log append-only", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Log");
-    await recordActivity(db, { organizationId: org.organizationId, designId, actorId: org.designer.userId, kind: "exported", detail: "sheet.pdf" });
+    await recordActivity(db, {
+      organizationId: org.organizationId,
+      designId,
+      actorId: org.designer.userId,
+      kind: "exported",
+      detail: "sheet.pdf",
+    });
     const [entry] = await listActivity(db, org.organizationId, designId);
     expect(entry).toMatchObject({ kind: "exported", detail: "sheet.pdf" });
-    await expect(sql`update design_activity set detail = 'nothing happened' where id = ${entry!.id}`.execute(db)).rejects.toThrow(/append-only/);
-    await expect(sql`delete from design_activity where id = ${entry!.id}`.execute(db)).rejects.toThrow(/append-only/);
-    expect((await listActivity(db, org.organizationId, designId)).map((e) => e.kind)).toEqual(["exported", "created"]);
+    await expect(
+      sql`update design_activity set detail = 'nothing happened' where id = ${entry!.id}`.execute(db),
+    ).rejects.toThrow(/append-only/);
+    await expect(sql`delete from design_activity where id = ${entry!.id}`.execute(db)).rejects.toThrow(
+      /append-only/,
+    );
+    expect((await listActivity(db, org.organizationId, designId)).map((e) => e.kind)).toEqual([
+      "exported",
+      "created",
+    ]);
     expect(await listActivity(db, "00000000-0000-4000-8000-000000000000", designId)).toEqual([]);
   });
 });
-

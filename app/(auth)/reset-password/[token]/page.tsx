@@ -19,8 +19,14 @@ export default async function ResetPasswordPage({ params }: { params: Promise<{ 
         </div>
       ) : (
         <>
-          <p role="alert" className="mt-3 text-verdict-fail">{RESET_TOKEN_MESSAGES[state]}</p>
-          <p className="mt-4 text-table"><Link href="/forgot-password" className="underline">Ask for a new link</Link></p>
+          <p role="alert" className="mt-3 text-verdict-fail">
+            {RESET_TOKEN_MESSAGES[state]}
+          </p>
+          <p className="mt-4 text-table">
+            <Link href="/forgot-password" className="underline">
+              Ask for a new link
+            </Link>
+          </p>
         </>
       )}
     </>

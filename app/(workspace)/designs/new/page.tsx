@@ -12,7 +12,9 @@ export default async function NewDesignPage() {
       <header>
         <p className="text-table uppercase tracking-wider text-brass-600">Joint register</p>
         <h1 className="mt-1 text-display font-semibold">New design</h1>
-        <p className="mt-2 text-body text-ink-700">Pick a starting shape and its main dimensions in millimetres; everything else is set in the editor.</p>
+        <p className="mt-2 text-body text-ink-700">
+          Pick a starting shape and its main dimensions in millimetres; everything else is set in the editor.
+        </p>
       </header>
       <NewDesignForm createDesignAction={createDesignAction} />
     </div>

@@ -11,7 +11,10 @@ export const metadata: Metadata = { title: "Stockroom · Flange templates" };
 export default async function StockroomFlangesPage() {
   const viewer = await requireViewer();
   const canEdit = canEditLibrary(viewer);
-  const rows = await (canEdit ? listFlangeTemplateListing : listFlangeTemplateChoices)(getDb(), viewer.organizationId);
+  const rows = await (canEdit ? listFlangeTemplateListing : listFlangeTemplateChoices)(
+    getDb(),
+    viewer.organizationId,
+  );
   return (
     <div className="flex flex-col gap-6">
       <StockroomHeader current="/library/flanges" canEdit={canEdit} />

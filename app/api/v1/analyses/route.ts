@@ -12,8 +12,12 @@ export async function POST(request: Request): Promise<Response> {
   const body = await readJsonBody(request);
   if (!body.ok) return body.response;
   const raw = body.body as Record<string, unknown> | null;
-  const wrapped = raw && typeof raw === "object" && !Array.isArray(raw) && "document" in raw && !("schemaVersion" in raw) ? raw : { document: raw };
+  const wrapped =
+    raw && typeof raw === "object" && !Array.isArray(raw) && "document" in raw && !("schemaVersion" in raw)
+      ? raw
+      : { document: raw };
   const parsed = analysisRequestSchema.safeParse(wrapped);
-  if (!parsed.success) return jsonError(422, "The design document is not valid.", issuesToFieldErrors(parsed.error));
+  if (!parsed.success)
+    return jsonError(422, "The design document is not valid.", issuesToFieldErrors(parsed.error));
   return Response.json(runAnalysis(parsed.data.document).result, { headers: NO_STORE });
 }

@@ -7,7 +7,9 @@ import { authorizeApi, jsonError } from "@/server/auth/guard";
 export async function GET(request: Request): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
-  return Response.json(await getTeam(getDb(), auth.viewer.organizationId), { headers: { "cache-control": "private, no-store" } });
+  return Response.json(await getTeam(getDb(), auth.viewer.organizationId), {
+    headers: { "cache-control": "private, no-store" },
+  });
 }
 
 /** Invite: { email, roles }. */
@@ -16,5 +18,7 @@ export async function POST(request: Request): Promise<Response> {
   if (!auth.ok) return auth.response;
   const body = await request.json().catch(() => null);
   const result = await inviteMemberCommand(auth.viewer, body);
-  return result.ok ? Response.json(result.data, { status: 201 }) : jsonError(result.status, result.message, result.fieldErrors);
+  return result.ok
+    ? Response.json(result.data, { status: 201 })
+    : jsonError(result.status, result.message, result.fieldErrors);
 }

@@ -13,12 +13,18 @@ export interface ThreadLengthRule extends Provenance {
 
 export const THREAD_LENGTH_RULES: readonly ThreadLengthRule[] = [
   {
-    id: "asme-b18.2.1", description: "LT = 2D + 1/4 in (L ≤ 6 in), 2D + 1/2 in (L > 6 in)",
-    source: "ASME B18.2.1 hex bolts", edition: "ASME B18.2.1 (as reproduced; edition not verified)", confidence: "pub2",
+    id: "asme-b18.2.1",
+    description: "LT = 2D + 1/4 in (L ≤ 6 in), 2D + 1/2 in (L > 6 in)",
+    source: "ASME B18.2.1 hex bolts",
+    edition: "ASME B18.2.1 (as reproduced; edition not verified)",
+    confidence: "pub2",
   },
   {
-    id: "iso-4014", description: "b = 2d + 6 (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 mm (l > 200)",
-    source: "ISO 4014 hexagon head bolts, reference thread length b", edition: "ISO 4014 (reproduced/remembered; verify)", confidence: "mem",
+    id: "iso-4014",
+    description: "b = 2d + 6 (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 mm (l > 200)",
+    source: "ISO 4014 hexagon head bolts, reference thread length b",
+    edition: "ISO 4014 (reproduced/remembered; verify)",
+    confidence: "mem",
   },
 ];
 
@@ -40,8 +46,15 @@ export function metricBoltThreadLengthMm(nominalDiameterMm: number, lengthMm: nu
 }
 
 /** Threaded length of a fastener: full length for studs, the standard rule (capped at L) for bolts. */
-export function fastenerThreadLengthMm(form: "stud" | "hex-bolt", metric: boolean, nominalDiameterMm: number, lengthMm: number): number {
+export function fastenerThreadLengthMm(
+  form: "stud" | "hex-bolt",
+  metric: boolean,
+  nominalDiameterMm: number,
+  lengthMm: number,
+): number {
   if (form === "stud") return lengthMm;
-  const lt = metric ? metricBoltThreadLengthMm(nominalDiameterMm, lengthMm) : inchBoltThreadLengthMm(nominalDiameterMm, lengthMm);
+  const lt = metric
+    ? metricBoltThreadLengthMm(nominalDiameterMm, lengthMm)
+    : inchBoltThreadLengthMm(nominalDiameterMm, lengthMm);
   return Math.min(lt, lengthMm);
 }

@@ -45,16 +45,43 @@ export function unifiedRootAreaIn2(dIn: number, threadsPerInch: number): number 
 }
 
 const METRIC: [string, number, number][] = [
-  ["M10", 10, 1.5], ["M12", 12, 1.75], ["M14", 14, 2], ["M16", 16, 2], ["M20", 20, 2.5], ["M22", 22, 2.5],
-  ["M24", 24, 3], ["M27", 27, 3], ["M30", 30, 3.5], ["M33", 33, 3.5], ["M36", 36, 4], ["M39", 39, 4],
-  ["M42", 42, 4.5], ["M45", 45, 4.5], ["M48", 48, 5], ["M52", 52, 5], ["M56", 56, 5.5], ["M60", 60, 5.5],
+  ["M10", 10, 1.5],
+  ["M12", 12, 1.75],
+  ["M14", 14, 2],
+  ["M16", 16, 2],
+  ["M20", 20, 2.5],
+  ["M22", 22, 2.5],
+  ["M24", 24, 3],
+  ["M27", 27, 3],
+  ["M30", 30, 3.5],
+  ["M33", 33, 3.5],
+  ["M36", 36, 4],
+  ["M39", 39, 4],
+  ["M42", 42, 4.5],
+  ["M45", 45, 4.5],
+  ["M48", 48, 5],
+  ["M52", 52, 5],
+  ["M56", 56, 5.5],
+  ["M60", 60, 5.5],
   ["M64", 64, 6],
 ];
 
 const UNIFIED: [string, number, number][] = [
-  ["1/2", 0.5, 13], ["5/8", 0.625, 11], ["3/4", 0.75, 10], ["7/8", 0.875, 9], ["1", 1, 8],
-  ["1-1/8", 1.125, 8], ["1-1/4", 1.25, 8], ["1-3/8", 1.375, 8], ["1-1/2", 1.5, 8], ["1-5/8", 1.625, 8],
-  ["1-3/4", 1.75, 8], ["1-7/8", 1.875, 8], ["2", 2, 8], ["2-1/4", 2.25, 8], ["2-1/2", 2.5, 8],
+  ["1/2", 0.5, 13],
+  ["5/8", 0.625, 11],
+  ["3/4", 0.75, 10],
+  ["7/8", 0.875, 9],
+  ["1", 1, 8],
+  ["1-1/8", 1.125, 8],
+  ["1-1/4", 1.25, 8],
+  ["1-3/8", 1.375, 8],
+  ["1-1/2", 1.5, 8],
+  ["1-5/8", 1.625, 8],
+  ["1-3/4", 1.75, 8],
+  ["1-7/8", 1.875, 8],
+  ["2", 2, 8],
+  ["2-1/4", 2.25, 8],
+  ["2-1/2", 2.5, 8],
 ];
 
 export const THREADS: readonly ThreadRow[] = [
@@ -100,5 +127,7 @@ export function findThread(designation: string, series: ThreadSeries): ThreadRow
   const exact = THREADS.find((t) => t.designation === designation && t.series === series);
   if (exact) return exact;
   if (series === "metric-coarse") return undefined;
-  return THREADS.find((t) => t.designation === designation && t.series !== "metric-coarse" && t.threadsPerInch === 8);
+  return THREADS.find(
+    (t) => t.designation === designation && t.series !== "metric-coarse" && t.threadsPerInch === 8,
+  );
 }

@@ -27,7 +27,12 @@ const RAW: [TighteningMethod, string, number, number, TighteningMethodRow["tool"
 ];
 
 export const TIGHTENING_METHODS: readonly TighteningMethodRow[] = RAW.map(([id, name, lo, hi, tool]) => ({
-  id, name, rangeLow: lo, rangeHigh: hi, scatter: (lo + hi) / 2, tool,
+  id,
+  name,
+  rangeLow: lo,
+  rangeHigh: hi,
+  scatter: (lo + hi) / 2,
+  tool,
   source: "Machinery's Handbook; NASA fastener design tables (preload scatter by method)",
   edition: "as reproduced (editions not verified); midpoint of the range used",
   confidence: "pub2",

@@ -34,7 +34,10 @@ export const WRENCH_CLEARANCES: readonly WrenchClearanceRow[] = RAW.map(([des, s
   boltToHubMm: inToMm(r),
   boltToEdgeMm: inToMm(e),
   source: "TEMA Table D-5 bolting data",
-  edition: conf === "pub2" ? "TEMA (as reproduced; edition not verified)" : "from memory; verify against TEMA Table D-5",
+  edition:
+    conf === "pub2"
+      ? "TEMA (as reproduced; edition not verified)"
+      : "from memory; verify against TEMA Table D-5",
   confidence: conf,
 }));
 

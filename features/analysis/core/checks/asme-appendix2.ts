@@ -26,7 +26,10 @@ export interface AsmeAppendix2Result {
   notes: string[];
 }
 
-export function computeAsmeAppendix2(model: JointModel): { result: AsmeAppendix2Result; checks: CheckRecord[] } {
+export function computeAsmeAppendix2(model: JointModel): {
+  result: AsmeAppendix2Result;
+  checks: CheckRecord[];
+} {
   const d = model.design;
   const P = d.loads.designPressureMpa;
   const gm = d.gasket.material;
@@ -47,7 +50,9 @@ export function computeAsmeAppendix2(model: JointModel): { result: AsmeAppendix2
     geometry = asmeGasketGeometry(2 * width, 0, branch);
     reactionLengthMm = model.region.path.lengthMm;
     enclosedAreaMm2 = model.pressureAreaMm2;
-    notes.push("Outside Appendix 2 scope (non-circular or full-face gasket): πG replaced by the reaction line length and π/4·G² by the enclosed area [practice].");
+    notes.push(
+      "Outside Appendix 2 scope (non-circular or full-face gasket): πG replaced by the reaction line length and π/4·G² by the enclosed area [practice].",
+    );
   }
   const b = geometry.bMm;
   const hN = enclosedAreaMm2 * P;
@@ -55,27 +60,63 @@ export function computeAsmeAppendix2(model: JointModel): { result: AsmeAppendix2
   const wm1N = hN + hpN;
   const wm2N = b * reactionLengthMm * gm.yMpa;
   const S = model.strength.allowableMpa;
-  notes.push(`Effective width b by the ${branch} branch (${geometry.unit}): b0 = ${geometry.b0.toFixed(4)}, b = ${geometry.b.toFixed(4)}, G = ${geometry.g.toFixed(4)} ${geometry.unit}.`);
-  if (S !== null) notes.push("Sa = Sb = room-temperature allowable (no temperature-dependent allowables in the catalogue).");
+  notes.push(
+    `Effective width b by the ${branch} branch (${geometry.unit}): b0 = ${geometry.b0.toFixed(4)}, b = ${geometry.b.toFixed(4)}, G = ${geometry.g.toFixed(4)} ${geometry.unit}.`,
+  );
+  if (S !== null)
+    notes.push(
+      "Sa = Sb = room-temperature allowable (no temperature-dependent allowables in the catalogue).",
+    );
   const actualRootAreaMm2 = model.boltPoints.length * model.thread.rootAreaMm2;
   const requiredAreaMm2 = S !== null ? Math.max(wm1N / S, wm2N / S) : null;
-  const flangeDesignLoadN = S !== null && requiredAreaMm2 !== null ? ((requiredAreaMm2 + actualRootAreaMm2) * S) / 2 : null;
-  const src = scope === "appendix-2" ? "ASME VIII-1 Appendix 2 (2-5)" : "ASME VIII-1 Appendix 2 generalised to non-circular/full-face joints [practice]";
+  const flangeDesignLoadN =
+    S !== null && requiredAreaMm2 !== null ? ((requiredAreaMm2 + actualRootAreaMm2) * S) / 2 : null;
+  const src =
+    scope === "appendix-2"
+      ? "ASME VIII-1 Appendix 2 (2-5)"
+      : "ASME VIII-1 Appendix 2 generalised to non-circular/full-face joints [practice]";
   const checks: CheckRecord[] = [
     makeCheck({
-      id: "asme.app2.bolt-area", title: "ASME Appendix 2: total bolt root area Ab ≥ required Am",
-      value: actualRootAreaMm2, limit: requiredAreaMm2, unit: "mm²",
-      status: requiredAreaMm2 === null ? "not-applicable" : actualRootAreaMm2 >= requiredAreaMm2 ? "pass" : "fail",
+      id: "asme.app2.bolt-area",
+      title: "ASME Appendix 2: total bolt root area Ab ≥ required Am",
+      value: actualRootAreaMm2,
+      limit: requiredAreaMm2,
+      unit: "mm²",
+      status:
+        requiredAreaMm2 === null ? "not-applicable" : actualRootAreaMm2 >= requiredAreaMm2 ? "pass" : "fail",
       source: src,
-      note: requiredAreaMm2 === null
-        ? `No ASME Section II-D allowable for ${model.material.name}; Am not computed.`
-        : `Wm1 = ${(wm1N / 1000).toFixed(1)} kN, Wm2 = ${(wm2N / 1000).toFixed(1)} kN, S = ${S!.toFixed(1)} MPa (${model.strength.allowableConfidence}); Ab uses the ROOT area.`,
+      note:
+        requiredAreaMm2 === null
+          ? `No ASME Section II-D allowable for ${model.material.name}; Am not computed.`
+          : `Wm1 = ${(wm1N / 1000).toFixed(1)} kN, Wm2 = ${(wm2N / 1000).toFixed(1)} kN, S = ${S!.toFixed(1)} MPa (${model.strength.allowableConfidence}); Ab uses the ROOT area.`,
     }),
     makeCheck({
-      id: "asme.app2.scope", title: "ASME Appendix 2 scope",
-      value: null, limit: null, unit: "", status: scope === "appendix-2" ? "pass" : "warn", source: src,
+      id: "asme.app2.scope",
+      title: "ASME Appendix 2 scope",
+      value: null,
+      limit: null,
+      unit: "",
+      status: scope === "appendix-2" ? "pass" : "warn",
+      source: src,
       note: scope === "appendix-2" ? "Circular flange with a ring gasket inside the bolt circle." : notes[0],
     }),
   ];
-  return { result: { scope, geometry, reactionLengthMm, enclosedAreaMm2, hN, hpN, wm1N, wm2N, allowableMpa: S, requiredAreaMm2, actualRootAreaMm2, flangeDesignLoadN, notes }, checks };
+  return {
+    result: {
+      scope,
+      geometry,
+      reactionLengthMm,
+      enclosedAreaMm2,
+      hN,
+      hpN,
+      wm1N,
+      wm2N,
+      allowableMpa: S,
+      requiredAreaMm2,
+      actualRootAreaMm2,
+      flangeDesignLoadN,
+      notes,
+    },
+    checks,
+  };
 }

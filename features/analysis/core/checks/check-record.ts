@@ -27,7 +27,11 @@ export function makeCheck(c: CheckRecord): CheckRecord {
 }
 
 /** Counts of fail, warn and pass records (not-applicable ones are not counted). */
-export function countChecks(checks: readonly { status: CheckStatus }[]): { failCount: number; warnCount: number; passCount: number } {
+export function countChecks(checks: readonly { status: CheckStatus }[]): {
+  failCount: number;
+  warnCount: number;
+  passCount: number;
+} {
   const counts = { failCount: 0, warnCount: 0, passCount: 0 };
   for (const c of checks) {
     if (c.status === "fail") counts.failCount++;

@@ -18,8 +18,14 @@ import { findWrenchClearance } from "../catalogue/wrench-clearance";
 import { makeCheck, type CheckRecord } from "./check-record";
 
 /** Tool outside diameter around a nut of across-corners AC: socket wall ≈ 0.1·AC + 2 mm; tensioner ≈ 2.6·d [practice]. */
-export function toolOutsideDiameterMm(tool: "socket" | "tensioner", acrossCornersMm: number, nominalDiameterMm: number): number {
-  return tool === "socket" ? acrossCornersMm + 2 * (0.1 * acrossCornersMm + 2) : Math.max(2.6 * nominalDiameterMm, acrossCornersMm + 10);
+export function toolOutsideDiameterMm(
+  tool: "socket" | "tensioner",
+  acrossCornersMm: number,
+  nominalDiameterMm: number,
+): number {
+  return tool === "socket"
+    ? acrossCornersMm + 2 * (0.1 * acrossCornersMm + 2)
+    : Math.max(2.6 * nominalDiameterMm, acrossCornersMm + 10);
 }
 
 /** Bs,max = 2a + 6t/(m + 0.5). Example: a = 19.05, t = 25.4, m = 3 → 81.6 mm. */
@@ -36,7 +42,7 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
   const m = design.gasket.material.m;
   const bsMax = maxBoltPitchMm(d, t, m);
   const bsMoment = 2 * d + t;
-  const ac = model.nut?.acrossCornersMm ?? 1.5 * d / Math.cos(Math.PI / 6);
+  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / Math.cos(Math.PI / 6);
   const tool = getTighteningMethodById(design.assembly.method)?.tool ?? "socket";
   const toolOd = toolOutsideDiameterMm(tool, ac, d);
   const minChord = ac / 2 + toolOd / 2;
@@ -52,31 +58,64 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
     const pair = `${s.fromId}-${s.toId}`;
     const subject = [s.fromId, s.toId];
     const factor = s.pitchMm > bsMoment ? Math.sqrt(s.pitchMm / bsMoment) : 1;
-    out.push(makeCheck({
-      id: `spacing.max-pitch:${pair}`, title: "Maximum bolt pitch for gasket tightness", value: s.pitchMm, limit: bsMax, unit: "mm",
-      status: s.pitchMm > bsMax ? "fail" : s.pitchMm > bsMoment ? "warn" : "pass", subject,
-      source: "ASME VIII-2 4.16.11 (Bs,max = 2a + 6t/(m + 0.5)) [pub]",
-      note: (factor > 1 ? `Pitch above 2a + t = ${bsMoment.toFixed(1)} mm: flange moment multiplied by √(Bs/(2a + t)) = ${factor.toFixed(3)}.` : `t = ${t.toFixed(1)} mm (thinnest plate), m = ${m}.`) + ratedNote,
-    }));
-    out.push(makeCheck({
-      id: `spacing.min-pitch:${pair}`, title: "Minimum bolt spacing for wrench clearance", value: s.chordMm, limit: minChord, unit: "mm",
-      status: s.chordMm >= minChord ? "pass" : "fail", subject,
-      source: "nut across-corners + tool clearance (derived) [practice]",
-      note: `${tool === "socket" ? "Socket" : "Tensioner"} OD ≈ ${toolOd.toFixed(1)} mm around a nut of ${ac.toFixed(1)} mm across corners.${tema ? ` TEMA D-5 minimum spacing for ${tema.designation} in: ${tema.minSpacingMm.toFixed(1)} mm [${tema.confidence}].` : ""}`,
-    }));
+    out.push(
+      makeCheck({
+        id: `spacing.max-pitch:${pair}`,
+        title: "Maximum bolt pitch for gasket tightness",
+        value: s.pitchMm,
+        limit: bsMax,
+        unit: "mm",
+        status: s.pitchMm > bsMax ? "fail" : s.pitchMm > bsMoment ? "warn" : "pass",
+        subject,
+        source: "ASME VIII-2 4.16.11 (Bs,max = 2a + 6t/(m + 0.5)) [pub]",
+        note:
+          (factor > 1
+            ? `Pitch above 2a + t = ${bsMoment.toFixed(1)} mm: flange moment multiplied by √(Bs/(2a + t)) = ${factor.toFixed(3)}.`
+            : `t = ${t.toFixed(1)} mm (thinnest plate), m = ${m}.`) + ratedNote,
+      }),
+    );
+    out.push(
+      makeCheck({
+        id: `spacing.min-pitch:${pair}`,
+        title: "Minimum bolt spacing for wrench clearance",
+        value: s.chordMm,
+        limit: minChord,
+        unit: "mm",
+        status: s.chordMm >= minChord ? "pass" : "fail",
+        subject,
+        source: "nut across-corners + tool clearance (derived) [practice]",
+        note: `${tool === "socket" ? "Socket" : "Tensioner"} OD ≈ ${toolOd.toFixed(1)} mm around a nut of ${ac.toFixed(1)} mm across corners.${tema ? ` TEMA D-5 minimum spacing for ${tema.designation} in: ${tema.minSpacingMm.toFixed(1)} mm [${tema.confidence}].` : ""}`,
+      }),
+    );
     const ratio = s.pitchMm / d;
-    out.push(makeCheck({
-      id: `spacing.pitch-band:${pair}`, title: "Bolt pitch between 3 and 6 bolt diameters", value: ratio, limit: null, unit: "d",
-      status: ratio >= 3 && ratio <= 6 ? "pass" : "warn", subject,
-      source: "common practice [practice]; ASME B16.5 Class 150 flanges span about 3.7–7.5 d [calc]",
-      note: "A warning band, not a code limit.",
-    }));
-    out.push(makeCheck({
-      id: `spacing.cone-overlap:${pair}`, title: "Neighbouring pressure cones overlap at the gasket plane", value: s.chordMm, limit: coneDiameter, unit: "mm",
-      status: !overlapApplies ? "not-applicable" : s.chordMm <= coneDiameter ? "pass" : "fail", subject,
-      source: "cone footprint D + 2h·tanα [calc/practice]",
-      note: overlapApplies ? `Cone half-angle ${model.coneAngleDeg.toFixed(1)}°, depth to gasket ${model.coneDepthMm.toFixed(1)} mm. Where footprints do not overlap the gasket between the bolts is unloaded.` : "Ring gasket loaded through flange bending; cone overlap does not govern sealing.",
-    }));
+    out.push(
+      makeCheck({
+        id: `spacing.pitch-band:${pair}`,
+        title: "Bolt pitch between 3 and 6 bolt diameters",
+        value: ratio,
+        limit: null,
+        unit: "d",
+        status: ratio >= 3 && ratio <= 6 ? "pass" : "warn",
+        subject,
+        source: "common practice [practice]; ASME B16.5 Class 150 flanges span about 3.7–7.5 d [calc]",
+        note: "A warning band, not a code limit.",
+      }),
+    );
+    out.push(
+      makeCheck({
+        id: `spacing.cone-overlap:${pair}`,
+        title: "Neighbouring pressure cones overlap at the gasket plane",
+        value: s.chordMm,
+        limit: coneDiameter,
+        unit: "mm",
+        status: !overlapApplies ? "not-applicable" : s.chordMm <= coneDiameter ? "pass" : "fail",
+        subject,
+        source: "cone footprint D + 2h·tanα [calc/practice]",
+        note: overlapApplies
+          ? `Cone half-angle ${model.coneAngleDeg.toFixed(1)}°, depth to gasket ${model.coneDepthMm.toFixed(1)} mm. Where footprints do not overlap the gasket between the bolts is unloaded.`
+          : "Ring gasket loaded through flange bending; cone overlap does not govern sealing.",
+      }),
+    );
   }
   return out;
 }

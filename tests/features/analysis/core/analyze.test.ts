@@ -61,7 +61,20 @@ describe("check records", () => {
     }
     const pair = r.checks.find((c) => c.id === "spacing.max-pitch:b3-b4")!;
     expect(pair.subject).toEqual(["b3", "b4"]);
-    for (const id of ["gasket.seating", "gasket.crush", "gasket.operating-m-p", "asme.app2.bolt-area", "bolt.assembly-stress-max", "spacing.min-pitch:b8-b1", "spacing.pitch-band:b1-b2", "spacing.cone-overlap:b1-b2", "edge.outline:b1", "edge.bore:b1", "pattern.bolt-count-multiple-of-4", "pattern.centre-line-straddle"]) {
+    for (const id of [
+      "gasket.seating",
+      "gasket.crush",
+      "gasket.operating-m-p",
+      "asme.app2.bolt-area",
+      "bolt.assembly-stress-max",
+      "spacing.min-pitch:b8-b1",
+      "spacing.pitch-band:b1-b2",
+      "spacing.cone-overlap:b1-b2",
+      "edge.outline:b1",
+      "edge.bore:b1",
+      "pattern.bolt-count-multiple-of-4",
+      "pattern.centre-line-straddle",
+    ]) {
       expect(r.checks.map((c) => c.id)).toContain(id);
     }
     expect(new Set(r.checks.map((c) => c.id)).size).toBe(r.checks.length);
@@ -81,9 +94,13 @@ describe("check records", () => {
     expect(c.note).not.toMatch(/rating/);
   });
   it("on a standard B16.5 flange the max-pitch note says it is accepted by its rating; the status stays the rule's", () => {
-    const nps6 = JSON.parse(readFileSync("examples/pipe-flange-nps6-spiral-wound.json", "utf8")) as JointDesign;
+    const nps6 = JSON.parse(
+      readFileSync("examples/pipe-flange-nps6-spiral-wound.json", "utf8"),
+    ) as JointDesign;
     const c = analyzeJoint(nps6).checks.find((x) => x.id.startsWith("spacing.max-pitch:"))!;
-    expect(c.note).toMatch(/ASME B16\.5 Class 150 NPS 6: a standard flange used within its pressure–temperature rating is accepted by that rating \(ASME VIII-1 UG-44 \[mem\]\)/);
+    expect(c.note).toMatch(
+      /ASME B16\.5 Class 150 NPS 6: a standard flange used within its pressure–temperature rating is accepted by that rating \(ASME VIII-1 UG-44 \[mem\]\)/,
+    );
     // The NPS 6 pattern's pitch (about 94.8 mm) is above Bs,max (about 81.6 mm): still a fail, for the approver to justify.
     expect(c.value!).toBeGreaterThan(c.limit!);
     expect(c.status).toBe("fail");
@@ -109,24 +126,59 @@ describe("the core never returns NaN or Infinity (seeded fuzz over random valid 
       if (kind === 0) {
         const bc = 150 + rnd() * 1500;
         d = circularFlange({
-          boltCount: 4 + Math.floor(rnd() * 40), boltCircleMm: bc, outsideDiameterMm: bc + 40 + rnd() * 40, boreMm: rnd() < 0.2 ? null : bc - 120 - rnd() * 20,
-          gasket: rnd() < 0.3 ? "full-face" : { innerDiameterMm: bc - 100, outerDiameterMm: bc - 60 - rnd() * 10 },
-          designation: "M16", threadSeries: "metric-coarse", holeDiameterMm: 18, flangeThicknessMm: 5 + rnd() * 100,
-          gasketMaterial: { ...ELASTOMER_INSERTION, modulusMpa: 5 + rnd() * 200_000, thicknessMm: 0.1 + rnd() * 6 },
-          estimator: (["auto", "cone", "beam"] as const)[Math.floor(rnd() * 3)], pressureMpa: rnd() * 5,
-          coneAngle: rnd() < 0.5 ? { mode: "thickness-dependent" } : { mode: "fixed", degrees: 10 + rnd() * 40 },
+          boltCount: 4 + Math.floor(rnd() * 40),
+          boltCircleMm: bc,
+          outsideDiameterMm: bc + 40 + rnd() * 40,
+          boreMm: rnd() < 0.2 ? null : bc - 120 - rnd() * 20,
+          gasket:
+            rnd() < 0.3 ? "full-face" : { innerDiameterMm: bc - 100, outerDiameterMm: bc - 60 - rnd() * 10 },
+          designation: "M16",
+          threadSeries: "metric-coarse",
+          holeDiameterMm: 18,
+          flangeThicknessMm: 5 + rnd() * 100,
+          gasketMaterial: {
+            ...ELASTOMER_INSERTION,
+            modulusMpa: 5 + rnd() * 200_000,
+            thicknessMm: 0.1 + rnd() * 6,
+          },
+          estimator: (["auto", "cone", "beam"] as const)[Math.floor(rnd() * 3)],
+          pressureMpa: rnd() * 5,
+          coneAngle:
+            rnd() < 0.5 ? { mode: "thickness-dependent" } : { mode: "fixed", degrees: 10 + rnd() * 40 },
           samplesPerPitch: 8 + Math.floor(rnd() * 60),
         });
       } else {
         d = rectangularCover({
-          boltCount: 4 + Math.floor(rnd() * 60), widthMm: 300 + rnd() * 900, heightMm: 200 + rnd() * 500, cornerRadiusMm: rnd() * 60,
-          coverThicknessMm: 3 + rnd() * 80, gasketMaterial: { ...ELASTOMER_INSERTION, modulusMpa: 5 + rnd() * 200_000, thicknessMm: 0.1 + rnd() * 6 },
+          boltCount: 4 + Math.floor(rnd() * 60),
+          widthMm: 300 + rnd() * 900,
+          heightMm: 200 + rnd() * 500,
+          cornerRadiusMm: rnd() * 60,
+          coverThicknessMm: 3 + rnd() * 80,
+          gasketMaterial: {
+            ...ELASTOMER_INSERTION,
+            modulusMpa: 5 + rnd() * 200_000,
+            thicknessMm: 0.1 + rnd() * 6,
+          },
           estimator: (["auto", "cone", "beam"] as const)[Math.floor(rnd() * 3)],
         });
-        if (kind === 2) d.outline = { kind: "obround", lengthMm: (d.outline as { widthMm: number }).widthMm, widthMm: (d.outline as { heightMm: number }).heightMm };
-        if (kind === 2) d.bore = { kind: "obround", lengthMm: (d.outline as { lengthMm: number }).lengthMm - 120, widthMm: (d.outline as { widthMm: number }).widthMm - 120 };
+        if (kind === 2)
+          d.outline = {
+            kind: "obround",
+            lengthMm: (d.outline as { widthMm: number }).widthMm,
+            widthMm: (d.outline as { heightMm: number }).heightMm,
+          };
+        if (kind === 2)
+          d.bore = {
+            kind: "obround",
+            lengthMm: (d.outline as { lengthMm: number }).lengthMm - 120,
+            widthMm: (d.outline as { widthMm: number }).widthMm - 120,
+          };
       }
-      d.bolts = d.bolts.map((b) => ({ ...b, sMm: b.sMm + (rnd() - 0.5) * 4, offPathMm: rnd() < 0.1 ? (rnd() - 0.5) * 4 : undefined }));
+      d.bolts = d.bolts.map((b) => ({
+        ...b,
+        sMm: b.sMm + (rnd() - 0.5) * 4,
+        offPathMm: rnd() < 0.1 ? (rnd() - 0.5) * 4 : undefined,
+      }));
       if (rnd() < 0.3) d.loads = { ...d.loads, axialLoadN: rnd() * 1e5, momentNmm: rnd() * 1e8 };
       if (validateJointDesign(d).length > 0) continue;
       const r = analyzeJoint(d);

@@ -34,7 +34,8 @@ describe("ASME VIII-1 Appendix 2 b0, b, G check table (B16.20 spiral-wound seali
     const design = circularFlange({ units: "US", pressureMpa: 2 });
     const model = buildJointModel(design);
     const { result, checks } = computeAsmeAppendix2(model);
-    const G = result.geometry.gMm, b = result.geometry.bMm;
+    const G = result.geometry.gMm,
+      b = result.geometry.bMm;
     expect(result.scope).toBe("appendix-2");
     expect(result.hN).toBeCloseTo((Math.PI / 4) * G * G * 2, 6);
     expect(result.hpN).toBeCloseTo(2 * b * Math.PI * G * 3 * 2, 6);
@@ -42,8 +43,13 @@ describe("ASME VIII-1 Appendix 2 b0, b, G check table (B16.20 spiral-wound seali
     expect(result.actualRootAreaMm2).toBeCloseTo(8 * model.thread.rootAreaMm2, 9);
     const S = result.allowableMpa!;
     expect(result.requiredAreaMm2!).toBeCloseTo(Math.max(result.wm1N, result.wm2N) / S, 6);
-    expect(result.flangeDesignLoadN!).toBeCloseTo(((result.requiredAreaMm2! + result.actualRootAreaMm2) * S) / 2, 6);
-    expect(checks.find((c) => c.id === "asme.app2.bolt-area")!.status).toBe(result.actualRootAreaMm2 >= result.requiredAreaMm2! ? "pass" : "fail");
+    expect(result.flangeDesignLoadN!).toBeCloseTo(
+      ((result.requiredAreaMm2! + result.actualRootAreaMm2) * S) / 2,
+      6,
+    );
+    expect(checks.find((c) => c.id === "asme.app2.bolt-area")!.status).toBe(
+      result.actualRootAreaMm2 >= result.requiredAreaMm2! ? "pass" : "fail",
+    );
   });
   it("full-face and non-circular joints are flagged as the [practice] generalisation", () => {
     const { result, checks } = computeAsmeAppendix2(buildJointModel(circularFlange({ gasket: "full-face" })));

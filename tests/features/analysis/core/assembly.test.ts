@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { bitReversalOrder, buildAssemblyPlan, crossPatternOrder, farthestFirstOrder } from "@/features/analysis/core/assembly";
+import {
+  bitReversalOrder,
+  buildAssemblyPlan,
+  crossPatternOrder,
+  farthestFirstOrder,
+} from "@/features/analysis/core/assembly";
 import type { PointMm } from "@/features/analysis/core/design";
 
 const ring = (n: number, r = 100): PointMm[] =>
@@ -36,7 +41,13 @@ describe("cross-pattern sequence", () => {
     });
   }
   it("works for odd and irregular patterns", () => {
-    const pts = [{ x: 0, y: 10 }, { x: 3, y: 9 }, { x: 10, y: 0 }, { x: 0, y: -10 }, { x: -7, y: -7 }];
+    const pts = [
+      { x: 0, y: 10 },
+      { x: 3, y: 9 },
+      { x: 10, y: 0 },
+      { x: 0, y: -10 },
+      { x: -7, y: -7 },
+    ];
     expect(new Set(farthestFirstOrder(pts)).size).toBe(5);
     expect(farthestFirstOrder([])).toEqual([]);
   });
@@ -44,7 +55,14 @@ describe("cross-pattern sequence", () => {
 
 describe("assembly passes (ASME PCC-1 legacy method [pub2])", () => {
   it("snug ≤ 20 %, ~30 %, ~70 %, 100 % cross, then circular 100 %, torque in N·m and ft·lb", () => {
-    const plan = buildAssemblyPlan({ boltIds: ring(8).map((_, i) => `b${i + 1}`), points: ring(8), targetPreloadN: 100_000, nutFactor: 0.2, nutFactorSource: "test", nominalDiameterMm: 20 });
+    const plan = buildAssemblyPlan({
+      boltIds: ring(8).map((_, i) => `b${i + 1}`),
+      points: ring(8),
+      targetPreloadN: 100_000,
+      nutFactor: 0.2,
+      nutFactorSource: "test",
+      nominalDiameterMm: 20,
+    });
     expect(plan.passes.map((p) => p.fractionOfTarget)).toEqual([0.2, 0.3, 0.7, 1, 1]);
     expect(plan.passes.map((p) => p.pattern)).toEqual(["cross", "cross", "cross", "cross", "circular"]);
     expect(plan.targetTorqueNm).toBeCloseTo(400, 9);

@@ -1,8 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { findThread, THREADS } from "@/features/analysis/core/catalogue/threads";
 import { findNut, heavyHexAcrossFlatsIn, NUTS } from "@/features/analysis/core/catalogue/nuts";
-import { inchBoltThreadLengthMm, metricBoltThreadLengthMm } from "@/features/analysis/core/catalogue/thread-length";
-import { BOLT_MATERIALS, getBoltMaterialById, getStrengthForDiameter } from "@/features/analysis/core/catalogue/bolt-materials";
+import {
+  inchBoltThreadLengthMm,
+  metricBoltThreadLengthMm,
+} from "@/features/analysis/core/catalogue/thread-length";
+import {
+  BOLT_MATERIALS,
+  getBoltMaterialById,
+  getStrengthForDiameter,
+} from "@/features/analysis/core/catalogue/bolt-materials";
 import { GASKET_TYPES, getGasketTypeById } from "@/features/analysis/core/catalogue/gaskets";
 import { FLANGE_TEMPLATES, getFlangeTemplateById } from "@/features/analysis/core/catalogue/flange-templates";
 import { TIGHTENING_METHODS } from "@/features/analysis/core/catalogue/tightening-methods";
@@ -13,8 +20,17 @@ const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 describe("metric coarse tensile stress areas, As = π/4·(d − 0.9382P)² (ISO 898-1 table values [pub2])", () => {
   const table: [string, number][] = [
-    ["M10", 58.0], ["M12", 84.3], ["M16", 157], ["M20", 245], ["M24", 353], ["M30", 561],
-    ["M36", 817], ["M42", 1121], ["M48", 1473], ["M56", 2030], ["M64", 2676],
+    ["M10", 58.0],
+    ["M12", 84.3],
+    ["M16", 157],
+    ["M20", 245],
+    ["M24", 353],
+    ["M30", 561],
+    ["M36", 817],
+    ["M42", 1121],
+    ["M48", 1473],
+    ["M56", 2030],
+    ["M64", 2676],
   ];
   for (const [des, area] of table) {
     it(`${des} coarse tensile stress area = ${area} mm² (ISO 898-1 table)`, () => {
@@ -26,9 +42,15 @@ describe("metric coarse tensile stress areas, As = π/4·(d − 0.9382P)² (ISO 
 
 describe("unified inch At and root area (ASME PCC-1 Table H-1 [pub])", () => {
   const table: [string, "unc" | "unified-8un", number, number][] = [
-    ["1/2", "unc", 0.1419, 0.1257], ["5/8", "unc", 0.226, 0.2017], ["3/4", "unc", 0.3345, 0.3019],
-    ["7/8", "unc", 0.4617, 0.4192], ["1", "unc", 0.6057, 0.5509], ["1-1/8", "unified-8un", 0.7905, 0.7276],
-    ["1-1/4", "unified-8un", 0.9997, 0.9289], ["1-1/2", "unified-8un", 1.492, 1.405], ["2", "unified-8un", 2.771, 2.652],
+    ["1/2", "unc", 0.1419, 0.1257],
+    ["5/8", "unc", 0.226, 0.2017],
+    ["3/4", "unc", 0.3345, 0.3019],
+    ["7/8", "unc", 0.4617, 0.4192],
+    ["1", "unc", 0.6057, 0.5509],
+    ["1-1/8", "unified-8un", 0.7905, 0.7276],
+    ["1-1/4", "unified-8un", 0.9997, 0.9289],
+    ["1-1/2", "unified-8un", 1.492, 1.405],
+    ["2", "unified-8un", 2.771, 2.652],
     ["2-1/2", "unified-8un", 4.442, 4.291],
   ];
   for (const [des, series, at, ar] of table) {
@@ -84,11 +106,21 @@ describe("bolt materials (ASTM A193/ISO 898-1 as reproduced [pub2]; II-D allowab
     expect(mpaToKsi(s.allowableMpa!)).toBeCloseTo(20, 6);
   });
   it("B8 cl.1 and L7 allowables are tagged [mem], never pub", () => {
-    expect(getStrengthForDiameter(getBoltMaterialById("astm-a193-b8-cl1")!, 20).allowableConfidence).toBe("mem");
+    expect(getStrengthForDiameter(getBoltMaterialById("astm-a193-b8-cl1")!, 20).allowableConfidence).toBe(
+      "mem",
+    );
     expect(getStrengthForDiameter(getBoltMaterialById("astm-a320-l7")!, 20).allowableConfidence).toBe("mem");
   });
   it("every catalogue row carries source, edition and a confidence tag", () => {
-    const rows = [...THREADS, ...NUTS, ...BOLT_MATERIALS, ...GASKET_TYPES, ...FLANGE_TEMPLATES, ...TIGHTENING_METHODS, ...WRENCH_CLEARANCES];
+    const rows = [
+      ...THREADS,
+      ...NUTS,
+      ...BOLT_MATERIALS,
+      ...GASKET_TYPES,
+      ...FLANGE_TEMPLATES,
+      ...TIGHTENING_METHODS,
+      ...WRENCH_CLEARANCES,
+    ];
     for (const r of rows) {
       expect(r.source.length).toBeGreaterThan(0);
       expect(r.edition.length).toBeGreaterThan(0);
@@ -100,14 +132,31 @@ describe("bolt materials (ASTM A193/ISO 898-1 as reproduced [pub2]; II-D allowab
 describe("gasket factors m, y (ASME VIII-1 Table 2-5.1)", () => {
   const pub: [string, number, number][] = [
     // [pub] rows, as printed in ASME VIII-2 2010 Table 4.16.1
-    ["jacketed-soft-al", 3.25, 5500], ["jacketed-soft-cu", 3.5, 6500], ["jacketed-iron", 3.75, 7600], ["jacketed-monel", 3.5, 8000],
-    ["jacketed-cr", 3.75, 9000], ["jacketed-ss", 3.75, 9000], ["grooved-soft-al", 3.25, 5500], ["grooved-soft-cu", 3.5, 6500],
-    ["grooved-iron", 3.75, 7600], ["grooved-monel-cr", 3.75, 9000], ["grooved-ss", 4.25, 10100], ["solid-soft-al", 4.0, 8800],
-    ["solid-soft-cu", 4.75, 13000], ["solid-iron", 5.5, 18000], ["solid-monel-cr", 6.0, 21800], ["solid-ss", 6.5, 26000],
-    ["ring-joint-iron", 5.5, 18000], ["ring-joint-monel-cr", 6.0, 21800], ["ring-joint-ss", 6.5, 26000],
+    ["jacketed-soft-al", 3.25, 5500],
+    ["jacketed-soft-cu", 3.5, 6500],
+    ["jacketed-iron", 3.75, 7600],
+    ["jacketed-monel", 3.5, 8000],
+    ["jacketed-cr", 3.75, 9000],
+    ["jacketed-ss", 3.75, 9000],
+    ["grooved-soft-al", 3.25, 5500],
+    ["grooved-soft-cu", 3.5, 6500],
+    ["grooved-iron", 3.75, 7600],
+    ["grooved-monel-cr", 3.75, 9000],
+    ["grooved-ss", 4.25, 10100],
+    ["solid-soft-al", 4.0, 8800],
+    ["solid-soft-cu", 4.75, 13000],
+    ["solid-iron", 5.5, 18000],
+    ["solid-monel-cr", 6.0, 21800],
+    ["solid-ss", 6.5, 26000],
+    ["ring-joint-iron", 5.5, 18000],
+    ["ring-joint-monel-cr", 6.0, 21800],
+    ["ring-joint-ss", 6.5, 26000],
     // [pub2] rows
-    ["elastomer-below-75a", 0.5, 0], ["elastomer-75a-and-above", 1.0, 200], ["spiral-wound-ss-fibre", 3.0, 10000],
-    ["vegetable-fibre", 1.75, 1100], ["elastomer-cotton-insertion", 1.25, 400],
+    ["elastomer-below-75a", 0.5, 0],
+    ["elastomer-75a-and-above", 1.0, 200],
+    ["spiral-wound-ss-fibre", 3.0, 10000],
+    ["vegetable-fibre", 1.75, 1100],
+    ["elastomer-cotton-insertion", 1.25, 400],
   ];
   for (const [id, m, y] of pub) {
     it(`${id}: m = ${m}, y = ${y} psi (ASME VIII-1 Table 2-5.1 / VIII-2 2010 Table 4.16.1)`, () => {
@@ -124,8 +173,14 @@ describe("gasket factors m, y (ASME VIII-1 Table 2-5.1)", () => {
 
 describe("flange templates (ASME B16.5 Class 150 [pub2])", () => {
   const rows: [string, number, number, number, string][] = [
-    ["2", 6.0, 4.75, 4, "5/8"], ["4", 9.0, 7.5, 8, "5/8"], ["6", 11.0, 9.5, 8, "3/4"], ["8", 13.5, 11.75, 8, "3/4"],
-    ["10", 16.0, 14.25, 12, "7/8"], ["12", 19.0, 17.0, 12, "7/8"], ["16", 23.5, 21.25, 16, "1"], ["24", 32.0, 29.5, 20, "1-1/4"],
+    ["2", 6.0, 4.75, 4, "5/8"],
+    ["4", 9.0, 7.5, 8, "5/8"],
+    ["6", 11.0, 9.5, 8, "3/4"],
+    ["8", 13.5, 11.75, 8, "3/4"],
+    ["10", 16.0, 14.25, 12, "7/8"],
+    ["12", 19.0, 17.0, 12, "7/8"],
+    ["16", 23.5, 21.25, 16, "1"],
+    ["24", 32.0, 29.5, 20, "1-1/4"],
   ];
   for (const [nps, od, bc, n, bolt] of rows) {
     it(`NPS ${nps}: OD ${od} in, bolt circle ${bc} in, ${n} × ${bolt} in (ASME B16.5 Class 150)`, () => {
@@ -161,6 +216,8 @@ describe("tightening-method scatter (Machinery's Handbook / NASA tables [pub2]; 
     expect(mmToIn(r.minSpacingMm)).toBeCloseTo(1.25, 10);
     expect(mmToIn(r.boltToHubMm)).toBeCloseTo(13 / 16, 10);
     expect(mmToIn(r.boltToEdgeMm)).toBeCloseTo(5 / 8, 10);
-    expect(WRENCH_CLEARANCES.filter((w) => w.designation !== "1/2").every((w) => w.confidence === "mem")).toBe(true);
+    expect(
+      WRENCH_CLEARANCES.filter((w) => w.designation !== "1/2").every((w) => w.confidence === "mem"),
+    ).toBe(true);
   });
 });

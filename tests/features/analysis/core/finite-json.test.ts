@@ -5,7 +5,13 @@ import { girthFlange96 } from "./fixtures";
 
 describe("finite JSON conversion", () => {
   it("turns non-finite numbers into null and counts them, in nested data and typed arrays", () => {
-    const r = toFiniteJson({ a: NaN, b: [1, Infinity], c: new Float64Array([2, -Infinity]), d: undefined, e: { f: "x" } });
+    const r = toFiniteJson({
+      a: NaN,
+      b: [1, Infinity],
+      c: new Float64Array([2, -Infinity]),
+      d: undefined,
+      e: { f: "x" },
+    });
     expect(r).toEqual({ value: { a: null, b: [1, null], c: [2, null], e: { f: "x" } }, replaced: 3 });
     expect("d" in r.value).toBe(false);
   });

@@ -8,13 +8,23 @@ import { placeBoltsEqually } from "@/features/analysis/core/geometry";
 import { psiToMpa } from "@/features/analysis/core/units";
 
 export const SPIRAL_WOUND: GasketMaterial = {
-  name: "Spiral-wound metal, stainless, fibre filled", catalogueId: "spiral-wound-ss-fibre", m: 3, yMpa: psiToMpa(10000),
-  modulusMpa: 1000, thicknessMm: 3.3, source: "ASME VIII-1 Table 2-5.1 (m, y); modulus typical [mem]",
+  name: "Spiral-wound metal, stainless, fibre filled",
+  catalogueId: "spiral-wound-ss-fibre",
+  m: 3,
+  yMpa: psiToMpa(10000),
+  modulusMpa: 1000,
+  thicknessMm: 3.3,
+  source: "ASME VIII-1 Table 2-5.1 (m, y); modulus typical [mem]",
 };
 
 export const ELASTOMER_INSERTION: GasketMaterial = {
-  name: "Elastomer with cotton insertion", catalogueId: "elastomer-cotton-insertion", m: 1.25, yMpa: psiToMpa(400),
-  modulusMpa: 50, thicknessMm: 3, source: "ASME VIII-1 Table 2-5.1 (m, y); modulus typical [mem]",
+  name: "Elastomer with cotton insertion",
+  catalogueId: "elastomer-cotton-insertion",
+  m: 1.25,
+  yMpa: psiToMpa(400),
+  modulusMpa: 50,
+  thicknessMm: 3,
+  source: "ASME VIII-1 Table 2-5.1 (m, y); modulus typical [mem]",
 };
 
 export interface CircularOptions {
@@ -46,7 +56,11 @@ export function circularFlange(o: CircularOptions = {}): JointDesign {
   const gasket: JointDesign["gasket"] =
     o.gasket === "full-face"
       ? { kind: "full-face", material: mat }
-      : { kind: "ring", geometry: { kind: "annulus", ...(o.gasket ?? { innerDiameterMm: 182.6, outerDiameterMm: 209.6 }) }, material: mat };
+      : {
+          kind: "ring",
+          geometry: { kind: "annulus", ...(o.gasket ?? { innerDiameterMm: 182.6, outerDiameterMm: 209.6 }) },
+          material: mat,
+        };
   return {
     schemaVersion: 1,
     name: `test circular flange, ${n} bolts`,
@@ -57,26 +71,58 @@ export function circularFlange(o: CircularOptions = {}): JointDesign {
     boltPath: { kind: "circle", diameterMm: bc },
     bolts: placeBoltsEqually(Math.PI * bc, n),
     fastener: {
-      designation: o.designation ?? "3/4", threadSeries: o.threadSeries ?? "unc", materialId: "astm-a193-b7", form: "stud",
-      lengthMm: 2 * t + mat.thicknessMm + 50, holeDiameterMm: o.holeDiameterMm ?? 22.2, washer: null, termination: { kind: "nut" },
+      designation: o.designation ?? "3/4",
+      threadSeries: o.threadSeries ?? "unc",
+      materialId: "astm-a193-b7",
+      form: "stud",
+      lengthMm: 2 * t + mat.thicknessMm + 50,
+      holeDiameterMm: o.holeDiameterMm ?? 22.2,
+      washer: null,
+      termination: { kind: "nut" },
     },
     layers: [
-      { role: "flange", thicknessMm: t, materialName: "carbon steel", modulusMpa: o.flangeModulusMpa ?? 202000 },
+      {
+        role: "flange",
+        thicknessMm: t,
+        materialName: "carbon steel",
+        modulusMpa: o.flangeModulusMpa ?? 202000,
+      },
       { role: "gasket" },
-      { role: "flange", thicknessMm: t, materialName: "carbon steel", modulusMpa: o.flangeModulusMpa ?? 202000 },
+      {
+        role: "flange",
+        thicknessMm: t,
+        materialName: "carbon steel",
+        modulusMpa: o.flangeModulusMpa ?? 202000,
+      },
     ],
     loads: { designPressureMpa: o.pressureMpa ?? 1, designTemperatureC: 40, axialLoadN: 0, momentNmm: 0 },
-    assembly: { preload: { kind: "bolt-stress", value: psiToMpa(50000), areaBasis: "root" }, nutFactor: { value: 0.2, source: "test value" }, method: "torque-wrench", scatterOverride: null },
-    estimator: { coneAngle: o.coneAngle ?? { mode: "thickness-dependent" }, estimator: o.estimator ?? "auto", samplesPerPitch: o.samplesPerPitch ?? 64, grid: { nx: 64, ny: 64 } },
+    assembly: {
+      preload: { kind: "bolt-stress", value: psiToMpa(50000), areaBasis: "root" },
+      nutFactor: { value: 0.2, source: "test value" },
+      method: "torque-wrench",
+      scatterOverride: null,
+    },
+    estimator: {
+      coneAngle: o.coneAngle ?? { mode: "thickness-dependent" },
+      estimator: o.estimator ?? "auto",
+      samplesPerPitch: o.samplesPerPitch ?? 64,
+      grid: { nx: 64, ny: 64 },
+    },
   };
 }
 
 /** A 96-bolt heat-exchanger girth flange (M30 on a 2500 mm bolt circle, ring gasket inside). */
 export function girthFlange96(): JointDesign {
   return circularFlange({
-    boltCount: 96, outsideDiameterMm: 2620, boltCircleMm: 2500, boreMm: 2300,
-    gasket: { innerDiameterMm: 2360, outerDiameterMm: 2420 }, designation: "M30", threadSeries: "metric-coarse",
-    holeDiameterMm: 33, flangeThicknessMm: 90,
+    boltCount: 96,
+    outsideDiameterMm: 2620,
+    boltCircleMm: 2500,
+    boreMm: 2300,
+    gasket: { innerDiameterMm: 2360, outerDiameterMm: 2420 },
+    designation: "M30",
+    threadSeries: "metric-coarse",
+    holeDiameterMm: 33,
+    flangeThicknessMm: 90,
   });
 }
 
@@ -95,7 +141,10 @@ export interface RectOptions {
 
 /** Rectangular cover on a frame with a full-face gasket, M16 bolts on an inward offset of the outline. */
 export function rectangularCover(o: RectOptions = {}): JointDesign {
-  const w = o.widthMm ?? 600, h = o.heightMm ?? 400, r = o.cornerRadiusMm ?? 30, off = o.boltOffsetMm ?? 25;
+  const w = o.widthMm ?? 600,
+    h = o.heightMm ?? 400,
+    r = o.cornerRadiusMm ?? 30,
+    off = o.boltOffsetMm ?? 25;
   const n = o.boltCount ?? 20;
   const rr = Math.max(r - off, 0);
   const L = 2 * (w - 2 * off) + 2 * (h - 2 * off) - (8 - 2 * Math.PI) * rr;
@@ -109,16 +158,37 @@ export function rectangularCover(o: RectOptions = {}): JointDesign {
     boltPath: { kind: "offset", offsetMm: off },
     bolts: o.boltCountOverride ?? placeBoltsEqually(L, n),
     fastener: {
-      designation: "M16", threadSeries: "metric-coarse", materialId: "iso-898-1-8.8", form: "hex-bolt", lengthMm: 80,
-      holeDiameterMm: 18, washer: { thicknessMm: 3, outerDiameterMm: 30 }, termination: { kind: "nut" },
+      designation: "M16",
+      threadSeries: "metric-coarse",
+      materialId: "iso-898-1-8.8",
+      form: "hex-bolt",
+      lengthMm: 80,
+      holeDiameterMm: 18,
+      washer: { thicknessMm: 3, outerDiameterMm: 30 },
+      termination: { kind: "nut" },
     },
     layers: [
-      { role: "cover", thicknessMm: o.coverThicknessMm ?? 20, materialName: "steel plate", modulusMpa: 210000 },
+      {
+        role: "cover",
+        thicknessMm: o.coverThicknessMm ?? 20,
+        materialName: "steel plate",
+        modulusMpa: 210000,
+      },
       { role: "gasket" },
       { role: "flange", thicknessMm: 25, materialName: "steel frame", modulusMpa: 210000 },
     ],
     loads: { designPressureMpa: 0.3, designTemperatureC: 40, axialLoadN: 0, momentNmm: 0 },
-    assembly: { preload: { kind: "fraction-of-proof", value: 0.5 }, nutFactor: { value: 0.18, source: "test value" }, method: "torque-wrench", scatterOverride: null },
-    estimator: { coneAngle: o.coneAngle ?? { mode: "thickness-dependent" }, estimator: o.estimator ?? "auto", samplesPerPitch: 64, grid: { nx: 64, ny: 64 } },
+    assembly: {
+      preload: { kind: "fraction-of-proof", value: 0.5 },
+      nutFactor: { value: 0.18, source: "test value" },
+      method: "torque-wrench",
+      scatterOverride: null,
+    },
+    estimator: {
+      coneAngle: o.coneAngle ?? { mode: "thickness-dependent" },
+      estimator: o.estimator ?? "auto",
+      samplesPerPitch: 64,
+      grid: { nx: 64, ny: 64 },
+    },
   };
 }

@@ -8,35 +8,68 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { circularFlange, ELASTOMER_INSERTION, rectangularCover } from "./fixtures";
 
 const profiles = (d: JointDesign) => computeGasketStressProfiles(buildJointModel(d));
-const steelToSteel = { ...ELASTOMER_INSERTION, name: "metal to metal (stiff thin contact)", modulusMpa: 200_000, thicknessMm: 0.2, m: 0, yMpa: 0 };
+const steelToSteel = {
+  ...ELASTOMER_INSERTION,
+  name: "metal to metal (stiff thin contact)",
+  modulusMpa: 200_000,
+  thicknessMm: 0.2,
+  m: 0,
+  yMpa: 0,
+};
 
 describe("beam on elastic foundation (Hetényi 1946, periodic superposition)", () => {
   it("finite-difference solution reproduces the periodic Hetényi superposition within 0.2 %", () => {
-    const L = 800, n = 8, k = 2000, EI = 1e10;
+    const L = 800,
+      n = 8,
+      k = 2000,
+      EI = 1e10;
     const loads = Array.from({ length: n }, (_, i) => ({ sMm: (i + 0.5) * (L / n), forceN: 50_000 }));
     const lambda = Math.pow(k / (4 * EI), 0.25);
-    const sol = solveBeamOnFoundation({ pathLengthMm: L, nodes: n * 64, loads, flexuralRigidityNmm2: EI, foundationModulusMpa: k });
+    const sol = solveBeamOnFoundation({
+      pathLengthMm: L,
+      nodes: n * 64,
+      loads,
+      flexuralRigidityNmm2: EI,
+      foundationModulusMpa: k,
+    });
     for (const j of [0, 16, 32, 48]) {
       const exact = hetenyiPeriodicDeflectionMm(loads, L, k, lambda, (j * L) / (n * 64));
       expect(Math.abs(sol.deflectionMm[j] - exact) / exact).toBeLessThan(0.002);
     }
   });
   it("force balance: Σ k·w·h = Σ F exactly, also with lift-off; never a negative stress", () => {
-    const L = 3200, n = 8;
+    const L = 3200,
+      n = 8;
     const loads = Array.from({ length: n }, (_, i) => ({ sMm: (i + 0.5) * (L / n), forceN: 50_000 }));
-    const sol = solveBeamOnFoundation({ pathLengthMm: L, nodes: 512, loads, flexuralRigidityNmm2: 2e8, foundationModulusMpa: 2000 });
+    const sol = solveBeamOnFoundation({
+      pathLengthMm: L,
+      nodes: 512,
+      loads,
+      flexuralRigidityNmm2: 2e8,
+      foundationModulusMpa: 2000,
+    });
     expect(sol.liftedLengthMm).toBeGreaterThan(0);
     expect(sol.converged).toBe(true);
     let F = 0;
-    for (const q of sol.lineLoadNPerMm) { expect(q).toBeGreaterThanOrEqual(0); F += (q * L) / 512; }
+    for (const q of sol.lineLoadNPerMm) {
+      expect(q).toBeGreaterThanOrEqual(0);
+      F += (q * L) / 512;
+    }
     expect(Math.abs(F - 400_000) / 400_000).toBeLessThan(1e-9);
   });
   it("the ratio min/max depends only on λ·pitch (scaling the path and the stiffnesses together)", () => {
     const ratio = (scale: number) => {
-      const L = 800 * scale, n = 8;
+      const L = 800 * scale,
+        n = 8;
       const loads = Array.from({ length: n }, (_, i) => ({ sMm: (i + 0.5) * (L / n), forceN: 1000 }));
       // λ ∝ (k/EI)^¼: scaling lengths by s and EI by s⁴ keeps λ·pitch fixed
-      const sol = solveBeamOnFoundation({ pathLengthMm: L, nodes: 512, loads, flexuralRigidityNmm2: 1e9 * scale ** 4, foundationModulusMpa: 2000 });
+      const sol = solveBeamOnFoundation({
+        pathLengthMm: L,
+        nodes: 512,
+        loads,
+        flexuralRigidityNmm2: 1e9 * scale ** 4,
+        foundationModulusMpa: 2000,
+      });
       return Math.min(...sol.lineLoadNPerMm) / Math.max(...sol.lineLoadNPerMm);
     };
     expect(ratio(2)).toBeCloseTo(ratio(1), 6);
@@ -57,13 +90,23 @@ describe("force balance of both estimators (integrated gasket stress = Σ bolt f
     expect(Math.abs(g.integratedForceN / g.totalBoltForceN - 1)).toBeLessThan(0.005);
   });
   it("cone, full-face circular flange with overlapping footprints", () => {
-    const g = computeGasketStressGrid(circularFlange({ gasket: "full-face", boltCount: 16, gasketMaterial: steelToSteel }), 512, 512, { estimator: "cone" });
+    const g = computeGasketStressGrid(
+      circularFlange({ gasket: "full-face", boltCount: 16, gasketMaterial: steelToSteel }),
+      512,
+      512,
+      { estimator: "cone" },
+    );
     expect(Math.abs(g.integratedForceN / g.totalBoltForceN - 1)).toBeLessThan(0.005);
   });
   it("footprint integral of the linear falloff: π(rc − ri)(rc + 2ri)/3", () => {
-    const ri = 9, rc = 24;
-    let num = 0; const m = 20000;
-    for (let i = 0; i < m; i++) { const r = ri + ((i + 0.5) * (rc - ri)) / m; num += ((rc - r) / (rc - ri)) * 2 * Math.PI * r * ((rc - ri) / m); }
+    const ri = 9,
+      rc = 24;
+    let num = 0;
+    const m = 20000;
+    for (let i = 0; i < m; i++) {
+      const r = ri + ((i + 0.5) * (rc - ri)) / m;
+      num += ((rc - r) / (rc - ri)) * 2 * Math.PI * r * ((rc - ri) / m);
+    }
     expect(coneFootprintIntegralMm2(ri, rc)).toBeCloseTo(num, 6);
   });
 });
@@ -71,7 +114,13 @@ describe("force balance of both estimators (integrated gasket stress = Σ bolt f
 describe("symmetry: a regular pattern gives identical stress at every bolt", () => {
   for (const est of ["beam", "cone"] as const) {
     it(`${est} estimate, 12 bolts on a circle`, () => {
-      const d = circularFlange({ boltCount: 12, boltCircleMm: 300, outsideDiameterMm: 350, gasket: "full-face", gasketMaterial: est === "cone" ? steelToSteel : ELASTOMER_INSERTION });
+      const d = circularFlange({
+        boltCount: 12,
+        boltCircleMm: 300,
+        outsideDiameterMm: 350,
+        gasket: "full-face",
+        gasketMaterial: est === "cone" ? steelToSteel : ELASTOMER_INSERTION,
+      });
       const p = profiles(d);
       const values = est === "cone" ? p.coneMpa : p.beamMpa;
       const spp = d.estimator.samplesPerPitch;
@@ -85,7 +134,10 @@ describe("symmetry: a regular pattern gives identical stress at every bolt", () 
 });
 
 describe("monotonicity: more bolts, thicker or stiffer flange never lowers the minimum stress", () => {
-  const minOf = (d: JointDesign) => { const p = profiles(d); return p.beam.minMpa; };
+  const minOf = (d: JointDesign) => {
+    const p = profiles(d);
+    return p.beam.minMpa;
+  };
   it("more bolts (8 → 12 → 16)", () => {
     const m = [8, 12, 16].map((n) => minOf(circularFlange({ boltCount: n })));
     expect(m[1]).toBeGreaterThanOrEqual(m[0]);
@@ -102,7 +154,9 @@ describe("monotonicity: more bolts, thicker or stiffer flange never lowers the m
     expect(stiff).toBeGreaterThanOrEqual(soft);
   });
   it("cone: more bolts on a full-face cover never lowers the minimum between bolts", () => {
-    const c = (n: number) => profiles(rectangularCover({ boltCount: n, gasketMaterial: steelToSteel, estimator: "cone" })).cone.minMpa;
+    const c = (n: number) =>
+      profiles(rectangularCover({ boltCount: n, gasketMaterial: steelToSteel, estimator: "cone" })).cone
+        .minMpa;
     expect(c(40)).toBeGreaterThanOrEqual(c(20));
     expect(c(80)).toBeGreaterThanOrEqual(c(40));
   });
@@ -110,7 +164,11 @@ describe("monotonicity: more bolts, thicker or stiffer flange never lowers the m
 
 describe("limits", () => {
   it("cone footprints that do not reach the neighbour leave zero stress between the bolts (a finding, not an error)", () => {
-    const d = rectangularCover({ boltCount: 12, gasketMaterial: steelToSteel, coneAngle: { mode: "fixed", degrees: 30 } });
+    const d = rectangularCover({
+      boltCount: 12,
+      gasketMaterial: steelToSteel,
+      coneAngle: { mode: "fixed", degrees: 30 },
+    });
     const model = buildJointModel(d);
     const p = computeGasketStressProfiles(model);
     const pitch = p.pathLengthMm / 12;
@@ -135,7 +193,13 @@ describe("limits", () => {
     expect(p.choice.estimator).toBe("beam");
   });
   it("wide pitch, soft gasket, thin flange: tensionless contact, stress never negative, lifted length reported", () => {
-    const p = profiles(circularFlange({ boltCount: 4, flangeThicknessMm: 6, gasketMaterial: { ...ELASTOMER_INSERTION, modulusMpa: 20_000 } }));
+    const p = profiles(
+      circularFlange({
+        boltCount: 4,
+        flangeThicknessMm: 6,
+        gasketMaterial: { ...ELASTOMER_INSERTION, modulusMpa: 20_000 },
+      }),
+    );
     expect(p.beam.unloadedLengthMm).toBeGreaterThan(0);
     expect(Math.min(...p.beamMpa)).toBeGreaterThanOrEqual(0);
     expect(Math.abs(p.beamInfo.forceBalanceRatio - 1)).toBeLessThan(0.005);

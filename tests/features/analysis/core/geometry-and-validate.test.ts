@@ -1,5 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { getBoltPath, getBoltPoint, getNeighbourSpacings, isPointInOutline, outlineToPolyline, placeBoltsEqually, snapToBoltPath } from "@/features/analysis/core/geometry";
+import {
+  getBoltPath,
+  getBoltPoint,
+  getNeighbourSpacings,
+  isPointInOutline,
+  outlineToPolyline,
+  placeBoltsEqually,
+  snapToBoltPath,
+} from "@/features/analysis/core/geometry";
 import { pointAtArcLength, projectOntoPath } from "@/features/analysis/core/path";
 import { validateJointDesign } from "@/features/analysis/core/validate";
 import { circularFlange, rectangularCover } from "./fixtures";
@@ -16,7 +24,10 @@ describe("geometry", () => {
     expect(q.y).toBeCloseTo(0, 9);
   });
   it("offset of a rounded rectangle: exact length 2(w+h) − (8 − 2π)·r'", () => {
-    const p = getBoltPath({ kind: "rectangle", widthMm: 600, heightMm: 400, cornerRadiusMm: 30 }, { kind: "offset", offsetMm: 25 });
+    const p = getBoltPath(
+      { kind: "rectangle", widthMm: 600, heightMm: 400, cornerRadiusMm: 30 },
+      { kind: "offset", offsetMm: 25 },
+    );
     expect(p.lengthMm).toBeCloseTo(2 * 550 + 2 * 350 - (8 - 2 * Math.PI) * 5, 9);
   });
   it("placing N bolts equally straddles the centre lines (first at half a pitch from the top)", () => {
@@ -32,10 +43,21 @@ describe("geometry", () => {
       expect(r.sMm).toBeCloseTo(s, 6);
       expect(r.offPathMm).toBeCloseTo(7, 6);
     }
-    expect(snapToBoltPath({ outline: { kind: "circle", diameterMm: 300 }, boltPath: { kind: "circle", diameterMm: 200 } }, { x: 0, y: 110 })).toEqual({ sMm: 0, offPathMm: expect.closeTo(10, 9) });
+    expect(
+      snapToBoltPath(
+        { outline: { kind: "circle", diameterMm: 300 }, boltPath: { kind: "circle", diameterMm: 200 } },
+        { x: 0, y: 110 },
+      ),
+    ).toEqual({ sMm: 0, offPathMm: expect.closeTo(10, 9) });
   });
   it("pitch and chord between neighbours", () => {
-    const d = circularFlange({ boltCount: 4, boltCircleMm: 200, outsideDiameterMm: 260, boreMm: 100, gasket: { innerDiameterMm: 120, outerDiameterMm: 140 } });
+    const d = circularFlange({
+      boltCount: 4,
+      boltCircleMm: 200,
+      outsideDiameterMm: 260,
+      boreMm: 100,
+      gasket: { innerDiameterMm: 120, outerDiameterMm: 140 },
+    });
     const sp = getNeighbourSpacings(d);
     expect(sp).toHaveLength(4);
     expect(sp[0].pitchMm).toBeCloseTo((Math.PI * 200) / 4, 9);
@@ -43,9 +65,31 @@ describe("geometry", () => {
     expect(sp[3].toId).toBe("b1");
   });
   it("point in outline and polylines for every outline kind", () => {
-    expect(isPointInOutline({ kind: "rectangle", widthMm: 100, heightMm: 50, cornerRadiusMm: 10 }, { x: 49, y: 24 })).toBe(false);
-    expect(isPointInOutline({ kind: "rectangle", widthMm: 100, heightMm: 50, cornerRadiusMm: 10 }, { x: 40, y: 15 })).toBe(true);
-    expect(isPointInOutline({ kind: "polygon", points: [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 0, y: 10 }] }, { x: 2, y: 2 })).toBe(true);
+    expect(
+      isPointInOutline(
+        { kind: "rectangle", widthMm: 100, heightMm: 50, cornerRadiusMm: 10 },
+        { x: 49, y: 24 },
+      ),
+    ).toBe(false);
+    expect(
+      isPointInOutline(
+        { kind: "rectangle", widthMm: 100, heightMm: 50, cornerRadiusMm: 10 },
+        { x: 40, y: 15 },
+      ),
+    ).toBe(true);
+    expect(
+      isPointInOutline(
+        {
+          kind: "polygon",
+          points: [
+            { x: 0, y: 0 },
+            { x: 10, y: 0 },
+            { x: 0, y: 10 },
+          ],
+        },
+        { x: 2, y: 2 },
+      ),
+    ).toBe(true);
     expect(outlineToPolyline({ kind: "circle", diameterMm: 100 }, 1).length).toBeGreaterThan(300);
   });
 });
@@ -58,14 +102,23 @@ describe("validateJointDesign names the field of every problem", () => {
   it("bolt outside the outline → bolts[i].position", () => {
     const d = circularFlange();
     d.bolts[3] = { ...d.bolts[3], offPathMm: 30 };
-    expect(validateJointDesign(d)).toContainEqual({ path: "bolts[3].position", message: "bolt hole lies outside the flange outline" });
+    expect(validateJointDesign(d)).toContainEqual({
+      path: "bolts[3].position",
+      message: "bolt hole lies outside the flange outline",
+    });
   });
   it("overlapping holes, ring gasket over a hole, bolt count limits, zero/NaN dimensions", () => {
     const d = circularFlange();
     d.bolts[2] = { ...d.bolts[2], sMm: d.bolts[1].sMm + 5 };
-    expect(validateJointDesign(d).some((i) => i.path === "bolts[2].position" && /overlaps the hole/.test(i.message))).toBe(true);
+    expect(
+      validateJointDesign(d).some(
+        (i) => i.path === "bolts[2].position" && /overlaps the hole/.test(i.message),
+      ),
+    ).toBe(true);
     const g = circularFlange({ gasket: { innerDiameterMm: 182, outerDiameterMm: 235 } });
-    expect(validateJointDesign(g).some((i) => i.path === "gasket.geometry" && /overlaps the hole/.test(i.message))).toBe(true);
+    expect(
+      validateJointDesign(g).some((i) => i.path === "gasket.geometry" && /overlaps the hole/.test(i.message)),
+    ).toBe(true);
     const many = circularFlange();
     many.bolts = placeBoltsEqually(1000, 10_000);
     expect(validateJointDesign(many)[0].path).toBe("bolts");
@@ -77,6 +130,9 @@ describe("validateJointDesign names the field of every problem", () => {
     expect(validateJointDesign(zero)[0].path).toBe("outline.diameterMm");
     const nan = circularFlange();
     nan.layers[0] = { role: "flange", thicknessMm: Number.NaN, materialName: "x", modulusMpa: 200_000 };
-    expect(validateJointDesign(nan)[0]).toEqual({ path: "layers[0].thicknessMm", message: "must be a finite number" });
+    expect(validateJointDesign(nan)[0]).toEqual({
+      path: "layers[0].thicknessMm",
+      message: "must be a finite number",
+    });
   });
 });

@@ -30,7 +30,9 @@ describe("previewJoint equals the corresponding parts of analyzeJoint exactly", 
       const preview = previewJoint(design);
       expect(preview.governingEstimator).toBe(full.summary.governingEstimator);
       expect(preview.summary).toStrictEqual({
-        minGasketStressMpa: full.summary.minGasketStressMpa, maxGasketStressMpa: full.summary.maxGasketStressMpa, meanGasketStressMpa: full.summary.meanGasketStressMpa,
+        minGasketStressMpa: full.summary.minGasketStressMpa,
+        maxGasketStressMpa: full.summary.maxGasketStressMpa,
+        meanGasketStressMpa: full.summary.meanGasketStressMpa,
       });
       expect(preview.profile).toStrictEqual(full.gasketStress.profile);
       expect(preview.boltSOnPathMm).toStrictEqual(full.gasketStress.boltSOnPathMm);

@@ -1,7 +1,20 @@
 import { describe, expect, it } from "vitest";
-import { computeBoltStiffnessNPerMm, computeGripMm, splitGripMm } from "@/features/analysis/core/bolt-stiffness";
-import { computeMemberStiffness, frustumStiffnessNPerMm, wilemanMemberStiffnessNPerMm } from "@/features/analysis/core/member-stiffness";
-import { computeSafetyFactors, distributeExternalLoadN, jointConstant, shareExternalLoad } from "@/features/analysis/core/joint-loads";
+import {
+  computeBoltStiffnessNPerMm,
+  computeGripMm,
+  splitGripMm,
+} from "@/features/analysis/core/bolt-stiffness";
+import {
+  computeMemberStiffness,
+  frustumStiffnessNPerMm,
+  wilemanMemberStiffnessNPerMm,
+} from "@/features/analysis/core/member-stiffness";
+import {
+  computeSafetyFactors,
+  distributeExternalLoadN,
+  jointConstant,
+  shareExternalLoad,
+} from "@/features/analysis/core/joint-loads";
 import { applyScatterN, computeTargetPreloadN } from "@/features/analysis/core/preload";
 import { torqueFromPreloadNmm } from "@/features/analysis/core/torque";
 import { thicknessDependentConeAngleDeg } from "@/features/analysis/core/cone-angle";
@@ -12,30 +25,71 @@ const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 describe("Jindal, Machine Design, Ex. 31-1 [pub2]: d = 18, grip 25 + 25 mm, Eb 210 GPa, members 90 GPa, D = 1.5d", () => {
   const d = 18;
-  const kb = computeBoltStiffnessNPerMm({ nominalDiameterMm: d, tensileStressAreaMm2: 192.5, shankInGripMm: 50, threadInGripMm: 0, modulusMpa: 210_000 });
-  const stack = [{ thicknessMm: 25, modulusMpa: 90_000 }, { thicknessMm: 25, modulusMpa: 90_000 }];
+  const kb = computeBoltStiffnessNPerMm({
+    nominalDiameterMm: d,
+    tensileStressAreaMm2: 192.5,
+    shankInGripMm: 50,
+    threadInGripMm: 0,
+    modulusMpa: 210_000,
+  });
+  const stack = [
+    { thicknessMm: 25, modulusMpa: 90_000 },
+    { thicknessMm: 25, modulusMpa: 90_000 },
+  ];
   it("kb = 1.0688e6 N/mm (Jindal Ex. 31-1)", () => expect(rel(kb, 1.0688e6)).toBeLessThan(5e-4));
   it("km = 2.2458e6 N/mm at 45° (Jindal Ex. 31-1)", () => {
-    const km = computeMemberStiffness({ layers: stack, bearingDiameterMm: 1.5 * d, holeDiameterMm: d, coneAngleDeg: 45 }).stiffnessNPerMm;
+    const km = computeMemberStiffness({
+      layers: stack,
+      bearingDiameterMm: 1.5 * d,
+      holeDiameterMm: d,
+      coneAngleDeg: 45,
+    }).stiffnessNPerMm;
     expect(rel(km, 2.2458e6)).toBeLessThan(5e-4);
     expect(jointConstant(kb, km)).toBeCloseTo(0.322, 3);
   });
   it("km = 1.5609e6 N/mm and C = 0.4064 at 30° (reference [calc] from the same geometry)", () => {
-    const km = computeMemberStiffness({ layers: stack, bearingDiameterMm: 1.5 * d, holeDiameterMm: d, coneAngleDeg: 30 }).stiffnessNPerMm;
+    const km = computeMemberStiffness({
+      layers: stack,
+      bearingDiameterMm: 1.5 * d,
+      holeDiameterMm: d,
+      coneAngleDeg: 30,
+    }).stiffnessNPerMm;
     expect(rel(km, 1.5609e6)).toBeLessThan(5e-4);
     expect(jointConstant(kb, km)).toBeCloseTo(0.4064, 3);
   });
   it("a multi-layer stack split at its layer boundaries gives the same km as the single layers (frusta in series)", () => {
-    const split = [{ thicknessMm: 10, modulusMpa: 90_000 }, { thicknessMm: 15, modulusMpa: 90_000 }, { thicknessMm: 25, modulusMpa: 90_000 }];
-    const a = computeMemberStiffness({ layers: split, bearingDiameterMm: 27, holeDiameterMm: 18, coneAngleDeg: 30 }).stiffnessNPerMm;
-    const b = computeMemberStiffness({ layers: stack, bearingDiameterMm: 27, holeDiameterMm: 18, coneAngleDeg: 30 }).stiffnessNPerMm;
+    const split = [
+      { thicknessMm: 10, modulusMpa: 90_000 },
+      { thicknessMm: 15, modulusMpa: 90_000 },
+      { thicknessMm: 25, modulusMpa: 90_000 },
+    ];
+    const a = computeMemberStiffness({
+      layers: split,
+      bearingDiameterMm: 27,
+      holeDiameterMm: 18,
+      coneAngleDeg: 30,
+    }).stiffnessNPerMm;
+    const b = computeMemberStiffness({
+      layers: stack,
+      bearingDiameterMm: 27,
+      holeDiameterMm: 18,
+      coneAngleDeg: 30,
+    }).stiffnessNPerMm;
     expect(rel(a, b)).toBeLessThan(1e-12);
   });
 });
 
 describe("Wileman, Choudury & Green (1991) cross-check", () => {
   it("steel, d = 16, l = 40 mm: the fit and the 30° cone agree within about 1 % (reference [calc]; constants [mem])", () => {
-    const cone = computeMemberStiffness({ layers: [{ thicknessMm: 20, modulusMpa: 207_000 }, { thicknessMm: 20, modulusMpa: 207_000 }], bearingDiameterMm: 24, holeDiameterMm: 16, coneAngleDeg: 30 }).stiffnessNPerMm;
+    const cone = computeMemberStiffness({
+      layers: [
+        { thicknessMm: 20, modulusMpa: 207_000 },
+        { thicknessMm: 20, modulusMpa: 207_000 },
+      ],
+      bearingDiameterMm: 24,
+      holeDiameterMm: 16,
+      coneAngleDeg: 30,
+    }).stiffnessNPerMm;
     const fit = wilemanMemberStiffnessNPerMm(207_000, 16, 40, "steel");
     expect(rel(cone, fit)).toBeLessThan(0.012);
   });
@@ -43,14 +97,41 @@ describe("Wileman, Choudury & Green (1991) cross-check", () => {
 
 describe("grip, shank split and bolt springs in series", () => {
   it("tapped hole: l = h + t2/2 when t2 < d, else h + d/2 (reference 1.2 [pub2])", () => {
-    expect(computeGripMm({ clampedThicknessMm: 30, washerThicknessMm: 0, nominalDiameterMm: 20, tappedMemberThicknessMm: 12 })).toBe(36);
-    expect(computeGripMm({ clampedThicknessMm: 30, washerThicknessMm: 0, nominalDiameterMm: 20, tappedMemberThicknessMm: 40 })).toBe(40);
-    expect(computeGripMm({ clampedThicknessMm: 30, washerThicknessMm: 3, nominalDiameterMm: 20, tappedMemberThicknessMm: null })).toBe(36);
+    expect(
+      computeGripMm({
+        clampedThicknessMm: 30,
+        washerThicknessMm: 0,
+        nominalDiameterMm: 20,
+        tappedMemberThicknessMm: 12,
+      }),
+    ).toBe(36);
+    expect(
+      computeGripMm({
+        clampedThicknessMm: 30,
+        washerThicknessMm: 0,
+        nominalDiameterMm: 20,
+        tappedMemberThicknessMm: 40,
+      }),
+    ).toBe(40);
+    expect(
+      computeGripMm({
+        clampedThicknessMm: 30,
+        washerThicknessMm: 3,
+        nominalDiameterMm: 20,
+        tappedMemberThicknessMm: null,
+      }),
+    ).toBe(36);
   });
   it("ld = L − LT, lt = l − ld; a stud has ld = 0 and kb = At·E/l", () => {
     expect(splitGripMm(60, 100, 46)).toEqual({ shankMm: 54, threadMm: 6 });
     expect(splitGripMm(60, 100, 100)).toEqual({ shankMm: 0, threadMm: 60 });
-    const kb = computeBoltStiffnessNPerMm({ nominalDiameterMm: 20, tensileStressAreaMm2: 245, shankInGripMm: 0, threadInGripMm: 60, modulusMpa: 205_000 });
+    const kb = computeBoltStiffnessNPerMm({
+      nominalDiameterMm: 20,
+      tensileStressAreaMm2: 245,
+      shankInGripMm: 0,
+      threadInGripMm: 60,
+      modulusMpa: 205_000,
+    });
     expect(kb).toBeCloseTo((245 * 205_000) / 60, 6);
   });
 });
@@ -70,7 +151,16 @@ describe("load sharing, separation and factors (Shigley)", () => {
     expect(computeSafetyFactors(150_000, 100_000, 0, 0.3).loadFactor).toBeNull();
   });
   it("moment shared in proportion to y, axial load equally", () => {
-    const p = distributeExternalLoadN([{ x: 0, y: 100 }, { x: 0, y: -100 }, { x: 100, y: 0 }, { x: -100, y: 0 }], 40_000, 2e6);
+    const p = distributeExternalLoadN(
+      [
+        { x: 0, y: 100 },
+        { x: 0, y: -100 },
+        { x: 100, y: 0 },
+        { x: -100, y: 0 },
+      ],
+      40_000,
+      2e6,
+    );
     expect(p[0]).toBeCloseTo(20_000, 6);
     expect(p[1]).toBeCloseTo(0, 6);
     expect(p[2]).toBeCloseTo(10_000, 6);
@@ -80,7 +170,15 @@ describe("load sharing, separation and factors (Shigley)", () => {
 describe("preload targets and torque", () => {
   it("0.75 × proof load of M20 8.8 (Sp = 600 MPa [pub2], As 245 mm²) ≈ 110 kN", () => {
     const t = findThread("M20", "metric-coarse")!;
-    const r = computeTargetPreloadN({ kind: "fraction-of-proof", value: 0.75 }, { tensileStressAreaMm2: t.tensileStressAreaMm2, rootAreaMm2: t.rootAreaMm2, proofMpa: 600, yieldMpa: 660 });
+    const r = computeTargetPreloadN(
+      { kind: "fraction-of-proof", value: 0.75 },
+      {
+        tensileStressAreaMm2: t.tensileStressAreaMm2,
+        rootAreaMm2: t.rootAreaMm2,
+        proofMpa: 600,
+        yieldMpa: 660,
+      },
+    );
     expect(r.targetN).toBeCloseTo(0.75 * 600 * t.tensileStressAreaMm2, 6);
     expect(rel(r.targetN, 110_250)).toBeLessThan(0.002);
   });
@@ -90,7 +188,13 @@ describe("preload targets and torque", () => {
   it("T = K·F·d: K 0.2, 100 kN, M20 → 400 N·m", () => {
     expect(torqueFromPreloadNmm(0.2, 100_000, 20)).toBeCloseTo(400_000, 6);
   });
-  const pcc1: [string, number, number][] = [["3/4", 0.75, 210], ["1", 1, 500], ["1-1/4", 1.25, 1050], ["1-1/2", 1.5, 1800], ["2", 2, 4500]];
+  const pcc1: [string, number, number][] = [
+    ["3/4", 0.75, 210],
+    ["1", 1, 500],
+    ["1-1/4", 1.25, 1050],
+    ["1-1/2", 1.5, 1800],
+    ["2", 2, 4500],
+  ];
   for (const [des, dIn, ftlb] of pcc1) {
     it(`PCC-1 2013 Table 1 [pub]: ${des} in at 50 ksi on the root area → ${ftlb} ft·lb, implied K within 0.20–0.23`, () => {
       const t = findThread(des, dIn <= 1 ? "unc" : "unified-8un")!;
@@ -105,7 +209,10 @@ describe("preload targets and torque", () => {
     });
   }
   it("root area 3/4-10 × 50 ksi = 15 095 lbf ([calc] from Table H-1)", () => {
-    expect(findThread("3/4", "unc")!.rootAreaMm2 * psiToMpa(50_000)).toBeCloseTo(in2ToMm2(0.3019) * psiToMpa(50_000), -2);
+    expect(findThread("3/4", "unc")!.rootAreaMm2 * psiToMpa(50_000)).toBeCloseTo(
+      in2ToMm2(0.3019) * psiToMpa(50_000),
+      -2,
+    );
   });
 });
 
@@ -118,7 +225,12 @@ describe("cone angle rule (VDI 2230-style substitute cone, [mem]: plausibility o
     const thin = thicknessDependentConeAngleDeg(10, 30, 60);
     const thick = thicknessDependentConeAngleDeg(120, 30, 60);
     expect(thin).toBeLessThan(thick);
-    for (const a of [thin, thick, thicknessDependentConeAngleDeg(1e-3, 30, 30), thicknessDependentConeAngleDeg(1e4, 30, 1e4)]) {
+    for (const a of [
+      thin,
+      thick,
+      thicknessDependentConeAngleDeg(1e-3, 30, 30),
+      thicknessDependentConeAngleDeg(1e4, 30, 1e4),
+    ]) {
       expect(a).toBeGreaterThanOrEqual(15);
       expect(a).toBeLessThanOrEqual(45);
     }

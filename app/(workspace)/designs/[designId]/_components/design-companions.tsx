@@ -17,23 +17,37 @@ const STATUS_WORDS: Record<WorkspaceDesignDto["status"], string> = {
 
 // Where the editor meets the other features on the design page: the sign-off sheet (submit and
 // review), the shop files, the attachments and the activity log of the design.
-export function DesignCompanions({ design, viewer, activity }: { design: WorkspaceDesignDto; viewer: Viewer; activity: ActivityEntryDto[] }) {
+export function DesignCompanions({
+  design,
+  viewer,
+  activity,
+}: {
+  design: WorkspaceDesignDto;
+  viewer: Viewer;
+  activity: ActivityEntryDto[];
+}) {
   const signOffHref = `/designs/${design.designId}/revisions/${design.revisionNumber}`;
   return (
     <div className="mt-6 grid gap-6 lg:grid-cols-2">
       <section aria-labelledby="sign-off-heading" className="rounded-plate bg-white p-4 shadow-plate">
-        <h2 id="sign-off-heading" className="text-lead font-semibold">Sign-off</h2>
+        <h2 id="sign-off-heading" className="text-lead font-semibold">
+          Sign-off
+        </h2>
         <p className="mt-1 text-table text-ink-700">
-          Revision {design.revisionNumber} is <strong>{STATUS_WORDS[design.status]}</strong>. Save your edits, then open the
-          sign-off sheet to submit it for review, read the comments or start a new revision.
+          Revision {design.revisionNumber} is <strong>{STATUS_WORDS[design.status]}</strong>. Save your edits,
+          then open the sign-off sheet to submit it for review, read the comments or start a new revision.
         </p>
         <Link href={signOffHref} className={`${buttonStyles.secondary} mt-3`}>
           Open the sign-off sheet
         </Link>
       </section>
       <section aria-labelledby="shop-files-heading" className="rounded-plate bg-white p-4 shadow-plate">
-        <h2 id="shop-files-heading" className="text-lead font-semibold">Shop files</h2>
-        <p className="mt-1 text-table text-ink-700">From the last saved result of revision {design.revisionNumber}.</p>
+        <h2 id="shop-files-heading" className="text-lead font-semibold">
+          Shop files
+        </h2>
+        <p className="mt-1 text-table text-ink-700">
+          From the last saved result of revision {design.revisionNumber}.
+        </p>
         <div className="mt-3">
           <ExportButtons
             designId={design.designId}

@@ -11,7 +11,10 @@ export const metadata: Metadata = { title: "Revision comparison" };
 
 const optionalNumber = z.coerce.number().int().min(1).max(100_000).optional().catch(undefined);
 
-export default async function CompareRevisionsPage(props: { params: Promise<{ designId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function CompareRevisionsPage(props: {
+  params: Promise<{ designId: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const viewer = await requireViewer();
   const { designId } = await props.params;
   if (!z.uuid().safeParse(designId).success) notFound();

@@ -23,7 +23,8 @@ export async function PUT(request: Request, { params }: Context): Promise<Respon
   const body = await readJsonBody(request);
   if (!body.ok) return body.response;
   const designId = (await params).designId;
-  if (!designIdSchema.safeParse(designId).success) return jsonError(404, "This design does not exist in your organisation.");
+  if (!designIdSchema.safeParse(designId).success)
+    return jsonError(404, "This design does not exist in your organisation.");
   const fields = body.body && typeof body.body === "object" && !Array.isArray(body.body) ? body.body : {};
   return commandResponse(await saveWorkingRevisionForViewer(getDb(), auth.viewer, { ...fields, designId }));
 }

@@ -16,12 +16,16 @@ export async function GET(request: Request, { params }: Context) {
   if (!parsed.success) return jsonError(404, "This export job does not exist.");
   const db = getDb();
   // A restarted server resumes queued jobs as soon as anyone asks about one.
-  ensureSheetWorker(db).catch((error) => console.error(`[jobs] worker not started: ${error instanceof Error ? error.message : String(error)}`));
+  ensureSheetWorker(db).catch((error) =>
+    console.error(`[jobs] worker not started: ${error instanceof Error ? error.message : String(error)}`),
+  );
   if (new URL(request.url).searchParams.get("download") === "1") {
     const file = await findExportFileBytes(db, auth.viewer.organizationId, parsed.data);
     if (file) return fileResponse(file.bytes, file.fileName, file.contentType);
     const job = await findExportJob(db, auth.viewer.organizationId, parsed.data);
-    return job ? jsonError(409, "This export is not finished yet.") : jsonError(404, "This export job does not exist.");
+    return job
+      ? jsonError(409, "This export is not finished yet.")
+      : jsonError(404, "This export job does not exist.");
   }
   const job = await findExportJob(db, auth.viewer.organizationId, parsed.data);
   if (!job) return jsonError(404, "This export job does not exist.");

@@ -4,7 +4,13 @@ import { z } from "zod";
 import { getDb } from "@/db/index";
 import { ActivityList } from "@/features/activity/components/activity-list";
 import { listActivity } from "@/features/activity/queries";
-import { addCommentAction, approveRevisionAction, returnRevisionAction, startNewRevisionAction, submitRevisionAction } from "@/features/reviews/actions";
+import {
+  addCommentAction,
+  approveRevisionAction,
+  returnRevisionAction,
+  startNewRevisionAction,
+  submitRevisionAction,
+} from "@/features/reviews/actions";
 import { RevisionHeader } from "@/features/reviews/components/revision-header";
 import { independenceNote } from "@/features/reviews/independence-note";
 import { getRevisionReview } from "@/features/reviews/queries";
@@ -16,7 +22,11 @@ export const metadata: Metadata = { title: "Sign-off sheet" };
 
 const paramsSchema = z.object({ designId: z.uuid(), number: z.coerce.number().int().min(1).max(100_000) });
 
-export default async function RevisionReviewPage({ params }: { params: Promise<{ designId: string; number: string }> }) {
+export default async function RevisionReviewPage({
+  params,
+}: {
+  params: Promise<{ designId: string; number: string }>;
+}) {
   const viewer = await requireViewer();
   const parsed = paramsSchema.safeParse(await params);
   if (!parsed.success) notFound();
@@ -32,7 +42,12 @@ export default async function RevisionReviewPage({ params }: { params: Promise<{
         unitSystem={viewer.unitSystem}
         independenceNote={independenceNote(review, viewer)}
         addCommentAction={addCommentAction}
-        actions={{ submitRevisionAction, approveRevisionAction, returnRevisionAction, startNewRevisionAction }}
+        actions={{
+          submitRevisionAction,
+          approveRevisionAction,
+          returnRevisionAction,
+          startNewRevisionAction,
+        }}
       />
       <CautionPanel />
       <ActivityList entries={activity} title="Design activity" />

@@ -1,5 +1,10 @@
 import { getDb } from "@/db/index";
-import { decodeFileNameHeader, idParamSchema, readBodyWithLimit, uploadHeadersSchema } from "@/features/attachments/http";
+import {
+  decodeFileNameHeader,
+  idParamSchema,
+  readBodyWithLimit,
+  uploadHeadersSchema,
+} from "@/features/attachments/http";
 import { MAX_ATTACHMENT_BYTES } from "@/features/attachments/model/dto";
 import { checkUpload, uploadAttachment } from "@/features/attachments/mutations";
 import { listAttachments } from "@/features/attachments/queries";
@@ -21,20 +26,35 @@ export async function GET(request: Request, { params }: Context) {
 export async function POST(request: Request, { params }: Context) {
   const auth = await authorizeApi(request, { role: ["designer", "admin"] });
   if (!auth.ok) return auth.response;
-  const parsed = uploadHeadersSchema.safeParse({ designId: (await params).designId, fileName: decodeFileNameHeader(request.headers.get("x-file-name")) });
+  const parsed = uploadHeadersSchema.safeParse({
+    designId: (await params).designId,
+    fileName: decodeFileNameHeader(request.headers.get("x-file-name")),
+  });
   if (!parsed.success) {
     const fieldErrors = parsedFieldErrors(parsed.error);
     if (fieldErrors.designId) return jsonError(404, "This design does not exist.");
     return jsonError(400, fieldErrors.fileName?.[0] ?? "The upload is not valid.", fieldErrors);
   }
   const declared = Number(request.headers.get("content-length"));
-  const bytes = Number.isFinite(declared) && declared > MAX_ATTACHMENT_BYTES ? null : await readBodyWithLimit(request, MAX_ATTACHMENT_BYTES);
+  const bytes =
+    Number.isFinite(declared) && declared > MAX_ATTACHMENT_BYTES
+      ? null
+      : await readBodyWithLimit(request, MAX_ATTACHMENT_BYTES);
   if (!bytes) {
-    return jsonError(413, `The file is larger than ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB: attachments may be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB.`);
+    return jsonError(
+      413,
+      `The file is larger than ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB: attachments may be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB.`,
+    );
   }
   const precheck = checkUpload(parsed.data.fileName, bytes);
   if (!precheck.ok) return jsonError(precheck.status, precheck.message);
-  const result = await uploadAttachment(getDb(), auth.viewer, parsed.data.designId, parsed.data.fileName, bytes);
+  const result = await uploadAttachment(
+    getDb(),
+    auth.viewer,
+    parsed.data.designId,
+    parsed.data.fileName,
+    bytes,
+  );
   if (!result.ok) return jsonError(result.status, result.message);
   return Response.json(result.data, { status: 201 });
 }

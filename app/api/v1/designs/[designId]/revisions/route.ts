@@ -4,7 +4,10 @@ import { listRevisionSummaries } from "@/features/reviews/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 
 // Every revision of a design: number, status, content hash and times (no documents).
-export async function GET(request: Request, context: { params: Promise<{ designId: string }> }): Promise<Response> {
+export async function GET(
+  request: Request,
+  context: { params: Promise<{ designId: string }> },
+): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const { designId } = await context.params;

@@ -8,7 +8,9 @@ export async function POST(request: Request, context: Context): Promise<Response
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const result = await resendInvitationCommand(auth.viewer, await context.params);
-  return result.ok ? new Response(null, { status: 204 }) : jsonError(result.status, result.message, result.fieldErrors);
+  return result.ok
+    ? new Response(null, { status: 204 })
+    : jsonError(result.status, result.message, result.fieldErrors);
 }
 
 /** Revoke. */
@@ -16,5 +18,7 @@ export async function DELETE(request: Request, context: Context): Promise<Respon
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const result = await revokeInvitationCommand(auth.viewer, await context.params);
-  return result.ok ? new Response(null, { status: 204 }) : jsonError(result.status, result.message, result.fieldErrors);
+  return result.ok
+    ? new Response(null, { status: 204 })
+    : jsonError(result.status, result.message, result.fieldErrors);
 }

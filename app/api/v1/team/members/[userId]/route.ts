@@ -10,7 +10,9 @@ export async function PATCH(request: Request, context: Context): Promise<Respons
   const { userId } = await context.params;
   const body = (await request.json().catch(() => null)) as { roles?: unknown } | null;
   const result = await changeMemberRolesCommand(auth.viewer, { userId, roles: body?.roles });
-  return result.ok ? new Response(null, { status: 204 }) : jsonError(result.status, result.message, result.fieldErrors);
+  return result.ok
+    ? new Response(null, { status: 204 })
+    : jsonError(result.status, result.message, result.fieldErrors);
 }
 
 export async function DELETE(request: Request, context: Context): Promise<Response> {
@@ -18,5 +20,7 @@ export async function DELETE(request: Request, context: Context): Promise<Respon
   if (!auth.ok) return auth.response;
   const { userId } = await context.params;
   const result = await removeMemberCommand(auth.viewer, { userId });
-  return result.ok ? new Response(null, { status: 204 }) : jsonError(result.status, result.message, result.fieldErrors);
+  return result.ok
+    ? new Response(null, { status: 204 })
+    : jsonError(result.status, result.message, result.fieldErrors);
 }

@@ -21,7 +21,12 @@ export function ReviewScreen(props: {
     <ReviewWorkspace
       {...props}
       renderDrawing={(highlight) => (
-        <ReadOnlyJointView document={review.document} result={review.result as unknown as JointAnalysis | null} unitSystem={props.unitSystem} highlight={highlight} />
+        <ReadOnlyJointView
+          document={review.document}
+          result={review.result as unknown as JointAnalysis | null}
+          unitSystem={props.unitSystem}
+          highlight={highlight}
+        />
       )}
     />
   );

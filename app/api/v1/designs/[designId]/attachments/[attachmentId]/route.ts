@@ -20,7 +20,9 @@ export async function GET(request: Request, { params }: Context) {
   if (!auth.ok) return auth.response;
   const key = await ids(params);
   const db = getDb();
-  const attachment = key ? await findAttachment(db, auth.viewer.organizationId, key.designId, key.attachmentId) : null;
+  const attachment = key
+    ? await findAttachment(db, auth.viewer.organizationId, key.designId, key.attachmentId)
+    : null;
   const bytes = attachment ? await getBlob(db, auth.viewer.organizationId, attachment.blobId) : null;
   if (!attachment || !bytes) return jsonError(404, "This attachment does not exist.");
   return new Response(new Uint8Array(bytes), {

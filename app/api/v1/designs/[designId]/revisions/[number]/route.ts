@@ -8,7 +8,10 @@ const paramsSchema = z.object({ designId: z.uuid(), number: z.coerce.number().in
 // One revision as the review screen sees it: document, stored result, checks, comments,
 // justifications, and `integrity` — the content hash recomputed on this read (a mismatch is
 // reported as { state: "mismatch", storedHash, recomputedHash }, never hidden).
-export async function GET(request: Request, context: { params: Promise<{ designId: string; number: string }> }): Promise<Response> {
+export async function GET(
+  request: Request,
+  context: { params: Promise<{ designId: string; number: string }> },
+): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const parsed = paramsSchema.safeParse(await context.params);

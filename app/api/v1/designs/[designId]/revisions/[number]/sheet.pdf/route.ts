@@ -14,7 +14,13 @@ type Context = { params: Promise<{ designId: string; number: string }> };
 // the job to poll at /api/v1/jobs/[jobId]. Any member of the organisation may export.
 type Prepared =
   | { response: Response }
-  | { viewer: Viewer; db: ReturnType<typeof getDb>; loaded: NonNullable<Awaited<ReturnType<typeof loadSheetInput>>>; paper: "a4" | "letter"; units: "SI" | "US" };
+  | {
+      viewer: Viewer;
+      db: ReturnType<typeof getDb>;
+      loaded: NonNullable<Awaited<ReturnType<typeof loadSheetInput>>>;
+      paper: "a4" | "letter";
+      units: "SI" | "US";
+    };
 
 async function prepare(request: Request, params: Context["params"]): Promise<Prepared> {
   const auth = await authorizeApi(request);
@@ -27,17 +33,39 @@ async function prepare(request: Request, params: Context["params"]): Promise<Pre
   const paper = options.data.paper;
   const units = options.data.units ?? viewer.unitSystem;
   const db = getDb();
-  const loaded = await loadSheetInput(db, viewer.organizationId, path.designId, path.number, { paper, units, createdAt: new Date() });
+  const loaded = await loadSheetInput(db, viewer.organizationId, path.designId, path.number, {
+    paper,
+    units,
+    createdAt: new Date(),
+  });
   if (!loaded) return { response: jsonError(404, "This revision does not exist.") };
-  if (!loaded.revision.result) return { response: jsonError(409, "This revision has no stored result to print; save it again to analyse it.") };
+  if (!loaded.revision.result)
+    return {
+      response: jsonError(409, "This revision has no stored result to print; save it again to analyse it."),
+    };
   return { viewer, db, loaded, paper, units };
 }
 
-async function logExport(db: ReturnType<typeof getDb>, viewer: { organizationId: string; userId: string }, designId: string, revisionId: string, detail: string) {
+async function logExport(
+  db: ReturnType<typeof getDb>,
+  viewer: { organizationId: string; userId: string },
+  designId: string,
+  revisionId: string,
+  detail: string,
+) {
   try {
-    await recordActivity(db, { organizationId: viewer.organizationId, designId, revisionId, actorId: viewer.userId, kind: "exported", detail });
+    await recordActivity(db, {
+      organizationId: viewer.organizationId,
+      designId,
+      revisionId,
+      actorId: viewer.userId,
+      kind: "exported",
+      detail,
+    });
   } catch (error) {
-    console.error(`[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`);
+    console.error(
+      `[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`,
+    );
   }
 }
 
@@ -47,7 +75,13 @@ export async function GET(request: Request, { params }: Context) {
   const { revision, input } = p.loaded;
   const bytes = await renderSpacingSheet(input);
   const fileName = exportFileName(revision, revision.number, "spacing-sheet");
-  await logExport(p.db, p.viewer, revision.designId, revision.revisionId, `${fileName} (${p.paper.toUpperCase()}, ${p.units})`);
+  await logExport(
+    p.db,
+    p.viewer,
+    revision.designId,
+    revision.revisionId,
+    `${fileName} (${p.paper.toUpperCase()}, ${p.units})`,
+  );
   return fileResponse(bytes, fileName, CONTENT_TYPES["spacing-sheet"]);
 }
 
@@ -67,6 +101,15 @@ export async function POST(request: Request, { params }: Context) {
     units: p.units,
   });
   const fileName = exportFileName(revision, revision.number, "spacing-sheet");
-  await logExport(p.db, p.viewer, revision.designId, revision.revisionId, `${fileName} (${p.paper.toUpperCase()}, ${p.units}, queued)`);
-  return Response.json({ jobId, statusUrl: `/api/v1/jobs/${jobId}` }, { status: 202, headers: { location: `/api/v1/jobs/${jobId}`, "cache-control": "no-store" } });
+  await logExport(
+    p.db,
+    p.viewer,
+    revision.designId,
+    revision.revisionId,
+    `${fileName} (${p.paper.toUpperCase()}, ${p.units}, queued)`,
+  );
+  return Response.json(
+    { jobId, statusUrl: `/api/v1/jobs/${jobId}` },
+    { status: 202, headers: { location: `/api/v1/jobs/${jobId}`, "cache-control": "no-store" } },
+  );
 }
