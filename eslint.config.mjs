@@ -114,11 +114,6 @@ export default [
         { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrorsIgnorePattern: "^_" },
       ],
       "import/no-anonymous-default-export": "off",
-      // React Compiler checks still reported as warnings while the editor hooks are reworked.
-      "react-hooks/refs": "warn",
-      "react-hooks/purity": "warn",
-      "react-hooks/immutability": "warn",
-      "react-hooks/set-state-in-effect": "warn",
     },
   },
   {

@@ -46,16 +46,22 @@ test("a designer gets the 403 page on the admin screen", async ({ page }) => {
 const OUTBOX = process.env.OUTBOX_URL ?? "http://127.0.0.1:2590";
 
 async function latestLink(address: string, path: string): Promise<string> {
-  for (let attempt = 0; attempt < 40; attempt += 1) {
-    const response = await fetch(`${OUTBOX}/api/messages?to=${encodeURIComponent(address)}`);
-    const messages = (await response.json()) as { text: string }[];
-    const match = messages.length
-      ? new RegExp(`https?://[^\\s"<>]+${path}/[A-Za-z0-9_-]+`).exec(messages.at(-1)!.text)
-      : null;
-    if (match) return new URL(match[0]).pathname;
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  throw new Error(`no ${path} mail for ${address}`);
+  let link: string | null = null;
+  await expect
+    .poll(
+      async () => {
+        const response = await fetch(`${OUTBOX}/api/messages?to=${encodeURIComponent(address)}`);
+        const messages = (await response.json()) as { text: string }[];
+        const match = messages.length
+          ? new RegExp(`https?://[^\\s"<>]+${path}/[A-Za-z0-9_-]+`).exec(messages.at(-1)!.text)
+          : null;
+        link = match ? new URL(match[0]).pathname : null;
+        return link;
+      },
+      { message: `a ${path} mail for ${address}`, timeout: 10_000 },
+    )
+    .not.toBeNull();
+  return link!;
 }
 
 function uniqueEmail(prefix: string): string {

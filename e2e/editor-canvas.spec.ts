@@ -25,6 +25,16 @@ export const violationIds = (page: Page, prefix = "violation-") =>
 export const boltPoint = (page: Page, id: string) =>
   page.evaluate((b) => window.__sealpitchStage!.boltClientPoint(b), id);
 
+/** Resolves after the browser has drawn the next frame (the drag loop renders once per frame). */
+const nextFrame = (page: Page) =>
+  page.evaluate(
+    () => new Promise<void>((done) => requestAnimationFrame(() => requestAnimationFrame(() => done()))),
+  );
+
+/** Resolves when a server action's response has arrived (Next marks them with a Next-Action header). */
+const serverActionDone = (page: Page) =>
+  page.waitForResponse((r) => r.request().method() === "POST" && !!r.request().headers()["next-action"]);
+
 export async function expectSaved(page: Page): Promise<void> {
   await expect(page.getByTestId("save-state")).toHaveText("Saved", { timeout: 15_000 });
 }
@@ -55,7 +65,7 @@ test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, sw
   let failed = false;
   for (let f = 0.05; f <= 0.75 && !failed; f += 0.05) {
     await page.mouse.move(before.x + (b2.x - before.x) * f, before.y + (b2.y - before.y) * f, { steps: 3 });
-    await page.waitForTimeout(40);
+    await nextFrame(page);
     failed = (await violationIds(page, "violation-spacing-min-pitch-b1-b2")).length > 0;
   }
   // While the bolt is held the drawing and the drag gauge follow the core's light preview; the
@@ -109,9 +119,10 @@ test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, sw
   await page.reload();
   await waitForDrawing(page);
   await expect(page.getByLabel("Bolt length (in)")).toBeVisible();
+  const remembered = serverActionDone(page);
   await page.getByRole("radio", { name: /SI/ }).click();
   await expect(page.getByLabel("Bolt length (mm)")).toBeVisible();
-  await page.waitForTimeout(500);
+  await remembered;
 });
 
 test("bad input is refused at the field and nothing is saved", async ({ page }) => {
@@ -145,8 +156,21 @@ test("bad input is refused at the field and nothing is saved", async ({ page }) 
   await count.fill("10000");
   await count.press("Tab");
   await expect(page.locator(`#${await count.getAttribute("aria-describedby")}`)).toHaveText(/at most 512/);
-  // A bolt outside the flange: typed coordinates far off the plate are refused by the core.
-  await page.waitForTimeout(2500);
+  // A bolt outside the flange: typed coordinates far off the plate are refused by the core, and
+  // the layout is neither analysed nor saved.
+  const b3 = (await boltPoint(page, "b3"))!;
+  await page.mouse.click(b3.x, b3.y);
+  const inspector = page.getByRole("region", { name: "Selected bolt" });
+  await expect(inspector.getByTestId("selected-bolt")).toHaveText("b3");
+  const x = inspector.getByLabel("x (mm)", { exact: true });
+  await x.fill("5000");
+  await x.press("Tab");
+  await expect(
+    page.getByRole("alert").filter({ hasText: "The core cannot analyse this layout yet" }),
+  ).toBeVisible();
+  await expect(page.getByText(/^Not saved:/)).toBeVisible();
+  await expect(page.getByTestId("save-state")).toHaveText("Unsaved changes");
+  await page.getByRole("button", { name: "Undo" }).click();
   await expect(page.getByTestId("save-state")).toHaveText("Saved");
   await expect(page.getByTestId("design-version")).toHaveText(version!);
   await page.goto(url);
@@ -160,6 +184,9 @@ test("two sessions edit one design: the second save is refused and its edits sta
 }) => {
   const a = await browser.newContext();
   const b = await browser.newContext();
+  // B's page runs on Playwright's clock (time flows as usual) so the test can jump past the
+  // autosave pause instead of sleeping through it.
+  await b.clock.install();
   const pa = await a.newPage();
   const pb = await b.newPage();
   await signIn(pa, DESIGNER);
@@ -187,7 +214,7 @@ test("two sessions edit one design: the second save is refused and its edits sta
   await expect(pb.getByRole("button", { name: "Reload theirs" })).toBeVisible();
   await expect(temp).toHaveValue("333");
   // Autosave does not retry into the conflict, and the local edit is still there.
-  await pb.waitForTimeout(2500);
+  await pb.clock.fastForward(5_000); // past the 2 s autosave pause
   await expect(pb.getByTestId("save-state")).toHaveText("Conflict");
   await expect(temp).toHaveValue("333");
 

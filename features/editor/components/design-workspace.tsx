@@ -15,6 +15,7 @@ import { useDragLoop } from "../hooks/use-drag-loop";
 import { useEditorHistory } from "../hooks/use-editor-history";
 import { useEditorShortcuts } from "../hooks/use-editor-shortcuts";
 import { useHeldWhile } from "../hooks/use-held-while";
+import { useLatest } from "../hooks/use-latest";
 import { useHeatMap } from "../hooks/use-heat-map";
 import { useLeaveGuard } from "../hooks/use-leave-guard";
 import { useLiveAnalysis } from "../hooks/use-live-analysis";
@@ -65,8 +66,8 @@ export function DesignWorkspace({
   useCoreWarmup(design, live.result, !ro);
   useResultAgreement(stored);
   const view = useMemo(() => (live.result ? toReadoutView(live.result) : null), [live.result]);
-  const lastView = useRef(view);
-  if (view) lastView.current = view;
+  // The last view the core gave, kept while it refuses the layout (view is null then).
+  const lastView = useHeldWhile(view, view === null);
   // While a bolt is dragged the Readout and the joint data sections hold what they showed at the
   // drag start (their tables are the costly part of a frame); the canvas and the drag gauge stay live.
   // The Readout's tables render after the drawing: on release the bolt lands and its marks update
@@ -74,7 +75,7 @@ export function DesignWorkspace({
   const readoutView = useDeferredValue(useHeldWhile(view, editor.dragging));
   const readoutIssues = useDeferredValue(useHeldWhile(live.issues, editor.dragging));
   // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
-  const heat = useHeatMap(design, editor.dragging ? (view ?? lastView.current) : view, editor.dragging);
+  const heat = useHeatMap(design, editor.dragging ? lastView : view, editor.dragging);
 
   const setInvalid = useCallback((path: string, bad: boolean) => {
     setInvalidState((cur) => {
@@ -117,9 +118,8 @@ export function DesignWorkspace({
   useLeaveGuard(save.dirty, discarding);
 
   const act = useCallback((a: DesignAction) => dispatch(a), [dispatch]);
-  // The core's share of a drag frame, for the drag benchmark (written during render, read after it).
-  const frameCompute = useRef({ computeMs: 0, analysed: true });
-  frameCompute.current = { computeMs: live.computeMs, analysed: live.result !== null };
+  // The core's share of a drag frame, for the drag benchmark (read after the frame's commit).
+  const frameCompute = useLatest({ computeMs: live.computeMs, analysed: live.result !== null });
   const drag = useDragLoop(design, dispatch, frameCompute);
 
   const reloadTheirs = () => {
@@ -127,15 +127,14 @@ export function DesignWorkspace({
     discarding.current = true;
     window.location.reload();
   };
-  const boltCount = useRef(design.bolts.length);
-  boltCount.current = design.bolts.length;
+  const boltCount = design.bolts.length;
   const deleteBolt = useCallback(
     (id: string) => {
-      if (boltCount.current <= 1) return;
+      if (boltCount <= 1) return;
       act({ type: "delete-bolts", boltIds: [id] });
       setSelected(null);
     },
-    [act],
+    [act, boltCount],
   );
   useEditorShortcuts(
     {
@@ -160,7 +159,7 @@ export function DesignWorkspace({
     });
   };
 
-  const checks = (view ?? lastView.current)?.checks ?? [];
+  const checks = lastView?.checks ?? [];
   const highlight = highlightedBolts(view, { checkId: activeCheck ?? undefined });
   const ctx = useMemo(
     () => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }),

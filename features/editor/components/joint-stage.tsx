@@ -2,6 +2,7 @@
 // The Konva stage of the editor. Only this module (and its children) import Konva; it is mounted
 // through next/dynamic with ssr: false from joint-canvas.tsx.
 import { useEffect, useMemo, useRef, useState } from "react";
+import { useLatest } from "../hooks/use-latest";
 import type Konva from "konva";
 import { Group, Layer, Line, Stage } from "react-konva";
 import type { JointDesign, PointMm, UnitSystem } from "@/features/analysis/core/design";
@@ -45,15 +46,17 @@ type Gesture =
   | { kind: "pan"; x: number; y: number; moved: boolean };
 
 export default function JointStage(props: JointStageProps) {
-  const { design, width, height, readOnly } = props;
+  const { design, width, height, readOnly, onDrawn } = props;
   const stageRef = useRef<Konva.Stage>(null);
   const layerRef = useRef<Konva.Layer>(null);
   const baseLayerRef = useRef<Konva.Layer>(null);
   const lineLayerRef = useRef<Konva.Layer>(null);
+  // The plate, gasket and bolt path: rebuilt only when one of them changes, not on a bolt move.
+  const { outline, bore, gasket, boltPath } = design;
   const staticScene = useMemo(
-    () => buildStaticScene(design),
-    [design.outline, design.bore, design.gasket, design.boltPath],
-  ); // eslint-disable-line react-hooks/exhaustive-deps
+    () => buildStaticScene({ outline, bore, gasket, boltPath }),
+    [outline, bore, gasket, boltPath],
+  );
   const boltScene = useMemo(
     () => buildBoltScene(design, staticScene.boltPath),
     [design, staticScene.boltPath],
@@ -61,13 +64,20 @@ export default function JointStage(props: JointStageProps) {
   const [view, setView] = useState<ViewTransform>(() => fitView(staticScene.bounds, width, height));
   const gesture = useRef<Gesture | null>(null);
   const space = useRef(false);
-  const viewRef = useRef(view);
-  viewRef.current = view;
-
-  useEffect(
-    () => setView(fitView(staticScene.bounds, width, height)),
-    [props.fitToken, width, height, staticScene.bounds],
-  );
+  const viewRef = useLatest(view);
+  // Fit again when asked (Fit, F) or when the stage or the outline changes: state adjusted
+  // during render, so the first paint after the change is already fitted.
+  const fitFor = { token: props.fitToken, width, height, bounds: staticScene.bounds };
+  const [fittedFor, setFittedFor] = useState(fitFor);
+  if (
+    fittedFor.token !== fitFor.token ||
+    fittedFor.width !== width ||
+    fittedFor.height !== height ||
+    fittedFor.bounds !== fitFor.bounds
+  ) {
+    setFittedFor(fitFor);
+    setView(fitView(staticScene.bounds, width, height));
+  }
 
   useEffect(() => {
     const down = (e: KeyboardEvent) => {
@@ -89,7 +99,7 @@ export default function JointStage(props: JointStageProps) {
   useEffect(() => {
     const layer = layerRef.current;
     const still = [baseLayerRef.current, lineLayerRef.current].filter((l): l is Konva.Layer => !!l);
-    if (!layer || !props.onDrawn) return;
+    if (!layer || !onDrawn) return;
     let t0 = 0,
       s0 = 0,
       stillMs = 0;
@@ -97,7 +107,7 @@ export default function JointStage(props: JointStageProps) {
       t0 = performance.now();
     };
     const after = () => {
-      props.onDrawn?.(performance.now() - t0 + stillMs);
+      onDrawn(performance.now() - t0 + stillMs);
       stillMs = 0;
     };
     const stillBefore = () => {
@@ -120,11 +130,11 @@ export default function JointStage(props: JointStageProps) {
         l.off("draw", stillAfter);
       }
     };
-  }, [props.onDrawn]);
+  }, [onDrawn]);
 
   useEffect(
     () => (stageRef.current ? installStageProbe(stageRef.current, () => viewRef.current) : undefined),
-    [],
+    [viewRef],
   );
 
   const pointer = () => stageRef.current?.getPointerPosition() ?? { x: 0, y: 0 };

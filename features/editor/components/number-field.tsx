@@ -24,14 +24,18 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
   const [raw, setRaw] = useState(shown);
   const [error, setError] = useState<string | null>(null);
   const [focused, setFocused] = useState(false);
-  useEffect(() => {
+  const [shownFor, setShownFor] = useState(shown);
+  if (shown !== shownFor) {
     // The document changed from elsewhere (undo, unit switch, a drag): show it, unless the user is typing here.
+    setShownFor(shown);
     if (!focused) {
       setRaw(shown);
       setError(null);
-      ctx.setInvalid(spec.path, false);
     }
-  }, [shown]); // eslint-disable-line react-hooks/exhaustive-deps
+  }
+  // The workspace's list of refused fields (which blocks saving) follows this field's message.
+  const { setInvalid } = ctx;
+  useEffect(() => setInvalid(spec.path, error !== null), [setInvalid, spec.path, error]);
   const id = fieldDomId(spec.path);
   const serverError = ctx.errorFor(spec.path);
   const message = error ?? serverError;
@@ -39,11 +43,9 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
     const r = parseNumberField(spec, raw, units);
     if (!r.ok) {
       setError(r.message);
-      ctx.setInvalid(spec.path, true);
       return;
     }
     setError(null);
-    ctx.setInvalid(spec.path, false);
     if (r.value !== value)
       (onCommit ?? ((v: number) => ctx.dispatch({ type: "set-field", path: spec.path, value: v })))(r.value);
     else setRaw(shown);
@@ -68,7 +70,6 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
           setRaw(e.target.value);
           const r = parseNumberField(spec, e.target.value, units);
           setError(r.ok ? null : r.message);
-          ctx.setInvalid(spec.path, !r.ok);
         }}
         onBlur={() => {
           setFocused(false);

@@ -1,5 +1,5 @@
 "use client";
-import { useEffect, useState } from "react";
+import { useState } from "react";
 import { fieldDomId } from "./form-context";
 
 interface Props {
@@ -28,7 +28,12 @@ export function TextField({
 }: Props) {
   const [raw, setRaw] = useState(value);
   const [error, setError] = useState<string | null>(null);
-  useEffect(() => setRaw(value), [value]);
+  const [valueFor, setValueFor] = useState(value);
+  if (value !== valueFor) {
+    // Changed from elsewhere (undo, a reload): show the new value.
+    setValueFor(value);
+    setRaw(value);
+  }
   const id = fieldDomId(path);
   const check = (v: string) =>
     required && v.trim() === ""

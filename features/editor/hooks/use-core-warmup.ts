@@ -1,5 +1,6 @@
 "use client";
-import { useEffect, useRef } from "react";
+import { useEffect } from "react";
+import { useLatest } from "./use-latest";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { previewJoint } from "@/features/analysis/core/preview";
@@ -20,8 +21,7 @@ export const WARMUP_RUNS = 24;
  * so the engine also sees the bolt objects a drag produces.
  */
 export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, enabled: boolean): void {
-  const latest = useRef({ design, base });
-  latest.current = { design, base };
+  const latest = useLatest({ design, base });
   useEffect(() => {
     if (!enabled) return;
     let left = WARMUP_RUNS;
@@ -52,5 +52,5 @@ export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, e
     };
     handle = idle(step);
     return () => cancel(handle);
-  }, [enabled]);
+  }, [enabled, latest]);
 }

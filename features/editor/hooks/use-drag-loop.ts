@@ -1,5 +1,6 @@
 "use client";
 import { useCallback, useEffect, useRef } from "react";
+import { useLatest } from "./use-latest";
 import { flushSync } from "react-dom";
 import type { JointDesign, PointMm } from "@/features/analysis/core/design";
 import type { HistoryAction } from "../model/editor-action";
@@ -47,8 +48,7 @@ export function useDragLoop(
   dispatch: (a: HistoryAction) => void,
   compute: { current: FrameCompute },
 ) {
-  const designRef = useRef(design);
-  designRef.current = design;
+  const designRef = useLatest(design);
   const pending = useRef<Move | null>(null);
   const raf = useRef(0);
   const frame = useRef<({ reactMs: number } & FrameCompute) | null>(null);
@@ -62,7 +62,7 @@ export function useDragLoop(
     const t = resolveMoveTarget(designRef.current, m.id, m.point, { free: m.free, snapMm: m.snapMm });
     flushSync(() => dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm }));
     frame.current = { reactMs: performance.now() - t0, ...compute.current };
-  }, [dispatch, compute]);
+  }, [dispatch, compute, designRef]);
 
   const onDragStart = useCallback(() => dispatch({ type: "drag-start" }), [dispatch]);
   const onDragMove = useCallback(

@@ -1,5 +1,6 @@
 "use client";
-import { useEffect, useRef } from "react";
+import { useEffect } from "react";
+import { useLatest } from "./use-latest";
 
 export interface ShortcutHandlers {
   undo: () => void;
@@ -21,8 +22,7 @@ function isTyping(t: EventTarget | null): boolean {
 
 /** Keyboard shortcuts of the editor (listed in shortcut-help.tsx). Typing in a field is left alone, except Ctrl+S. */
 export function useEditorShortcuts(handlers: ShortcutHandlers, enabled: boolean) {
-  const h = useRef(handlers);
-  h.current = handlers;
+  const h = useLatest(handlers);
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
       const mod = e.ctrlKey || e.metaKey;
@@ -57,5 +57,5 @@ export function useEditorShortcuts(handlers: ShortcutHandlers, enabled: boolean)
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
-  }, [enabled]);
+  }, [enabled, h]);
 }

@@ -1,5 +1,5 @@
 "use client";
-import { useRef } from "react";
+import { useState } from "react";
 
 /**
  * `value` as it was when `hold` became true, for as long as `hold` stays true; `value` itself
@@ -7,7 +7,9 @@ import { useRef } from "react";
  * bolt is dragged, so memoised components see unchanged props and skip their render.
  */
 export function useHeldWhile<T>(value: T, hold: boolean): T {
-  const held = useRef(value);
-  if (!hold) held.current = value;
-  return held.current;
+  const [held, setHeld] = useState(() => value);
+  // Adjusting state during render (React re-runs this component before committing): no effect,
+  // no stale frame.
+  if (!hold && held !== value) setHeld(() => value);
+  return hold ? held : value;
 }

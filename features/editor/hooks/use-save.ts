@@ -1,5 +1,6 @@
 "use client";
 import { useCallback, useEffect, useRef, useState } from "react";
+import { useLatest } from "./use-latest";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { JointAnalysis, SaveWorkingRevisionAction } from "@/features/designs/workspace-contract";
 
@@ -34,8 +35,8 @@ export function useSave(o: SaveOptions) {
   const [fieldErrors, setFieldErrors] = useState<Record<string, string[]> | null>(null);
   const [savedAt, setSavedAt] = useState<string | null>(null);
   const inFlight = useRef(false);
-  const latest = useRef(o);
-  latest.current = o;
+  const versionRef = useRef(o.initialVersion);
+  const latest = useLatest(o);
 
   const dirty =
     o.document !== savedDoc ||
@@ -78,8 +79,7 @@ export function useSave(o: SaveOptions) {
     } finally {
       inFlight.current = false;
     }
-  }, []);
-  const versionRef = useRef(o.initialVersion);
+  }, [latest]);
 
   // Autosave after a pause in editing; never during a conflict or while blocked.
   useEffect(() => {

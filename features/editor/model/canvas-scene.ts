@@ -45,7 +45,7 @@ function circle(r: number): PointMm[] {
 
 /** Geometry that does not change while bolts move (memoise on outline, bore, gasket, path). */
 export function buildStaticScene(
-  design: JointDesign,
+  design: Pick<JointDesign, "outline" | "bore" | "gasket" | "boltPath">,
 ): Omit<CanvasScene, "bolts" | "pitches" | "holeRadiusMm"> {
   const shape = outlineToShape(design.outline);
   const bounds = shapeBounds(shape);
