@@ -158,6 +158,7 @@ test("bad input is refused at the field and nothing is saved", async ({ page }) 
   await expect(page.locator(`#${await count.getAttribute("aria-describedby")}`)).toHaveText(/at most 512/);
   // A bolt outside the flange: typed coordinates far off the plate are refused by the core, and
   // the layout is neither analysed nor saved.
+  await page.evaluate(() => window.scrollTo(0, 0));
   const b3 = (await boltPoint(page, "b3"))!;
   await page.mouse.click(b3.x, b3.y);
   const inspector = page.getByRole("region", { name: "Selected bolt" });
