@@ -1,3 +1,4 @@
+import type { Kysely, Transaction } from "kysely";
 import type { AuthTables } from "./tables/auth";
 import type { CoreTables } from "./tables/core";
 import type { DesignTables } from "./tables/designs";
@@ -9,3 +10,6 @@ import type { ReviewTables } from "./tables/reviews";
 // db/tables/<area>.ts next to the migrations that create them; this interface joins them.
 export interface Database
   extends CoreTables, DesignTables, AuthTables, LibraryTables, ReviewTables, ExportTables {}
+
+/** The database or an open transaction: what a query or write that may join a transaction takes. */
+export type Executor = Kysely<Database> | Transaction<Database>;

@@ -1,8 +1,8 @@
 import type { ColumnType, Generated } from "kysely";
 import type { Role } from "./core";
+import type { Timestamp } from "./columns";
 
 // Tables of migrations/2026_12_01_000300_create_invitations_and_tokens.ts.
-type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
 export interface InvitationsTable {
   id: Generated<string>;

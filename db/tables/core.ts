@@ -1,9 +1,9 @@
 import type { ColumnType, Generated } from "kysely";
+import type { Timestamp } from "./columns";
 
 // Tables of the foundation: schema bookkeeping, accounts, organisations, sessions.
 // Nullable columns are `T | null`; columns with database defaults are Generated<T>. Timestamp
 // already allows leaving the value out on insert (database default now()), so it is not wrapped.
-type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
 export type Role = "designer" | "approver" | "admin";
 export type UnitSystem = "SI" | "US";

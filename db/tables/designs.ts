@@ -1,6 +1,5 @@
 import type { ColumnType, Generated } from "kysely";
-
-type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+import type { Timestamp } from "./columns";
 
 export type RevisionStatus = "draft" | "in_review" | "returned" | "approved";
 

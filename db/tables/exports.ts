@@ -1,7 +1,7 @@
 import type { ColumnType, Generated } from "kysely";
+import type { Timestamp } from "./columns";
 
 // Tables of migrations/2026_12_01_000800_create_export_files.ts.
-type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
 export type ExportFileStatus = "queued" | "running" | "done" | "failed";
 

@@ -1,9 +1,9 @@
 import type { ColumnType, Generated, Selectable } from "kysely";
+import type { Timestamp } from "./columns";
 
 // Stockroom tables (organisation library rows, hidden built-ins) and design attachments with
 // their blobs: migrations/2026_12_01_000700_create_library_and_attachments.ts.
 // Insert may omit these (database default now()); reads are Dates.
-type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
 
 export type LeakageClass = "L1.0" | "L0.1" | "L0.01";

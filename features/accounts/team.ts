@@ -3,6 +3,7 @@ import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { Role } from "@/db/tables/core";
 import { sortRoles } from "@/server/auth/viewer";
+import { isoString } from "@/db/dates";
 
 // The Crew screen's data and its member changes. Every statement is scoped by the viewer's
 // organisation: another organisation's member id simply is not found.
@@ -53,13 +54,13 @@ export async function getTeam(
       displayName: m.display_name,
       email: m.email,
       roles: sortRoles(m.roles),
-      joinedAt: new Date(m.created_at as unknown as Date).toISOString(),
+      joinedAt: isoString(m.created_at),
     })),
     invitations: invitations.map((i) => ({
       invitationId: i.id,
       email: i.email,
       roles: sortRoles(i.roles),
-      expiresAt: new Date(i.expires_at).toISOString(),
+      expiresAt: isoString(i.expires_at),
       expired: new Date(i.expires_at) <= now,
     })),
   };

@@ -2,6 +2,7 @@ import "server-only";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { ActivityEntryDto, ActivityKind } from "./activity-kinds";
+import { isoString } from "@/db/dates";
 
 // The append-only activity log of a design (table design_activity; the database refuses UPDATE
 // and DELETE). Anyone may record into it: pass the transaction you are in so the entry commits or
@@ -58,6 +59,6 @@ export async function listActivity(
     actorName: row.display_name,
     revisionNumber: row.number ?? null,
     detail: row.detail,
-    at: new Date(row.created_at).toISOString(),
+    at: isoString(row.created_at),
   }));
 }

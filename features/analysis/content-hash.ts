@@ -1,31 +1,23 @@
 import { createHash } from "node:crypto";
+import canonicalize from "canonicalize";
 
-// The frozen snapshot's fingerprint. Canonical JSON: object keys sorted (code-point order),
-// arrays kept in order, `undefined` members dropped and non-finite numbers written as null (what
-// JSON.stringify does), no whitespace. Because PostgreSQL's jsonb reorders keys and drops
-// duplicate ones, hashing the canonical form is what makes a value hash the same before it is
-// written and after it is read back. Pure; the PDF and export code reuse it.
+// The frozen snapshot's fingerprint, over canonical JSON (RFC 8785, JSON Canonicalization Scheme:
+// object keys sorted by UTF-16 code units, ECMAScript number text, no whitespace). Because
+// PostgreSQL's jsonb reorders keys and drops duplicate ones, hashing the canonical form is what
+// makes a value hash the same before it is written and after it is read back. The value first
+// goes through JSON.stringify/parse, as it does on its way into jsonb: `undefined` members drop
+// out and non-finite numbers become null. The reviews, the sheet and the designs' document hash
+// use it.
 
 /** Canonical JSON text of a JSON-compatible value. Example: canonicalJson({b: 1, a: [2, {d: 0, c: null}]}) === '{"a":[2,{"c":null,"d":0}],"b":1}' */
 export function canonicalJson(value: unknown): string {
-  if (value === null || typeof value !== "object") {
-    const text = JSON.stringify(value);
-    return text === undefined ? "null" : text;
-  }
-  if (Array.isArray(value)) {
-    return `[${value.map((item) => (item === undefined || typeof item === "function" ? "null" : canonicalJson(item))).join(",")}]`;
-  }
-  if (typeof (value as { toJSON?: unknown }).toJSON === "function") {
-    return canonicalJson((value as { toJSON: () => unknown }).toJSON());
-  }
-  const entries = Object.keys(value)
-    .filter((key) => {
-      const member = (value as Record<string, unknown>)[key];
-      return member !== undefined && typeof member !== "function";
-    })
-    .sort()
-    .map((key) => `${JSON.stringify(key)}:${canonicalJson((value as Record<string, unknown>)[key])}`);
-  return `{${entries.join(",")}}`;
+  const text = JSON.stringify(value);
+  return text === undefined ? "null" : (canonicalize(JSON.parse(text)) ?? "null");
+}
+
+/** sha-256 (lower-case hex) of a value's canonical JSON. */
+export function sha256OfJson(value: unknown): string {
+  return createHash("sha256").update(canonicalJson(value), "utf8").digest("hex");
 }
 
 export interface SnapshotParts {
@@ -36,12 +28,11 @@ export interface SnapshotParts {
 
 /** sha-256 (lower-case hex) of canonicalJson({ document, result, coreVersion }). */
 export function computeContentHash(snapshot: SnapshotParts): string {
-  const text = canonicalJson({
+  return sha256OfJson({
     document: snapshot.document,
     result: snapshot.result,
     coreVersion: snapshot.coreVersion,
   });
-  return createHash("sha256").update(text, "utf8").digest("hex");
 }
 
 export type SnapshotIntegrity =

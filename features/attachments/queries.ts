@@ -1,11 +1,10 @@
 import "server-only";
-import type { Kysely, Transaction } from "kysely";
-import type { Database } from "@/db/types";
+import type { Executor } from "@/db/types";
 import type { AttachmentDto, AttachmentListDto } from "./model/dto";
+import { isoString } from "@/db/dates";
 
 // Reads of design attachments, always within one organisation: an id of another organisation's
 // attachment or design finds nothing (the route answers 404).
-export type Executor = Kysely<Database> | Transaction<Database>;
 
 function baseQuery(db: Executor, organizationId: string) {
   return db
@@ -40,7 +39,7 @@ function toDto(r: Row): AttachmentDto {
     sha256: r.sha256,
     uploadedById: r.uploaded_by,
     uploadedByName: r.display_name,
-    createdAt: new Date(r.created_at).toISOString(),
+    createdAt: isoString(r.created_at),
   };
 }
 

@@ -1,33 +1,20 @@
 import "server-only";
-import { createHash } from "node:crypto";
 import { sql, type Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { UnitSystem } from "@/db/tables/core";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { recordActivity } from "@/features/activity/queries";
-import { toIso } from "./queries";
+import { sha256OfJson } from "@/features/analysis/content-hash";
+import { isoString } from "@/db/dates";
 import { runAnalysis } from "./run-analysis";
 import type { JointAnalysis, WorkingRevisionStatus } from "./workspace-contract";
 
 // Writes of the designs feature. Callers have validated the document and checked the policy;
 // these still scope every statement by organisation, and a refused save writes nothing.
 
-/** SHA-256 of the document with keys sorted, so equal designs hash equally whatever the key order. */
+/** SHA-256 of the document's canonical JSON, so equal designs hash equally whatever the key order. */
 export function hashDocument(document: JointDesign): string {
-  const canonical = (value: unknown): unknown => {
-    if (Array.isArray(value)) return value.map(canonical);
-    if (value && typeof value === "object") {
-      return Object.fromEntries(
-        Object.keys(value)
-          .sort()
-          .map((k) => [k, canonical((value as Record<string, unknown>)[k])]),
-      );
-    }
-    return value;
-  };
-  return createHash("sha256")
-    .update(JSON.stringify(canonical(document)))
-    .digest("hex");
+  return sha256OfJson(document);
 }
 
 function workingRevisionId(db: Kysely<Database>, designId: string) {
@@ -153,7 +140,7 @@ export async function saveWorkingRevision(
         .where("id", "=", command.designId)
         .where("organization_id", "=", command.organizationId)
         .execute();
-      return { kind: "saved", version: updated.version, savedAt: toIso(updated.updated_at), result };
+      return { kind: "saved", version: updated.version, savedAt: isoString(updated.updated_at), result };
     }
     const current = await trx
       .selectFrom("design_revisions")
@@ -174,7 +161,7 @@ export async function saveWorkingRevision(
       kind: "stale",
       version: current.version,
       savedByName: current.display_name,
-      savedAt: toIso(current.updated_at),
+      savedAt: isoString(current.updated_at),
     };
   });
 }

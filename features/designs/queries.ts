@@ -4,6 +4,7 @@ import type { Database } from "@/db/types";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { DESIGNS_PAGE_SIZE, type ListDesignsQueryInput } from "./schema";
 import type { JointAnalysis, WorkingRevisionStatus } from "./workspace-contract";
+import { isoString } from "@/db/dates";
 
 // Reads of the designs feature. Every query filters by organisation: another organisation's id
 // is simply not found (null), which pages turn into notFound() and the API into a 404.
@@ -66,10 +67,6 @@ function escapeLike(text: string): string {
 
 // db/tables/designs.ts nests ColumnType inside Generated, so Kysely types selected timestamps
 // loosely; pg returns Date objects for timestamptz.
-export function toIso(value: unknown): string {
-  return (value instanceof Date ? value : new Date(String(value))).toISOString();
-}
-
 export async function listDesigns(
   db: Kysely<Database>,
   organizationId: string,
@@ -135,7 +132,7 @@ export async function listDesigns(
       ownerName: r.owner_name,
       revisionNumber: r.number,
       status: r.status,
-      updatedAt: toIso(r.updated_at),
+      updatedAt: isoString(r.updated_at),
       archived: r.archived_at !== null,
     })),
     total: totalCount,
@@ -201,7 +198,7 @@ export async function findDesign(
     ownerName: row.owner_name,
     revisionNumber: row.number,
     status: row.status,
-    updatedAt: toIso(row.updated_at),
+    updatedAt: isoString(row.updated_at),
     archived: row.archived_at !== null,
     revisionId: row.revision_id,
     version: row.version,
@@ -211,7 +208,7 @@ export async function findDesign(
     revisionCount: Number(row.revision_count ?? 0),
     everSubmitted: Boolean(row.ever_submitted),
     lastEditedByName: row.editor_name,
-    revisionUpdatedAt: toIso(row.revision_updated_at),
+    revisionUpdatedAt: isoString(row.revision_updated_at),
   };
 }
 

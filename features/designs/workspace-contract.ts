@@ -4,10 +4,11 @@
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { ActionResult } from "@/features/forms/action-result";
+import type { RevisionStatus } from "@/db/tables/designs";
 
 export type { JointAnalysis };
 
-export type WorkingRevisionStatus = "draft" | "in_review" | "returned" | "approved";
+export type WorkingRevisionStatus = RevisionStatus;
 
 export interface WorkspaceDesignDto {
   designId: string;

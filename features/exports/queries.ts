@@ -3,12 +3,10 @@ import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { RevisionStatus } from "@/db/tables/designs";
+import { isoOrNull } from "@/db/dates";
 
 // Reads for the export routes and the background sheet job. Every read filters by the viewer's
 // organisation: another organisation's design is simply not found (the route answers 404).
-const iso = (value: unknown): string | null =>
-  value === null || value === undefined ? null : new Date(value as string).toISOString();
-
 export interface ExportRevisionDto {
   designId: string;
   revisionId: string;
@@ -77,7 +75,7 @@ export async function findExportRevision(
     contentHash: row.content_hash,
     designerName: row.submitter_name ?? row.creator_name,
     approverName: approved ? row.decider_name : null,
-    approvedAt: approved ? iso(row.decided_at) : null,
+    approvedAt: approved ? isoOrNull(row.decided_at) : null,
     boltCount: Array.isArray(document?.bolts) ? document.bolts.length : 0,
   };
 }

@@ -10,7 +10,8 @@ import {
   type CsvFieldError,
   type CsvPreviewRow,
 } from "./model/library-csv";
-import { toBoltingDto, toFlangeDto, toGasketDto, type Executor } from "./queries";
+import type { Executor } from "@/db/types";
+import { toBoltingDto, toFlangeDto, toGasketDto } from "./queries";
 import type { BoltingInput, FlangeInput, GasketInput } from "./schema";
 
 // Writes of the Stockroom. Callers have already checked canEditLibrary; every write is scoped to

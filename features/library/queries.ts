@@ -1,6 +1,5 @@
 import "server-only";
-import type { Kysely, Transaction } from "kysely";
-import type { Database } from "@/db/types";
+import type { Executor } from "@/db/types";
 import type {
   LibraryBoltingRow,
   LibraryFlangeTemplateRow,
@@ -13,7 +12,6 @@ import type { BoltingChoiceDto, FlangeTemplateChoiceDto, GasketChoiceDto } from 
 // Reads of the Stockroom: built-in catalogue rows merged with the organisation's own rows.
 // `list…Choices` is what a picker offers (built-in minus hidden, plus own rows);
 // `list…Listing` is the Stockroom screen (hidden built-ins included, flagged).
-export type Executor = Kysely<Database> | Transaction<Database>;
 
 async function hiddenIds(db: Executor, organizationId: string, kind: LibraryKind): Promise<Set<string>> {
   const rows = await db

@@ -25,13 +25,11 @@ import type {
   RevisionReviewDto,
   RevisionSummaryDto,
 } from "./review-dto";
+import { isoString, isoOrNull } from "@/db/dates";
 
 // Reads of the review feature. Every query filters by the viewer's organisation: another
 // organisation's revision is simply not found. Frozen snapshots are re-hashed on every read.
 // Typed loosely on purpose: the designs tables declare timestamps as Generated<ColumnType<…>>.
-const iso = (value: unknown): string | null =>
-  value === null || value === undefined ? null : new Date(value as string).toISOString();
-
 /** Everyone who created, saved or submitted a revision (revision_editors); read inside the caller's transaction. */
 export async function listRevisionEditorIds(db: Kysely<Database>, revisionId: string): Promise<string[]> {
   const rows = await db
@@ -79,7 +77,7 @@ export async function listComments(
     body: r.body,
     targetKind: r.target_kind,
     targetId: r.target_id,
-    at: iso(r.created_at)!,
+    at: isoString(r.created_at),
   }));
 }
 
@@ -102,7 +100,7 @@ export async function listJustifications(
     checkStatus: r.check_status,
     text: r.text,
     authorName: r.display_name,
-    at: iso(r.created_at)!,
+    at: isoString(r.created_at),
   }));
 }
 
@@ -123,7 +121,7 @@ export async function listDecisions(
     kind: r.kind,
     actorName: r.display_name,
     comment: r.comment,
-    at: iso(r.created_at)!,
+    at: isoString(r.created_at),
   }));
 }
 
@@ -143,9 +141,9 @@ export async function listRevisionSummaries(
     number: r.number,
     status: r.status,
     contentHash: r.content_hash,
-    submittedAt: iso(r.submitted_at),
-    decidedAt: iso(r.decided_at),
-    updatedAt: iso(r.updated_at)!,
+    submittedAt: isoOrNull(r.submitted_at),
+    decidedAt: isoOrNull(r.decided_at),
+    updatedAt: isoString(r.updated_at),
   }));
 }
 
@@ -230,9 +228,9 @@ export async function getRevisionReview(
     createdByName: row.creator_name,
     lastEditedByName: row.editor_name,
     submittedByName: row.submitter_name ?? null,
-    submittedAt: iso(row.submitted_at),
+    submittedAt: isoOrNull(row.submitted_at),
     decidedByName: row.decider_name ?? null,
-    decidedAt: iso(row.decided_at),
+    decidedAt: isoOrNull(row.decided_at),
     isWorking: facts.isWorking,
     revisionNumbers: numbers,
     comments,
@@ -363,7 +361,7 @@ export async function getDeskLists(
   const item = (r: {
     design_id: string;
     number: number;
-    at: unknown;
+    at: Date | string | null;
     name: string;
     equipment_tag: string;
     person: string | null;
@@ -374,7 +372,7 @@ export async function getDeskLists(
     equipmentTag: r.equipment_tag,
     number: r.number,
     personName: r.person ?? "",
-    at: iso(r.at) ?? "",
+    at: isoOrNull(r.at) ?? "",
     href: revisionPath(r.design_id, r.number),
     comment: r.comment ?? "",
   });

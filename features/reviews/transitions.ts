@@ -25,6 +25,7 @@ import type {
   StartNewRevisionInput,
   SubmitRevisionInput,
 } from "./schema";
+import { isoString } from "@/db/dates";
 
 // Every review transition runs in ONE transaction that first takes the revision's row lock
 // (select … for update). A second approver acting at the same moment waits for the lock, then
@@ -439,7 +440,7 @@ export async function addComment(
         body: input.body.trim(),
         targetKind: input.targetKind,
         targetId,
-        at: new Date(row.created_at).toISOString(),
+        at: isoString(row.created_at),
       },
     };
   });

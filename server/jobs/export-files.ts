@@ -3,12 +3,10 @@ import type { Kysely } from "kysely";
 import { sql } from "kysely";
 import type { Database } from "@/db/types";
 import type { ExportFileStatus } from "@/db/tables/exports";
+import { isoString, isoOrNull } from "@/db/dates";
 
 // Rows of export_files: one background export (its progress and, when done, its bytes).
 // Reads filter by organisation; another organisation's job is not found.
-const iso = (value: unknown): string | null =>
-  value === null || value === undefined ? null : new Date(value as string).toISOString();
-
 export interface SheetJobOptions {
   revisionNumber: number;
   paper: "a4" | "letter";
@@ -127,8 +125,8 @@ export async function findExportJob(
     fileName: row.file_name,
     downloadUrl: row.status === "done" ? jobDownloadUrl(row.id) : null,
     error: row.error,
-    createdAt: iso(row.created_at)!,
-    finishedAt: iso(row.finished_at),
+    createdAt: isoString(row.created_at),
+    finishedAt: isoOrNull(row.finished_at),
   };
 }
 

@@ -1,12 +1,10 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import type { Kysely, Transaction } from "kysely";
-import type { Database } from "@/db/types";
+import type { Executor } from "@/db/types";
 
 // The blob store: bytes in PostgreSQL (bytea). Everything else talks to these four functions, so
 // moving to an S3-compatible store later changes this file only. Every call is scoped to an
 // organisation: a blob id of another organisation reads as missing.
-type Executor = Kysely<Database> | Transaction<Database>;
 
 export interface StoredBlob {
   id: string;

@@ -1,12 +1,5 @@
 // Words the register shows for stored codes (statuses in plain words, outline kinds, templates).
-import type { WorkingRevisionStatus } from "../workspace-contract";
-
-export const STATUS_LABELS: Record<WorkingRevisionStatus, string> = {
-  draft: "Draft",
-  in_review: "In review",
-  returned: "Returned",
-  approved: "Approved",
-};
+export { REVISION_STATUS_LABELS as STATUS_LABELS } from "@/features/ui/revision-status";
 
 export const OUTLINE_LABELS: Record<string, string> = {
   circle: "Circular",

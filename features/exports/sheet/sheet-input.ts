@@ -1,7 +1,9 @@
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
+import type { RevisionStatus } from "@/db/tables/designs";
 
 export type SheetPaper = "a4" | "letter";
-export type SheetRevisionStatus = "draft" | "in_review" | "returned" | "approved";
+
+export type SheetRevisionStatus = RevisionStatus;
 
 /** An approved justification of a warn or fail check, shown under the check table. */
 export interface SheetJustification {

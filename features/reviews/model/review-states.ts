@@ -1,18 +1,14 @@
+import { REVISION_STATUS_LABELS, type RevisionStatus } from "@/features/ui/revision-status";
 // The review state machine as pure functions: no database, no framework. The server actions run
 // these inside the transaction that holds the revision's row lock, so the decision is made on the
 // state the database will actually change, and the policies in ../policies.ts use the same rules
 // to hide buttons.
-export type ReviewStatus = "draft" | "in_review" | "returned" | "approved";
+
+export type ReviewStatus = RevisionStatus;
 export type ReviewRole = "designer" | "approver" | "admin";
 export type ReviewCommand = "submit" | "approve" | "return" | "start-new-revision";
 
-/** Plain words shown on every screen (glossary: DEVELOPERS.md). */
-export const STATUS_LABELS: Record<ReviewStatus, string> = {
-  draft: "Draft",
-  in_review: "In review",
-  returned: "Returned",
-  approved: "Approved",
-};
+export const STATUS_LABELS = REVISION_STATUS_LABELS;
 
 export interface ReviewActor {
   userId: string;

@@ -6,14 +6,8 @@ import { canUploadAttachment } from "@/features/attachments/policies";
 import type { WorkspaceDesignDto } from "@/features/designs/workspace-contract";
 import { ExportButtons } from "@/features/exports/components/export-buttons";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { REVISION_STATUS_LABELS } from "@/features/ui/revision-status";
 import type { Viewer } from "@/server/auth/guard";
-
-const STATUS_WORDS: Record<WorkspaceDesignDto["status"], string> = {
-  draft: "Draft",
-  in_review: "In review",
-  returned: "Returned",
-  approved: "Approved",
-};
 
 // Where the editor meets the other features on the design page: the sign-off sheet (submit and
 // review), the shop files, the attachments and the activity log of the design.
@@ -34,8 +28,9 @@ export function DesignCompanions({
           Sign-off
         </h2>
         <p className="mt-1 text-table text-ink-700">
-          Revision {design.revisionNumber} is <strong>{STATUS_WORDS[design.status]}</strong>. Save your edits,
-          then open the sign-off sheet to submit it for review, read the comments or start a new revision.
+          Revision {design.revisionNumber} is <strong>{REVISION_STATUS_LABELS[design.status]}</strong>. Save
+          your edits, then open the sign-off sheet to submit it for review, read the comments or start a new
+          revision.
         </p>
         <Link href={signOffHref} className={`${buttonStyles.secondary} mt-3`}>
           Open the sign-off sheet
