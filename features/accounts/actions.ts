@@ -10,7 +10,7 @@ import { clientAddressKey } from "@/server/auth/rate-limit";
 import { endAllSessions, endSession, startSession, switchSessionOrganization } from "@/server/auth/session";
 import { authenticate } from "./credentials";
 import { createOrganizationWithFounder } from "./organizations";
-import { formFields, invalid } from "./form-data";
+import { formFields, invalidForm } from "@/features/forms/form-data";
 import { safeNextPath, signInSchema, signUpSchema, switchOrganizationSchema } from "./schema";
 
 // Session entry points. Each action parses its own input and never trusts the form for who
@@ -21,7 +21,7 @@ export async function signInAction(
   formData: FormData,
 ): Promise<ActionResult> {
   const parsed = signInSchema.safeParse(formFields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const addressKey = clientAddressKey(await headers());
   const outcome = await authenticate(getDb(), {
     email: parsed.data.email,
@@ -38,7 +38,7 @@ export async function signUpAction(
   formData: FormData,
 ): Promise<ActionResult> {
   const parsed = signUpSchema.safeParse(formFields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const outcome = await createOrganizationWithFounder(getDb(), parsed.data);
   if (!outcome.ok)
     return { ok: false, message: outcome.message, fieldErrors: { [outcome.field]: [outcome.message] } };

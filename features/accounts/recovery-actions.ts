@@ -6,7 +6,7 @@ import { getDb } from "@/db/index";
 import type { ActionResult } from "@/features/forms/action-result";
 import { clientAddressKey } from "@/server/auth/rate-limit";
 import { startSession } from "@/server/auth/session";
-import { formFields, invalid } from "./form-data";
+import { INVALID_FORM_MESSAGE, formFields, invalidForm } from "@/features/forms/form-data";
 import { acceptInvitation } from "./invitations";
 import { requestPasswordReset, resetPassword } from "./password-reset";
 import { acceptInvitationSchema, forgotPasswordSchema, resetPasswordSchema } from "./schema";
@@ -18,11 +18,11 @@ export async function acceptInvitationAction(
   formData: FormData,
 ): Promise<ActionResult> {
   const parsed = acceptInvitationSchema.safeParse(formFields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   if (parsed.data.confirmPassword !== undefined && parsed.data.confirmPassword !== parsed.data.password) {
     return {
       ok: false,
-      message: "Check the highlighted fields.",
+      message: INVALID_FORM_MESSAGE,
       fieldErrors: { confirmPassword: ["The two passwords differ."] },
     };
   }
@@ -37,7 +37,7 @@ export async function requestPasswordResetAction(
   formData: FormData,
 ): Promise<ActionResult<string>> {
   const parsed = forgotPasswordSchema.safeParse(formFields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const outcome = await requestPasswordReset(getDb(), {
     email: parsed.data.email,
     addressKey: clientAddressKey(await headers()),
@@ -50,7 +50,7 @@ export async function resetPasswordAction(
   formData: FormData,
 ): Promise<ActionResult> {
   const parsed = resetPasswordSchema.safeParse(formFields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const outcome = await resetPassword(getDb(), parsed.data);
   if (!outcome.ok) return { ok: false, message: outcome.message };
   redirect("/sign-in?reset=1");

@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
-import { formFields } from "./form-data";
+import { formFields } from "@/features/forms/form-data";
 import {
   changeMemberRolesCommand,
   inviteMemberCommand,

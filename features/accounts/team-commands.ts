@@ -5,6 +5,8 @@ import { sendInvitationEmail } from "@/server/mail/messages";
 import { createInvitation, renewInvitation, revokeInvitation, type IssuedInvitation } from "./invitations";
 import { changeRolesSchema, invitationIdSchema, inviteMemberSchema, memberIdSchema } from "./schema";
 import { changeMemberRoles, LAST_ADMIN_MESSAGE, removeMember, type MemberChange } from "./team";
+import { INVALID_FORM_MESSAGE, fieldErrorsOf } from "@/features/forms/form-data";
+import type { z } from "zod";
 
 // The admin commands of the Crew screen, shared by the server actions (forms) and the
 // /api/v1/team route handlers. The caller has already checked the admin role; these parse the
@@ -20,13 +22,12 @@ function fromChange(change: MemberChange): CommandResult {
   return { ok: false, status: 409, message: LAST_ADMIN_MESSAGE };
 }
 
-function badInput(error: { issues: { path: PropertyKey[]; message: string }[] }): CommandResult<never> {
-  const fieldErrors: Record<string, string[]> = {};
-  for (const issue of error.issues) (fieldErrors[String(issue.path[0] ?? "form")] ??= []).push(issue.message);
+function badInput(error: z.ZodError): CommandResult<never> {
+  const fieldErrors = fieldErrorsOf(error);
   // A malformed id is as unknown as a foreign one.
   if (fieldErrors.userId || fieldErrors.invitationId)
     return { ok: false, status: 404, message: "Not found in this organisation." };
-  return { ok: false, status: 400, message: "Check the highlighted fields.", fieldErrors };
+  return { ok: false, status: 400, message: INVALID_FORM_MESSAGE, fieldErrors };
 }
 
 async function mailInvitation(viewer: Viewer, invitation: IssuedInvitation): Promise<void> {

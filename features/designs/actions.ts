@@ -13,8 +13,9 @@ import {
   setUnitSystemForViewer,
   type CommandResult,
 } from "./commands";
-import { formDataToObject } from "./field-errors";
+import { formStrings } from "@/features/forms/form-data";
 import type { SaveWorkingRevisionInput, SaveWorkingRevisionResult } from "./workspace-contract";
+import type { CreateDesignState } from "./components/new-design-form";
 
 // Server actions of the designs feature: authenticate, then hand over to commands.ts, which
 // parses, authorises and delegates; then revalidate. `reason` stays server-side.
@@ -26,15 +27,13 @@ function toActionResult<T>(result: CommandResult<T>): ActionResult<T> {
     : { ok: false, message: result.message };
 }
 
-type CreateDesignState = (ActionResult<{ designId: string }> & { values?: Record<string, string> }) | null;
-
 /** New-design form (useActionState); on success goes straight to the editor. */
 export async function createDesignAction(
   _previous: CreateDesignState,
   formData: FormData,
 ): Promise<CreateDesignState> {
   const viewer = await requireViewer();
-  const values = formDataToObject(formData);
+  const values = formStrings(formData);
   const result = await createDesignFromForm(getDb(), viewer, values);
   // Typed values go back so the form can show them again (React resets it after an action).
   if (!result.ok) return { ...toActionResult(result), values };

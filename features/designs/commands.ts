@@ -4,7 +4,7 @@ import { z } from "zod";
 import type { Database } from "@/db/types";
 import type { Viewer } from "@/server/auth/guard";
 import type { UnitSystem } from "@/features/analysis/core/design";
-import { issuesToFieldErrors } from "./field-errors";
+import { INVALID_FORM_MESSAGE, fieldErrorsOf } from "@/features/forms/form-data";
 import { findDesign } from "./queries";
 import {
   createDesign,
@@ -41,19 +41,16 @@ export type CommandResult<T> =
       conflict?: true;
     };
 
-const INVALID = "Check the highlighted fields; nothing was saved.";
 const NOT_FOUND = "This design does not exist in your organisation.";
 
 function invalid(error: z.ZodError, flat = false): CommandResult<never> {
-  let fieldErrors: Record<string, string[]>;
-  if (flat) {
-    const flattened = z.flattenError(error);
-    fieldErrors = {
-      ...(flattened.fieldErrors as Record<string, string[]>),
-      ...(flattened.formErrors.length ? { form: flattened.formErrors } : {}),
-    };
-  } else fieldErrors = issuesToFieldErrors(error);
-  return { ok: false, reason: "invalid", message: INVALID, fieldErrors };
+  // A form keys errors by field name; a JSON body (the API, the editor's save) by full path.
+  return {
+    ok: false,
+    reason: "invalid",
+    message: INVALID_FORM_MESSAGE,
+    fieldErrors: fieldErrorsOf(error, { nested: !flat }),
+  };
 }
 
 function refuse(reason: CommandFailureReason, message: string): CommandResult<never> {

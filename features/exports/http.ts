@@ -2,6 +2,7 @@ import "server-only";
 import { z } from "zod";
 import { attachmentDisposition } from "./file-names";
 import { exportPathSchema, sheetOptionsSchema, type ExportPathInput, type SheetOptionsInput } from "./schema";
+import { fieldErrorsOf } from "@/features/forms/form-data";
 
 // Request plumbing shared by the export route handlers (parse, answer with a file).
 export type ParseResult<T> =
@@ -22,7 +23,7 @@ export function parseSheetOptions(url: URL): ParseResult<SheetOptionsInput> {
   return {
     ok: false,
     message: "The export options are not valid.",
-    fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
+    fieldErrors: fieldErrorsOf(parsed.error),
   };
 }
 

@@ -8,6 +8,7 @@ import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
 import { prepareImport } from "./model/prepare-import";
 import { MAX_IMPORT_FILE_BYTES, importDesignSchema } from "./schema";
+import { invalidForm } from "@/features/forms/form-data";
 
 // Creates a new design from a DXF (and optionally a CSV of bolt positions). The server parses the
 // files itself: the browser's preview is a courtesy, never the source of the stored geometry.
@@ -32,12 +33,7 @@ export async function importDesignAction(
     equipmentTag: formData.get("equipmentTag") ?? "",
     csvUnit: formData.get("csvUnit") ?? "mm",
   });
-  if (!parsed.success)
-    return {
-      ok: false,
-      message: "Check the highlighted fields.",
-      fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
-    };
+  if (!parsed.success) return invalidForm(parsed.error);
   const dxf = await fileText(formData.get("dxf"), "DXF");
   const csv = await fileText(formData.get("csv"), "CSV");
   if (dxf.error || !dxf.text)

@@ -22,6 +22,7 @@ import {
   gasketInputSchema,
   hideBuiltinSchema,
 } from "./schema";
+import { INVALID_FORM_MESSAGE, fieldErrorsOf, invalidForm } from "@/features/forms/form-data";
 
 // Stockroom entry points: authenticate, parse, authorise (admin), delegate, revalidate.
 const PATHS: Record<LibraryKind, string> = {
@@ -37,14 +38,6 @@ function fields(formData: FormData): Record<string, string> {
   return out;
 }
 
-function invalid(error: z.ZodError): ActionResult<never> {
-  return {
-    ok: false,
-    message: "Some values need attention.",
-    fieldErrors: z.flattenError(error).fieldErrors as Record<string, string[]>,
-  };
-}
-
 async function editor() {
   const viewer = await requireViewer();
   return canEditLibrary(viewer) ? viewer : null;
@@ -58,7 +51,7 @@ export async function saveGasketAction(
   if (!viewer) return { ok: false, message: NOT_ADMIN };
   const raw = fields(formData);
   const parsed = gasketInputSchema.safeParse(raw);
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const rowId = z.uuid().safeParse(raw.rowId);
   const db = getDb();
   const result = rowId.success
@@ -88,15 +81,12 @@ export async function createBoltingAction(
     const parsed = boltingInputSchema.safeParse({ ...common, ...range });
     if (parsed.success) inputs.push(parsed.data);
     else {
-      for (const [k, msgs] of Object.entries(
-        z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
-      )) {
+      for (const [k, msgs] of Object.entries(fieldErrorsOf(parsed.error))) {
         fieldErrors[(rangeKeys as readonly string[]).includes(k) ? `${k}_${i}` : k] = msgs;
       }
     }
   }
-  if (Object.keys(fieldErrors).length > 0)
-    return { ok: false, message: "Some values need attention.", fieldErrors };
+  if (Object.keys(fieldErrors).length > 0) return { ok: false, message: INVALID_FORM_MESSAGE, fieldErrors };
   const result = await createBolting(getDb(), viewer.organizationId, viewer.userId, inputs);
   if (!result.ok) return result;
   revalidatePath(PATHS.bolting);
@@ -110,7 +100,7 @@ export async function createFlangeTemplateAction(
   const viewer = await editor();
   if (!viewer) return { ok: false, message: NOT_ADMIN };
   const parsed = flangeInputSchema.safeParse(fields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const result = await createFlangeTemplate(getDb(), viewer.organizationId, viewer.userId, parsed.data);
   if (!result.ok) return result;
   revalidatePath(PATHS.flange);

@@ -24,6 +24,7 @@ import {
   type TransitionActor,
   type TransitionOutcome,
 } from "./transitions";
+import { invalidForm } from "@/features/forms/form-data";
 
 // Review entry points: authenticate, parse, delegate (the transition checks role and state
 // inside its row-locked transaction), revalidate, then mail. Form-shaped: (previous, FormData).
@@ -50,14 +51,6 @@ function fields(formData: FormData): Record<string, unknown> {
   if (out.targetId === "") out.targetId = null;
   return out;
 }
-
-const invalid = (
-  error: z.ZodError,
-): { ok: false; message: string; fieldErrors: Record<string, string[]> } => ({
-  ok: false,
-  message: "Check the highlighted fields.",
-  fieldErrors: z.flattenError(error).fieldErrors as Record<string, string[]>,
-});
 
 const actorOf = (viewer: Viewer): TransitionActor => ({
   userId: viewer.userId,
@@ -91,7 +84,7 @@ export async function submitRevisionAction(
 ): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "designer" });
   const parsed = submitRevisionSchema.safeParse(fields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   return finish(viewer, await submitRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
@@ -101,7 +94,7 @@ export async function approveRevisionAction(
 ): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "approver" });
   const parsed = approveRevisionSchema.safeParse(fields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   return finish(viewer, await approveRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
@@ -111,7 +104,7 @@ export async function returnRevisionAction(
 ): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "approver" });
   const parsed = returnRevisionSchema.safeParse(fields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   return finish(viewer, await returnRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
@@ -121,7 +114,7 @@ export async function startNewRevisionAction(
 ): Promise<ActionResult<TransitionSummary>> {
   const viewer = await requireViewer({ role: "designer" });
   const parsed = startNewRevisionSchema.safeParse(fields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   return finish(viewer, await startNewRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
@@ -131,7 +124,7 @@ export async function addCommentAction(
 ): Promise<ActionResult<CommentDto>> {
   const viewer = await requireViewer();
   const parsed = addCommentSchema.safeParse(fields(formData));
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidForm(parsed.error);
   const result = await addComment(getDb(), actorOf(viewer), parsed.data);
   if (result.ok) revalidatePath(revisionPath(parsed.data.designId, parsed.data.number));
   return result;

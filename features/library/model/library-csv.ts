@@ -13,6 +13,7 @@ import {
 } from "../schema";
 import { CSV_COLUMNS, REQUIRED_COLUMNS } from "./csv-columns";
 import type { BoltingChoiceDto, FlangeTemplateChoiceDto, GasketChoiceDto, LibraryKind } from "./dto";
+import { fieldErrorsOf } from "@/features/forms/form-data";
 
 export interface CsvFieldError {
   /** Line in the file (line 1 is the header). */
@@ -103,9 +104,7 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
       });
     const result = schema.safeParse(cells);
     if (!result.success) {
-      for (const [field, messages] of Object.entries(
-        z.flattenError(result.error).fieldErrors as Record<string, string[]>,
-      )) {
+      for (const [field, messages] of Object.entries(fieldErrorsOf(result.error))) {
         errors.push({ line, field, message: messages[0] });
       }
     } else {

@@ -1,4 +1,4 @@
-import { issuesToFieldErrors } from "@/features/designs/field-errors";
+import { fieldErrorsOf } from "@/features/forms/form-data";
 import { NO_STORE, readJsonBody } from "@/features/designs/http";
 import { runAnalysis } from "@/features/designs/run-analysis";
 import { analysisRequestSchema } from "@/features/designs/schema";
@@ -18,6 +18,6 @@ export async function POST(request: Request): Promise<Response> {
       : { document: raw };
   const parsed = analysisRequestSchema.safeParse(wrapped);
   if (!parsed.success)
-    return jsonError(422, "The design document is not valid.", issuesToFieldErrors(parsed.error));
+    return jsonError(422, "The design document is not valid.", fieldErrorsOf(parsed.error, { nested: true }));
   return Response.json(runAnalysis(parsed.data.document).result, { headers: NO_STORE });
 }
