@@ -94,8 +94,22 @@ export const memberIdSchema = z.object({ userId: z.uuid("Unknown member.") });
 export const invitationIdSchema = z.object({ invitationId: z.uuid("Unknown invitation.") });
 export const switchOrganizationSchema = z.object({ organizationId: z.uuid("Unknown organisation.") });
 
-/** Only our own paths are followed after sign-in (no open redirect to another site). */
-export function safeNextPath(next: string | null | undefined): string {
-  if (!next || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")) return "/desk";
-  return next;
+/**
+ * Only our own pages are followed after sign-in (no open redirect to another site). `next` is
+ * resolved as a URL against the app's public origin, the way a browser resolves a Location header
+ * (tabs and newlines dropped, backslashes read as slashes, `//host` taken as another host), and is
+ * kept only when the result has the app's own origin. What is returned is the resolved path, query
+ * and fragment, never the raw text, so a value the browser would read differently cannot pass.
+ */
+export function safeNextPath(next: string | null | undefined, appUrl: string): string {
+  const fallback = "/desk";
+  if (!next) return fallback;
+  let resolved: URL;
+  try {
+    resolved = new URL(next, appUrl);
+  } catch {
+    return fallback;
+  }
+  if (resolved.origin !== new URL(appUrl).origin) return fallback;
+  return `${resolved.pathname}${resolved.search}${resolved.hash}`;
 }
