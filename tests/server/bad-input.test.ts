@@ -14,7 +14,12 @@ import * as librarySchemas from "@/features/library/schema";
 import * as reviewSchemas from "@/features/reviews/schema";
 import { MULTI_LINE_TEXT, SINGLE_LINE_TEXT } from "@/features/validation/plain-text";
 import { MAX_JSON_DEPTH, jsonNestingDepth } from "@/server/http/request-body";
-import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../setup/fixtures";
+import {
+  COVER_TEMPLATE,
+  appRequest,
+  createOrganizationWithMembers,
+  type OrganizationFixture,
+} from "../setup/fixtures";
 import { getTestDb } from "../setup/test-db";
 
 // No input may end in a 500: NUL and other control characters in text, deep JSON and huge
@@ -23,19 +28,6 @@ const db = getTestDb();
 let org: OrganizationFixture<"dana" | "ines">;
 let dana: string;
 let ines: string;
-
-const template = {
-  kind: "rectangular-cover",
-  widthMm: 600,
-  heightMm: 400,
-  cornerRadiusMm: 40,
-  boltEdgeDistanceMm: 35,
-  boltCount: 16,
-  boltSize: "M20",
-  coverThicknessMm: 30,
-  flangeThicknessMm: 30,
-  gasketWidthMm: 20,
-};
 
 const countDesigns = async () =>
   Number(
@@ -79,7 +71,7 @@ describe("control characters in text get a field message and store nothing", () 
       appRequest("/api/v1/designs", {
         method: "POST",
         cookie: dana,
-        body: { name: "Channel cover\u0000E-2107", equipmentTag: "E-2107", template },
+        body: { name: "Channel cover\u0000E-2107", equipmentTag: "E-2107", template: COVER_TEMPLATE },
       }),
     );
     expect(response.status).toBe(422);
@@ -92,7 +84,11 @@ describe("control characters in text get a field message and store nothing", () 
 
   it("a NUL or an escape character inside the saved document is a 422 naming its path", async () => {
     const created = await designsPost(
-      appRequest("/api/v1/designs", { method: "POST", cookie: dana, body: { name: "Clean", template } }),
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: dana,
+        body: { name: "Clean", template: COVER_TEMPLATE },
+      }),
     );
     expect(created.status).toBe(201);
     const { designId } = await created.json();
@@ -285,7 +281,11 @@ describe("JSON bodies: size and nesting limits", () => {
 
   it("a 20 MB JSON body is a 413 with a message, declared or streamed, and nothing is stored", async () => {
     const before = await countDesigns();
-    const huge = JSON.stringify({ name: "Huge", template, description: "x".repeat(20 * 1024 * 1024) });
+    const huge = JSON.stringify({
+      name: "Huge",
+      template: COVER_TEMPLATE,
+      description: "x".repeat(20 * 1024 * 1024),
+    });
     const declared = await designsPost(
       rawRequest("/api/v1/designs", huge, { "content-length": String(Buffer.byteLength(huge)) }),
     );
