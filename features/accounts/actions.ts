@@ -4,7 +4,7 @@ import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { getDb } from "@/db/index";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { getViewerContext } from "@/server/auth/guard";
 import { getEnv } from "@/server/env";
 import { clientAddressKey } from "@/server/auth/rate-limit";
