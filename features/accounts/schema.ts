@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "@/features/validation/plain-text";
+import { plainText } from "@/features/forms/plain-text";
 
 // Inputs of the account forms. Shared by the forms (first message per field) and the actions
 // (the authority). Every text field is bounded so a 1 KB paste gets a message, not a query.

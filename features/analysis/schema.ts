@@ -5,7 +5,7 @@
  * every message names its field path, e.g. `bolts[3].position: bolt hole lies outside the flange outline`.
  */
 import { z } from "zod";
-import { multilineText, plainText } from "@/features/validation/plain-text";
+import { multilineText, plainText } from "@/features/forms/plain-text";
 import type { JointDesign } from "./core/design";
 import { MAX_BOLT_COUNT } from "./core/design";
 import { validateJointDesign } from "./core/validate";

@@ -1,6 +1,6 @@
 import "server-only";
 import { z } from "zod";
-import { plainText } from "@/features/validation/plain-text";
+import { plainText } from "@/features/forms/plain-text";
 
 // Request plumbing of the attachment routes: the upload body is the raw file (so the browser can
 // report progress and we can stop reading at the limit instead of buffering a huge form).

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "@/features/validation/plain-text";
+import { plainText } from "@/features/forms/plain-text";
 import { designDocumentSchema } from "./document-schema";
 import { designNameSchema, equipmentTagSchema, templateParamsSchema } from "./template-schema";
 

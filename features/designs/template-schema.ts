@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "@/features/validation/plain-text";
+import { plainText } from "@/features/forms/plain-text";
 import type { PointMm } from "@/features/analysis/core/design";
 import { validateJointDesign } from "@/features/analysis/core/validate";
 import {

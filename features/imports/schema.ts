@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { plainText } from "@/features/validation/plain-text";
+import { plainText } from "@/features/forms/plain-text";
 
 // The import form's fields besides the files themselves.
 export const importDesignSchema = z.object({

@@ -2,7 +2,7 @@
 // Every schema reads flat string fields (FormData and CSV cells) and produces numbers in the
 // core's units (mm, MPa). Field names are the CSV column names, so an error names the column.
 import { z } from "zod";
-import { plainText } from "@/features/validation/plain-text";
+import { plainText } from "@/features/forms/plain-text";
 
 const text = (max: number) =>
   plainText({ error: "is required" })

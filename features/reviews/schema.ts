@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { multilineText, plainText } from "@/features/validation/plain-text";
+import { multilineText, plainText } from "@/features/forms/plain-text";
 
 // Inputs of the review actions. The forms use them for quick feedback; the actions are the authority.
 const revisionRef = {

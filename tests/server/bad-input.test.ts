@@ -12,7 +12,7 @@ import * as templateSchemas from "@/features/designs/template-schema";
 import * as importSchemas from "@/features/imports/schema";
 import * as librarySchemas from "@/features/library/schema";
 import * as reviewSchemas from "@/features/reviews/schema";
-import { MULTI_LINE_TEXT, SINGLE_LINE_TEXT } from "@/features/validation/plain-text";
+import { MULTI_LINE_TEXT, SINGLE_LINE_TEXT } from "@/features/forms/plain-text";
 import { MAX_JSON_DEPTH, jsonNestingDepth } from "@/server/http/request-body";
 import {
   COVER_TEMPLATE,

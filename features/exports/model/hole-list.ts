@@ -1,6 +1,6 @@
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { BoltRow } from "./bolt-rows";
-import { stringifyCsv } from "./csv-cells";
+import { stringifyCsv } from "@/features/forms/csv-cells";
 import { fixed, lengthUnitFor } from "./length-unit";
 
 /**

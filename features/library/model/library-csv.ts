@@ -2,7 +2,7 @@
 // `parseLibraryCsv`, so what the user previewed is exactly what is validated again on commit.
 import { parse } from "csv-parse/sync";
 import { z } from "zod";
-import { restoreCsvText, stringifyCsv } from "@/features/exports/model/csv-cells";
+import { restoreCsvText, stringifyCsv } from "@/features/forms/csv-cells";
 import {
   boltingInputSchema,
   flangeInputSchema,

@@ -1,6 +1,6 @@
 import { parse } from "csv-parse/sync";
 import { describe, expect, it } from "vitest";
-import { neutralizeCsvText, restoreCsvText, stringifyCsv } from "@/features/exports/model/csv-cells";
+import { neutralizeCsvText, restoreCsvText, stringifyCsv } from "@/features/forms/csv-cells";
 import { buildHoleListCsv } from "@/features/exports/model/hole-list";
 
 // OWASP "CSV Injection": cells starting with = + - @ tab or carriage return are run by
