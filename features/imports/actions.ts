@@ -11,14 +11,14 @@ import { MAX_IMPORT_FILE_BYTES, importDesignSchema } from "./schema";
 
 // Creates a new design from a DXF (and optionally a CSV of bolt positions). The server parses the
 // files itself: the browser's preview is a courtesy, never the source of the stored geometry.
-async function fileText(
+async function fileBytes(
   value: FormDataEntryValue | null,
   label: string,
-): Promise<{ text: string | null; error?: string }> {
-  if (!(value instanceof File) || value.size === 0) return { text: null };
+): Promise<{ bytes: Uint8Array | null; error?: string }> {
+  if (!(value instanceof File) || value.size === 0) return { bytes: null };
   if (value.size > MAX_IMPORT_FILE_BYTES)
-    return { text: null, error: `The ${label} file is larger than 1.9 MB.` };
-  return { text: await value.text() };
+    return { bytes: null, error: `The ${label} file is larger than 1.9 MB.` };
+  return { bytes: new Uint8Array(await value.arrayBuffer()) };
 }
 
 export async function importDesignAction(
@@ -31,6 +31,8 @@ export async function importDesignAction(
     name: formData.get("name") ?? "",
     equipmentTag: formData.get("equipmentTag") ?? "",
     csvUnit: formData.get("csvUnit") ?? "mm",
+    dxfUnit: formData.get("dxfUnit") || undefined,
+    layersOn: formData.get("layersOn") || undefined,
   });
   if (!parsed.success)
     return {
@@ -38,9 +40,9 @@ export async function importDesignAction(
       message: "Check the highlighted fields.",
       fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
     };
-  const dxf = await fileText(formData.get("dxf"), "DXF");
-  const csv = await fileText(formData.get("csv"), "CSV");
-  if (dxf.error || !dxf.text)
+  const dxf = await fileBytes(formData.get("dxf"), "DXF");
+  const csv = await fileBytes(formData.get("csv"), "CSV");
+  if (dxf.error || !dxf.bytes)
     return {
       ok: false,
       message: dxf.error ?? "Choose a DXF drawing.",
@@ -48,9 +50,12 @@ export async function importDesignAction(
     };
   if (csv.error) return { ok: false, message: csv.error, fieldErrors: { csv: [csv.error] } };
   const prepared = prepareImport({
-    dxfText: dxf.text,
-    csvText: csv.text,
+    // DXF geometry is ASCII; text entities in another code page do not matter here.
+    dxfText: new TextDecoder().decode(dxf.bytes),
+    csv: csv.bytes,
     csvUnit: parsed.data.csvUnit,
+    layersOn: parsed.data.layersOn,
+    dxfUnit: parsed.data.dxfUnit,
     name: parsed.data.name,
     units: viewer.unitSystem,
     equipmentTag: parsed.data.equipmentTag,
