@@ -70,9 +70,13 @@ function similarityScale(m: Affine): number | null {
   return sx;
 }
 
-/** An entity whose extrusion points down (a mirrored object in CAD) has its x axis flipped. */
-function ocsFlip(any: Record<string, any>): Affine {
-  const z = any.extrusionDirectionZ ?? any.extrusionDirection?.z ?? any.normalVector?.z ?? 1;
+/** Entities whose coordinates are in their object coordinate system (LINE, ELLIPSE, SPLINE are in world coordinates). */
+const OCS_TYPES = new Set(["CIRCLE", "ARC", "LWPOLYLINE", "POLYLINE", "INSERT"]);
+
+/** An OCS entity whose extrusion points down (a mirrored object in CAD) has its x axis flipped. */
+function ocsFlip(type: string, any: Record<string, any>): Affine {
+  if (!OCS_TYPES.has(type)) return IDENTITY;
+  const z = any.extrusionDirectionZ ?? any.extrusionDirection?.z ?? 1;
   return z < 0 ? { ...IDENTITY, a: -1 } : IDENTITY;
 }
 
@@ -214,7 +218,7 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
       const layer = insertLayer !== null && rawLayer === "0" ? insertLayer : rawLayer;
       const origin: Origin = { type: e.type, layer, viaInsert: via };
       const skip = (reason: string) => skipped.push({ ...origin, reason });
-      const mm = compose(m, ocsFlip(any));
+      const mm = compose(m, ocsFlip(e.type, any));
       const path = (pts: Pt[], closed: boolean, arc?: { cx: number; cy: number; r: number }) => {
         const s = similarityScale(mm);
         primitives.push({
@@ -449,9 +453,48 @@ class SplineReader {
   }
 }
 
-/** dxf-parser with the SPLINE reader above. */
+/** dxf-parser's CIRCLE reader drops the extrusion (groups 210–230), so a mirrored circle lands on the wrong side. */
+class CircleReader {
+  ForEntityName = "CIRCLE";
+  parseEntity(scanner: Scanner, curr: Group): Record<string, unknown> {
+    const e: Record<string, any> = { type: curr.value };
+    for (curr = scanner.next(); !scanner.isEOF() && curr.code !== 0; curr = scanner.next()) {
+      switch (curr.code) {
+        case 5:
+          e.handle = curr.value;
+          break;
+        case 8:
+          e.layer = curr.value;
+          break;
+        case 67:
+          e.inPaperSpace = curr.value !== 0;
+          break;
+        case 10:
+          e.center = { x: curr.value, y: 0 };
+          break;
+        case 20:
+          if (e.center) e.center.y = curr.value;
+          break;
+        case 40:
+          e.radius = curr.value;
+          break;
+        case 230:
+          e.extrusionDirectionZ = curr.value;
+          break;
+        default:
+          break;
+      }
+    }
+    return e;
+  }
+}
+
+type Handler = Parameters<DxfParser["registerEntityHandler"]>[0];
+
+/** dxf-parser with the SPLINE and CIRCLE readers above. */
 export function parseDxfText(text: string): IDxf | null {
   const parser = new DxfParser();
-  parser.registerEntityHandler(SplineReader as unknown as Parameters<DxfParser["registerEntityHandler"]>[0]);
+  parser.registerEntityHandler(SplineReader as unknown as Handler);
+  parser.registerEntityHandler(CircleReader as unknown as Handler);
   return parser.parseSync(text);
 }

@@ -1,5 +1,6 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
+import { DxfWriter, Units, point3d } from "@tarikjabiri/dxf";
 import { describe, expect, it } from "vitest";
 import { getBoltPoints } from "@/features/analysis/core/geometry";
 import { validateJointDesign } from "@/features/analysis/core/validate";
@@ -188,5 +189,20 @@ describe("Drawing intake on CAD-style drawings (independent writers)", () => {
         detail: expect.stringMatching(/open chain of .*ends do not meet/),
       }),
     );
+  });
+
+  it("reads a mirrored CIRCLE (extrusion 0,0,−1) where CAD shows it: x flipped", () => {
+    const w = new DxfWriter();
+    w.setUnits(Units.Millimeters);
+    // Object coordinates (100, 0) with a downward normal lie at world (−100, 0).
+    w.addCircle(point3d(100, 0, 0), 80, { extrusion: point3d(0, 0, -1) });
+    for (let i = 0; i < 6; i++) {
+      const a = (i * Math.PI) / 3;
+      w.addCircle(point3d(-100 + 60 * Math.cos(a), 60 * Math.sin(a), 0), 6);
+    }
+    const r = parseDxfFlange(w.stringify());
+    if (!r.ok) throw new Error(r.message);
+    expect(r.value.centreMm.x).toBeCloseTo(-100, 9);
+    expect(r.value.boltHoles).toHaveLength(6);
   });
 });
