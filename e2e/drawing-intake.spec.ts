@@ -42,7 +42,7 @@ test("layer switches: the title block is off by default, and switching the holes
   ).toBeVisible();
 
   await layers.getByRole("checkbox", { name: /^HOLES/ }).uncheck();
-  const alert = dana.getByRole("alert");
+  const alert = dana.getByTestId("import-refusal");
   await expect(alert).toContainText("No bolt holes found");
   await expect(alert).toContainText("LWPOLYLINE on layer OUTLINE, 300 × 200 mm (0 circle(s) inside)");
   await expect(dana.getByRole("button", { name: "Create design" })).toBeDisabled();
@@ -67,7 +67,7 @@ test("a drawing that states no unit is confirmed in inches and created at its tr
     "Outline read as 14 × 9.3 drawing units: 14 × 9.3 mm if millimetres, 355.6 × 235 mm if inches.",
   );
   // As millimetres the cover is 14 × 9.25 mm: refused, naming the outline it read.
-  await expect(dana.getByRole("alert")).toContainText(
+  await expect(dana.getByTestId("import-refusal")).toContainText(
     "closed chain of 4 ARC + 4 LINE on layer 0, 14 × 9.25 mm",
   );
   await expect(dana.getByRole("button", { name: "Create design" })).toBeDisabled();

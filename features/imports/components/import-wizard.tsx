@@ -121,7 +121,7 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
           <p className="text-body text-ink-500">Choose a DXF drawing to see what will be imported.</p>
         ) : null}
         {prepared && !prepared.ok ? (
-          <p className="text-body text-verdict-fail" role="alert">
+          <p className="text-body text-verdict-fail" role="alert" data-testid="import-refusal">
             {prepared.message}
           </p>
         ) : null}

@@ -28,6 +28,8 @@ export function CsvImportPanel({ kind, endpoint }: { kind: LibraryKind; endpoint
   const [preview, setPreview] = useState<Preview | null>(null);
   const [status, setStatus] = useState("");
   const [busy, setBusy] = useState(false);
+  // Remounts the file input after a commit, so choosing the same file again is a new choice.
+  const [inputKey, setInputKey] = useState(0);
 
   async function send(step: "preview" | "commit", body: File, m: CsvImportMode): Promise<Preview> {
     const res = await fetch(`${endpoint}?step=${step}&mode=${m}`, {
@@ -61,6 +63,7 @@ export function CsvImportPanel({ kind, endpoint }: { kind: LibraryKind; endpoint
         `Imported from ${file.name}: ${r.plan?.added ?? 0} added, ${r.plan?.updated ?? 0} updated (${r.imported} Stockroom row(s)).`,
       );
       setFile(null);
+      setInputKey((k) => k + 1);
       router.refresh();
     } else setStatus(r.message ?? "Nothing was imported.");
   }
@@ -119,6 +122,7 @@ export function CsvImportPanel({ kind, endpoint }: { kind: LibraryKind; endpoint
       <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
         CSV file
         <input
+          key={inputKey}
           type="file"
           accept=".csv,text/csv"
           onChange={(e) => {
