@@ -2,7 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/index";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
 import { createDesignFromFiles, fileBytes } from "./mutations";
 

@@ -4,7 +4,7 @@ import { z } from "zod";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { createDesign } from "@/features/designs/mutations";
 import type { Database } from "@/db/types";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { prepareImport } from "./model/prepare-import";
 import { MAX_IMPORT_FILE_BYTES, importDesignSchema } from "./schema";
 

@@ -32,6 +32,38 @@ export interface SkippedEntity extends Origin {
   reason: string;
 }
 
+/** The members of the entities read here (dxf-parser types them per entity class; our readers add some). */
+interface EntityFields {
+  inPaperSpace?: boolean;
+  center?: Pt;
+  radius?: number;
+  startAngle?: number;
+  endAngle?: number;
+  vertices?: BulgeVertex[];
+  shape?: boolean;
+  is3dPolygonMesh?: boolean;
+  isPolyfaceMesh?: boolean;
+  majorAxisEndPoint?: Pt;
+  axisRatio?: number;
+  controlPoints?: Pt[];
+  fitPoints?: Pt[];
+  knotValues?: number[];
+  weights?: number[];
+  degreeOfSplineCurve?: number;
+  closed?: boolean;
+  name?: string;
+  position?: Pt;
+  xScale?: number;
+  yScale?: number;
+  rotation?: number;
+  columnCount?: number;
+  rowCount?: number;
+  columnSpacing?: number;
+  rowSpacing?: number;
+  extrusionDirectionZ?: number;
+  extrusionDirection?: { z?: number };
+}
+
 /** 2-D affine map x' = a·x + c·y + e, y' = b·x + d·y + f. */
 interface Affine {
   a: number;
@@ -74,7 +106,7 @@ function similarityScale(m: Affine): number | null {
 const OCS_TYPES = new Set(["CIRCLE", "ARC", "LWPOLYLINE", "POLYLINE", "INSERT"]);
 
 /** An OCS entity whose extrusion points down (a mirrored object in CAD) has its x axis flipped. */
-function ocsFlip(type: string, any: Record<string, any>): Affine {
+function ocsFlip(type: string, any: EntityFields): Affine {
   if (!OCS_TYPES.has(type)) return IDENTITY;
   const z = any.extrusionDirectionZ ?? any.extrusionDirection?.z ?? 1;
   return z < 0 ? { ...IDENTITY, a: -1 } : IDENTITY;
@@ -124,7 +156,7 @@ function bulgePolyline(vertices: BulgeVertex[], closed: boolean): Pt[] {
   return out;
 }
 
-function sampleEllipse(any: Record<string, any>): { points: Pt[]; closed: boolean } | null {
+function sampleEllipse(any: EntityFields): { points: Pt[]; closed: boolean } | null {
   const c = any.center;
   const m = any.majorAxisEndPoint;
   const ratio = Number(any.axisRatio);
@@ -147,7 +179,7 @@ function sampleEllipse(any: Record<string, any>): { points: Pt[]; closed: boolea
 }
 
 /** A NURBS curve by de Boor's algorithm over its knot vector (weights default to 1). */
-function sampleSpline(any: Record<string, any>): { points: Pt[]; closed: boolean } | null {
+function sampleSpline(any: EntityFields): { points: Pt[]; closed: boolean } | null {
   const ctrl = (any.controlPoints ?? []) as Pt[];
   const p = Number(any.degreeOfSplineCurve ?? 3);
   const knots = (any.knotValues ?? []) as number[];
@@ -157,7 +189,7 @@ function sampleSpline(any: Record<string, any>): { points: Pt[]; closed: boolean
     const closed = Boolean(any.closed) || dist(fit[0], fit[fit.length - 1]) < 1e-9;
     return { points: closed && fit.length > 2 ? fit.slice(0, -1) : fit, closed };
   }
-  const w = ((any.weights as number[] | undefined) ?? []).length === ctrl.length ? any.weights : null;
+  const w = (any.weights ?? []).length === ctrl.length ? any.weights! : null;
   const lo = knots[p];
   const hi = knots[ctrl.length];
   const spans = Math.max(1, ctrl.length - p);
@@ -212,7 +244,7 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
 
   const walk = (entities: IEntity[], m: Affine, insertLayer: string | null, depth: number, via: boolean) => {
     for (const e of entities) {
-      const any = e as unknown as Record<string, any>;
+      const any = e as unknown as EntityFields;
       if (any.inPaperSpace) continue;
       const rawLayer = e.layer ?? "0";
       const layer = insertLayer !== null && rawLayer === "0" ? insertLayer : rawLayer;
@@ -231,7 +263,9 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
       };
       switch (e.type) {
         case "CIRCLE": {
-          if (!(any.radius > 0) || !any.center) {
+          const c = any.center;
+          const radius = any.radius ?? 0;
+          if (!(radius > 0) || !c) {
             skip("no radius");
             break;
           }
@@ -239,32 +273,34 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
           if (s !== null)
             primitives.push({
               kind: "circle",
-              ...centreOf(mm, { cx: any.center.x, cy: any.center.y }),
-              r: any.radius * s,
+              ...centreOf(mm, { cx: c.x, cy: c.y }),
+              r: radius * s,
               ...origin,
             });
           else {
-            const pts = sampleArc(any.center.x, any.center.y, any.radius, 0, 2 * Math.PI).slice(0, -1);
+            const pts = sampleArc(c.x, c.y, radius, 0, 2 * Math.PI).slice(0, -1);
             path(pts, true);
           }
           break;
         }
         case "ARC": {
-          if (!(any.radius > 0) || !any.center) {
+          const c = any.center;
+          const radius = any.radius ?? 0;
+          if (!(radius > 0) || !c) {
             skip("no radius");
             break;
           }
           let sweep = (any.endAngle ?? 0) - (any.startAngle ?? 0);
           while (sweep <= 0) sweep += 2 * Math.PI;
-          path(sampleArc(any.center.x, any.center.y, any.radius, any.startAngle ?? 0, sweep), false, {
-            cx: any.center.x,
-            cy: any.center.y,
-            r: any.radius,
+          path(sampleArc(c.x, c.y, radius, any.startAngle ?? 0, sweep), false, {
+            cx: c.x,
+            cy: c.y,
+            r: radius,
           });
           break;
         }
         case "LINE": {
-          const v = (any.vertices ?? []) as Pt[];
+          const v: Pt[] = any.vertices ?? [];
           if (v.length < 2 || dist(v[0], v[1]) === 0) skip("zero length");
           else path([v[0], v[1]], false);
           break;
@@ -275,9 +311,7 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
             skip("a mesh, not a plane outline");
             break;
           }
-          const vs = ((any.vertices ?? []) as BulgeVertex[]).filter(
-            (v) => Number.isFinite(v.x) && Number.isFinite(v.y),
-          );
+          const vs = (any.vertices ?? []).filter((v) => Number.isFinite(v.x) && Number.isFinite(v.y));
           if (vs.length < 2) {
             skip("fewer than two vertices");
             break;
@@ -302,7 +336,7 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
           break;
         }
         case "INSERT": {
-          const block = blocks[any.name];
+          const block = blocks[any.name ?? ""];
           if (!block) {
             skip(`block "${String(any.name)}" is not in the file`);
             break;
@@ -381,7 +415,7 @@ export function unreadEntities(text: string, read: ReadonlySet<string>): Skipped
 
 interface Group {
   code: number;
-  value: any;
+  value: string & number & boolean;
 }
 interface Scanner {
   next(): Group;
@@ -395,8 +429,19 @@ interface Scanner {
  */
 class SplineReader {
   ForEntityName = "SPLINE";
-  parseEntity(scanner: Scanner, curr: Group): Record<string, unknown> {
-    const e: Record<string, any> = {
+  parseEntity(scanner: Scanner, curr: Group): object {
+    const e: EntityFields & {
+      type: string;
+      handle?: string;
+      layer?: string;
+      periodic?: boolean;
+      normalVector?: Pt;
+    } & {
+      controlPoints: Pt[];
+      fitPoints: Pt[];
+      knotValues: number[];
+      weights: number[];
+    } = {
       type: curr.value,
       controlPoints: [],
       fitPoints: [],
@@ -456,8 +501,8 @@ class SplineReader {
 /** dxf-parser's CIRCLE reader drops the extrusion (groups 210–230), so a mirrored circle lands on the wrong side. */
 class CircleReader {
   ForEntityName = "CIRCLE";
-  parseEntity(scanner: Scanner, curr: Group): Record<string, unknown> {
-    const e: Record<string, any> = { type: curr.value };
+  parseEntity(scanner: Scanner, curr: Group): object {
+    const e: EntityFields & { type: string; handle?: string; layer?: string } = { type: curr.value };
     for (curr = scanner.next(); !scanner.isEOF() && curr.code !== 0; curr = scanner.next()) {
       switch (curr.code) {
         case 5:

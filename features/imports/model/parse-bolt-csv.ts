@@ -10,7 +10,7 @@ import {
   describeCsvFormat,
   normaliseNumberCell,
   readSpreadsheetCsv,
-} from "./spreadsheet-csv";
+} from "@/features/forms/spreadsheet-csv";
 
 export interface CsvRowError {
   line: number;

@@ -10,11 +10,7 @@ import {
   type FlangeInput,
   type GasketInput,
 } from "../schema";
-import {
-  describeCsvFormat,
-  normaliseNumberCell,
-  readSpreadsheetCsv,
-} from "@/features/imports/model/spreadsheet-csv";
+import { describeCsvFormat, normaliseNumberCell, readSpreadsheetCsv } from "@/features/forms/spreadsheet-csv";
 import { CSV_COLUMNS, REQUIRED_COLUMNS, TEXT_COLUMNS } from "./csv-columns";
 import type { BoltingChoiceDto, FlangeTemplateChoiceDto, GasketChoiceDto, LibraryKind } from "./dto";
 

@@ -14,7 +14,7 @@ import {
   readSpreadsheetCsv,
   sniffDelimiter,
   unneutralise,
-} from "@/features/imports/model/spreadsheet-csv";
+} from "@/features/forms/spreadsheet-csv";
 import { parseLibraryCsv } from "@/features/library/model/library-csv";
 
 // CSV as spreadsheet programs write it. Fixture files come from tests/fixtures/intake/
