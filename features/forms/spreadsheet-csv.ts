@@ -6,8 +6,9 @@
 // - Delimiter: `,`, `;` or tab, from the header line (Excel's `sep=` first line is honoured). With
 //   `;` or tab, decimal commas in number cells are read ("12,5" → 12.5, "1.234,5" → 1234.5).
 // - Cells the writers neutralised against formula injection (a leading `'` before = + - @ tab CR)
-//   are read back to their original text.
+//   are read back to their original text (`restoreCsvText`, the exact inverse of our writers).
 import { parse } from "csv-parse/sync";
+import { restoreCsvText } from "./csv-cells";
 
 export type CsvEncoding = "UTF-8" | "UTF-8 with BOM" | "UTF-16 LE" | "UTF-16 BE" | "Windows-1252";
 export type CsvDelimiter = "," | ";" | "\t";
@@ -147,12 +148,8 @@ export function sniffDelimiter(text: string): { delimiter: CsvDelimiter; skipFir
   return { delimiter: best.delimiter, skipFirstLine: false };
 }
 
-const NEUTRALISED = /^'[=+\-@\t\r]/;
-
-/** A cell as it was before a writer prefixed `'` to keep a spreadsheet from running it as a formula. */
-export function unneutralise(cell: string): string {
-  return NEUTRALISED.test(cell) ? cell.slice(1) : cell;
-}
+/** A cell as it was before our writers prefixed `'` against formula injection (`restoreCsvText`). */
+export const unneutralise = restoreCsvText;
 
 /**
  * A number cell in the file's convention to the plain form `Number()` reads: with decimal commas

@@ -2,6 +2,7 @@ import "server-only";
 import { getDb } from "@/db/index";
 import type { LibraryKind } from "@/db/tables/library";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { readBodyWithLimit } from "@/server/http/request-body";
 import { KIND_LABELS } from "./model/csv-columns";
 import { boltingToCsv, flangesToCsv, gasketsToCsv, parseLibraryCsv } from "./model/library-csv";
 import { importLibraryCsv, planLibraryImport } from "./mutations";
@@ -64,11 +65,8 @@ export async function importCsv(request: Request, kind: LibraryKind): Promise<Re
   if (step !== "preview" && step !== "commit") return jsonError(400, "Say ?step=preview or ?step=commit.");
   const mode = params.get("mode") ?? "add";
   if (mode !== "add" && mode !== "update") return jsonError(400, "Say &mode=add or &mode=update.");
-  const declared = Number(request.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > MAX_CSV_BYTES)
-    return jsonError(413, "The CSV file is larger than 2 MB; split it.");
-  const bytes = new Uint8Array(await request.arrayBuffer());
-  if (bytes.length > MAX_CSV_BYTES) return jsonError(413, "The CSV file is larger than 2 MB; split it.");
+  const bytes = await readBodyWithLimit(request, MAX_CSV_BYTES);
+  if (bytes === null) return jsonError(413, "The CSV file is larger than 2 MB; split it.");
   if (step === "preview") {
     const parsed = parseLibraryCsv(kind, bytes);
     if (!parsed.ok)

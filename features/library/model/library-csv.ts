@@ -1,7 +1,7 @@
 // Parsing and writing Stockroom CSV files. Pure: the preview and the commit both call
 // `parseLibraryCsv`, so what the user previewed is exactly what is validated again on commit.
-import { stringify } from "csv-stringify/sync";
 import { z } from "zod";
+import { stringifyCsv } from "@/features/forms/csv-cells";
 import {
   boltingInputSchema,
   flangeInputSchema,
@@ -174,32 +174,31 @@ function duplicateKey(kind: LibraryKind, input: GasketInput | BoltingInput | Fla
   return (input as GasketInput).name.toLowerCase();
 }
 
-const cell = (v: number | string | null | undefined) => (v === null || v === undefined ? "" : String(v));
-
 /**
  * "plain": UTF-8 without BOM, LF line ends (for scripts and version control). "spreadsheet": UTF-8
  * with BOM and CRLF, which spreadsheet programs open directly with °, µ and other signs intact.
+ * Both neutralise formula cells (`stringifyCsv`); the intake reads them back unchanged.
  */
 export type CsvVariant = "plain" | "spreadsheet";
 const variantOptions = (variant: CsvVariant) =>
   variant === "spreadsheet" ? { bom: true, record_delimiter: "windows" as const } : {};
 
 export function gasketsToCsv(rows: GasketChoiceDto[], variant: CsvVariant = "plain"): string {
-  return stringify(
+  return stringifyCsv(
     rows.map((g) => [
       g.name,
       g.gasketType,
       g.m,
       g.yMpa,
-      cell(g.tightness["L1.0"]?.qMinMpa),
-      cell(g.tightness["L1.0"]?.qsMinMpa),
-      cell(g.tightness["L0.1"]?.qMinMpa),
-      cell(g.tightness["L0.1"]?.qsMinMpa),
-      cell(g.tightness["L0.01"]?.qMinMpa),
-      cell(g.tightness["L0.01"]?.qsMinMpa),
-      cell(g.qsMaxMpa),
-      cell(g.pqr),
-      cell(g.egMpa),
+      g.tightness["L1.0"]?.qMinMpa,
+      g.tightness["L1.0"]?.qsMinMpa,
+      g.tightness["L0.1"]?.qMinMpa,
+      g.tightness["L0.1"]?.qsMinMpa,
+      g.tightness["L0.01"]?.qMinMpa,
+      g.tightness["L0.01"]?.qsMinMpa,
+      g.qsMaxMpa,
+      g.pqr,
+      g.egMpa,
       g.modulusMpa,
       g.thicknessMm,
       g.source,
@@ -210,16 +209,16 @@ export function gasketsToCsv(rows: GasketChoiceDto[], variant: CsvVariant = "pla
 }
 
 export function boltingToCsv(rows: BoltingChoiceDto[], variant: CsvVariant = "plain"): string {
-  return stringify(
+  return stringifyCsv(
     rows.flatMap((b) =>
       b.ranges.map((r) => [
         b.name,
         b.modulusMpa,
         r.maxDiameterMm,
-        cell(r.proofMpa),
+        r.proofMpa,
         r.yieldMpa,
         r.tensileMpa,
-        cell(r.allowableMpa),
+        r.allowableMpa,
         b.source,
         b.edition,
       ]),
@@ -229,13 +228,13 @@ export function boltingToCsv(rows: BoltingChoiceDto[], variant: CsvVariant = "pl
 }
 
 export function flangesToCsv(rows: FlangeTemplateChoiceDto[], variant: CsvVariant = "plain"): string {
-  return stringify(
+  return stringifyCsv(
     rows.map((f) => [
       f.standard,
       f.pressureClass,
       f.size,
       f.outsideDiameterMm,
-      cell(f.boreDiameterMm),
+      f.boreDiameterMm,
       f.boltCircleDiameterMm,
       f.boltCount,
       f.boltDesignation,
