@@ -85,12 +85,6 @@ export function decodeCsvBytes(
     encoding = bytes[0] === 0xff ? "UTF-16 LE" : "UTF-16 BE";
     text = new TextDecoder(bytes[0] === 0xff ? "utf-16le" : "utf-16be").decode(bytes.subarray(2));
   } else {
-    if (bytes.includes(0))
-      return {
-        ok: false,
-        message:
-          "The file holds zero bytes: it is not a text CSV (UTF-16 without its byte-order mark, or a binary file). Save it as CSV UTF-8.",
-      };
     try {
       text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
       encoding = "UTF-8";

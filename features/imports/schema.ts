@@ -9,8 +9,7 @@ export const importDesignSchema = z.object({
   /** The unit of a DXF that states none, as switched on the Drawing intake. */
   dxfUnit: z.enum(["mm", "in"]).optional(),
   /** The layers switched on, as a JSON array of names; absent: the default layers. */
-  layersOn: z
-    .string()
+  layersOn: plainText()
     .max(200_000)
     .optional()
     .transform((v, ctx) => {
