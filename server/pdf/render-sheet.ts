@@ -9,6 +9,8 @@ import { drawFlange } from "./draw-flange";
 import { drawProfileChart } from "./draw-profile-chart";
 import { drawKeyValues, drawTable, type Cell } from "./draw-table";
 import { jointDataItems } from "./joint-data";
+import { flangeSummaryLines } from "@/features/analysis/flange-summary";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import {
   groupChecks,
   readResultView,
@@ -176,6 +178,23 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
         g.source || "—",
       ];
     }),
+  );
+}
+
+function flangeSection(ctx: SheetContext): void {
+  const result = (ctx.input.result ?? null) as JointAnalysis | null;
+  heading(
+    ctx,
+    "Flange",
+    "ASME VIII-1 Appendix 2 flange and UG-34 cover design as stored; the rules are code-specific and a competent engineer signs them off",
+  );
+  drawTable(
+    ctx,
+    [
+      { header: "Quantity", width: 2.2, wrap: true },
+      { header: "Value", width: 5.2, wrap: true },
+    ],
+    flangeSummaryLines(result, ctx.input.units).map((l): Cell[] => [l.label, l.value]),
   );
 }
 
@@ -396,6 +415,7 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
   boltTable(ctx, rows);
   await progress(0.5);
   checkTable(ctx, view);
+  flangeSection(ctx);
   justifications(ctx, view);
   profileChart(ctx, view, rows);
   await progress(0.7);
