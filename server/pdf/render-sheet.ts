@@ -35,6 +35,7 @@ const STATUS_STYLE: Record<SheetStatus, { text: string; color: string; fill: str
   warn: { text: "WARN", color: C.warn, fill: C.warnBg },
   fail: { text: "FAIL", color: C.fail, fill: C.failBg },
   na: { text: "N/A", color: C.na, fill: C.naBg },
+  rated: { text: "RATED", color: C.brass700, fill: C.brass50 },
 };
 
 /**
@@ -136,7 +137,7 @@ function boltTable(ctx: SheetContext, rows: BoltRow[]): void {
 
 function subjectsNote(g: SheetCheckGroup, limit = 14): string {
   if (g.count === 1) return g.boltIds.length ? ` (${g.boltIds.join(", ")})` : "";
-  const tally = (["fail", "warn", "pass", "na"] as const)
+  const tally = (["fail", "warn", "rated", "pass", "na"] as const)
     .map((st) => [st, g.statusCounts[st]] as const)
     .filter(([, k]) => k > 0)
     .map(([st, k]) => `${k} ${STATUS_STYLE[st].text.toLowerCase()}`)

@@ -22,6 +22,7 @@ import {
   type Appendix2FlangeKind,
   type Appendix2FlangeResult,
 } from "./appendix2-flange";
+import { ratingChecks, standardFlangeRating, type StandardRating } from "./rating";
 import { coverThicknessMm, getCoverSketch, nonCircularZ, type CoverGeometry } from "./flat-cover";
 
 export interface ResolvedAllowable {
@@ -51,6 +52,8 @@ export interface FlangeDesignResult {
   } | null;
   coverReason: string | null;
   hydrotest: { suggestedMpa: number | null; enteredMpa: number | null; source: string };
+  /** Rating of a standard flange (template row), null for a custom flange. */
+  rating: StandardRating | null;
 }
 
 const APP2 = "ASME VIII-1 Appendix 2";
@@ -390,6 +393,7 @@ export function computeFlangeDesign(
       ? flangeAllow.ambientMpa / flangeAllow.designMpa
       : null;
   const suggested = ratio === null ? null : 1.3 * d.loads.designPressureMpa * ratio;
+  const rating = standardFlangeRating(d);
   return {
     result: {
       inputsEntered: !!inputs && inputs.kind !== "not-entered",
@@ -405,7 +409,8 @@ export function computeFlangeDesign(
             ? `${UG99}; needs the flange material's allowables (design pressure taken as MAWP)`
             : `${UG99}; design pressure taken as MAWP, stress ratio ${ratio!.toFixed(3)} from ${flangeAllow.source} — a suggestion, the test pressure is the designer's to enter`,
       },
+      rating,
     },
-    checks: [...a2.checks, ...cover.checks],
+    checks: [...ratingChecks(rating, d.loads.designPressureMpa), ...a2.checks, ...cover.checks],
   };
 }
