@@ -5,7 +5,7 @@
  */
 import type { JointAnalysis } from "./core/analyze";
 import type { UnitSystem } from "./core/design";
-import { formatLength, formatStress, nmmToNm, nmmToFtLb } from "./core/units";
+import { formatForce, formatLength, formatStress, nmmToNm, nmmToFtLb } from "./core/units";
 
 export interface FlangeSummaryLine {
   label: string;
@@ -71,6 +71,14 @@ export function flangeSummaryLines(
     });
   } else if (f.coverReason && f.coverReason !== "No cover layer.")
     out.push({ label: "UG-34 cover", value: f.coverReason });
+  const t = f.thermal;
+  if (t)
+    out.push({
+      label: `Bolt load at ${t.temperatureC} °C (min preload)`,
+      value: `${formatForce(t.minPreloadN, units)} → ${formatForce(t.minAtTemperatureN, units)} per bolt (differential expansion ${L(t.interferenceChangeMm)}, stiffness × ${t.stiffnessRatio.toFixed(3)}; ${t.source})`,
+    });
+  else if (f.thermalReason)
+    out.push({ label: "Operating case at design temperature", value: f.thermalReason });
   const h = f.hydrotest;
   out.push({
     label: "Hydrostatic test pressure",

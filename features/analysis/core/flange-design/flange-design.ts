@@ -23,6 +23,7 @@ import {
   type Appendix2FlangeResult,
 } from "./appendix2-flange";
 import { ratingChecks, standardFlangeRating, type StandardRating } from "./rating";
+import { computeThermalCase, type ThermalCase } from "./thermal";
 import { coverThicknessMm, getCoverSketch, nonCircularZ, type CoverGeometry } from "./flat-cover";
 
 export interface ResolvedAllowable {
@@ -54,6 +55,9 @@ export interface FlangeDesignResult {
   hydrotest: { suggestedMpa: number | null; enteredMpa: number | null; source: string };
   /** Rating of a standard flange (template row), null for a custom flange. */
   rating: StandardRating | null;
+  /** Operating case at design temperature (differential expansion, moduli by temperature). */
+  thermal: ThermalCase | null;
+  thermalReason: string | null;
 }
 
 const APP2 = "ASME VIII-1 Appendix 2";
@@ -394,6 +398,7 @@ export function computeFlangeDesign(
       : null;
   const suggested = ratio === null ? null : 1.3 * d.loads.designPressureMpa * ratio;
   const rating = standardFlangeRating(d);
+  const thermal = computeThermalCase(model, asme);
   return {
     result: {
       inputsEntered: !!inputs && inputs.kind !== "not-entered",
@@ -410,7 +415,14 @@ export function computeFlangeDesign(
             : `${UG99}; design pressure taken as MAWP, stress ratio ${ratio!.toFixed(3)} from ${flangeAllow.source} — a suggestion, the test pressure is the designer's to enter`,
       },
       rating,
+      thermal: thermal.result,
+      thermalReason: thermal.reason,
     },
-    checks: [...ratingChecks(rating, d.loads.designPressureMpa), ...a2.checks, ...cover.checks],
+    checks: [
+      ...ratingChecks(rating, d.loads.designPressureMpa),
+      ...a2.checks,
+      ...cover.checks,
+      ...thermal.checks,
+    ],
   };
 }
