@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { renderSpacingSheet } from "@/server/pdf/render-sheet";
+import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { analyse, loadExample, pdfToText, sheetInputFor } from "./fixtures";
 
 // The bolt-spacing sheet's "Flange" section, read back with poppler (pdftotext).
