@@ -83,7 +83,7 @@ const fastenerSchema = z.object({
   enteredAllowable: z
     .object({
       valueMpa: positive(),
-      source: z.string().trim().min(1, { message: "name the source" }).max(300),
+      source: plainText().trim().min(1, { message: "name the source" }).max(300),
     })
     .nullable()
     .optional(),
@@ -92,23 +92,23 @@ const fastenerSchema = z.object({
 const enteredAllowableSchema = z.object({
   designMpa: positive(),
   ambientMpa: positive(),
-  source: z.string().trim().min(1, { message: "name the source" }).max(300),
+  source: plainText().trim().min(1, { message: "name the source" }).max(300),
 });
 
 export const flangeDesignSchema = z.object({
   kind: z.enum(["integral-hub", "integral-no-hub", "ring-loose", "not-entered"]),
   hub: z.object({ g0Mm: positive(), g1Mm: positive(), hMm: nonNegative() }).nullable().optional(),
-  flangeMaterialId: z.string().max(60).nullable().optional(),
-  coverMaterialId: z.string().max(60).nullable().optional(),
+  flangeMaterialId: plainText().max(60).nullable().optional(),
+  coverMaterialId: plainText().max(60).nullable().optional(),
   flangeAllowable: enteredAllowableSchema.nullable().optional(),
   coverAllowable: enteredAllowableSchema.nullable().optional(),
   coverSketch: z
     .discriminatedUnion("kind", [
-      z.object({ kind: z.literal("catalogue"), id: z.string().min(1).max(60) }),
+      z.object({ kind: z.literal("catalogue"), id: plainText().min(1).max(60) }),
       z.object({
         kind: z.literal("entered"),
         c: z.number().finite().positive().max(1),
-        source: z.string().trim().min(1, { message: "name the source" }).max(300),
+        source: plainText().trim().min(1, { message: "name the source" }).max(300),
       }),
     ])
     .nullable()
