@@ -1,68 +1,33 @@
 "use server";
 
 import { redirect } from "next/navigation";
-import { z } from "zod";
 import { getDb } from "@/db/index";
-import { createDesign } from "@/features/designs/mutations";
 import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
-import { prepareImport } from "./model/prepare-import";
-import { MAX_IMPORT_FILE_BYTES, importDesignSchema } from "./schema";
+import { createDesignFromFiles, fileBytes } from "./mutations";
 
-// Creates a new design from a DXF (and optionally a CSV of bolt positions). The server parses the
-// files itself: the browser's preview is a courtesy, never the source of the stored geometry.
-async function fileText(
-  value: FormDataEntryValue | null,
-  label: string,
-): Promise<{ text: string | null; error?: string }> {
-  if (!(value instanceof File) || value.size === 0) return { text: null };
-  if (value.size > MAX_IMPORT_FILE_BYTES)
-    return { text: null, error: `The ${label} file is larger than 1.9 MB.` };
-  return { text: await value.text() };
-}
-
+// The Drawing intake's "Create design": files and fields from the form, parsed again on the server.
 export async function importDesignAction(
   _prev: ActionResult<{ designId: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ designId: string }>> {
   const viewer = await requireViewer();
   if (!viewer.roles.includes("designer")) return { ok: false, message: "Only designers can create designs." };
-  const parsed = importDesignSchema.safeParse({
-    name: formData.get("name") ?? "",
-    equipmentTag: formData.get("equipmentTag") ?? "",
-    csvUnit: formData.get("csvUnit") ?? "mm",
-  });
-  if (!parsed.success)
-    return {
-      ok: false,
-      message: "Check the highlighted fields.",
-      fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
-    };
-  const dxf = await fileText(formData.get("dxf"), "DXF");
-  const csv = await fileText(formData.get("csv"), "CSV");
-  if (dxf.error || !dxf.text)
-    return {
-      ok: false,
-      message: dxf.error ?? "Choose a DXF drawing.",
-      fieldErrors: { dxf: [dxf.error ?? "Choose a DXF drawing."] },
-    };
+  const dxf = await fileBytes(formData.get("dxf"), "DXF");
+  const csv = await fileBytes(formData.get("csv"), "CSV");
+  if (dxf.error) return { ok: false, message: dxf.error, fieldErrors: { dxf: [dxf.error] } };
   if (csv.error) return { ok: false, message: csv.error, fieldErrors: { csv: [csv.error] } };
-  const prepared = prepareImport({
-    dxfText: dxf.text,
-    csvText: csv.text,
-    csvUnit: parsed.data.csvUnit,
-    name: parsed.data.name,
-    units: viewer.unitSystem,
-    equipmentTag: parsed.data.equipmentTag,
+  const result = await createDesignFromFiles(getDb(), viewer, {
+    fields: {
+      name: formData.get("name") ?? "",
+      equipmentTag: formData.get("equipmentTag") ?? "",
+      csvUnit: formData.get("csvUnit") ?? "mm",
+      dxfUnit: formData.get("dxfUnit") || undefined,
+      layersOn: formData.get("layersOn") || undefined,
+    },
+    dxf: dxf.bytes,
+    csv: csv.bytes,
   });
-  if (!prepared.ok)
-    return { ok: false, message: prepared.message, fieldErrors: { [prepared.field]: [prepared.message] } };
-  const { designId } = await createDesign(getDb(), {
-    organizationId: viewer.organizationId,
-    ownerId: viewer.userId,
-    name: parsed.data.name,
-    equipmentTag: parsed.data.equipmentTag,
-    document: prepared.built.design,
-  });
-  redirect(`/designs/${designId}`);
+  if (!result.ok) return result;
+  redirect(`/designs/${result.data.designId}`);
 }

@@ -8,6 +8,9 @@ import {
   describeCsvError,
   parseLibraryCsv,
   type CsvFieldError,
+  type CsvImportMode,
+  type CsvImportPlan,
+  type CsvPlanItem,
   type CsvPreviewRow,
 } from "./model/library-csv";
 import { toBoltingDto, toFlangeDto, toGasketDto, type Executor } from "./queries";
@@ -229,8 +232,126 @@ export async function setBuiltinHidden(
 }
 
 export type CsvImportResult =
-  | { ok: true; imported: number; rows: CsvPreviewRow[] }
+  | { ok: true; imported: number; rows: CsvPreviewRow[]; plan: CsvImportPlan }
   | { ok: false; message: string; rows: CsvPreviewRow[]; errors: CsvFieldError[] };
+
+type Parsed = Extract<ReturnType<typeof parseLibraryCsv>, { ok: true }>;
+
+function rowKey(kind: LibraryKind, input: GasketInput | BoltingInput | FlangeInput): string {
+  if (kind === "flange") {
+    const f = input as FlangeInput;
+    return `${f.standard}|${f.pressure_class}|${f.size}`.toLowerCase();
+  }
+  return (input as GasketInput | BoltingInput).name.toLowerCase();
+}
+
+function rowLabel(kind: LibraryKind, input: GasketInput | BoltingInput | FlangeInput): string {
+  if (kind === "flange") {
+    const f = input as FlangeInput;
+    return `${f.standard} ${f.pressure_class} ${f.size}`;
+  }
+  return (input as GasketInput | BoltingInput).name;
+}
+
+async function existingKeys(
+  db: Executor,
+  organizationId: string,
+  kind: LibraryKind,
+): Promise<Map<string, string>> {
+  if (kind === "flange") {
+    const rows = await db
+      .selectFrom("library_flange_templates")
+      .select(["id", "standard", "pressure_class", "size"])
+      .where("organization_id", "=", organizationId)
+      .execute();
+    return new Map(rows.map((r) => [`${r.standard}|${r.pressure_class}|${r.size}`.toLowerCase(), r.id]));
+  }
+  const rows = await db
+    .selectFrom(kind === "gasket" ? "library_gaskets" : "library_bolting")
+    .select(["id", "name"])
+    .where("organization_id", "=", organizationId)
+    .execute();
+  return new Map(rows.map((r) => [r.name.toLowerCase(), r.id]));
+}
+
+const lineList = (lines: number[]) =>
+  lines.length === 1
+    ? `line ${lines[0]}`
+    : `lines ${lines.slice(0, -1).join(", ")} and ${lines[lines.length - 1]}`;
+
+/**
+ * The preview's plan: which Stockroom rows the file adds, which it updates, and which bolting lines
+ * merge into one material. In "add" mode a name already in the Stockroom is a row problem (the
+ * preview shows it, so the commit never meets it first).
+ */
+export async function planLibraryImport(
+  db: Executor,
+  organizationId: string,
+  kind: LibraryKind,
+  parsed: Parsed,
+  mode: CsvImportMode,
+): Promise<
+  | { ok: true; plan: CsvImportPlan; groups: { items: Parsed["inputs"]; rowId: string | null }[] }
+  | { ok: false; message: string; rows: CsvPreviewRow[]; errors: CsvFieldError[] }
+> {
+  const existing = await existingKeys(db, organizationId, kind);
+  const groups = new Map<string, Parsed["inputs"]>();
+  for (const item of parsed.inputs) {
+    const key = rowKey(kind, item.input);
+    groups.set(key, [...(groups.get(key) ?? []), item]);
+  }
+  const errors: CsvFieldError[] = [];
+  const out: { items: Parsed["inputs"]; rowId: string | null }[] = [];
+  const items: CsvPlanItem[] = [];
+  const merged: CsvImportPlan["merged"] = [];
+  for (const [key, group] of groups) {
+    const rowId = existing.get(key) ?? null;
+    const label = rowLabel(kind, group[0].input);
+    const lines = group.map((g) => g.line);
+    if (rowId && mode === "add") {
+      errors.push({
+        line: lines[0],
+        field: DUPLICATE[kind].field,
+        message: `${DUPLICATE[kind].message}; choose "update rows with the same name" to replace it`,
+      });
+      continue;
+    }
+    out.push({ items: group, rowId });
+    items.push({ label, lines, action: rowId ? "update" : "add" });
+    if (group.length > 1) merged.push({ label, lines });
+  }
+  if (errors.length > 0) {
+    const byLine = new Map(errors.map((e) => [e.line, e]));
+    const rows = parsed.rows.map((r) => (byLine.has(r.line) ? { ...r, errors: [byLine.get(r.line)!] } : r));
+    const more = errors.length > 1 ? ` (and ${errors.length - 1} more)` : "";
+    return {
+      ok: false,
+      message: `${describeCsvError(errors[0])}${more}. Nothing was imported.`,
+      rows,
+      errors,
+    };
+  }
+  const added = items.filter((i) => i.action === "add").length;
+  const updated = items.length - added;
+  const noun = { gasket: "gasket", bolting: "bolting material", flange: "flange template" }[kind];
+  const parts = [`${added} ${noun}${added === 1 ? "" : "s"} to add`, `${updated} to update`];
+  const mergeText = merged.map(
+    (m) => `${lineList(m.lines)} (${m.label}) become 1 ${noun} with ${m.lines.length} size ranges`,
+  );
+  return {
+    ok: true,
+    groups: out,
+    plan: {
+      mode,
+      format: parsed.format,
+      added,
+      updated,
+      merged,
+      items,
+      summary: `${parsed.inputs.length} line${parsed.inputs.length === 1 ? "" : "s"} read (${parsed.format}): ${parts.join(", ")}${mergeText.length ? `; ${mergeText.join("; ")}` : ""}.`,
+    },
+  };
+}
 
 class RowRefused extends Error {
   constructor(readonly fieldError: CsvFieldError) {
@@ -239,81 +360,59 @@ class RowRefused extends Error {
 }
 
 /**
- * Validates the whole file, then writes every row in one transaction: one bad row (invalid
- * value, or a name already in the Stockroom) and nothing is written. The message names the
- * file line and the column.
+ * Validates the whole file and plans it against the Stockroom, then writes every row in one
+ * transaction: one bad row (invalid value, or in "add" mode a name already in the Stockroom) and
+ * nothing is written. The message names the file line and the column.
  */
 export async function importLibraryCsv(
   db: Executor,
   organizationId: string,
   userId: string,
   kind: LibraryKind,
-  text: string,
+  input: Uint8Array | string,
+  mode: CsvImportMode = "add",
 ): Promise<CsvImportResult> {
-  const parsed = parseLibraryCsv(kind, text);
+  const parsed = parseLibraryCsv(kind, input);
   if (!parsed.ok) return parsed;
   const write = async (trx: Executor) => {
-    const insert = async (line: number, run: () => Promise<unknown>) => {
+    const planned = await planLibraryImport(trx, organizationId, kind, parsed, mode);
+    if (!planned.ok) return planned;
+    for (const { items, rowId } of planned.groups) {
+      const line = items[0].line;
+      const values =
+        kind === "bolting"
+          ? boltingValues(items.map((x) => x.input as BoltingInput))
+          : kind === "gasket"
+            ? gasketValues(items[0].input as GasketInput)
+            : flangeValues(items[0].input as FlangeInput);
+      const table = TABLES[kind];
       try {
-        await run();
+        if (rowId)
+          await trx
+            .updateTable(table)
+            .set({ ...values, updated_at: new Date() } as never)
+            .where("organization_id", "=", organizationId)
+            .where("id", "=", rowId)
+            .execute();
+        else
+          await trx
+            .insertInto(table)
+            .values({ organization_id: organizationId, created_by: userId, ...values } as never)
+            .execute();
       } catch (err) {
         if (isUniqueViolation(err))
           throw new RowRefused({ line, field: DUPLICATE[kind].field, message: DUPLICATE[kind].message });
         throw err;
       }
-    };
-    if (kind === "bolting") {
-      const groups = new Map<string, { line: number; input: BoltingInput }[]>();
-      for (const item of parsed.inputs as { line: number; input: BoltingInput }[]) {
-        const key = item.input.name.toLowerCase();
-        groups.set(key, [...(groups.get(key) ?? []), item]);
-      }
-      for (const items of groups.values()) {
-        await insert(items[0].line, () =>
-          trx
-            .insertInto("library_bolting")
-            .values({
-              organization_id: organizationId,
-              created_by: userId,
-              ...boltingValues(items.map((x) => x.input)),
-            })
-            .execute(),
-        );
-      }
-      return groups.size;
     }
-    for (const { line, input } of parsed.inputs) {
-      if (kind === "gasket") {
-        await insert(line, () =>
-          trx
-            .insertInto("library_gaskets")
-            .values({
-              organization_id: organizationId,
-              created_by: userId,
-              ...gasketValues(input as GasketInput),
-            })
-            .execute(),
-        );
-      } else {
-        await insert(line, () =>
-          trx
-            .insertInto("library_flange_templates")
-            .values({
-              organization_id: organizationId,
-              created_by: userId,
-              ...flangeValues(input as FlangeInput),
-            })
-            .execute(),
-        );
-      }
-    }
-    return parsed.inputs.length;
+    return planned;
   };
   try {
-    const imported = db.isTransaction
+    const planned = db.isTransaction
       ? await write(db)
       : await (db as Kysely<Database>).transaction().execute(write);
-    return { ok: true, imported, rows: parsed.rows };
+    if (!planned.ok) return planned;
+    return { ok: true, imported: planned.groups.length, rows: parsed.rows, plan: planned.plan };
   } catch (err) {
     if (!(err instanceof RowRefused)) throw err;
     const rows = parsed.rows.map((r) =>

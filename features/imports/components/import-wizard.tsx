@@ -6,22 +6,37 @@ import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
 import { importDesignAction } from "../actions";
+import type { AssumedUnit } from "../model/dxf-units";
 import { prepareImport } from "../model/prepare-import";
 import { GeometryPreview } from "./geometry-preview";
+import { ReadingPanel } from "./reading-panel";
 
 // Drawing intake: choose a DXF (and optionally a CSV of bolt positions), look at what was found,
 // then create the design. Nothing is stored until "Create design" is pressed.
 export function ImportWizard({ units }: { units: UnitSystem }) {
   const [state, action, pending] = useActionState(importDesignAction, null);
   const [dxfText, setDxfText] = useState<string | null>(null);
-  const [csvText, setCsvText] = useState<string | null>(null);
+  const [csvBytes, setCsvBytes] = useState<Uint8Array | null>(null);
   const [csvUnit, setCsvUnit] = useState<"mm" | "in">("mm");
+  const [layersOn, setLayersOn] = useState<string[] | null>(null);
+  const [dxfUnit, setDxfUnit] = useState<AssumedUnit | null>(null);
   const [name, setName] = useState("");
   const prepared = useMemo(
     () =>
-      dxfText ? prepareImport({ dxfText, csvText, csvUnit, name: name || "Imported flange", units }) : null,
-    [dxfText, csvText, csvUnit, name, units],
+      dxfText
+        ? prepareImport({
+            dxfText,
+            csv: csvBytes,
+            csvUnit,
+            layersOn: layersOn ?? undefined,
+            dxfUnit: dxfUnit ?? undefined,
+            name: name || "Imported flange",
+            units,
+          })
+        : null,
+    [dxfText, csvBytes, csvUnit, layersOn, dxfUnit, name, units],
   );
+  const reading = prepared ? (prepared.ok ? prepared.dxf.reading : prepared.reading) : undefined;
   const e = state && !state.ok ? (state.fieldErrors ?? {}) : {};
   return (
     // Submitted through onSubmit, not the action prop: React resets a form after an action, which
@@ -42,22 +57,29 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
             name="dxf"
             accept=".dxf"
             required
-            onChange={async (ev) => setDxfText((await ev.target.files?.[0]?.text()) ?? null)}
+            onChange={async (ev) => {
+              setLayersOn(null);
+              setDxfUnit(null);
+              setDxfText((await ev.target.files?.[0]?.text()) ?? null);
+            }}
           />
           {e.dxf ? <span className="text-verdict-fail">{e.dxf[0]}</span> : null}
         </label>
         <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
-          Bolt positions CSV (optional: columns x, y, d; replaces the DXF holes)
+          Bolt positions CSV (optional: columns x, y, d, or a Sealpitch hole list; replaces the DXF holes)
           <input
             type="file"
             name="csv"
             accept=".csv,text/csv"
-            onChange={async (ev) => setCsvText((await ev.target.files?.[0]?.text()) ?? null)}
+            onChange={async (ev) => {
+              const file = ev.target.files?.[0];
+              setCsvBytes(file ? new Uint8Array(await file.arrayBuffer()) : null);
+            }}
           />
           {e.csv ? <span className="text-verdict-fail">{e.csv[0]}</span> : null}
         </label>
         <label className="flex flex-col gap-1 text-table font-medium text-ink-800">
-          CSV units
+          CSV units (when the header does not say)
           <select
             name="csvUnit"
             value={csvUnit}
@@ -77,6 +99,18 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
           errors={e.name}
         />
         <TextField label="Equipment tag" name="equipmentTag" errors={e.equipmentTag} hint="e.g. E-2107" />
+        {reading ? (
+          <>
+            <input
+              type="hidden"
+              name="layersOn"
+              value={JSON.stringify(reading.layers.filter((l) => l.on).map((l) => l.name))}
+            />
+            {!reading.units.stated ? (
+              <input type="hidden" name="dxfUnit" value={reading.units.assumed} />
+            ) : null}
+          </>
+        ) : null}
         <button type="submit" className={buttonStyles.primary} disabled={pending || !prepared?.ok}>
           Create design
         </button>
@@ -87,9 +121,12 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
           <p className="text-body text-ink-500">Choose a DXF drawing to see what will be imported.</p>
         ) : null}
         {prepared && !prepared.ok ? (
-          <p className="text-body text-verdict-fail" role="alert">
+          <p className="text-body text-verdict-fail" role="alert" data-testid="import-refusal">
             {prepared.message}
           </p>
+        ) : null}
+        {reading ? (
+          <ReadingPanel reading={reading} onLayers={(on) => setLayersOn(on)} onUnit={(u) => setDxfUnit(u)} />
         ) : null}
         {prepared?.ok ? (
           <>
@@ -101,11 +138,18 @@ export function ImportWizard({ units }: { units: UnitSystem }) {
               <dt className="text-ink-600">Drawing units</dt>
               <dd>{prepared.summary.unitsLabel}</dd>
               <dt className="text-ink-600">Outline</dt>
-              <dd className="num">{prepared.summary.outlineText}</dd>
+              <dd className="num">
+                {prepared.summary.outlineText}
+                {prepared.dxf.reading.outlineText ? ` — ${prepared.dxf.reading.outlineText}` : ""}
+              </dd>
               <dt className="text-ink-600">Bolt holes</dt>
               <dd className="num">
                 {prepared.summary.holeCount} × Ø {Math.round(prepared.summary.holeDiameterMm * 100) / 100} mm
-                ({prepared.summary.boltsFrom === "csv" ? "from the CSV" : "from the DXF"})
+                (
+                {prepared.summary.boltsFrom === "csv"
+                  ? `from the CSV: ${prepared.summary.csvFormat}`
+                  : "from the DXF"}
+                )
               </dd>
               <dt className="text-ink-600">Bore</dt>
               <dd className="num">

@@ -1,91 +1,127 @@
-// Closed contours of a parsed DXF (circles and closed polylines) as point lists in drawing units.
-// Polyline bulges (arc segments) are sampled at ≤ 2° so rounded corners keep their shape.
-import type { IEntity } from "dxf-parser";
+// Closed contours from flattened DXF primitives: circles, closed paths (polylines, ellipses,
+// splines), and chains of open pieces (LINE, ARC, open polylines) joined end to end where their
+// ends meet within a tolerance. A chain made only of arcs of one circle is that circle again.
+import type { Origin, Primitive, Pt } from "./dxf-entities";
 
-export interface Pt {
-  x: number;
-  y: number;
-}
+export type { Pt };
 
-/** The members of CIRCLE and (LW)POLYLINE entities read here (dxf-parser types them per entity class). */
-interface DxfFields {
-  center?: Pt;
-  radius?: number;
-  vertices?: unknown[];
-  shape?: boolean;
+interface ContourBase {
+  /** The entities that make it, by type ("LINE" → 4, "ARC" → 4). */
+  parts: Record<string, number>;
+  members: Origin[];
+  layers: string[];
+  viaInsert: boolean;
 }
 
 export type Contour =
-  | { kind: "circle"; cx: number; cy: number; r: number; layer: string }
-  | { kind: "polyline"; points: Pt[]; layer: string };
+  | ({ kind: "circle"; cx: number; cy: number; r: number } & ContourBase)
+  | ({ kind: "polyline"; points: Pt[] } & ContourBase);
 
-interface BulgeVertex {
-  x: number;
-  y: number;
-  bulge?: number;
+export interface OpenChain {
+  parts: Record<string, number>;
+  members: Origin[];
+  layers: string[];
+  gapAt: Pt;
 }
 
-function sampleBulge(a: BulgeVertex, b: BulgeVertex, out: Pt[]): void {
-  const bulge = a.bulge ?? 0;
-  if (Math.abs(bulge) < 1e-12) return;
-  // Included angle θ = 4·atan(bulge); positive bulge runs counter-clockwise from a to b.
-  const theta = 4 * Math.atan(bulge);
-  const chord = Math.hypot(b.x - a.x, b.y - a.y);
-  const r = chord / (2 * Math.sin(Math.abs(theta) / 2));
-  const mx = (a.x + b.x) / 2;
-  const my = (a.y + b.y) / 2;
-  const h = r * Math.cos(Math.abs(theta) / 2);
-  const sign = theta > 0 ? 1 : -1;
-  const nx = (-(b.y - a.y) / chord) * sign;
-  const ny = ((b.x - a.x) / chord) * sign;
-  // cos(|θ|/2) < 0 for arcs over 180°, which puts the centre on the other side of the chord.
-  const cx = mx + nx * h;
-  const cy = my + ny * h;
-  const start = Math.atan2(a.y - cy, a.x - cx);
-  const steps = Math.max(2, Math.ceil(Math.abs(theta) / (Math.PI / 90)));
-  for (let i = 1; i < steps; i++) {
-    const t = start + (theta * i) / steps;
-    out.push({ x: cx + r * Math.cos(t), y: cy + r * Math.sin(t) });
-  }
+function base(members: Origin[]): ContourBase {
+  const parts: Record<string, number> = {};
+  for (const m of members) parts[m.type] = (parts[m.type] ?? 0) + 1;
+  return {
+    parts,
+    members,
+    layers: [...new Set(members.map((m) => m.layer))],
+    viaInsert: members.some((m) => m.viaInsert),
+  };
 }
 
-function polylinePoints(vertices: BulgeVertex[], closedFlag: boolean): Pt[] | null {
-  if (vertices.length < 3) return null;
-  const first = vertices[0];
-  const last = vertices[vertices.length - 1];
-  const repeatsFirst = Math.hypot(first.x - last.x, first.y - last.y) < 1e-9;
-  if (!closedFlag && !repeatsFirst) return null;
-  const vs = repeatsFirst ? vertices.slice(0, -1) : vertices;
-  const out: Pt[] = [];
-  for (let i = 0; i < vs.length; i++) {
-    out.push({ x: vs[i].x, y: vs[i].y });
-    sampleBulge(vs[i], vs[(i + 1) % vs.length], out);
-  }
-  return out.length >= 3 ? out : null;
-}
+const dist = (a: Pt, b: Pt) => Math.hypot(a.x - b.x, a.y - b.y);
 
-export function collectClosedContours(entities: IEntity[]): { contours: Contour[]; skipped: number } {
+/** Chains open paths whose ends meet within `tol` (drawing units); closed loops become contours. */
+export function collectClosedContours(
+  primitives: Primitive[],
+  tol: number,
+): { contours: Contour[]; open: OpenChain[] } {
   const contours: Contour[] = [];
-  let skipped = 0;
-  for (const e of entities) {
-    const fields = e as IEntity & DxfFields;
-    if (e.type === "CIRCLE" && fields.center && fields.radius !== undefined && fields.radius > 0) {
-      contours.push({
-        kind: "circle",
-        cx: fields.center.x,
-        cy: fields.center.y,
-        r: fields.radius,
-        layer: e.layer ?? "0",
-      });
-    } else if (e.type === "LWPOLYLINE" || e.type === "POLYLINE") {
-      const pts = polylinePoints((fields.vertices ?? []) as BulgeVertex[], Boolean(fields.shape));
-      if (pts) contours.push({ kind: "polyline", points: pts, layer: e.layer ?? "0" });
-      else skipped++;
+  const pieces: Extract<Primitive, { kind: "path" }>[] = [];
+  for (const p of primitives) {
+    if (p.kind === "circle") contours.push({ kind: "circle", cx: p.cx, cy: p.cy, r: p.r, ...base([p]) });
+    else if (p.closed) {
+      if (p.points.length >= 3) contours.push({ kind: "polyline", points: p.points, ...base([p]) });
+    } else pieces.push(p);
+  }
+
+  // Spatial hash of piece ends, cell = tol.
+  const cell = (q: Pt) => `${Math.floor(q.x / tol)},${Math.floor(q.y / tol)}`;
+  const ends = new Map<string, { piece: number; atStart: boolean }[]>();
+  pieces.forEach((p, i) => {
+    for (const atStart of [true, false]) {
+      const q = atStart ? p.points[0] : p.points[p.points.length - 1];
+      const k = cell(q);
+      ends.set(k, [...(ends.get(k) ?? []), { piece: i, atStart }]);
+    }
+  });
+  const used = new Array<boolean>(pieces.length).fill(false);
+  const near = (q: Pt): { piece: number; atStart: boolean } | null => {
+    const cx = Math.floor(q.x / tol);
+    const cy = Math.floor(q.y / tol);
+    let best: { piece: number; atStart: boolean; d: number } | null = null;
+    for (let dx = -1; dx <= 1; dx++)
+      for (let dy = -1; dy <= 1; dy++)
+        for (const end of ends.get(`${cx + dx},${cy + dy}`) ?? []) {
+          if (used[end.piece]) continue;
+          const p = pieces[end.piece].points;
+          const d = dist(q, end.atStart ? p[0] : p[p.length - 1]);
+          if (d <= tol && (!best || d < best.d)) best = { ...end, d };
+        }
+    return best;
+  };
+
+  const open: OpenChain[] = [];
+  for (let i = 0; i < pieces.length; i++) {
+    if (used[i]) continue;
+    used[i] = true;
+    const members = [pieces[i]];
+    const points = [...pieces[i].points];
+    let closed = false;
+    // Extend at the end; when that stops, extend at the start.
+    for (const direction of ["end", "start"] as const) {
+      for (;;) {
+        const tip = direction === "end" ? points[points.length - 1] : points[0];
+        const head = direction === "end" ? points[0] : points[points.length - 1];
+        if (members.length > 1 && dist(tip, head) <= tol) {
+          closed = true;
+          break;
+        }
+        const next = near(tip);
+        if (!next) break;
+        used[next.piece] = true;
+        const p = pieces[next.piece];
+        members.push(p);
+        const pts = next.atStart ? p.points : [...p.points].reverse();
+        if (direction === "end") points.push(...pts.slice(1));
+        else points.unshift(...[...pts].reverse().slice(0, -1));
+      }
+      if (closed) break;
+    }
+    if (closed) {
+      if (dist(points[0], points[points.length - 1]) <= tol) points.pop();
+      const arcs = members.map((m) => m.arc);
+      const first = arcs[0];
+      const oneCircle =
+        first &&
+        arcs.every(
+          (a) => a && Math.hypot(a.cx - first.cx, a.cy - first.cy) <= tol && Math.abs(a.r - first.r) <= tol,
+        );
+      if (oneCircle)
+        contours.push({ kind: "circle", cx: first.cx, cy: first.cy, r: first.r, ...base(members) });
+      else if (points.length >= 3) contours.push({ kind: "polyline", points, ...base(members) });
     } else {
-      skipped++;
+      const b = base(members);
+      open.push({ parts: b.parts, members, layers: b.layers, gapAt: points[points.length - 1] });
     }
   }
-  return { contours, skipped };
+  return { contours, open };
 }
 
 export function polygonArea(points: Pt[]): number {
@@ -110,4 +146,37 @@ export function pointInPolygon(points: Pt[], x: number, y: number): boolean {
     if (a.y > y !== b.y > y && x < ((b.x - a.x) * (y - a.y)) / (b.y - a.y) + a.x) inside = !inside;
   }
   return inside;
+}
+
+function segmentDistance(p: Pt, a: Pt, b: Pt): number {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const len2 = dx * dx + dy * dy;
+  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / len2));
+  return Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy));
+}
+
+/** Whether a circle lies wholly inside a contour (touching within `tol` allowed). */
+export function circleInside(c: Contour, x: number, y: number, r: number, tol: number): boolean {
+  if (c.kind === "circle") return Math.hypot(x - c.cx, y - c.cy) + r <= c.r + tol;
+  if (!pointInPolygon(c.points, x, y)) return false;
+  for (let i = 0; i < c.points.length; i++)
+    if (segmentDistance({ x, y }, c.points[i], c.points[(i + 1) % c.points.length]) < r - tol) return false;
+  return true;
+}
+
+/** Bounding box of a contour in drawing units. */
+export function contourBox(c: Contour): { minX: number; minY: number; maxX: number; maxY: number } {
+  if (c.kind === "circle") return { minX: c.cx - c.r, minY: c.cy - c.r, maxX: c.cx + c.r, maxY: c.cy + c.r };
+  const xs = c.points.map((p) => p.x);
+  const ys = c.points.map((p) => p.y);
+  return { minX: Math.min(...xs), minY: Math.min(...ys), maxX: Math.max(...xs), maxY: Math.max(...ys) };
+}
+
+/** "4 LINE + 4 ARC" */
+export function describeParts(parts: Record<string, number>): string {
+  return Object.entries(parts)
+    .sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]))
+    .map(([t, n]) => `${n} ${t}`)
+    .join(" + ");
 }

@@ -5,7 +5,8 @@ import type { UnitSystem } from "@/features/analysis/core/design";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
 import { buildImportedDesign, type BuiltImport } from "./build-imported-design";
 import { parseBoltCsv, type CsvRowError } from "./parse-bolt-csv";
-import { parseDxfFlange, type DxfFlangeImport } from "./parse-dxf-flange";
+import type { AssumedUnit } from "./dxf-units";
+import { parseDxfFlange, type DxfFlangeImport, type DxfReading } from "./parse-dxf-flange";
 
 export interface ImportSummary {
   unitsLabel: string;
@@ -15,37 +16,53 @@ export interface ImportSummary {
   boreDiameterMm: number | null;
   boltPathText: string;
   boltsFrom: "dxf" | "csv";
+  /** How the CSV was read (delimiter, encoding), when one was given. */
+  csvFormat: string | null;
   warnings: string[];
 }
 
 export type PreparedImport =
   | { ok: true; dxf: DxfFlangeImport; built: BuiltImport; summary: ImportSummary }
-  | { ok: false; message: string; field: "dxf" | "csv" | "design"; rowErrors?: CsvRowError[] };
+  | {
+      ok: false;
+      message: string;
+      field: "dxf" | "csv" | "design";
+      rowErrors?: CsvRowError[];
+      /** What was read from the DXF, so the layer and unit choices stay on screen after a refusal. */
+      reading?: DxfReading;
+    };
 
 const r1 = (v: number) => Math.round(v * 10) / 10;
 
 export function prepareImport(input: {
   dxfText: string;
-  csvText?: string | null;
+  /** The CSV as uploaded (bytes, so its encoding can be detected) or as text. */
+  csv?: Uint8Array | string | null;
   csvUnit?: "mm" | "in";
+  /** Layers to read (absent: the defaults) and the unit of a DXF that states none. */
+  layersOn?: readonly string[];
+  dxfUnit?: AssumedUnit;
   name: string;
   units: UnitSystem;
   equipmentTag?: string;
 }): PreparedImport {
-  const parsed = parseDxfFlange(input.dxfText);
-  if (!parsed.ok) return { ok: false, message: parsed.message, field: "dxf" };
+  const parsed = parseDxfFlange(input.dxfText, { layersOn: input.layersOn, unit: input.dxfUnit });
+  if (!parsed.ok) return { ok: false, message: parsed.message, field: "dxf", reading: parsed.reading };
   const dxf = parsed.value;
+  const reading = dxf.reading;
   let holes = dxf.boltHoles;
   let boltsFrom: ImportSummary["boltsFrom"] = "dxf";
-  if (input.csvText && input.csvText.trim()) {
-    const csv = parseBoltCsv(input.csvText, {
+  let csvFormat: string | null = null;
+  if (input.csv && input.csv.length > 0) {
+    const csv = parseBoltCsv(input.csv, {
       unit: input.csvUnit ?? "mm",
       defaultDiameterMm: dxf.boltHoles[0]?.diameterMm,
     });
-    if (!csv.ok) return { ok: false, message: csv.message, field: "csv", rowErrors: csv.rowErrors };
+    if (!csv.ok) return { ok: false, message: csv.message, field: "csv", rowErrors: csv.rowErrors, reading };
     // CSV coordinates are taken relative to the flange centre (the origin of the design).
     holes = csv.holes;
     boltsFrom = "csv";
+    csvFormat = `${csv.format}${csv.unitFromHeader ? `, ${csv.unitFromHeader === "in" ? "inches" : "mm"} from its header` : ""}`;
   }
   const built = buildImportedDesign(
     { name: input.name || "Imported flange", units: input.units, equipmentTag: input.equipmentTag },
@@ -55,8 +72,9 @@ export function prepareImport(input: {
   if (issues.length > 0)
     return {
       ok: false,
-      message: `The imported geometry is not a valid joint: ${issues.slice(0, 3).map(formatIssue).join("; ")}`,
+      message: `The imported geometry is not a valid joint: ${issues.slice(0, 3).map(formatIssue).join("; ")}. Read from the outline ${reading.outlineText} with ${holes.length} hole(s) Ø ${r1(built.holeDiameterMm)} mm${boltsFrom === "csv" ? " from the CSV" : ""}, drawing units ${dxf.unitsLabel}.`,
       field: "design",
+      reading,
     };
   const o = dxf.outline;
   const xs = o.kind === "polygon" ? o.points.map((p) => p.x) : [];
@@ -81,6 +99,7 @@ export function prepareImport(input: {
           ? `bolt circle Ø ${r1(bp.diameterMm)} mm (fitted through the hole centres)`
           : `outline offset ${r1(bp.offsetMm)} mm inward (mean edge distance of the holes)`,
       boltsFrom,
+      csvFormat,
       warnings: [
         ...dxf.warnings,
         ...(built.fit.maxOffPathMm > 0.05

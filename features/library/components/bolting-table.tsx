@@ -5,6 +5,7 @@ import { useMemo, useState } from "react";
 import { buttonStyles } from "@/features/ui/button-styles";
 import type { BoltingChoiceDto, BoltingRangeJson } from "../model/dto";
 import { BoltingForm } from "./bolting-form";
+import { CsvExportLinks } from "./csv-export-links";
 import { CsvImportPanel } from "./csv-import-panel";
 import { DataTable } from "./data-table";
 import { OriginBadge } from "./origin-badge";
@@ -85,9 +86,7 @@ export function BoltingTable({ rows, canEdit }: { rows: BoltingChoiceDto[]; canE
                 {showForm ? "Close form" : "New bolting material"}
               </button>
             ) : null}
-            <a href="/api/v1/library/bolting/csv" className={buttonStyles.secondary} download>
-              Export CSV
-            </a>
+            <CsvExportLinks endpoint="/api/v1/library/bolting/csv" />
           </>
         }
       />

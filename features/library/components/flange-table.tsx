@@ -4,6 +4,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { buttonStyles } from "@/features/ui/button-styles";
 import type { FlangeTemplateChoiceDto } from "../model/dto";
+import { CsvExportLinks } from "./csv-export-links";
 import { CsvImportPanel } from "./csv-import-panel";
 import { DataTable } from "./data-table";
 import { FlangeForm } from "./flange-form";
@@ -82,9 +83,7 @@ export function FlangeTable({ rows, canEdit }: { rows: FlangeTemplateChoiceDto[]
                 {showForm ? "Close form" : "New flange template"}
               </button>
             ) : null}
-            <a href="/api/v1/library/flanges/csv" className={buttonStyles.secondary} download>
-              Export CSV
-            </a>
+            <CsvExportLinks endpoint="/api/v1/library/flanges/csv" />
           </>
         }
       />

@@ -4,6 +4,7 @@ import { createColumnHelper } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { buttonStyles } from "@/features/ui/button-styles";
 import type { GasketChoiceDto } from "../model/dto";
+import { CsvExportLinks } from "./csv-export-links";
 import { CsvImportPanel } from "./csv-import-panel";
 import { DataTable } from "./data-table";
 import { GasketForm } from "./gasket-form";
@@ -120,9 +121,7 @@ export function GasketTable({ rows, canEdit }: { rows: GasketChoiceDto[]; canEdi
                 {showForm && !editing ? "Close form" : "New gasket"}
               </button>
             ) : null}
-            <a href="/api/v1/library/gaskets/csv" className={buttonStyles.secondary} download>
-              Export CSV
-            </a>
+            <CsvExportLinks endpoint="/api/v1/library/gaskets/csv" />
           </>
         }
       />

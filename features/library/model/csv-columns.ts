@@ -73,3 +73,10 @@ export const KIND_LABELS: Record<LibraryKind, { plural: string; file: string }> 
   bolting: { plural: "bolting materials", file: "stockroom-bolting.csv" },
   flange: { plural: "flange templates", file: "stockroom-flanges.csv" },
 };
+
+/** Columns that hold text; every other column is a number (decimal commas are read there only). */
+export const TEXT_COLUMNS: Record<LibraryKind, readonly string[]> = {
+  gasket: ["name", "gasket_type", "source", "edition"],
+  bolting: ["name", "source", "edition"],
+  flange: ["standard", "pressure_class", "size", "bolt_designation", "source", "edition"],
+};

@@ -1,8 +1,7 @@
 // Parsing and writing Stockroom CSV files. Pure: the preview and the commit both call
 // `parseLibraryCsv`, so what the user previewed is exactly what is validated again on commit.
-import { parse } from "csv-parse/sync";
 import { z } from "zod";
-import { restoreCsvText, stringifyCsv } from "@/features/forms/csv-cells";
+import { stringifyCsv } from "@/features/forms/csv-cells";
 import {
   boltingInputSchema,
   flangeInputSchema,
@@ -11,7 +10,8 @@ import {
   type FlangeInput,
   type GasketInput,
 } from "../schema";
-import { CSV_COLUMNS, REQUIRED_COLUMNS } from "./csv-columns";
+import { describeCsvFormat, normaliseNumberCell, readSpreadsheetCsv } from "@/features/forms/spreadsheet-csv";
+import { CSV_COLUMNS, REQUIRED_COLUMNS, TEXT_COLUMNS } from "./csv-columns";
 import type { BoltingChoiceDto, FlangeTemplateChoiceDto, GasketChoiceDto, LibraryKind } from "./dto";
 
 export interface CsvFieldError {
@@ -34,8 +34,31 @@ type InputOf<K extends LibraryKind> = K extends "gasket"
     : FlangeInput;
 
 export type ParsedLibraryCsv<K extends LibraryKind> =
-  | { ok: true; rows: CsvPreviewRow[]; inputs: { line: number; input: InputOf<K> }[] }
+  | { ok: true; rows: CsvPreviewRow[]; inputs: { line: number; input: InputOf<K> }[]; format: string }
   | { ok: false; message: string; rows: CsvPreviewRow[]; errors: CsvFieldError[] };
+
+/** "add": every row is new (a name already in the Stockroom is refused); "update": rows whose name
+ *  (flange templates: standard, class and size) is already in the Stockroom replace that row. */
+export type CsvImportMode = "add" | "update";
+
+/** What one row of the Stockroom becomes: the file lines it is made of and whether it is new. */
+export interface CsvPlanItem {
+  label: string;
+  lines: number[];
+  action: "add" | "update";
+}
+
+export interface CsvImportPlan {
+  mode: CsvImportMode;
+  format: string;
+  added: number;
+  updated: number;
+  /** Bolting: lines of one name that become one material with one size range per line. */
+  merged: { label: string; lines: number[] }[];
+  items: CsvPlanItem[];
+  /** The plan in words, e.g. "2 to add, 1 to update; lines 2–3 (Halden B7) merge into 1 bolting material". */
+  summary: string;
+}
 
 const SCHEMAS = {
   gasket: gasketInputSchema,
@@ -48,18 +71,18 @@ export function describeCsvError(e: CsvFieldError): string {
   return `Row ${e.line}, field ${e.field}: ${e.message}`;
 }
 
-export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): ParsedLibraryCsv<K> {
-  let records: string[][];
-  try {
-    records = parse(text, { skip_empty_lines: true, trim: true, bom: true, relax_column_count: true });
-  } catch (err) {
-    return {
-      ok: false,
-      message: `The file could not be read as CSV: ${(err as Error).message}`,
-      rows: [],
-      errors: [],
-    };
-  }
+/**
+ * Reads a Stockroom CSV as spreadsheets write it (bytes as uploaded, or text): delimiter, encoding
+ * and decimal commas are detected (`readSpreadsheetCsv`); a file that cannot be decoded without
+ * loss is refused as a whole.
+ */
+export function parseLibraryCsv<K extends LibraryKind>(
+  kind: K,
+  input: Uint8Array | string,
+): ParsedLibraryCsv<K> {
+  const csv = readSpreadsheetCsv(input);
+  if (!csv.ok) return { ok: false, message: `${csv.message} Nothing was imported.`, rows: [], errors: [] };
+  const records = csv.records;
   if (records.length < 2)
     return { ok: false, message: "The file has no rows under its header.", rows: [], errors: [] };
   const header = records[0].map((h) => h.trim().toLowerCase());
@@ -67,7 +90,7 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
   if (missing.length > 0)
     return {
       ok: false,
-      message: `The header is missing the column(s): ${missing.join(", ")}.`,
+      message: `The header is missing the column(s): ${missing.join(", ")}. It was read as ${describeCsvFormat(csv)}, with the columns: ${header.join(" | ")}.`,
       rows: [],
       errors: [],
     };
@@ -91,9 +114,15 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
   const rows: CsvPreviewRow[] = [];
   const inputs: { line: number; input: InputOf<K> }[] = [];
   const seen = new Map<string, number>();
+  const textColumns = new Set(TEXT_COLUMNS[kind]);
   records.slice(1).forEach((record, i) => {
-    const line = i + 2;
-    const cells = Object.fromEntries(header.map((h, j) => [h, restoreCsvText(record[j] ?? "")]));
+    const line = csv.lines[i + 1];
+    const values = Object.fromEntries(
+      header.map((h, j) => [
+        h,
+        textColumns.has(h) ? (record[j] ?? "") : normaliseNumberCell(record[j] ?? "", csv.decimalComma),
+      ]),
+    );
     const errors: CsvFieldError[] = [];
     if (record.length > header.length)
       errors.push({
@@ -101,7 +130,7 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
         field: "(row)",
         message: `has ${record.length} cells, the header has ${header.length}`,
       });
-    const result = schema.safeParse(cells);
+    const result = schema.safeParse(values);
     if (!result.success) {
       for (const [field, messages] of Object.entries(
         z.flattenError(result.error).fieldErrors as Record<string, string[]>,
@@ -116,7 +145,7 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
       else seen.set(key, line);
       if (errors.length === 0) inputs.push({ line, input: result.data });
     }
-    rows.push({ line, cells, errors });
+    rows.push({ line, cells: values, errors });
   });
   const errors = rows.flatMap((r) => r.errors);
   if (errors.length > 0) {
@@ -129,7 +158,7 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
       errors,
     };
   }
-  return { ok: true, rows, inputs };
+  return { ok: true, rows, inputs, format: describeCsvFormat(csv) };
 }
 
 // Bolting lines repeat a name on purpose (one line per size range); the same range twice is the duplicate.
@@ -145,7 +174,16 @@ function duplicateKey(kind: LibraryKind, input: GasketInput | BoltingInput | Fla
   return (input as GasketInput).name.toLowerCase();
 }
 
-export function gasketsToCsv(rows: GasketChoiceDto[]): string {
+/**
+ * "plain": UTF-8 without BOM, LF line ends (for scripts and version control). "spreadsheet": UTF-8
+ * with BOM and CRLF, which spreadsheet programs open directly with °, µ and other signs intact.
+ * Both neutralise formula cells (`stringifyCsv`); the intake reads them back unchanged.
+ */
+export type CsvVariant = "plain" | "spreadsheet";
+const variantOptions = (variant: CsvVariant) =>
+  variant === "spreadsheet" ? { bom: true, record_delimiter: "windows" as const } : {};
+
+export function gasketsToCsv(rows: GasketChoiceDto[], variant: CsvVariant = "plain"): string {
   return stringifyCsv(
     rows.map((g) => [
       g.name,
@@ -166,11 +204,11 @@ export function gasketsToCsv(rows: GasketChoiceDto[]): string {
       g.source,
       g.edition,
     ]),
-    { header: true, columns: [...CSV_COLUMNS.gasket] },
+    { header: true, columns: [...CSV_COLUMNS.gasket], ...variantOptions(variant) },
   );
 }
 
-export function boltingToCsv(rows: BoltingChoiceDto[]): string {
+export function boltingToCsv(rows: BoltingChoiceDto[], variant: CsvVariant = "plain"): string {
   return stringifyCsv(
     rows.flatMap((b) =>
       b.ranges.map((r) => [
@@ -185,11 +223,11 @@ export function boltingToCsv(rows: BoltingChoiceDto[]): string {
         b.edition,
       ]),
     ),
-    { header: true, columns: [...CSV_COLUMNS.bolting] },
+    { header: true, columns: [...CSV_COLUMNS.bolting], ...variantOptions(variant) },
   );
 }
 
-export function flangesToCsv(rows: FlangeTemplateChoiceDto[]): string {
+export function flangesToCsv(rows: FlangeTemplateChoiceDto[], variant: CsvVariant = "plain"): string {
   return stringifyCsv(
     rows.map((f) => [
       f.standard,
@@ -205,6 +243,6 @@ export function flangesToCsv(rows: FlangeTemplateChoiceDto[]): string {
       f.source,
       f.edition,
     ]),
-    { header: true, columns: [...CSV_COLUMNS.flange] },
+    { header: true, columns: [...CSV_COLUMNS.flange], ...variantOptions(variant) },
   );
 }

@@ -7,7 +7,7 @@ import { prepareImport } from "@/features/imports/model/prepare-import";
 describe("bolt positions from CSV", () => {
   it("reads x, y and d columns in mm, or inches when asked", () => {
     const r = parseBoltCsv("x,y,d\n100,0,22\n0,100,22\n-100,0,22\n");
-    expect(r).toEqual({
+    expect(r).toMatchObject({
       ok: true,
       holes: [
         { xMm: 100, yMm: 0, diameterMm: 22 },
@@ -16,7 +16,7 @@ describe("bolt positions from CSV", () => {
       ],
     });
     const inches = parseBoltCsv("X,Y\n1,2\n3,4\n", { unit: "in", defaultDiameterMm: 20 });
-    expect(inches).toEqual({
+    expect(inches).toMatchObject({
       ok: true,
       holes: [
         { xMm: 25.4, yMm: 2 * 25.4, diameterMm: 20 },
@@ -56,7 +56,7 @@ describe("bolt positions from CSV", () => {
       return [Math.round(160 * Math.cos(a) * 1000) / 1000, Math.round(160 * Math.sin(a) * 1000) / 1000];
     });
     const csv = ["x,y,d", ...rows.map(([x, y]) => `${x},${y},18`)].join("\n");
-    const r = prepareImport({ dxfText: d.toDxfString(), csvText: csv, name: "CSV pattern", units: "SI" });
+    const r = prepareImport({ dxfText: d.toDxfString(), csv: csv, name: "CSV pattern", units: "SI" });
     if (!r.ok) throw new Error(r.message);
     expect(r.summary).toMatchObject({ boltsFrom: "csv", holeCount: 6, holeDiameterMm: 18 });
     const pts = getBoltPoints(r.built.design);
@@ -64,7 +64,7 @@ describe("bolt positions from CSV", () => {
       expect(Math.min(...pts.map((p) => Math.hypot(p.x - x, p.y - y)))).toBeLessThan(1e-3);
     const bad = prepareImport({
       dxfText: d.toDxfString(),
-      csvText: "x,y\n1,2\n3,oops\n",
+      csv: "x,y\n1,2\n3,oops\n",
       name: "x",
       units: "SI",
     });

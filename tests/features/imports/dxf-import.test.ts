@@ -155,11 +155,11 @@ describe("DXF flange import (drawings written by dxf-writer)", () => {
     const d = new Drawing();
     d.drawLine(0, 0, 100, 0);
     const none = parseDxfFlange(d.toDxfString());
-    expect(none).toEqual({ ok: false, message: expect.stringMatching(/no closed outline/) });
+    expect(none).toMatchObject({ ok: false, message: expect.stringMatching(/no closed outline/) });
     const lonely = new Drawing();
     lonely.drawCircle(0, 0, 100);
     lonely.drawCircle(50, 0, 5);
-    expect(parseDxfFlange(lonely.toDxfString())).toEqual({
+    expect(parseDxfFlange(lonely.toDxfString())).toMatchObject({
       ok: false,
       message: expect.stringMatching(/No bolt holes/),
     });

@@ -212,7 +212,7 @@ describe("Stockroom (real PostgreSQL)", () => {
     expect(refused).toMatchObject({
       ok: false,
       message:
-        "Row 3, field name: a gasket with this name is already in the Stockroom. Nothing was imported.",
+        'Row 3, field name: a gasket with this name is already in the Stockroom; choose "update rows with the same name" to replace it. Nothing was imported.',
     });
     expect((await listOwnGaskets(db, org.organizationId)).length).toBe(before);
 

@@ -214,7 +214,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     }
     const prepared = prepareImport({
       dxfText: d.toDxfString(),
-      csvText: null,
+      csv: null,
       csvUnit: "mm",
       name: "Imported cover",
       units: "SI",
