@@ -80,6 +80,40 @@ const fastenerSchema = z.object({
   washer: z.object({ thicknessMm: positive(), outerDiameterMm: positive() }).nullable(),
   nutSeries: z.enum(["iso-4032", "iso-old"]).optional(),
   termination: terminationSchema,
+  enteredAllowable: z
+    .object({
+      valueMpa: positive(),
+      source: plainText().trim().min(1, { message: "name the source" }).max(300),
+    })
+    .nullable()
+    .optional(),
+});
+
+const enteredAllowableSchema = z.object({
+  designMpa: positive(),
+  ambientMpa: positive(),
+  source: plainText().trim().min(1, { message: "name the source" }).max(300),
+});
+
+export const flangeDesignSchema = z.object({
+  kind: z.enum(["integral-hub", "integral-no-hub", "ring-loose", "not-entered"]),
+  hub: z.object({ g0Mm: positive(), g1Mm: positive(), hMm: nonNegative() }).nullable().optional(),
+  flangeMaterialId: plainText().max(60).nullable().optional(),
+  coverMaterialId: plainText().max(60).nullable().optional(),
+  flangeAllowable: enteredAllowableSchema.nullable().optional(),
+  coverAllowable: enteredAllowableSchema.nullable().optional(),
+  coverSketch: z
+    .discriminatedUnion("kind", [
+      z.object({ kind: z.literal("catalogue"), id: plainText().min(1).max(60) }),
+      z.object({
+        kind: z.literal("entered"),
+        c: z.number().finite().positive().max(1),
+        source: plainText().trim().min(1, { message: "name the source" }).max(300),
+      }),
+    ])
+    .nullable()
+    .optional(),
+  testPressureMpa: positive().nullable().optional(),
 });
 
 const layerSchema = z.discriminatedUnion("role", [
@@ -146,6 +180,7 @@ export const jointDesignBaseSchema = z.object({
     samplesPerPitch: z.number().int().min(8).max(1024),
     grid: z.object({ nx: z.number().int().min(2).max(2048), ny: z.number().int().min(2).max(2048) }),
   }),
+  flangeDesign: flangeDesignSchema.optional(),
 });
 
 /** Splits "bolts[3].position" into ["bolts", 3, "position"] for zod issue paths. */

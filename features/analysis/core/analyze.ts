@@ -17,6 +17,7 @@ import { buildAssemblyPlan, type AssemblyPlan } from "./assembly";
 import { checkGasketStress } from "./checks/gasket-stress-checks";
 import { computeAsmeAppendix2, type AsmeAppendix2Result } from "./checks/asme-appendix2";
 import { checkBolts } from "./checks/bolt-checks";
+import { computeFlangeDesign, type FlangeDesignResult } from "./flange-design/flange-design";
 import { checkSpacing } from "./checks/spacing";
 import { checkEdgesAndPattern } from "./checks/edge-and-pattern";
 import { countChecks, type CheckRecord } from "./checks/check-record";
@@ -155,6 +156,8 @@ export interface JointAnalysis {
     };
   };
   asmeAppendix2: AsmeAppendix2Result;
+  /** Appendix 2 flange stresses and rigidity, UG-34 cover thickness, UG-99 test pressure suggestion. */
+  flangeDesign: FlangeDesignResult;
   bolts: BoltResult[];
   checks: (CheckRecord & { boltIds: string[] })[];
   assemblyPlan: AssemblyPlan;
@@ -198,9 +201,11 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
   const maxExt = Math.max(0, ...model.externalLoadPerBoltN);
   const proofLoadN = p.proofMpa * model.thread.tensileStressAreaMm2;
   const asme = computeAsmeAppendix2(model);
+  const flange = computeFlangeDesign(model, asme.result);
   const checks: CheckRecord[] = [
     ...checkGasketStress(model, gov.summary, gov.estimator),
     ...asme.checks,
+    ...flange.checks,
     ...checkBolts(model),
     ...checkSpacing(model, gov.estimator === "cone"),
     ...checkEdgesAndPattern(model),
@@ -227,6 +232,7 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     `Gasket stress sampled at ${design.estimator.samplesPerPitch} points per bolt pitch along the ${model.region.kind === "full-face" ? "bolt path (full-face gasket)" : "gasket centre line"}.`,
     `External load per bolt: pressure on ${model.pressureAreaBasis}, plus axial load shared equally and moment in proportion to y.`,
     "Tensile stress area for bolt stress, preload and torque; root area for ASME Appendix 2 Ab.",
+    "Flange and cover design rules are code-specific: the flange checks apply ASME VIII-1 Appendix 2 and UG-34 as entered, and a competent engineer signs the flange design off.",
     "Results are engineering estimates: design to the governing code; gasket factors are design values, not assembly targets, and the gasket manufacturer's data supersede them; torque controls preload only indirectly; pressure-boundary joints need review by a competent engineer.",
   ];
   const counts = countChecks(checks);
@@ -335,6 +341,7 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
       },
     },
     asmeAppendix2: asme.result,
+    flangeDesign: flange.result,
     bolts,
     checks: checks.map((c) => ({ ...c, boltIds: c.subject ?? [] })),
     assemblyPlan: buildAssemblyPlan({

@@ -94,6 +94,11 @@ export interface Fastener {
   /** Metric nut series for across-flats sizes; inch bolts always use heavy hex (ASME B18.2.2). */
   nutSeries?: "iso-4032" | "iso-old";
   termination: BoltTermination;
+  /**
+   * Allowable bolt stress entered by the designer, with its source, for bolting that ASME II-D
+   * lists no allowable for (e.g. ISO 898-1 classes); used by the Appendix 2 bolt-area check.
+   */
+  enteredAllowable?: { valueMpa: number; source: string } | null;
 }
 
 /** Clamped layers from the nut (or head) side downwards. Exactly one layer is the gasket. */
@@ -144,6 +149,34 @@ export interface EstimatorSettings {
   grid: { nx: number; ny: number };
 }
 
+/** An allowable stress entered by the designer, at design and at ambient temperature, with its source. */
+export interface EnteredAllowable {
+  designMpa: number;
+  ambientMpa: number;
+  source: string;
+}
+
+/**
+ * Inputs of the flange and cover design checks (ASME VIII-1 Appendix 2 flange stresses and
+ * rigidity, UG-34 flat covers). Absent or `kind: "not-entered"`: those checks say what is missing.
+ */
+export interface FlangeDesignInputs {
+  /** Appendix 2 type of the first "flange" layer. */
+  kind: "integral-hub" | "integral-no-hub" | "ring-loose" | "not-entered";
+  /** Hub or shell wall: g0 (small end / shell), g1 (back of flange), h (hub length), mm. */
+  hub?: { g0Mm: number; g1Mm: number; hMm: number } | null;
+  /** Row of catalogue/flange-materials.ts for the flange and for a cover layer. */
+  flangeMaterialId?: string | null;
+  coverMaterialId?: string | null;
+  /** Allowables entered instead of (or over) the catalogue's. */
+  flangeAllowable?: EnteredAllowable | null;
+  coverAllowable?: EnteredAllowable | null;
+  /** UG-34 bolted-cover sketch (catalogue of flat-cover.ts) or an entered C with its source. */
+  coverSketch?: { kind: "catalogue"; id: string } | { kind: "entered"; c: number; source: string } | null;
+  /** Hydrostatic test pressure entered by the user, MPa (null: not entered). */
+  testPressureMpa?: number | null;
+}
+
 export interface JointDesign {
   schemaVersion: 1;
   name: string;
@@ -162,6 +195,7 @@ export interface JointDesign {
   loads: DesignLoads;
   assembly: AssemblySettings;
   estimator: EstimatorSettings;
+  flangeDesign?: FlangeDesignInputs;
 }
 
 export const DEFAULT_FIXED_CONE_ANGLE_DEG = 30;

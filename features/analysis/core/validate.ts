@@ -12,6 +12,7 @@ import { buildPointHash, forEachNear } from "./point-hash";
 import { outlineToShape, signedDistanceToShape, type Shape } from "./shape";
 import { findThread } from "./catalogue/threads";
 import { getBoltMaterialById } from "./catalogue/bolt-materials";
+import { validateFlangeInputs } from "./flange-design/validate-flange-inputs";
 
 export interface DesignIssue {
   /** Field path, e.g. "bolts[3].position" or "gasket.geometry.outerDiameterMm". */
@@ -134,6 +135,7 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
     add("fastener.holeDiameterMm", "bolt hole is smaller than the bolt");
   if (f.washer && f.washer.outerDiameterMm <= f.holeDiameterMm)
     add("fastener.washer.outerDiameterMm", "washer must be larger than the bolt hole");
+  issues.push(...validateFlangeInputs(design));
   if (issues.length > 0) return issues; // geometry below needs sane numbers
 
   design.bolts.forEach((b, i) => {

@@ -7,14 +7,22 @@ const STATUS_STYLE: Record<CheckView["status"], string> = {
   warn: "bg-verdict-warn-bg text-verdict-warn",
   fail: "bg-verdict-fail-bg text-verdict-fail",
   "not-applicable": "bg-verdict-na-bg text-verdict-na",
+  "accepted-by-rating": "bg-brass-50 text-brass-700",
 };
 const STATUS_TEXT: Record<CheckView["status"], string> = {
   pass: "pass",
   warn: "warn",
   fail: "fail",
   "not-applicable": "n/a",
+  "accepted-by-rating": "accepted by its rating",
 };
-const ORDER: Record<CheckView["status"], number> = { fail: 0, warn: 1, pass: 2, "not-applicable": 3 };
+const ORDER: Record<CheckView["status"], number> = {
+  fail: 0,
+  warn: 1,
+  "accepted-by-rating": 2,
+  pass: 3,
+  "not-applicable": 4,
+};
 
 function shown(v: number | null, unit: string, units: UnitSystem): string {
   if (v === null) return "—";

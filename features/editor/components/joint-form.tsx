@@ -4,6 +4,7 @@ import { BoltInspector } from "./bolt-inspector";
 import type { FormContext } from "./form-context";
 import { FormSectionAssembly } from "./form-section-assembly";
 import { FormSectionBolting } from "./form-section-bolting";
+import { FormSectionFlange } from "./form-section-flange";
 import { FormSectionGasket } from "./form-section-gasket";
 import { FormSectionService } from "./form-section-service";
 
@@ -38,6 +39,7 @@ const JointDataSections = memo(function JointDataSections({
       <FormSectionService ctx={ctx} meta={meta} onMeta={onMeta} />
       <FormSectionGasket ctx={ctx} />
       <FormSectionBolting ctx={ctx} />
+      <FormSectionFlange ctx={ctx} />
       <FormSectionAssembly ctx={ctx} />
     </>
   );

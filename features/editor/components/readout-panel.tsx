@@ -7,6 +7,7 @@ import { AssemblyPlanView } from "./assembly-plan";
 import { BoltTable } from "./bolt-table";
 import { CheckList } from "./check-list";
 import { EstimatorNote } from "./estimator-note";
+import { FlangeSummary } from "@/features/analysis/components/flange-summary";
 import { StressProfileChart } from "./stress-profile-chart";
 
 interface Props {
@@ -96,6 +97,9 @@ export const ReadoutPanel = memo(function ReadoutPanel({
           </Section>
           <Section title="Checks">
             <CheckList checks={view.checks} units={units} activeId={activeCheckId} onPick={onPickCheck} />
+          </Section>
+          <Section title="Flange">
+            <FlangeSummary analysis={view.analysis} units={units} />
           </Section>
           <Section title="Bolts">
             <BoltTable analysis={view.analysis} units={units} onPick={onPickBolt} />

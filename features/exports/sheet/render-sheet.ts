@@ -9,6 +9,8 @@ import { drawFlange } from "./draw-flange";
 import { drawProfileChart } from "./draw-profile-chart";
 import { drawKeyValues, drawTable, type Cell } from "./draw-table";
 import { jointDataItems } from "./joint-data";
+import { flangeSummaryLines } from "@/features/analysis/flange-summary";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import {
   groupChecks,
   readResultView,
@@ -33,6 +35,7 @@ const STATUS_STYLE: Record<SheetStatus, { text: string; color: string; fill: str
   warn: { text: "WARN", color: C.warn, fill: C.warnBg },
   fail: { text: "FAIL", color: C.fail, fill: C.failBg },
   na: { text: "N/A", color: C.na, fill: C.naBg },
+  rated: { text: "RATED", color: C.brass700, fill: C.brass50 },
 };
 
 /**
@@ -134,7 +137,7 @@ function boltTable(ctx: SheetContext, rows: BoltRow[]): void {
 
 function subjectsNote(g: SheetCheckGroup, limit = 14): string {
   if (g.count === 1) return g.boltIds.length ? ` (${g.boltIds.join(", ")})` : "";
-  const tally = (["fail", "warn", "pass", "na"] as const)
+  const tally = (["fail", "warn", "rated", "pass", "na"] as const)
     .map((st) => [st, g.statusCounts[st]] as const)
     .filter(([, k]) => k > 0)
     .map(([st, k]) => `${k} ${STATUS_STYLE[st].text.toLowerCase()}`)
@@ -176,6 +179,23 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
         g.source || "—",
       ];
     }),
+  );
+}
+
+function flangeSection(ctx: SheetContext): void {
+  const result = (ctx.input.result ?? null) as JointAnalysis | null;
+  heading(
+    ctx,
+    "Flange",
+    "ASME VIII-1 Appendix 2 flange and UG-34 cover design as stored; the rules are code-specific and a competent engineer signs them off",
+  );
+  drawTable(
+    ctx,
+    [
+      { header: "Quantity", width: 2.2, wrap: true },
+      { header: "Value", width: 5.2, wrap: true },
+    ],
+    flangeSummaryLines(result, ctx.input.units).map((l): Cell[] => [l.label, l.value]),
   );
 }
 
@@ -396,6 +416,7 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
   boltTable(ctx, rows);
   await progress(0.5);
   checkTable(ctx, view);
+  flangeSection(ctx);
   justifications(ctx, view);
   profileChart(ctx, view, rows);
   await progress(0.7);

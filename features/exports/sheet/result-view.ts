@@ -8,7 +8,7 @@ import type { SheetUnits } from "./format";
  * as it is; this module only picks fields and formats them, it computes nothing (the one scaling,
  * the minimum-preload curve, is the one the result itself prescribes: stress × minN/targetN).
  */
-export type SheetStatus = "pass" | "warn" | "fail" | "na";
+export type SheetStatus = "pass" | "warn" | "fail" | "na" | "rated";
 
 export interface SheetCheck {
   id: string;
@@ -73,6 +73,7 @@ const text = (v: unknown): string =>
   typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "";
 
 export function normaliseStatus(v: unknown): SheetStatus {
+  if (v === "accepted-by-rating") return "rated";
   return v === "pass" || v === "warn" || v === "fail" ? v : "na";
 }
 
@@ -98,7 +99,7 @@ export function formatCheckValue(v: number | null, unit: string, u: SheetUnits):
   }
 }
 
-const RANK: Record<SheetStatus, number> = { fail: 3, warn: 2, pass: 1, na: 0 };
+const RANK: Record<SheetStatus, number> = { fail: 4, warn: 3, rated: 2, pass: 1, na: 0 };
 
 export interface SheetCheckGroup extends SheetCheck {
   /** Stored checks in the group (per pair or per bolt checks of one kind share a group). */
@@ -126,7 +127,7 @@ export function groupChecks(checks: SheetCheck[]): SheetCheckGroup[] {
   return [...groups.values()].map((list) => {
     const worst = list.reduce((w, c) => (RANK[c.status] > RANK[w.status] ? c : w), list[0]);
     const same = list.filter((c) => c.status === worst.status);
-    const statusCounts: Record<SheetStatus, number> = { pass: 0, warn: 0, fail: 0, na: 0 };
+    const statusCounts: Record<SheetStatus, number> = { pass: 0, warn: 0, fail: 0, na: 0, rated: 0 };
     for (const c of list) statusCounts[c.status]++;
     return {
       ...worst,

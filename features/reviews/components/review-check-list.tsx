@@ -10,8 +10,15 @@ const STATUS_STYLE: Record<CheckStatus, string> = {
   warn: "bg-verdict-warn-bg text-verdict-warn",
   fail: "bg-verdict-fail-bg text-verdict-fail",
   "not-applicable": "bg-verdict-na-bg text-verdict-na",
+  "accepted-by-rating": "bg-brass-50 text-brass-700",
 };
-const ORDER: Record<CheckStatus, number> = { fail: 0, warn: 1, pass: 2, "not-applicable": 3 };
+const ORDER: Record<CheckStatus, number> = {
+  fail: 0,
+  warn: 1,
+  "accepted-by-rating": 2,
+  pass: 3,
+  "not-applicable": 4,
+};
 
 /** The frozen checks, failures first, each with its written justification when one was given. */
 export function ReviewCheckList(props: {

@@ -1,7 +1,7 @@
 // Reads the checks out of a stored JointAnalysis. The result is JSON from the core
 // (features/analysis/core/analyze.ts: each check `{id, title, value, limit, unit, status, source,
 // note}`); it is read defensively because a frozen snapshot may come from an older core version.
-export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable";
+export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable" | "accepted-by-rating";
 
 export interface ReviewCheck {
   id: string;
@@ -21,10 +21,18 @@ export const CHECK_STATUS_LABELS: Record<CheckStatus, string> = {
   warn: "Warn",
   fail: "Fail",
   "not-applicable": "Not applicable",
+  "accepted-by-rating": "Accepted by its rating",
 };
 
 function normaliseStatus(raw: unknown): CheckStatus {
-  if (raw === "pass" || raw === "warn" || raw === "fail" || raw === "not-applicable") return raw;
+  if (
+    raw === "pass" ||
+    raw === "warn" ||
+    raw === "fail" ||
+    raw === "not-applicable" ||
+    raw === "accepted-by-rating"
+  )
+    return raw;
   if (raw === "na" || raw === "n/a") return "not-applicable";
   // An unknown status is treated as a failure so it can never slip through an approval.
   return "fail";

@@ -83,13 +83,19 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     // One row per check kind (pair and per-bolt checks grouped): each row shows the worst stored
     // status of its kind, and its tally names every stored status of the kind.
     const flat = text.replace(/\s+/g, " ");
-    const word = { pass: "PASS", warn: "WARN", fail: "FAIL", "not-applicable": "N/A" } as const;
+    const word = {
+      pass: "PASS",
+      warn: "WARN",
+      fail: "FAIL",
+      "not-applicable": "N/A",
+      "accepted-by-rating": "RATED",
+    } as const;
     const kinds = new Map<string, typeof result.checks>();
     for (const c of result.checks) {
       const kind = c.id.split(":")[0];
       kinds.set(kind, [...(kinds.get(kind) ?? []), c]);
     }
-    const rank = { fail: 3, warn: 2, pass: 1, "not-applicable": 0 } as const;
+    const rank = { fail: 4, warn: 3, "accepted-by-rating": 2, pass: 1, "not-applicable": 0 } as const;
     for (const list of kinds.values()) {
       const worst = list.reduce((w, c) => (rank[c.status] > rank[w.status] ? c : w));
       expect(flat).toContain(word[worst.status]);

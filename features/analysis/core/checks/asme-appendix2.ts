@@ -59,14 +59,23 @@ export function computeAsmeAppendix2(model: JointModel): {
   const hpN = 2 * b * reactionLengthMm * gm.m * P;
   const wm1N = hN + hpN;
   const wm2N = b * reactionLengthMm * gm.yMpa;
-  const S = model.strength.allowableMpa;
+  const entered = d.fastener.enteredAllowable ?? null;
+  const S = entered ? entered.valueMpa : model.strength.allowableMpa;
+  const allowableLabel = entered
+    ? `entered by the designer: ${entered.source}`
+    : (model.strength.allowableConfidence ?? "mem");
   notes.push(
     `Effective width b by the ${branch} branch (${geometry.unit}): b0 = ${geometry.b0.toFixed(4)}, b = ${geometry.b.toFixed(4)}, G = ${geometry.g.toFixed(4)} ${geometry.unit}.`,
   );
-  if (S !== null)
+  if (entered)
+    notes.push(
+      `Sa = Sb = ${entered.valueMpa} MPa, the bolt allowable entered by the designer (${entered.source}).`,
+    );
+  else if (S !== null)
     notes.push(
       "Sa = Sb = room-temperature allowable (no temperature-dependent allowables in the catalogue).",
     );
+  const noAllowable = `ASME VIII-1 lists no allowable bolt stress for ${model.material.name} (it is not a Section II-D bolting material), so Am cannot be computed. Enter an allowable bolt stress with its source (Bolting section) to run this check.`;
   const actualRootAreaMm2 = model.boltPoints.length * model.thread.rootAreaMm2;
   const requiredAreaMm2 = S !== null ? Math.max(wm1N / S, wm2N / S) : null;
   const flangeDesignLoadN =
@@ -87,8 +96,8 @@ export function computeAsmeAppendix2(model: JointModel): {
       source: src,
       note:
         requiredAreaMm2 === null
-          ? `No ASME Section II-D allowable for ${model.material.name}; Am not computed.`
-          : `Wm1 = ${(wm1N / 1000).toFixed(1)} kN, Wm2 = ${(wm2N / 1000).toFixed(1)} kN, S = ${S!.toFixed(1)} MPa (${model.strength.allowableConfidence}); Ab uses the ROOT area.`,
+          ? noAllowable
+          : `Wm1 = ${(wm1N / 1000).toFixed(1)} kN, Wm2 = ${(wm2N / 1000).toFixed(1)} kN, S = ${S!.toFixed(1)} MPa (${allowableLabel}); Ab uses the ROOT area.`,
     }),
     makeCheck({
       id: "asme.app2.scope",
@@ -98,7 +107,11 @@ export function computeAsmeAppendix2(model: JointModel): {
       unit: "",
       status: scope === "appendix-2" ? "pass" : "warn",
       source: src,
-      note: scope === "appendix-2" ? "Circular flange with a ring gasket inside the bolt circle." : notes[0],
+      note:
+        (scope === "appendix-2" ? "Circular flange with a ring gasket inside the bolt circle." : notes[0]) +
+        (S === null
+          ? ` The bolt loads are computed, but ${model.material.name} has no ASME allowable bolt stress: the bolt-area check waits for an entered allowable.`
+          : ""),
     }),
   ];
   return {

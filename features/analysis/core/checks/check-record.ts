@@ -3,7 +3,11 @@
  * the bolts or the field concerned; pair and bolt checks name their bolts in `subject`. Values
  * are in the core's units (mm, N, MPa, mm²) or dimensionless, as `unit` says.
  */
-export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable";
+/**
+ * "accepted-by-rating": a standard flange used within its pressure–temperature rating, on a rule
+ * meant for flanges designed by rule (ASME VIII-1 UG-44(a)); neither a pass nor a failure.
+ */
+export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable" | "accepted-by-rating";
 
 export interface CheckRecord {
   id: string;

@@ -12,7 +12,7 @@
  */
 import type { JointModel } from "../joint-model";
 import { getNeighbourSpacings } from "../geometry";
-import { getFlangeTemplateById } from "../catalogue/flange-templates";
+import { standardFlangeRating } from "../flange-design/rating";
 import { getTighteningMethodById } from "../catalogue/tightening-methods";
 import { findWrenchClearance } from "../catalogue/wrench-clearance";
 import { makeCheck, type CheckRecord } from "./check-record";
@@ -49,9 +49,9 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
   const tema = findWrenchClearance(model.thread.designation);
   const overlapApplies = design.gasket.kind === "full-face" || coneGoverns;
   const coneDiameter = 2 * model.coneRadiusMm;
-  const standard = design.templateId ? getFlangeTemplateById(design.templateId) : undefined;
-  const ratedNote = standard
-    ? ` ${standard.standard} Class ${standard.pressureClass} NPS ${standard.nps}: a standard flange used within its pressure–temperature rating is accepted by that rating (ASME VIII-1 UG-44 [mem]); this rule is for flanges designed by rule.`
+  const rating = standardFlangeRating(design);
+  const ratedNote = rating
+    ? ` ${rating.reason}${rating.withinRating ? " This rule is for flanges designed by rule." : ""}`
     : "";
   const out: CheckRecord[] = [];
   for (const s of spacings) {
@@ -65,7 +65,14 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
         value: s.pitchMm,
         limit: bsMax,
         unit: "mm",
-        status: s.pitchMm > bsMax ? "fail" : s.pitchMm > bsMoment ? "warn" : "pass",
+        status:
+          s.pitchMm > bsMoment && rating?.withinRating
+            ? "accepted-by-rating"
+            : s.pitchMm > bsMax
+              ? "fail"
+              : s.pitchMm > bsMoment
+                ? "warn"
+                : "pass",
         subject,
         source: "ASME VIII-2 4.16.11 (Bs,max = 2a + 6t/(m + 0.5)) [pub]",
         note:

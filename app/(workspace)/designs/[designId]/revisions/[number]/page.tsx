@@ -15,6 +15,8 @@ import { RevisionHeader } from "@/features/reviews/components/revision-header";
 import { independenceNote } from "@/features/reviews/independence-note";
 import { getRevisionReview } from "@/features/reviews/queries";
 import { CautionPanel } from "@/features/ui/caution-panel";
+import { FlangeSummary } from "@/features/analysis/components/flange-summary";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import { requireViewer } from "@/server/auth/guard";
 import { ReviewScreen } from "./_components/review-screen";
 
@@ -49,6 +51,14 @@ export default async function RevisionReviewPage({
           startNewRevisionAction,
         }}
       />
+      {review.result ? (
+        <section aria-labelledby="flange-heading" className="rounded-plate bg-white p-panel shadow-plate">
+          <h2 id="flange-heading" className="text-lead font-semibold text-ink-900">
+            Flange
+          </h2>
+          <FlangeSummary analysis={review.result as unknown as JointAnalysis} units={viewer.unitSystem} />
+        </section>
+      ) : null}
       <CautionPanel />
       <ActivityList entries={activity} title="Design activity" />
     </div>

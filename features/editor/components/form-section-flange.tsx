@@ -1,0 +1,181 @@
+"use client";
+import {
+  getBoltMaterialById,
+  getStrengthForDiameter,
+} from "@/features/analysis/core/catalogue/bolt-materials";
+import { FLANGE_MATERIALS } from "@/features/analysis/core/catalogue/flange-materials";
+import { findThread } from "@/features/analysis/core/catalogue/threads";
+import type { FlangeDesignInputs } from "@/features/analysis/core/design";
+import { COVER_SKETCHES } from "@/features/analysis/core/flange-design/flat-cover";
+import type { NumberFieldSpec } from "../model/field-specs";
+import type { FormContext } from "./form-context";
+import { NumberField } from "./number-field";
+import { SelectField } from "./select-field";
+import { TextField } from "./text-field";
+
+const KIND_OPTIONS: { value: FlangeDesignInputs["kind"]; label: string }[] = [
+  { value: "not-entered", label: "Not entered (no flange stresses)" },
+  { value: "integral-hub", label: "Integral, with tapered hub (weld neck)" },
+  { value: "integral-no-hub", label: "Integral, no hub taper (g1 = g0)" },
+  { value: "ring-loose", label: "Loose ring, no hub" },
+];
+
+const len = (path: string, label: string, min = 0): NumberFieldSpec => ({
+  path,
+  label,
+  quantity: "length",
+  min,
+  minExclusive: true,
+  max: 1000,
+});
+const SPECS = {
+  g0: len("flangeDesign.hub.g0Mm", "Hub at small end g0 / shell wall"),
+  g1: len("flangeDesign.hub.g1Mm", "Hub at flange back g1"),
+  h: { ...len("flangeDesign.hub.hMm", "Hub length h"), minExclusive: false },
+  test: {
+    path: "flangeDesign.testPressureMpa",
+    label: "Hydrostatic test pressure (0: not entered)",
+    quantity: "stress",
+    min: 0,
+    max: 1000,
+  },
+  boltAllowable: {
+    path: "fastener.enteredAllowable.valueMpa",
+    label: "Allowable bolt stress, entered (0: none)",
+    quantity: "stress",
+    min: 0,
+    max: 2000,
+  },
+} satisfies Record<string, NumberFieldSpec>;
+
+/**
+ * "Flange and cover" section: the Appendix 2 flange type and hub, flange and cover materials, the
+ * UG-34 cover sketch, the test pressure, and an allowable bolt stress with its source for bolting
+ * ASME lists none for.
+ */
+export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
+  const d = ctx.design;
+  const fd: FlangeDesignInputs = d.flangeDesign ?? { kind: "not-entered" };
+  const set = (next: Partial<FlangeDesignInputs>) =>
+    ctx.dispatch({ type: "set-field", path: "flangeDesign", value: { ...fd, ...next } });
+  const hub = fd.hub ?? { g0Mm: 6, g1Mm: 12, hMm: 40 };
+  const hasCover = d.layers.some((l) => l.role === "cover");
+  const f = d.fastener;
+  const nominal = findThread(f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
+  const row = getBoltMaterialById(f.materialId);
+  const catalogueAllowable = row ? (getStrengthForDiameter(row, nominal)?.allowableMpa ?? null) : null;
+  const entered = f.enteredAllowable ?? null;
+  const setBoltAllowable = (next: { valueMpa: number; source: string } | null) =>
+    ctx.dispatch({ type: "set-field", path: "fastener", value: { ...f, enteredAllowable: next } });
+  return (
+    <fieldset className="grid grid-cols-2 gap-2" aria-label="Flange and cover">
+      <legend className="mb-1 text-table font-semibold text-ink-800">Flange and cover</legend>
+      <SelectField
+        path="flangeDesign.kind"
+        label="Flange type (Appendix 2)"
+        value={fd.kind}
+        disabled={ctx.readOnly}
+        onChange={(kind) =>
+          set({ kind, hub: kind === "integral-hub" || kind === "integral-no-hub" ? hub : (fd.hub ?? null) })
+        }
+        options={KIND_OPTIONS}
+      />
+      <SelectField
+        path="flangeDesign.flangeMaterialId"
+        label="Flange material"
+        value={fd.flangeMaterialId ?? ""}
+        disabled={ctx.readOnly}
+        onChange={(id) => set({ flangeMaterialId: id === "" ? null : id })}
+        options={[
+          { value: "", label: "Not chosen" },
+          ...FLANGE_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
+        ]}
+      />
+      {(fd.kind === "integral-hub" || fd.kind === "integral-no-hub") && (
+        <>
+          <NumberField
+            ctx={ctx}
+            spec={SPECS.g0}
+            value={hub.g0Mm}
+            onCommit={(g0Mm) =>
+              set({ hub: { ...hub, g0Mm, g1Mm: fd.kind === "integral-no-hub" ? g0Mm : hub.g1Mm } })
+            }
+          />
+          {fd.kind === "integral-hub" && (
+            <>
+              <NumberField
+                ctx={ctx}
+                spec={SPECS.g1}
+                value={hub.g1Mm}
+                onCommit={(g1Mm) => set({ hub: { ...hub, g1Mm } })}
+              />
+              <NumberField
+                ctx={ctx}
+                spec={SPECS.h}
+                value={hub.hMm}
+                onCommit={(hMm) => set({ hub: { ...hub, hMm } })}
+              />
+            </>
+          )}
+        </>
+      )}
+      {hasCover && (
+        <>
+          <SelectField
+            path="flangeDesign.coverSketch"
+            label="Cover attachment (UG-34 sketch, C)"
+            value={fd.coverSketch?.kind === "catalogue" ? fd.coverSketch.id : ""}
+            disabled={ctx.readOnly}
+            onChange={(id) => set({ coverSketch: id === "" ? null : { kind: "catalogue", id } })}
+            options={[
+              { value: "", label: "Not chosen" },
+              ...COVER_SKETCHES.map((s) => ({ value: s.id, label: `${s.label} — C = ${s.c}` })),
+            ]}
+          />
+          <SelectField
+            path="flangeDesign.coverMaterialId"
+            label="Cover material"
+            value={fd.coverMaterialId ?? ""}
+            disabled={ctx.readOnly}
+            onChange={(id) => set({ coverMaterialId: id === "" ? null : id })}
+            options={[
+              { value: "", label: "Not chosen" },
+              ...FLANGE_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
+            ]}
+          />
+        </>
+      )}
+      <NumberField
+        ctx={ctx}
+        spec={SPECS.test}
+        value={fd.testPressureMpa ?? 0}
+        onCommit={(p) => set({ testPressureMpa: p > 0 ? p : null })}
+      />
+      {(catalogueAllowable === null || entered) && (
+        <>
+          <NumberField
+            ctx={ctx}
+            spec={SPECS.boltAllowable}
+            value={entered?.valueMpa ?? 0}
+            onCommit={(v) => setBoltAllowable(v > 0 ? { valueMpa: v, source: entered?.source ?? "" } : null)}
+          />
+          <TextField
+            path="fastener.enteredAllowable.source"
+            label="Source of the bolt allowable"
+            value={entered?.source ?? ""}
+            maxLength={300}
+            required={!!entered}
+            disabled={ctx.readOnly || !entered}
+            onCommit={(source) => entered && setBoltAllowable({ ...entered, source })}
+            onInvalid={(bad) => ctx.setInvalid("fastener.enteredAllowable.source", bad)}
+            serverError={ctx.errorFor("fastener.enteredAllowable.source")}
+          />
+          <p className="col-span-2 text-micro text-ink-500">
+            {row?.name ?? "This bolting"} has no ASME II-D allowable: the Appendix 2 bolt-area check runs only
+            on an allowable you enter, with its source.
+          </p>
+        </>
+      )}
+    </fieldset>
+  );
+}

@@ -1,0 +1,34 @@
+import { describe, expect, it } from "vitest";
+import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
+import { analyse, loadExample, pdfToText, sheetInputFor } from "./fixtures";
+
+// The bolt-spacing sheet's "Flange" section, read back with poppler (pdftotext).
+describe("bolt-spacing sheet: Flange section", () => {
+  it("prints the Appendix 2 stresses, rigidity and the test pressure suggestion of the stored result, with the caution", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    design.flangeDesign = {
+      kind: "integral-hub",
+      hub: { g0Mm: 7.1, g1Mm: 14.2, hMm: 44 },
+      flangeMaterialId: "sa-105",
+    };
+    const result = analyse(design);
+    const pdf = await renderSpacingSheet(sheetInputFor(design, { result, units: "SI" }));
+    const text = pdfToText(pdf).replace(/\s+/g, " ");
+    expect(text).toContain("FLANGE");
+    expect(text).toContain("Appendix 2 flange");
+    expect(text).toContain("integral, with tapered hub");
+    expect(text).toMatch(/Operating: rigidity J \(KI 0.3\) \d+\.\d{3}/);
+    expect(text).toContain("Hydrostatic test pressure");
+    expect(text).toContain("UG-99");
+    expect(text).toContain("code-specific");
+    const st = result.flangeDesign.appendix2!.conditions[1].stMpa!;
+    expect(text).toContain(`${Number(st.toPrecision(4))} MPa`);
+  });
+  it("a result stored by an older core (no flange design) says so instead of inventing numbers", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    const result = analyse(design) as unknown as Record<string, unknown>;
+    delete result.flangeDesign;
+    const text = pdfToText(await renderSpacingSheet(sheetInputFor(design, { result }))).replace(/\s+/g, " ");
+    expect(text).toContain("not in this result (computed by core 1.2.0 and later)");
+  });
+});
