@@ -11,6 +11,14 @@ const envSchema = z.object({
   DATABASE_URL: z
     .string({ error: "is missing" })
     .regex(/^postgres(ql)?:\/\//, "must be a postgres:// connection URL"),
+  /**
+   * The owner role's connection, used only by `npm run db:migrate` (migrations, the job queue's
+   * schema, the runtime role's grants). The app itself never reads it. Falls back to DATABASE_URL.
+   */
+  MIGRATION_DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, "must be a postgres:// connection URL")
+    .optional(),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   APP_URL: z.url({ error: "must be the public origin of the app, e.g. http://127.0.0.1:3000" }),
   SMTP_HOST: z.string({ error: "is missing" }).min(1, "is empty"),

@@ -9,7 +9,7 @@ import {
 import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/route";
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
 import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
-import { getTestDb } from "../../setup/test-db";
+import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // The /api/v1 designs handlers called directly with real session cookies.
 const db = getTestDb();
@@ -59,15 +59,11 @@ beforeAll(async () => {
   cookies.other = await foreign.cookieFor("other");
 });
 afterAll(async () => {
-  await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
-      trx,
-    );
+  await deleteWithFrozenGuardOff(async (trx) => {
     await trx
       .deleteFrom("designs")
       .where("organization_id", "in", [home.organizationId, foreign.organizationId])
       .execute();
-    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
   await home.cleanup();
   await foreign.cleanup();
