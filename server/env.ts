@@ -28,6 +28,11 @@ const envSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3).default("Sealpitch <no-reply@sealpitch.local>"),
   SESSION_IDLE_DAYS: z.coerce.number().int().min(1).max(90).default(14),
+  /**
+   * How many reverse proxies in front of the app append to X-Forwarded-For (README "Security").
+   * 0 (no proxy): the address is the TCP peer that Next's server writes into that header.
+   */
+  TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;
