@@ -5,7 +5,7 @@
 import { Kysely, PostgresDialect } from "kysely";
 import pg from "pg";
 import PgBoss from "pg-boss";
-import { installQueues } from "@/server/jobs/queue-definitions";
+import { installQueues } from "./job-queues";
 import { parseEnvKeys } from "@/server/env";
 import { migrateToLatest } from "./migrate-to-latest";
 import { applyRuntimeGrants } from "./runtime-grants";

@@ -20,7 +20,7 @@ const QUEUE_SCHEMA = "pgboss";
 export type TableAccess = "read" | "append" | "read-write";
 
 /** Each public table's access for the runtime role, decided by the rules above. */
-export async function runtimeTableAccess(db: Kysely<any>): Promise<Map<string, TableAccess>> {
+export async function runtimeTableAccess<DB>(db: Kysely<DB>): Promise<Map<string, TableAccess>> {
   const { rows } = await sql<{ name: string; history: boolean }>`
     select c.relname as name, exists (
       select from pg_trigger t join pg_proc p on p.oid = t.tgfoid
@@ -44,7 +44,7 @@ const PRIVILEGES: Record<TableAccess, string> = {
 };
 
 /** Re-applies every grant of the runtime role (revoke all, then grant); run as the owner role. */
-export async function applyRuntimeGrants(db: Kysely<any>): Promise<void> {
+export async function applyRuntimeGrants<DB>(db: Kysely<DB>): Promise<void> {
   const { rows } = await sql<{ ok: boolean }>`
     select exists (select from pg_roles where rolname = ${RUNTIME_GROUP}) as ok`.execute(db);
   if (!rows[0]?.ok) {

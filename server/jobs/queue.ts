@@ -4,7 +4,7 @@ import { getEnv } from "@/server/env";
 
 // The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss"). The
 // runtime role may not create tables, so the schema and the queues are installed by
-// `npm run db:migrate` as the owner (queue-definitions.ts); here pg-boss only checks that they are
+// `npm run db:migrate` as the owner (db/job-queues.ts); here pg-boss only checks that they are
 // current. Started lazily, the first time a route needs the queue, so `next build` and pages that
 // never export touch nothing. Kept on globalThis so that development hot reloads do not start a
 // second instance.
@@ -13,7 +13,7 @@ const globalForBoss = globalThis as unknown as {
   sealpitchWorkers?: Set<string>;
 };
 
-export { SHEET_QUEUE } from "./queue-definitions";
+export { SHEET_QUEUE } from "@/db/job-queues";
 
 async function startBoss(): Promise<PgBoss> {
   const boss = new PgBoss({

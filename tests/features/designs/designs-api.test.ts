@@ -1,4 +1,3 @@
-import { sql } from "kysely";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { POST as analysesPost } from "@/app/api/v1/analyses/route";
 import {

@@ -1,4 +1,3 @@
-import { sql } from "kysely";
 import { parse } from "csv-parse/sync";
 import DxfParser from "dxf-parser";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";

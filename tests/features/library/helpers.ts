@@ -1,5 +1,4 @@
 import { randomUUID } from "node:crypto";
-import { sql } from "kysely";
 import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // Each test file makes its own organisation and people (unique slugs and e-mails), so it never

@@ -1,5 +1,4 @@
 import { randomUUID } from "node:crypto";
-import { sql } from "kysely";
 import type { Role } from "@/db/tables/core";
 import { buildCircularFlange } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
