@@ -15,7 +15,13 @@ function createDb(): Kysely<Database> {
   const env = getEnv();
   return new Kysely<Database>({
     dialect: new PostgresDialect({
-      pool: new pg.Pool({ connectionString: env.DATABASE_URL, max: env.DATABASE_POOL_MAX }),
+      // A connection attempt gives up after 5 s (an unreachable host would otherwise hang the
+      // request); the route then answers 503 (server/auth/guard.ts).
+      pool: new pg.Pool({
+        connectionString: env.DATABASE_URL,
+        max: env.DATABASE_POOL_MAX,
+        connectionTimeoutMillis: 5000,
+      }),
     }),
   });
 }

@@ -120,7 +120,7 @@ RUNTIME_GROUP=sealpitch_runtime
 pg_psql() {
   local port="$1"
   shift
-  as_pg_owner "$PG_BIN/psql" -h /tmp -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA "$@"
+  PGOPTIONS="-c client_min_messages=warning" as_pg_owner "$PG_BIN/psql" -h /tmp -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA "$@"
 }
 
 # pg_ensure_database PORT DBNAME OWNER OWNER_PASSWORD RUNTIME RUNTIME_PASSWORD [--recreate]
