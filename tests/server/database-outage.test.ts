@@ -50,11 +50,10 @@ beforeAll(async () => {
   relayPort = await openRelay();
   const url = new URL(process.env.DATABASE_URL!);
   url.port = String(relayPort);
-  appDb = new Kysely<Database>({
-    dialect: new PostgresDialect({
-      pool: new pg.Pool({ connectionString: url.toString(), max: 2, connectionTimeoutMillis: 3000 }),
-    }),
-  });
+  // Like db/index.ts: a dropped idle connection is an 'error' event on the pool, not a crash.
+  const pool = new pg.Pool({ connectionString: url.toString(), max: 2, connectionTimeoutMillis: 3000 });
+  pool.on("error", () => undefined);
+  appDb = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
   previous = globalForDb.sealpitchDb;
   globalForDb.sealpitchDb = appDb;
 });
