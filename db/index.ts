@@ -13,11 +13,17 @@ const globalForDb = globalThis as unknown as { sealpitchDb?: Kysely<Database> };
 
 function createDb(): Kysely<Database> {
   const env = getEnv();
-  return new Kysely<Database>({
-    dialect: new PostgresDialect({
-      pool: new pg.Pool({ connectionString: env.DATABASE_URL, max: env.DATABASE_POOL_MAX }),
-    }),
+  // A connection attempt gives up after 5 s (an unreachable host would otherwise hang the
+  // request); the route then answers 503 (server/auth/guard.ts). An idle connection the server
+  // drops (restart, outage) is an 'error' event on the pool: logged and discarded, never a crash,
+  // and the next query opens a new connection.
+  const pool = new pg.Pool({
+    connectionString: env.DATABASE_URL,
+    max: env.DATABASE_POOL_MAX,
+    connectionTimeoutMillis: 5000,
   });
+  pool.on("error", (error) => console.error(`[db] idle connection lost: ${error.message}`));
+  return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
 }
 
 export function getDb(): Kysely<Database> {

@@ -11,6 +11,14 @@ const envSchema = z.object({
   DATABASE_URL: z
     .string({ error: "is missing" })
     .regex(/^postgres(ql)?:\/\//, "must be a postgres:// connection URL"),
+  /**
+   * The owner role's connection, used only by `npm run db:migrate` (migrations, the job queue's
+   * schema, the runtime role's grants). The app itself never reads it. Falls back to DATABASE_URL.
+   */
+  MIGRATION_DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, "must be a postgres:// connection URL")
+    .optional(),
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   APP_URL: z.url({ error: "must be the public origin of the app, e.g. http://127.0.0.1:3000" }),
   SMTP_HOST: z.string({ error: "is missing" }).min(1, "is empty"),
@@ -20,6 +28,11 @@ const envSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3).default("Sealpitch <no-reply@sealpitch.local>"),
   SESSION_IDLE_DAYS: z.coerce.number().int().min(1).max(90).default(14),
+  /**
+   * How many reverse proxies in front of the app append to X-Forwarded-For (README "Security").
+   * 0 (no proxy): the address is the TCP peer that Next's server writes into that header.
+   */
+  TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

@@ -3,10 +3,10 @@ import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import { hashPassword, verifyPassword } from "@/server/auth/password";
 import {
-  minutesUntilAllowedAll,
   pruneAttempts,
   RATE_LIMITS,
-  recordAttempts,
+  releaseAttempts,
+  reserveAttempt,
   tooManyAttemptsMessage,
   type RateLimit,
 } from "@/server/auth/rate-limit";
@@ -31,8 +31,11 @@ export async function authenticate(
     [RATE_LIMITS.signInAccount, input.email],
     [RATE_LIMITS.signInAddress, input.addressKey],
   ];
-  const wait = await minutesUntilAllowedAll(db, checks, now);
-  if (wait > 0) return { ok: false, message: tooManyAttemptsMessage(wait), limited: true };
+  // The attempt is counted before the password is checked (atomically, per key), so parallel
+  // guesses cannot all slip in before the first failure is written.
+  const reservation = await reserveAttempt(db, checks, now);
+  if (!reservation.allowed)
+    return { ok: false, message: tooManyAttemptsMessage(reservation.minutes), limited: true };
 
   const user = await db
     .selectFrom("users")
@@ -45,11 +48,12 @@ export async function authenticate(
     user && passwordOk && !user.disabled_at ? await findDefaultOrganizationId(db, user.id) : null;
 
   if (!user || !passwordOk || user.disabled_at || !organizationId) {
-    await recordAttempts(db, checks);
     return { ok: false, message: WRONG_CREDENTIALS, limited: false };
   }
-  // A success does not wipe the account's failures: an attacker who also knows the password
-  // gains nothing, and the window expires on its own. Old rows are pruned here.
+  // A success takes back only its own attempt; it does not wipe the account's failures (an
+  // attacker who also knows the password gains nothing, and the window expires on its own).
+  // Old rows are pruned here.
+  await releaseAttempts(db, reservation.attemptIds);
   await pruneAttempts(db, now);
   return { ok: true, userId: user.id, organizationId };
 }

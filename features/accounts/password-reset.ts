@@ -3,9 +3,8 @@ import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import { hashPassword } from "@/server/auth/password";
 import {
-  minutesUntilAllowedAll,
   RATE_LIMITS,
-  recordAttempts,
+  reserveAttempt,
   tooManyAttemptsMessage,
   type RateLimit,
 } from "@/server/auth/rate-limit";
@@ -26,9 +25,8 @@ export async function requestPasswordReset(
     [RATE_LIMITS.resetAccount, input.email],
     [RATE_LIMITS.resetAddress, input.addressKey],
   ];
-  const wait = await minutesUntilAllowedAll(db, checks, now);
-  if (wait > 0) return { ok: false, message: tooManyAttemptsMessage(wait) };
-  await recordAttempts(db, checks);
+  const reservation = await reserveAttempt(db, checks, now);
+  if (!reservation.allowed) return { ok: false, message: tooManyAttemptsMessage(reservation.minutes) };
 
   const user = await db
     .selectFrom("users")

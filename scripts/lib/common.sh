@@ -113,18 +113,53 @@ pg_stop() {
   as_pg_owner "$PG_BIN/pg_ctl" -D "$data" -m fast -w -t 30 stop >/dev/null 2>&1 || true
 }
 
-# pg_ensure_database PORT DBNAME USER PASSWORD [--recreate]
+# The database roles (README "Security"). RUNTIME_GROUP is the NOLOGIN role that migrations grant
+# the application's privileges to (db/runtime-grants.ts); the app's login role is a member of it.
+RUNTIME_GROUP=sealpitch_runtime
+
+pg_psql() {
+  local port="$1"
+  shift
+  PGOPTIONS="-c client_min_messages=warning" as_pg_owner "$PG_BIN/psql" -h /tmp -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA "$@"
+}
+
+# pg_ensure_database PORT DBNAME OWNER OWNER_PASSWORD RUNTIME RUNTIME_PASSWORD [--recreate]
+# Creates (or brings up to date) the two login roles and the database, as the cluster's superuser:
+#   OWNER   owns the database, its schemas and every table; migrations run as it
+#           (MIGRATION_DATABASE_URL). It is not a superuser and cannot create roles or databases.
+#   RUNTIME the app's DATABASE_URL: no ownership, no CREATE anywhere, only what the migrations grant
+#           to sealpitch_runtime (db/runtime-grants.ts).
+# A database made before the split (owned by the RUNTIME role) is handed over to OWNER. Idempotent:
+# the ops scripts (backup restore, upgrade test) call it too.
 pg_ensure_database() {
-  local port="$1" name="$2" user="$3" password="$4" recreate="${5:-}"
-  local psql=(as_pg_owner "$PG_BIN/psql" -h /tmp -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA)
-  "${psql[@]}" -d postgres -c "do \$\$ begin
-      if not exists (select from pg_roles where rolname = '$user') then
-        create role $user login password '$password';
-      end if; end \$\$;" >/dev/null || die "could not create the database role $user"
+  local port="$1" name="$2" owner="$3" owner_password="$4" runtime="$5" runtime_password="$6" recreate="${7:-}"
+  pg_psql "$port" -d postgres -c "do \$\$ begin
+      if not exists (select from pg_roles where rolname = '$owner') then
+        create role $owner login password '$owner_password';
+      end if;
+      if not exists (select from pg_roles where rolname = '$runtime') then
+        create role $runtime login password '$runtime_password';
+      end if;
+      if not exists (select from pg_roles where rolname = '$RUNTIME_GROUP') then
+        create role $RUNTIME_GROUP nologin;
+      end if;
+    end \$\$;
+    alter role $owner nosuperuser nocreatedb nocreaterole noreplication nobypassrls;
+    alter role $runtime nosuperuser nocreatedb nocreaterole noreplication nobypassrls inherit;
+    grant $RUNTIME_GROUP to $runtime;" >/dev/null || die "could not create the database roles $owner and $runtime"
   if [ "$recreate" = "--recreate" ]; then
-    "${psql[@]}" -d postgres -c "drop database if exists $name with (force)" >/dev/null || die "could not drop $name"
+    pg_psql "$port" -d postgres -c "drop database if exists $name with (force)" >/dev/null || die "could not drop $name"
   fi
-  if [ -z "$("${psql[@]}" -d postgres -c "select 1 from pg_database where datname = '$name'")" ]; then
-    "${psql[@]}" -d postgres -c "create database $name owner $user" >/dev/null || die "could not create database $name"
+  if [ -z "$(pg_psql "$port" -d postgres -c "select 1 from pg_database where datname = '$name'")" ]; then
+    pg_psql "$port" -d postgres -c "create database $name owner $owner" >/dev/null || die "could not create database $name"
   fi
+  # Objects the runtime role owns (a database from before the split) move to the owner; then the
+  # runtime role may connect and use the schemas, nothing more (no CREATE, no TEMP).
+  pg_psql "$port" -d "$name" -c "alter database $name owner to $owner;
+    reassign owned by $runtime to $owner;
+    revoke all on database $name from public;
+    grant connect on database $name to $RUNTIME_GROUP;
+    alter schema public owner to $owner;
+    revoke create on schema public from public;
+    grant usage on schema public to $RUNTIME_GROUP;" >/dev/null || die "could not set the owner and privileges of $name"
 }

@@ -3,8 +3,12 @@ import type { Adapter, DatabaseSession, DatabaseUser } from "lucia";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { UnitSystem } from "@/db/tables/core";
+import { hashSessionId } from "./session-id";
 
 // Lucia's storage contract over our own `sessions` and `users` tables (migration 000200).
+// `sessions.id` holds SHA-256 of the session id (session-id.ts): every method hashes the id lucia
+// passes in, and getSessionAndUser answers with the id it was asked for. getUserSessions can only
+// return the stored hashes as ids; they are not cookies and are used for listing only.
 // Only the columns below ever leave the database here: password_hash is never selected, so it
 // cannot end up in a session, a viewer or anything serialised to the browser.
 export interface SessionRowAttributes {
@@ -24,14 +28,17 @@ const sessionColumns = [
   "sessions.active_organization_id",
 ] as const;
 
-function toDatabaseSession(row: {
-  id: string;
-  user_id: string;
-  expires_at: Date;
-  active_organization_id: string | null;
-}): DatabaseSession {
+function toDatabaseSession(
+  row: {
+    id: string;
+    user_id: string;
+    expires_at: Date;
+    active_organization_id: string | null;
+  },
+  id: string = row.id,
+): DatabaseSession {
   return {
-    id: row.id,
+    id,
     userId: row.user_id,
     expiresAt: new Date(row.expires_at),
     attributes: { active_organization_id: row.active_organization_id },
@@ -51,10 +58,10 @@ export function createKyselyAdapter(db: Kysely<Database>): Adapter {
           "users.unit_system",
           "users.disabled_at",
         ])
-        .where("sessions.id", "=", sessionId)
+        .where("sessions.id", "=", hashSessionId(sessionId))
         .executeTakeFirst();
       if (!row) return [null, null];
-      const session = toDatabaseSession(row);
+      const session = toDatabaseSession(row, sessionId);
       // A disabled account has no user: lucia then deletes the session.
       if (row.disabled_at) return [session, null];
       const user: DatabaseUser = {
@@ -70,14 +77,14 @@ export function createKyselyAdapter(db: Kysely<Database>): Adapter {
         .select(sessionColumns)
         .where("sessions.user_id", "=", userId)
         .execute();
-      return rows.map(toDatabaseSession);
+      return rows.map((row) => toDatabaseSession(row));
     },
 
     async setSession(session) {
       await db
         .insertInto("sessions")
         .values({
-          id: session.id,
+          id: hashSessionId(session.id),
           user_id: session.userId,
           expires_at: session.expiresAt,
           active_organization_id: session.attributes.active_organization_id ?? null,
@@ -86,11 +93,15 @@ export function createKyselyAdapter(db: Kysely<Database>): Adapter {
     },
 
     async updateSessionExpiration(sessionId, expiresAt) {
-      await db.updateTable("sessions").set({ expires_at: expiresAt }).where("id", "=", sessionId).execute();
+      await db
+        .updateTable("sessions")
+        .set({ expires_at: expiresAt })
+        .where("id", "=", hashSessionId(sessionId))
+        .execute();
     },
 
     async deleteSession(sessionId) {
-      await db.deleteFrom("sessions").where("id", "=", sessionId).execute();
+      await db.deleteFrom("sessions").where("id", "=", hashSessionId(sessionId)).execute();
     },
 
     async deleteUserSessions(userId) {

@@ -3,6 +3,7 @@ import { cookies, headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { cache } from "react";
 import { getDb } from "@/db/index";
+import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from "@/db/connection-errors";
 import type { Role } from "@/db/tables/core";
 import { getEnv } from "@/server/env";
 import { getLucia, SESSION_COOKIE_NAME } from "./lucia";
@@ -42,6 +43,21 @@ export function jsonError(status: number, message: string, fieldErrors?: Record<
   );
 }
 
+/** 503 with Retry-After: the database cannot be reached now; the same request will work once it is back. */
+export function databaseUnavailableResponse(): Response {
+  return Response.json(
+    {
+      error: {
+        message: `Sealpitch cannot reach its database just now. Nothing was changed; try again in ${DATABASE_RETRY_AFTER_SECONDS} seconds.`,
+      },
+    },
+    {
+      status: 503,
+      headers: { "cache-control": "no-store", "retry-after": String(DATABASE_RETRY_AFTER_SECONDS) },
+    },
+  );
+}
+
 /** True when a state-changing request comes from our own origin (CSRF defence for route handlers). */
 export function isSameOrigin(request: Request): boolean {
   const origin = request.headers.get("origin");
@@ -62,7 +78,17 @@ export async function authorizeApi(
     return { ok: false, response: jsonError(403, "This request did not come from Sealpitch.") };
   }
   const sessionId = getLucia().readSessionCookie(request.headers.get("cookie") ?? "");
-  const context = await resolveViewerContext(getDb(), sessionId);
+  // Every API route starts here, and the session lookup is its first database query: an outage is
+  // answered in this one place with a JSON 503 and Retry-After, never an empty 500 (the pool
+  // reconnects by itself once the database is back). The cause goes to the server log only.
+  let context: ViewerContext | null;
+  try {
+    context = await resolveViewerContext(getDb(), sessionId);
+  } catch (error) {
+    if (!isDatabaseUnavailable(error)) throw error;
+    console.error(`[api] database unavailable: ${error instanceof Error ? error.message : String(error)}`);
+    return { ok: false, response: databaseUnavailableResponse() };
+  }
   if (!context) return { ok: false, response: jsonError(401, "Sign in to continue.") };
   if (!hasRole(context.viewer, options?.role)) {
     return { ok: false, response: jsonError(403, "Your role in this organisation does not allow this.") };

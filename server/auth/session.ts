@@ -2,6 +2,7 @@ import "server-only";
 import { cookies } from "next/headers";
 import { getDb } from "@/db/index";
 import { getLucia } from "./lucia";
+import { hashSessionId } from "./session-id";
 
 // Writing the session cookie: only in server actions and route handlers (Next forbids it in
 // server components).
@@ -41,7 +42,7 @@ export async function switchSessionOrganization(
   const result = await db
     .updateTable("sessions")
     .set({ active_organization_id: organizationId })
-    .where("id", "=", sessionId)
+    .where("id", "=", hashSessionId(sessionId))
     .where("user_id", "=", userId)
     .where((eb) =>
       eb.exists(

@@ -2,33 +2,30 @@ import "server-only";
 import PgBoss from "pg-boss";
 import { getEnv } from "@/server/env";
 
-// The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss", which
-// pg-boss installs and migrates itself on start). Started lazily, the first time a route needs
-// the queue, so `next build` and pages that never export touch nothing. Kept on globalThis so
-// that development hot reloads do not start a second instance.
+// The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss"). The
+// runtime role may not create tables, so the schema and the queues are installed by
+// `npm run db:migrate` as the owner (db/job-queues.ts); here pg-boss only checks that they are
+// current. Started lazily, the first time a route needs the queue, so `next build` and pages that
+// never export touch nothing. Kept on globalThis so that development hot reloads do not start a
+// second instance.
 const globalForBoss = globalThis as unknown as {
   sealpitchBoss?: Promise<PgBoss>;
   sealpitchWorkers?: Set<string>;
 };
 
-export const SHEET_QUEUE = "spacing-sheet";
+export { SHEET_QUEUE } from "@/db/job-queues";
 
 async function startBoss(): Promise<PgBoss> {
   const boss = new PgBoss({
     connectionString: getEnv().DATABASE_URL,
     max: 3,
     application_name: "sealpitch-jobs",
-    // No cron schedules; maintenance (expiry, archiving) stays on.
+    // The schema is the migration's job; no cron schedules; maintenance (expiry, archiving) stays on.
+    migrate: false,
     schedule: false,
   });
   boss.on("error", (error: Error) => console.error(`[jobs] ${error.message}`));
   await boss.start();
-  await boss.createQueue(SHEET_QUEUE, {
-    name: SHEET_QUEUE,
-    retryLimit: 0,
-    expireInSeconds: 300,
-    retentionMinutes: 24 * 60,
-  });
   return boss;
 }
 

@@ -3,16 +3,17 @@ import { afterAll, beforeEach, describe, expect, it } from "vitest";
 import { listMigrationNames } from "@/db/migration-names";
 import { migrateToLatest } from "@/db/migrate-to-latest";
 import { getHealth } from "@/features/health/queries";
-import { clearTables, getTestDb } from "../setup/test-db";
+import { clearTables, getOwnerTestDb, getTestDb } from "../setup/test-db";
 
 const db = getTestDb();
+const owner = getOwnerTestDb();
 
 describe("database foundation (real PostgreSQL)", () => {
-  beforeEach(() => clearTables(db));
-  afterAll(() => clearTables(db));
+  beforeEach(() => clearTables());
+  afterAll(() => clearTables());
 
   it("is migrated to the newest migration file and records it in app_meta", async () => {
-    const report = await migrateToLatest(db);
+    const report = await migrateToLatest(owner);
     expect(report.applied).toEqual([]); // scripts/test.sh already migrated; a second run is a no-op
     const names = await listMigrationNames();
     const meta = await db.selectFrom("app_meta").select("schema_version").executeTakeFirstOrThrow();
@@ -72,11 +73,13 @@ describe("database foundation (real PostgreSQL)", () => {
   it("reports health: green when current, a reason when a migration is missing", async () => {
     expect(await getHealth(db)).toMatchObject({ ok: true });
     const newest = (await listMigrationNames()).at(-1)!;
-    await sql`delete from kysely_migration where name = ${newest}`.execute(db);
+    await sql`delete from kysely_migration where name = ${newest}`.execute(owner);
     try {
       expect(await getHealth(db)).toEqual({ ok: false, reason: `migrations pending: ${newest}` });
     } finally {
-      await sql`insert into kysely_migration (name, timestamp) values (${newest}, now()::text)`.execute(db);
+      await sql`insert into kysely_migration (name, timestamp) values (${newest}, now()::text)`.execute(
+        owner,
+      );
     }
   });
 });

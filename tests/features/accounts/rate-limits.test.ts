@@ -1,4 +1,7 @@
 import { randomUUID } from "node:crypto";
+import { Kysely, PostgresDialect } from "kysely";
+import pg from "pg";
+import type { Database } from "@/db/types";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { authenticate, WRONG_CREDENTIALS } from "@/features/accounts/credentials";
 import { requestPasswordReset, RESET_REQUESTED } from "@/features/accounts/password-reset";
@@ -11,13 +14,14 @@ import {
 import { getTestDb } from "../../setup/test-db";
 
 const db = getTestDb();
-let org: OrganizationFixture<"locked" | "other" | "resetter">;
+let org: OrganizationFixture<"locked" | "other" | "resetter" | "parallel">;
 
 beforeAll(async () => {
   org = await createOrganizationWithMembers(db, {
     locked: ["designer"],
     other: ["designer"],
     resetter: ["approver"],
+    parallel: ["designer"],
   });
 });
 afterAll(async () => {
@@ -110,6 +114,58 @@ describe("sign-in rate limits", () => {
   });
 });
 
+describe("sign-in limit under parallel requests", () => {
+  it("25 parallel wrong passwords for one account get at most 5 real password checks", async () => {
+    // Its own pool, wide enough that all 25 really run at once against PostgreSQL.
+    const wide = new Kysely<Database>({
+      dialect: new PostgresDialect({
+        pool: new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 25 }),
+      }),
+    });
+    try {
+      const email = org.users.parallel.email;
+      const outcomes = await Promise.all(
+        Array.from({ length: 25 }, () =>
+          authenticate(wide, { email, password: "wrong-guess", addressKey: `rl-${randomUUID()}` }),
+        ),
+      );
+      // A limited answer returns before the password is verified; every other answer verified it.
+      const checked = outcomes.filter((o) => !o.ok && !o.limited).length;
+      expect(checked).toBe(RATE_LIMITS.signInAccount.max);
+      expect(outcomes.filter((o) => !o.ok && o.limited)).toHaveLength(25 - RATE_LIMITS.signInAccount.max);
+      const rows = await db
+        .selectFrom("auth_attempts")
+        .select("id")
+        .where("kind", "=", RATE_LIMITS.signInAccount.kind)
+        .where("key", "=", email)
+        .execute();
+      expect(rows).toHaveLength(RATE_LIMITS.signInAccount.max);
+    } finally {
+      await wide.destroy();
+    }
+  });
+
+  it("a successful sign-in takes back its own attempt, not the earlier failures", async () => {
+    const email = org.users.other.email;
+    const count = async () =>
+      (
+        await db
+          .selectFrom("auth_attempts")
+          .select("id")
+          .where("kind", "=", RATE_LIMITS.signInAccount.kind)
+          .where("key", "=", email)
+          .execute()
+      ).length;
+    const before = await count();
+    await authenticate(db, { email, password: "wrong", addressKey: `rl-${randomUUID()}` });
+    expect(await count()).toBe(before + 1);
+    expect(
+      await authenticate(db, { email, password: FIXTURE_PASSWORD, addressKey: `rl-${randomUUID()}` }),
+    ).toMatchObject({ ok: true });
+    expect(await count()).toBe(before + 1);
+  });
+});
+
 describe("reset request rate limits", () => {
   it("per account: the 4th request in 15 minutes is refused and sends nothing", async () => {
     for (let i = 0; i < RATE_LIMITS.resetAccount.max; i += 1) {
@@ -149,8 +205,15 @@ describe("reset request rate limits", () => {
 });
 
 describe("client address key", () => {
-  it("takes the first X-Forwarded-For hop, else one fixed key", () => {
-    expect(clientAddressKey(new Headers({ "x-forwarded-for": "203.0.113.7, 10.0.0.1" }))).toBe("203.0.113.7");
-    expect(clientAddressKey(new Headers())).toBe("direct");
+  it("without a trusted proxy takes the address Next's server wrote (the TCP peer), never an inner hop", () => {
+    expect(clientAddressKey(new Headers({ "x-forwarded-for": "127.0.0.1" }), 0)).toBe("127.0.0.1");
+    expect(clientAddressKey(new Headers(), 0)).toBe("unknown");
+  });
+
+  it("behind n trusted proxies takes the n-th entry from the right, so a forged left part is ignored", () => {
+    const forged = new Headers({ "x-forwarded-for": "198.51.100.9, 203.0.113.7, 10.0.0.2" });
+    expect(clientAddressKey(forged, 1)).toBe("10.0.0.2");
+    expect(clientAddressKey(forged, 2)).toBe("203.0.113.7");
+    expect(clientAddressKey(new Headers({ "x-forwarded-for": "203.0.113.7" }), 3)).toBe("203.0.113.7");
   });
 });

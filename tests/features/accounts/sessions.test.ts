@@ -3,10 +3,12 @@ import { createKyselyAdapter } from "@/server/auth/adapter";
 import { authorizeApi } from "@/server/auth/guard";
 import { createLucia, getLucia, SESSION_COOKIE_NAME } from "@/server/auth/lucia";
 import { PASSWORD_HASH_OPTIONS, hashPassword, verifyPassword } from "@/server/auth/password";
+import { hashSessionId } from "@/server/auth/session-id";
 import { resolveViewerContext } from "@/server/auth/viewer";
 import { getEnv, parseEnv } from "@/server/env";
 import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
-import { getTestDb } from "../../setup/test-db";
+import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
+import * as hashSessionsMigration from "../../../migrations/2026_12_02_134100_hash_session_ids";
 
 const db = getTestDb();
 let org: OrganizationFixture<"dana" | "arlo">;
@@ -68,7 +70,8 @@ describe("the Kysely adapter over sessions/users", () => {
     const later = new Date(expiresAt.getTime() + 86_400_000);
     await adapter.updateSessionExpiration(id, later);
     expect(
-      (await adapter.getUserSessions(org.users.dana.userId)).find((s) => s.id === id)?.expiresAt,
+      (await adapter.getUserSessions(org.users.dana.userId)).find((s) => s.id === hashSessionId(id))
+        ?.expiresAt,
     ).toEqual(later);
     await adapter.deleteSession(id);
     expect(await adapter.getSessionAndUser(id)).toEqual([null, null]);
@@ -86,7 +89,11 @@ describe("the Kysely adapter over sessions/users", () => {
     try {
       expect((await getLucia().validateSession(session.id)).session).toBeNull();
       expect(
-        await db.selectFrom("sessions").select("id").where("id", "=", session.id).executeTakeFirst(),
+        await db
+          .selectFrom("sessions")
+          .select("id")
+          .where("id", "=", hashSessionId(session.id))
+          .executeTakeFirst(),
       ).toBeUndefined();
     } finally {
       await db
@@ -98,8 +105,9 @@ describe("the Kysely adapter over sessions/users", () => {
   });
 
   it("deletes only expired sessions", async () => {
+    const oldId = `old-${Date.now()}`;
     await adapter.setSession({
-      id: `old-${Date.now()}`,
+      id: oldId,
       userId: org.users.dana.userId,
       expiresAt: new Date(Date.now() - 1000),
       attributes: { active_organization_id: null },
@@ -107,8 +115,67 @@ describe("the Kysely adapter over sessions/users", () => {
     const live = await getLucia().createSession(org.users.dana.userId, { active_organization_id: null });
     await adapter.deleteExpiredSessions();
     const ids = (await adapter.getUserSessions(org.users.dana.userId)).map((s) => s.id);
-    expect(ids).toContain(live.id);
-    expect(ids.some((id) => id.startsWith("old-"))).toBe(false);
+    expect(ids).toContain(hashSessionId(live.id));
+    expect(ids).not.toContain(hashSessionId(oldId));
+  });
+});
+
+describe("stored session ids", () => {
+  it("keeps SHA-256 of each id, never an issued id, and still finds the session by its cookie", async () => {
+    const lucia = getLucia();
+    const issued = await Promise.all(
+      [0, 1, 2].map(() => lucia.createSession(org.users.dana.userId, { active_organization_id: null })),
+    );
+    const stored = (await db.selectFrom("sessions").select("id").execute()).map((r) => r.id);
+    for (const session of issued) {
+      expect(stored).not.toContain(session.id);
+      expect(stored).toContain(hashSessionId(session.id));
+      expect((await lucia.validateSession(session.id)).session?.id).toBe(session.id);
+      // Holding the stored value is not holding the session.
+      expect((await lucia.validateSession(hashSessionId(session.id))).session).toBeNull();
+    }
+    expect(stored.every((id) => /^[0-9a-f]{64}$/.test(id))).toBe(true);
+    // The database refuses a row that is not such a hash, whoever writes it.
+    await expect(
+      db
+        .insertInto("sessions")
+        .values({ id: issued[0]!.id + "x", user_id: org.users.dana.userId, expires_at: new Date() })
+        .execute(),
+    ).rejects.toThrow(/sessions_id_is_sha256/);
+    for (const session of issued) await lucia.invalidateSession(session.id);
+    expect(
+      await db
+        .selectFrom("sessions")
+        .select("id")
+        .where(
+          "id",
+          "in",
+          issued.map((s) => hashSessionId(s.id)),
+        )
+        .execute(),
+    ).toEqual([]);
+  });
+});
+
+describe("the migration to hashed ids", () => {
+  it("rehashes the ids stored before it, so existing cookies keep working", async () => {
+    const rolledBack = new Error("rolled back on purpose");
+    const raw = "legacyissuedsessionid234567abcdefghijklm";
+    await expect(
+      getOwnerTestDb()
+        .transaction()
+        .execute(async (trx) => {
+          await hashSessionsMigration.down(trx);
+          await trx
+            .insertInto("sessions")
+            .values({ id: raw, user_id: org.users.dana.userId, expires_at: new Date(Date.now() + 3_600_000) })
+            .execute();
+          await hashSessionsMigration.up(trx);
+          const rows = await trx.selectFrom("sessions").select("id").execute();
+          expect(rows.map((r) => r.id)).toEqual([hashSessionId(raw)]);
+          throw rolledBack;
+        }),
+    ).rejects.toBe(rolledBack);
   });
 });
 
@@ -124,24 +191,32 @@ describe("sliding expiry", () => {
     expect(fresh.session?.fresh).toBe(false);
 
     const nearlyIdle = new Date(Date.now() + idleMs / 2 - 60_000);
-    await db.updateTable("sessions").set({ expires_at: nearlyIdle }).where("id", "=", session.id).execute();
+    await db
+      .updateTable("sessions")
+      .set({ expires_at: nearlyIdle })
+      .where("id", "=", hashSessionId(session.id))
+      .execute();
     const slid = await lucia.validateSession(session.id);
     expect(slid.session?.fresh).toBe(true);
     const stored = await db
       .selectFrom("sessions")
       .select("expires_at")
-      .where("id", "=", session.id)
+      .where("id", "=", hashSessionId(session.id))
       .executeTakeFirstOrThrow();
     expect(new Date(stored.expires_at).getTime()).toBeGreaterThan(Date.now() + idleMs - 60_000);
 
     await db
       .updateTable("sessions")
       .set({ expires_at: new Date(Date.now() - 1000) })
-      .where("id", "=", session.id)
+      .where("id", "=", hashSessionId(session.id))
       .execute();
     expect((await lucia.validateSession(session.id)).session).toBeNull();
     expect(
-      await db.selectFrom("sessions").select("id").where("id", "=", session.id).executeTakeFirst(),
+      await db
+        .selectFrom("sessions")
+        .select("id")
+        .where("id", "=", hashSessionId(session.id))
+        .executeTakeFirst(),
     ).toBeUndefined();
   });
 });

@@ -1,4 +1,3 @@
-import { sql } from "kysely";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { POST as analysesPost } from "@/app/api/v1/analyses/route";
 import {
@@ -14,7 +13,7 @@ import {
   createOrganizationWithMembers,
   type OrganizationFixture,
 } from "../../setup/fixtures";
-import { getTestDb } from "../../setup/test-db";
+import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // The /api/v1 designs handlers called directly with real session cookies.
 const db = getTestDb();
@@ -51,15 +50,11 @@ beforeAll(async () => {
   cookies.other = await foreign.cookieFor("other");
 });
 afterAll(async () => {
-  await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
-      trx,
-    );
+  await deleteWithFrozenGuardOff(async (trx) => {
     await trx
       .deleteFrom("designs")
       .where("organization_id", "in", [home.organizationId, foreign.organizationId])
       .execute();
-    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
   await home.cleanup();
   await foreign.cleanup();

@@ -16,7 +16,7 @@ import { findDesign, listDesigns } from "@/features/designs/queries";
 import { listActivity } from "@/features/activity/queries";
 import { listDesignsQuerySchema } from "@/features/designs/schema";
 import { createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
-import { getTestDb } from "../../setup/test-db";
+import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // Queries and commands on the real PostgreSQL, in organisations of our own.
 const db = getTestDb();
@@ -64,12 +64,8 @@ beforeAll(async () => {
 });
 /** Approved revisions refuse DELETE; the guard is off only inside this one cleanup transaction. */
 async function dropDesigns(organizationIds: string[]): Promise<void> {
-  await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
-      trx,
-    );
+  await deleteWithFrozenGuardOff(async (trx) => {
     await trx.deleteFrom("designs").where("organization_id", "in", organizationIds).execute();
-    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
 }
 

@@ -1,4 +1,3 @@
-import { sql } from "kysely";
 import { parse } from "csv-parse/sync";
 import DxfParser from "dxf-parser";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -14,7 +13,7 @@ import { CORE_VERSION } from "@/features/analysis/core/version";
 import { computeContentHash } from "@/features/analysis/content-hash";
 import { stopQueue } from "@/server/jobs/queue";
 import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
-import { getTestDb } from "../../setup/test-db";
+import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 import { analyse, loadExample, manyBoltFlange, pdfToText } from "./fixtures";
 
 // The export routes through the real database and real sessions: any member may export, another
@@ -68,14 +67,10 @@ async function insertDesign(
 }
 
 async function dropOrg(org: OrganizationFixture<string>) {
-  await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
-      trx,
-    );
+  await deleteWithFrozenGuardOff(async (trx) => {
     await trx.deleteFrom("export_files").where("organization_id", "=", org.organizationId).execute();
     await trx.deleteFrom("design_revisions").where("organization_id", "=", org.organizationId).execute();
     await trx.deleteFrom("designs").where("organization_id", "=", org.organizationId).execute();
-    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
   await org.cleanup();
 }

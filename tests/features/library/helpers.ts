@@ -1,6 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { sql } from "kysely";
-import { getTestDb } from "../../setup/test-db";
+import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // Each test file makes its own organisation and people (unique slugs and e-mails), so it never
 // collides with the e2e seed or with other suites sharing the database.
@@ -38,14 +37,10 @@ export async function dropOrg(organizationId: string) {
     .execute();
   // An approved revision refuses DELETE (by design); the test's own data is removed with that
   // trigger off inside one transaction, so nobody else ever sees it disabled.
-  await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
-      trx,
-    );
+  await deleteWithFrozenGuardOff(async (trx) => {
     await trx.deleteFrom("design_attachments").where("organization_id", "=", organizationId).execute();
     await trx.deleteFrom("design_revisions").where("organization_id", "=", organizationId).execute();
     await trx.deleteFrom("organizations").where("id", "=", organizationId).execute();
-    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
   if (members.length)
     await db

@@ -14,7 +14,7 @@ import {
   submitRevision,
 } from "@/features/reviews/transitions";
 import { checksNeedingJustification, readChecks } from "@/features/reviews/model/review-checks";
-import { getTestDb } from "../../setup/test-db";
+import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
 
 // Four-eyes independence over a revision's whole life: everyone who created, saved (at any time),
@@ -138,17 +138,23 @@ describe("four-eyes independence (real PostgreSQL)", () => {
         db,
       ),
     ).rejects.toThrow(/decided_by/);
-    // The record cannot be rewritten to make the lead look independent.
-    await expect(
-      sql`delete from revision_editors where revision_id = ${row.id} and user_id = ${org.lead.userId}`.execute(
-        db,
-      ),
-    ).rejects.toThrow(/append-only/);
-    await expect(
-      sql`update revision_editors set user_id = ${org.designer.userId} where revision_id = ${row.id}`.execute(
-        db,
-      ),
-    ).rejects.toThrow(/append-only/);
+    // The record cannot be rewritten to make the lead look independent: the app's role lacks the
+    // privilege, and even the owner meets the append-only trigger.
+    for (const [who, refusal] of [
+      [db, /permission denied/],
+      [getOwnerTestDb(), /append-only/],
+    ] as const) {
+      await expect(
+        sql`delete from revision_editors where revision_id = ${row.id} and user_id = ${org.lead.userId}`.execute(
+          who,
+        ),
+      ).rejects.toThrow(refusal);
+      await expect(
+        sql`update revision_editors set user_id = ${org.designer.userId} where revision_id = ${row.id}`.execute(
+          who,
+        ),
+      ).rejects.toThrow(refusal);
+    }
     expect((await revisionOf(designId)).status).toBe("in_review");
 
     // An independent approver still can.
@@ -275,17 +281,20 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     });
     const rolledBack = new Error("rolled back on purpose");
     await expect(
-      db.transaction().execute(async (trx) => {
-        await editorsMigration.down(trx);
-        await editorsMigration.up(trx);
-        const rows = await trx
-          .selectFrom("revision_editors")
-          .select("user_id")
-          .where("revision_id", "=", rev.id)
-          .execute();
-        expect(rows.map((r) => r.user_id).sort()).toEqual(sorted(org.designer.userId, org.lead.userId));
-        throw rolledBack;
-      }),
+      // DDL: only the owner role may run a migration.
+      getOwnerTestDb()
+        .transaction()
+        .execute(async (trx) => {
+          await editorsMigration.down(trx);
+          await editorsMigration.up(trx);
+          const rows = await trx
+            .selectFrom("revision_editors")
+            .select("user_id")
+            .where("revision_id", "=", rev.id)
+            .execute();
+          expect(rows.map((r) => r.user_id).sort()).toEqual(sorted(org.designer.userId, org.lead.userId));
+          throw rolledBack;
+        }),
     ).rejects.toBe(rolledBack);
     expect(await editorsOf(rev.id)).toEqual([org.designer.userId]);
   });

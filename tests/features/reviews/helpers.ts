@@ -1,10 +1,9 @@
 import { randomUUID } from "node:crypto";
-import { sql } from "kysely";
 import type { Role } from "@/db/tables/core";
 import { buildCircularFlange } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
 import type { TransitionActor } from "@/features/reviews/transitions";
-import { getTestDb } from "../../setup/test-db";
+import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // Each review suite makes its own organisation and people (unique slugs and e-mails), so it never
 // collides with the e2e seed or other suites sharing the database.
@@ -71,13 +70,9 @@ export async function dropReviewOrg(organizationId: string) {
     .select("user_id")
     .where("organization_id", "=", organizationId)
     .execute();
-  await db.transaction().execute(async (trx) => {
-    await sql`alter table design_revisions disable trigger design_revisions_frozen_when_approved`.execute(
-      trx,
-    );
+  await deleteWithFrozenGuardOff(async (trx) => {
     await trx.deleteFrom("design_revisions").where("organization_id", "=", organizationId).execute();
     await trx.deleteFrom("organizations").where("id", "=", organizationId).execute();
-    await sql`alter table design_revisions enable trigger design_revisions_frozen_when_approved`.execute(trx);
   });
   if (members.length)
     await db

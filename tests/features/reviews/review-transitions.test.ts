@@ -16,7 +16,7 @@ import {
   submitRevision,
 } from "@/features/reviews/transitions";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { getTestDb } from "../../setup/test-db";
+import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
 
 // The review state machine against the real PostgreSQL: every transition, the refused ones, the
@@ -369,12 +369,18 @@ describe("review transitions (real PostgreSQL)", () => {
     });
     const [entry] = await listActivity(db, org.organizationId, designId);
     expect(entry).toMatchObject({ kind: "exported", detail: "sheet.pdf" });
-    await expect(
-      sql`update design_activity set detail = 'nothing happened' where id = ${entry!.id}`.execute(db),
-    ).rejects.toThrow(/append-only/);
-    await expect(sql`delete from design_activity where id = ${entry!.id}`.execute(db)).rejects.toThrow(
-      /append-only/,
-    );
+    // Refused twice over: the app's role lacks the privilege, and even the owner meets the trigger.
+    for (const [who, refusal] of [
+      [db, /permission denied/],
+      [getOwnerTestDb(), /append-only/],
+    ] as const) {
+      await expect(
+        sql`update design_activity set detail = 'nothing happened' where id = ${entry!.id}`.execute(who),
+      ).rejects.toThrow(refusal);
+      await expect(sql`delete from design_activity where id = ${entry!.id}`.execute(who)).rejects.toThrow(
+        refusal,
+      );
+    }
     expect((await listActivity(db, org.organizationId, designId)).map((e) => e.kind)).toEqual([
       "exported",
       "created",
