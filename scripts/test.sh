@@ -15,6 +15,8 @@ ensure_node_modules
 ensure_fe_tools
 say "format check (prettier)"
 npx prettier --check . --log-level=warn || die "files are not formatted: run npm run format"
+say "lint (eslint: Next, react-hooks, typescript-eslint, import boundaries)"
+npm run --silent lint -- --quiet || die "lint errors: see above (npm run lint)"
 
 stack_up
 
