@@ -44,7 +44,11 @@ export function periodicBeamCompliancePerN(
   const single = lambdaPerMm / (2 * foundationModulusMpa);
   if (lp > 30) return single;
   if (lp < 1e-4) return 1 / (foundationModulusMpa * pitchMm);
-  return (single * (Math.sinh(lp) + Math.sin(lp))) / (Math.cosh(lp) - Math.cos(lp));
+  // sinh and cosh from exp (already used by the solver), for the same bits in every engine.
+  const e = Math.exp(lp);
+  const sinh = (e - 1 / e) / 2;
+  const cosh = (e + 1 / e) / 2;
+  return (single * (sinh + Math.sin(lp))) / (cosh - Math.cos(lp));
 }
 
 /** Periodic superposition of Hetényi's solution on a closed path of length L (images until negligible). */

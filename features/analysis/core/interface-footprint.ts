@@ -83,10 +83,15 @@ export function interfaceFootprint(
   return { innerRadiusMm: ri, outerRadiusMm: rc, contactTangent: tan, shapeA: shape.a, shapeB: shape.b };
 }
 
-/** Shape value (1 − ξ^a)^b for ξ in [0, 1]; 0 outside. */
+/**
+ * Shape value (1 − ξ^a)^b for ξ in [0, 1]; 0 outside. Written with exp and log only (no general
+ * Math.pow), so that the browser's engine and the server's give the same bits.
+ */
 export function footprintShapeValue(xi: number, a: number, b: number): number {
   if (xi < 0 || xi >= 1) return 0;
-  return Math.pow(1 - Math.pow(xi, a), b);
+  if (xi === 0) return 1;
+  const inner = 1 - Math.exp(a * Math.log(xi));
+  return inner <= 0 ? 0 : Math.exp(b * Math.log(inner));
 }
 
 /**
