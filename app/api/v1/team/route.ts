@@ -2,6 +2,7 @@ import { getDb } from "@/db/index";
 import { getTeam } from "@/features/accounts/team";
 import { inviteMemberCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { readJsonBody } from "@/server/http/request-body";
 
 // The Crew (members and open invitations) of the viewer's organisation. Admin only.
 export async function GET(request: Request): Promise<Response> {
@@ -16,8 +17,9 @@ export async function GET(request: Request): Promise<Response> {
 export async function POST(request: Request): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
-  const body = await request.json().catch(() => null);
-  const result = await inviteMemberCommand(auth.viewer, body);
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  const result = await inviteMemberCommand(auth.viewer, body.body);
   return result.ok
     ? Response.json(result.data, { status: 201 })
     : jsonError(result.status, result.message, result.fieldErrors);
