@@ -12,6 +12,7 @@ cd "$PROJECT_ROOT"
 STARTED_AT=$(date +%s)
 
 ensure_node_modules
+ensure_fe_tools
 say "format check (prettier)"
 npx prettier --check . --log-level=warn || die "files are not formatted: run npm run format"
 say "lint (eslint: Next, react-hooks, typescript-eslint, import boundaries)"

@@ -78,6 +78,7 @@ const fastenerSchema = z.object({
   lengthMm: positive(),
   holeDiameterMm: positive(),
   washer: z.object({ thicknessMm: positive(), outerDiameterMm: positive() }).nullable(),
+  washerActsAs: z.enum(["rigid", "flexible"]).optional(),
   nutSeries: z.enum(["iso-4032", "iso-old"]).optional(),
   termination: terminationSchema,
   enteredAllowable: z

@@ -55,6 +55,12 @@ ensure_chromium() {
   command -v pdftoppm >/dev/null || apt_install poppler-utils
 }
 
+# CalculiX (the FE engine of features/fe-check and npm run calibrate): Debian's calculix-ccx.
+ensure_fe_tools() {
+  [ -x /usr/bin/ccx ] || apt_install calculix-ccx
+  [ -x /usr/bin/ccx ] || die "CalculiX (/usr/bin/ccx) not found after installing calculix-ccx"
+}
+
 # port_free PORT: exits 0 when nothing listens on 127.0.0.1:PORT.
 port_free() {
   node -e 'const s=require("net").createServer();s.once("error",()=>process.exit(1));s.listen(Number(process.argv[1]),"127.0.0.1",()=>s.close(()=>process.exit(0)))' "$1"

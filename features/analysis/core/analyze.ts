@@ -8,7 +8,7 @@
 import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
 import { formatIssue, validateJointDesign } from "./validate";
-import { buildJointModel } from "./joint-model";
+import { buildJointModel, type JointModel } from "./joint-model";
 import { computeGasketStressProfiles, governingProfile, type ProfileSummary } from "./gasket-stress";
 import { computeSafetyFactors, shareExternalLoad } from "./joint-loads";
 import { torqueFromPreloadNmm } from "./torque";
@@ -87,7 +87,12 @@ export interface JointAnalysis {
       modulusMpa: number;
       stiffnessNPerMm: number;
     }[];
-    wileman: { stiffnessNPerMm: number; coneMetalOnlyNPerMm: number; ratio: number } | null;
+    /** Which model gave km (frusta, or the beam on an elastic foundation when it governs). */
+    memberStiffnessBasis: string;
+    washerActsAs: "rigid" | "flexible";
+    holeDiameterMm: number;
+    /** Shown only where its assumptions hold (hole = d, bearing 1.5·d, rigid, one material). */
+    wileman: JointModel["wileman"];
   };
   preload: {
     rule: string;
@@ -118,6 +123,9 @@ export interface JointAnalysis {
     coneRule: string;
     coneDepthMm: number;
     coneRadiusMm: number;
+    /** How rc and the footprint's pressure shape were found (calibrated on FE, or the fixed cone). */
+    footprintRule: string;
+    footprintShape: { a: number; b: number };
     lambdaPerMm: number;
     beamSpreadMm: number;
     spreadRatio: number;
@@ -226,7 +234,8 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     );
   const assumptions = [
     ...model.notes,
-    `Cone half-angle ${model.coneAngleDeg.toFixed(2)}°: ${model.coneAngleRule}.`,
+    `Cone half-angle for member stiffness ${model.coneAngleDeg.toFixed(2)}°: ${model.coneAngleRule}.`,
+    `Footprint at the gasket plane, rc = ${model.coneRadiusMm.toFixed(1)} mm: ${model.footprintRule}.`,
     `Gasket stress estimators: ${profiles.choice.reason}.`,
     `Beam on elastic foundation: flange strip ${model.region.stripWidthMm.toFixed(1)} mm wide, flanges on both sides of the gasket in series (1/EI = Σ 1/EIi), foundation k = Eg·wg/tg; solved by finite differences on the closed path with tensionless contact.`,
     `Gasket stress sampled at ${design.estimator.samplesPerPitch} points per bolt pitch along the ${model.region.kind === "full-face" ? "bolt path (full-face gasket)" : "gasket centre line"}.`,
@@ -279,6 +288,9 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
       jointConstant: C,
       bearingDiameterMm: model.bearingDiameterMm,
       frusta: model.frusta,
+      memberStiffnessBasis: model.memberStiffnessBasis,
+      washerActsAs: model.washerActsAs,
+      holeDiameterMm: model.holeDiameterMm,
       wileman: model.wileman,
     },
     preload: {
@@ -310,6 +322,8 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
       coneRule: model.coneAngleRule,
       coneDepthMm: model.coneDepthMm,
       coneRadiusMm: model.coneRadiusMm,
+      footprintRule: model.footprintRule,
+      footprintShape: { a: model.footprintShape.a, b: model.footprintShape.b },
       lambdaPerMm: model.lambdaPerMm,
       beamSpreadMm: profiles.choice.beamSpreadMm,
       spreadRatio: profiles.choice.spreadRatio,

@@ -59,11 +59,69 @@ export function farthestFirstOrder(points: PointMm[]): number[] {
   return order;
 }
 
+/**
+ * ASME PCC-1 legacy cross-pattern sequences (PCC-1-2013 Appendix F; PCC-1-2019 Appendix F,
+ * Table F-1 "Legacy Cross-Pattern Tightening Sequence"), clockwise labels. [mem: as remembered;
+ * not confirmed through a reproduction of the table here: verify against the edition you hold.
+ * The 12-bolt order is the one practitioners hold against the printed table, not the farthest-
+ * first 1-7-4-10-3-9-2-8-12-6-11-5.] Each group of four is a cross: a bolt, the one opposite,
+ * then the two at a quarter turn.
+ */
+export const PCC1_LEGACY_SEQUENCES: Readonly<Record<number, readonly number[]>> = {
+  4: [1, 3, 2, 4],
+  8: [1, 5, 3, 7, 2, 6, 4, 8],
+  12: [1, 7, 4, 10, 2, 8, 5, 11, 3, 9, 6, 12],
+  16: [1, 9, 5, 13, 3, 11, 7, 15, 2, 10, 6, 14, 4, 12, 8, 16],
+  20: [1, 11, 6, 16, 3, 13, 8, 18, 5, 15, 10, 20, 2, 12, 7, 17, 4, 14, 9, 19],
+  24: [1, 13, 7, 19, 4, 16, 10, 22, 2, 14, 8, 20, 5, 17, 11, 23, 3, 15, 9, 21, 6, 18, 12, 24],
+};
+
+export const PCC1_LEGACY_SOURCE =
+  "ASME PCC-1 legacy cross pattern (PCC-1-2013 / PCC-1-2019 Appendix F, Table F-1) [mem: verify against your edition]";
+
+export type SequenceRule = "pcc1-legacy" | "bit-reversal" | "farthest-first";
+
+/** True when the points sit equally spaced on one circle (a round flange's bolt circle), within 1 %. */
+export function isEvenCircle(points: PointMm[]): boolean {
+  const n = points.length;
+  if (n < 3) return false;
+  const cx = points.reduce((a, p) => a + p.x, 0) / n;
+  const cy = points.reduce((a, p) => a + p.y, 0) / n;
+  const r = points.map((p) => Math.hypot(p.x - cx, p.y - cy));
+  const rm = r.reduce((a, v) => a + v, 0) / n;
+  const chord = 2 * rm * Math.sin(Math.PI / n);
+  return (
+    rm > 0 &&
+    r.every((v) => Math.abs(v - rm) <= 0.01 * rm) &&
+    points.every((p, i) => {
+      const q = points[(i + 1) % n];
+      return Math.abs(Math.hypot(p.x - q.x, p.y - q.y) - chord) <= 0.01 * chord;
+    })
+  );
+}
+
+/**
+ * Which rule orders the bolts: the PCC-1 legacy table where it lists the count and the bolts sit
+ * equally spaced on a circle (the table is for round flanges), bit reversal for other 2^k, else
+ * farthest first.
+ */
+export function sequenceRuleFor(n: number, evenCircle = true): SequenceRule {
+  if (PCC1_LEGACY_SEQUENCES[n] && evenCircle) return "pcc1-legacy";
+  return isPowerOfTwo(n) && n > 2 ? "bit-reversal" : "farthest-first";
+}
+
+export function sequenceNote(rule: SequenceRule): string {
+  if (rule === "pcc1-legacy") return `cross pattern: ${PCC1_LEGACY_SOURCE}`;
+  if (rule === "bit-reversal")
+    return "cross pattern by bit reversal of the labels (a bolt count PCC-1's legacy table does not list) [calc]";
+  return "farthest-first order: each bolt the farthest from those already tightened (a bolt count PCC-1's legacy table does not list) [practice]";
+}
+
 /** Cross-pattern order (indices into `points`, which must be in clockwise label order). */
 export function crossPatternOrder(points: PointMm[]): number[] {
-  return isPowerOfTwo(points.length) && points.length > 2
-    ? bitReversalOrder(points.length)
-    : farthestFirstOrder(points);
+  const rule = sequenceRuleFor(points.length, isEvenCircle(points));
+  if (rule === "pcc1-legacy") return PCC1_LEGACY_SEQUENCES[points.length].map((l) => l - 1);
+  return rule === "bit-reversal" ? bitReversalOrder(points.length) : farthestFirstOrder(points);
 }
 
 export interface AssemblyPass {
@@ -79,7 +137,9 @@ export interface AssemblyPass {
 export interface AssemblyPlan {
   /** Bolt ids in tightening order. */
   sequence: string[];
-  sequenceRule: "bit-reversal" | "farthest-first";
+  sequenceRule: SequenceRule;
+  /** The rule in words, with its source. */
+  sequenceNote: string;
   targetPreloadN: number;
   targetTorqueNm: number;
   targetTorqueFtLb: number;
@@ -110,11 +170,12 @@ export function buildAssemblyPlan(input: {
   nominalDiameterMm: number;
 }): AssemblyPlan {
   const order = crossPatternOrder(input.points);
+  const rule = sequenceRuleFor(input.points.length, isEvenCircle(input.points));
   const tNmm = torqueFromPreloadNmm(input.nutFactor, input.targetPreloadN, input.nominalDiameterMm);
   return {
     sequence: order.map((i) => input.boltIds[i]),
-    sequenceRule:
-      isPowerOfTwo(input.points.length) && input.points.length > 2 ? "bit-reversal" : "farthest-first",
+    sequenceRule: rule,
+    sequenceNote: sequenceNote(rule),
     targetPreloadN: input.targetPreloadN,
     targetTorqueNm: nmmToNm(tNmm),
     targetTorqueFtLb: nmmToFtLb(tNmm),

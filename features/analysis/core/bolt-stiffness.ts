@@ -36,7 +36,8 @@ export function splitGripMm(
 }
 
 /**
- * kb = Ad·At·E / (Ad·lt + At·ld), Ad = π·d²/4 (Shigley's two springs in series).
+ * kb = Ad·At·E / (Ad·lt + At·ld), Ad = π·d²/4: shank and threaded part as two springs in series
+ * (the resilience sum of VDI 2230 Part 1, reduced to two segments [practice]).
  * Example (Jindal Ex. 31-1): d = 18, all 50 mm of grip unthreaded, E = 210 GPa → 1.0688e6 N/mm.
  */
 export function computeBoltStiffnessNPerMm(input: {

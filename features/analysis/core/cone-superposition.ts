@@ -1,41 +1,73 @@
 /**
  * Cone superposition: each bolt's clamp force reaches the gasket plane as an annular footprint
- * from the hole edge ri to rc = D/2 + h·tanα, with a pressure that is highest at the hole and
- * falls linearly to zero at rc (interface measurements show this falloff). Each footprint is
- * normalised so that its pressure, integrated over the part of it that lies on gasket material
- * (clipped by the outline, the bore, other holes, a ring gasket's edges), equals the bolt force;
- * then all bolts are superposed. Units: N, mm, MPa.
+ * from the hole edge ri to the loaded-zone radius rc, with a pressure that is highest near the
+ * hole and falls to zero at rc: p = p0·(1 − ξ^a)^b, ξ = (r − ri)/(rc − ri). The calibrated
+ * footprint (interface-footprint.ts) gives rc, a and b from FE; a = b = 1 is the linear falloff
+ * used with a fixed cone angle. Each footprint is normalised so that its pressure, integrated over
+ * the part of it that lies on gasket material (clipped by the outline, the bore, other holes, a
+ * ring gasket's edges), equals the bolt force; then all bolts are superposed. Units: N, mm, MPa.
  */
 import type { GasketRegion } from "./gasket-region";
 import { isOnGasket } from "./gasket-region";
 import { buildPointHash, forEachNear, type PointHash } from "./point-hash";
 import { signedDistanceToShape } from "./shape";
+import { footprintIntegralMm2, footprintShapeValue } from "./interface-footprint";
+
+/** Exponents of the footprint's pressure shape (1 − ξ^a)^b; LINEAR_SHAPE is the linear falloff. */
+export interface FootprintShape {
+  a: number;
+  b: number;
+}
+export const LINEAR_SHAPE: FootprintShape = { a: 1, b: 1 };
 
 export interface ConeField {
   innerRadiusMm: number;
   outerRadiusMm: number;
   /** Peak pressure at the hole edge for each bolt, MPa (0 when the footprint misses the gasket). */
   peakMpa: Float64Array;
+  shape: FootprintShape;
+  /** (1 − ξ^a)^b at ξ = k/SHAPE_STEPS, k = 0…SHAPE_STEPS (linear interpolation between). */
+  shapeTable: Float64Array;
   /** Fraction of each unclipped footprint integral that lies on gasket material. */
   onGasketFraction: Float64Array;
   hash: PointHash;
 }
 
-/** ∫ over the full annulus of (rc − r)/(rc − ri) dA = π·(rc − ri)·(rc + 2ri)/3. Example: ri = 9, rc = 24 → 518.4 mm². */
+/** ∫ over the full annulus of (rc − r)/(rc − ri) dA = π·(rc − ri)·(rc + 2ri)/3. Example: ri = 9, rc = 24 → 659.7 mm². */
 export function coneFootprintIntegralMm2(innerRadiusMm: number, outerRadiusMm: number): number {
   return (Math.PI * (outerRadiusMm - innerRadiusMm) * (outerRadiusMm + 2 * innerRadiusMm)) / 3;
+}
+
+const SHAPE_STEPS = 256;
+
+function shapeTableOf(shape: FootprintShape): Float64Array {
+  const t = new Float64Array(SHAPE_STEPS + 2);
+  for (let k = 0; k <= SHAPE_STEPS; k++) t[k] = footprintShapeValue(k / SHAPE_STEPS, shape.a, shape.b);
+  t[SHAPE_STEPS] = 0;
+  return t;
+}
+
+function isLinear(shape: FootprintShape): boolean {
+  return shape.a === 1 && shape.b === 1;
 }
 
 const NR = 20;
 const NT = 96;
 
-function clippedFraction(region: GasketRegion, x: number, y: number, ri: number, rc: number): number {
+function clippedFraction(
+  region: GasketRegion,
+  x: number,
+  y: number,
+  ri: number,
+  rc: number,
+  shape: FootprintShape,
+): number {
   let full = 0;
   let on = 0;
   const dr = (rc - ri) / NR;
   for (let a = 0; a < NR; a++) {
     const r = ri + (a + 0.5) * dr;
-    const wgt = ((rc - r) / (rc - ri)) * r;
+    const wgt = footprintShapeValue((a + 0.5) / NR, shape.a, shape.b) * r;
     for (let b = 0; b < NT; b++) {
       const t = ((b + 0.5) * 2 * Math.PI) / NT;
       full += wgt;
@@ -110,8 +142,9 @@ function memoClippedFraction(
   rc: number,
   hash: PointHash,
   self: number,
+  shape: FootprintShape,
 ): number {
-  let key = `${regionKey(region)}|${x}|${y}|${ri}|${rc}`;
+  let key = `${regionKey(region)}|${x}|${y}|${ri}|${rc}|${shape.a}|${shape.b}`;
   // Full-face regions exclude bolt holes: any hole within rc + hole radius can change the result.
   if (region.kind === "full-face")
     forEachNear(hash, x, y, rc + region.holeRadiusMm, (j) => {
@@ -119,7 +152,7 @@ function memoClippedFraction(
     });
   const hit = fractionMemo.get(key);
   if (hit !== undefined) return hit;
-  const v = clippedFraction(region, x, y, ri, rc);
+  const v = clippedFraction(region, x, y, ri, rc, shape);
   if (fractionMemo.size >= MEMO_LIMIT) fractionMemo.clear();
   fractionMemo.set(key, v);
   return v;
@@ -135,6 +168,7 @@ export function buildConeField(
   innerRadiusMm: number,
   outerRadiusMm: number,
   regular: boolean,
+  shape: FootprintShape = LINEAR_SHAPE,
 ): ConeField {
   const rc = Math.max(outerRadiusMm, innerRadiusMm * 1.0001 + 1e-6);
   const n = region.bolts.length;
@@ -143,7 +177,9 @@ export function buildConeField(
     region.bolts.map((p) => p.y),
     rc + region.holeRadiusMm,
   );
-  const full = coneFootprintIntegralMm2(innerRadiusMm, rc);
+  const full = isLinear(shape)
+    ? coneFootprintIntegralMm2(innerRadiusMm, rc)
+    : footprintIntegralMm2(innerRadiusMm, rc, shape.a, shape.b);
   const peak = new Float64Array(n);
   const frac = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -151,11 +187,19 @@ export function buildConeField(
     if (regular && i > 0) frac[i] = frac[0];
     else {
       const q = quickFraction(region, p.x, p.y, innerRadiusMm, rc, hash, i);
-      frac[i] = q >= 0 ? q : memoClippedFraction(region, p.x, p.y, innerRadiusMm, rc, hash, i);
+      frac[i] = q >= 0 ? q : memoClippedFraction(region, p.x, p.y, innerRadiusMm, rc, hash, i, shape);
     }
     peak[i] = frac[i] > 1e-9 ? forcesN[i] / (full * frac[i]) : 0;
   }
-  return { innerRadiusMm, outerRadiusMm: rc, peakMpa: peak, onGasketFraction: frac, hash };
+  return {
+    innerRadiusMm,
+    outerRadiusMm: rc,
+    peakMpa: peak,
+    shape,
+    shapeTable: shapeTableOf(shape),
+    onGasketFraction: frac,
+    hash,
+  };
 }
 
 /** Superposed cone pressure at (x, y), MPa (the caller decides whether the point is on gasket). */
@@ -163,6 +207,8 @@ export function conePressureAtMpa(field: ConeField, x: number, y: number): numbe
   const ri = field.innerRadiusMm;
   const rc = field.outerRadiusMm;
   const span = rc - ri;
+  const steps = SHAPE_STEPS / span;
+  const table = field.shapeTable;
   const h = field.hash;
   const rc2 = rc * rc;
   const ri2 = ri * ri;
@@ -182,7 +228,12 @@ export function conePressureAtMpa(field: ConeField, x: number, y: number): numbe
         const ex = h.xs[i] - x;
         const ey = h.ys[i] - y;
         const d2 = ex * ex + ey * ey;
-        if (d2 < rc2 && d2 >= ri2) p += (field.peakMpa[i] * (rc - Math.sqrt(d2))) / span;
+        if (d2 < rc2 && d2 >= ri2) {
+          const u = (Math.sqrt(d2) - ri) * steps;
+          const k = u | 0;
+          const f = u - k;
+          p += field.peakMpa[i] * (table[k] * (1 - f) + table[k + 1] * f);
+        }
       }
     }
   }

@@ -87,10 +87,15 @@ export interface Fastener {
   /** "stud": threaded full length; "hex-bolt": shank plus standard thread length. */
   form: "stud" | "hex-bolt";
   lengthMm: number;
-  /** Bolt hole diameter in the flange, mm (geometry checks; stiffness assumes a hole ≈ d). */
+  /** Bolt hole diameter in the flange, mm (geometry checks, member stiffness, footprint). */
   holeDiameterMm: number;
   /** One washer under each nut/head, or none. */
   washer: { thicknessMm: number; outerDiameterMm: number } | null;
+  /**
+   * How the bearing face (washer, or nut/head face) loads the members: "rigid" (one flat face,
+   * the frustum idealisation) or "flexible" (uniform pressure, softer members). Default "rigid".
+   */
+  washerActsAs?: "rigid" | "flexible";
   /** Metric nut series for across-flats sizes; inch bolts always use heavy hex (ASME B18.2.2). */
   nutSeries?: "iso-4032" | "iso-old";
   termination: BoltTermination;

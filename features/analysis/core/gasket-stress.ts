@@ -167,6 +167,7 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
     region.holeRadiusMm,
     model.coneRadiusMm,
     isRegularCircularPattern(design),
+    model.footprintShape,
   );
   const misses = coneMissesGasket(field);
   const coneMpa = new Float64Array(N);

@@ -1,5 +1,6 @@
 /**
- * Load sharing between bolt and members (Shigley): C = kb/(kb + km); with preload Fi and an
+ * Load sharing by the joint constant (the joint diagram: VDI 2230 Part 1 load factor Φ; Bickford,
+ * An Introduction to the Design and Behavior of Bolted Joints): C = kb/(kb + km); with preload Fi and an
  * external separating load P per bolt, bolt load Fb = Fi + C·P, member (clamp) load
  * Fm = Fi − (1 − C)·P, separation at P0 = Fi/(1 − C). Units: N, N/mm, mm.
  */
@@ -24,7 +25,7 @@ export function shareExternalLoad(
 }
 
 /**
- * Factors of safety with respect to the proof load Fp (Shigley): yield factor np = Fp/(Fi + C·P),
+ * Factors of safety with respect to the proof load Fp [practice]: yield factor np = Fp/(Fi + C·P),
  * load factor nL = (Fp − Fi)/(C·P), separation factor n0 = Fi/((1 − C)·P). A factor that does
  * not apply (no external load) is null.
  */

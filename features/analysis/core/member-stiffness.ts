@@ -1,8 +1,9 @@
 /**
- * Stiffness of the clamped members by pressure-cone frusta (Shigley's model): two cones grow
- * from the bearing faces and meet at mid-grip; where a cone crosses a layer boundary it is split
- * into frusta with the diameter reached at that depth; 1/km = Σ 1/ki. Units: mm, MPa, N/mm.
- * Assumes a hole ≈ d and a bearing face of diameter D (washer OD, or ≈ 1.5·d for a nut face).
+ * Stiffness of the clamped members by pressure-cone frusta (the pressure-cone model of VDI 2230
+ * Part 1; the frustum integral [calc]): two cones grow from the bearing faces and meet at
+ * mid-grip; where a cone crosses a layer boundary it is split into frusta with the diameter
+ * reached at that depth; 1/km = Σ 1/ki. Units: mm, MPa, N/mm. The hole diameter dh and the
+ * bearing diameter D are the real ones (washer OD, or ≈ 1.5·d for a nut face).
  */
 
 export interface FrustumResult {
@@ -78,6 +79,16 @@ export function computeMemberStiffness(input: {
   });
   const flex = frusta.reduce((a, f) => a + 1 / f.stiffnessNPerMm, 0);
   return { stiffnessNPerMm: 1 / flex, frusta };
+}
+
+/**
+ * FE correction of the frusta (calibrated with the real hole and bearing and the thickness-dependent
+ * substitute cone): km_FE/km_frusta = s0 + s1·L + s2·L², L = ln(grip/(2d)) within ln 0.5…ln 4
+ * (catalogue/interface-calibration.ts). Example: grip = 2d → s0.
+ */
+export function frustumCorrection(gripMm: number, nominalDiameterMm: number, s: readonly number[]): number {
+  const L = Math.log(Math.min(Math.max(gripMm / (2 * nominalDiameterMm), 0.5), 4));
+  return s[0] + s[1] * L + s[2] * L * L;
 }
 
 /** Wileman, Choudury & Green (1991) fit constants A, B [mem: as commonly tabulated]. */

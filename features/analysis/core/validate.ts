@@ -133,6 +133,8 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
     add("fastener.materialId", `unknown bolt material "${f.materialId}"`);
   if (thread && f.holeDiameterMm < thread.nominalDiameterMm)
     add("fastener.holeDiameterMm", "bolt hole is smaller than the bolt");
+  if (f.washerActsAs !== undefined && f.washerActsAs !== "rigid" && f.washerActsAs !== "flexible")
+    add("fastener.washerActsAs", 'must be "rigid" or "flexible"');
   if (f.washer && f.washer.outerDiameterMm <= f.holeDiameterMm)
     add("fastener.washer.outerDiameterMm", "washer must be larger than the bolt hole");
   issues.push(...validateFlangeInputs(design));

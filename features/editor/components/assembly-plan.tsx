@@ -31,7 +31,7 @@ export function AssemblyPlanView({ analysis, units }: { analysis: JointAnalysis;
         </tbody>
       </table>
       <p>
-        <span className="text-ink-600">Sequence ({plan.sequenceRule}): </span>
+        <span className="text-ink-600">Sequence ({plan.sequenceNote ?? plan.sequenceRule}): </span>
         <span className="num" data-testid="tightening-sequence">
           {plan.sequence.join(" → ")}
         </span>

@@ -92,6 +92,17 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
         ]}
       />
       <SelectField
+        path="fastener.washerActsAs"
+        label="Washer acts as"
+        value={f.washerActsAs ?? "rigid"}
+        disabled={ctx.readOnly}
+        onChange={(v) => setFastener({ ...f, washerActsAs: v === "flexible" ? "flexible" : "rigid" })}
+        options={[
+          { value: "rigid", label: "Rigid (flat bearing face)" },
+          { value: "flexible", label: "Flexible (uniform pressure)" },
+        ]}
+      />
+      <SelectField
         path="fastener.termination.kind"
         label="Nut or tapped hole"
         value={f.termination.kind}

@@ -214,9 +214,10 @@ export function readResultView(stored: unknown, u: SheetUnits): SheetResultView 
     passes,
     sequenceIds: plan?.sequence ?? [],
     sequenceNote: plan
-      ? plan.sequenceRule === "bit-reversal"
-        ? "cross pattern (bit reversal)"
-        : "cross pattern (farthest first)"
+      ? (plan.sequenceNote ??
+        (plan.sequenceRule === "bit-reversal"
+          ? "cross pattern (bit reversal)"
+          : "cross pattern (farthest first)"))
       : "",
     planSource: text(plan?.source ?? ""),
     editions,

@@ -1,7 +1,8 @@
 /**
  * Standard thread length of hex bolts (the shank is the rest). Studs are threaded full length.
  * ASME B18.2.1: LT = 2D + 1/4 in for L ≤ 6 in, 2D + 1/2 in for L > 6 in [pub2].
- * ISO 4014: b = 2d + 6 mm (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 (l > 200) [pub2/mem].
+ * ISO 4014: b = 2d + 6 mm (l ≤ 125), 2d + 12 (125 < l ≤ 200), 2d + 25 (l > 200) [pub2: the ISO 888 rule
+ * as reproduced by fastener distributors; M20 46 / 52 / 65 mm in reproduced tables].
  */
 import { inToMm, mmToIn } from "../units";
 import type { Provenance } from "./confidence";

@@ -56,7 +56,8 @@ export function checkBolts(model: JointModel): CheckRecord[] {
       limit: p.proofMpa,
       unit: "MPa",
       status: sService <= p.proofMpa ? "pass" : sService <= sy ? "warn" : "fail",
-      source: "Shigley load sharing Fb = Fi + C·P; ISO 898-1 proof stress or 0.9·yield [practice]",
+      source:
+        "load sharing by the joint constant Fb = Fi + C·P (VDI 2230 Part 1 load factor); ISO 898-1 proof stress or 0.9·yield [practice]",
       note: `C = ${C.toFixed(3)}, largest external load per bolt ${(pMax / 1000).toFixed(2)} kN${p.proofEstimated ? "; proof estimated as 0.9·yield" : ""}.`,
     }),
   );
@@ -69,7 +70,7 @@ export function checkBolts(model: JointModel): CheckRecord[] {
       limit: p0,
       unit: "N",
       status: pMax < p0 ? "pass" : "fail",
-      source: "Shigley separation load P0 = Fi/(1 − C)",
+      source: "separation load of the joint diagram P0 = Fi/(1 − C) (VDI 2230 Part 1; Bickford)",
       note: pMax > 0 ? `Separation factor ${(p0 / pMax).toFixed(2)}.` : "No external separating load.",
     }),
   );

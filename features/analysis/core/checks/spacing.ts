@@ -5,7 +5,8 @@
  *   above 2a + t the flange moment is multiplied by √(Bs/(2a + t));
  * - minimum pitch for wrench clearance, from the nut's across-corners size and the tool [practice];
  * - pitch between 3 and 6 bolt diameters [practice] (a warning band, not a code limit);
- * - sealing by cone overlap for full-face and metal-to-metal joints: chord ≤ D + 2h·tanα [calc/practice].
+ * - sealing by footprint overlap for full-face and metal-to-metal joints: chord ≤ 2·rc, the
+ *   calibrated loaded-zone diameter (or D + 2h·tanα with a fixed angle) [calc/practice].
  * Pitch is measured along the bolt path, clearance as the chord. Units: mm.
  * On a standard flange (a design from a catalogue flange template) the maximum-pitch note says
  * that such a flange is accepted by its pressure–temperature rating; the status is still the rule's.
@@ -117,9 +118,10 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
         unit: "mm",
         status: !overlapApplies ? "not-applicable" : s.chordMm <= coneDiameter ? "pass" : "fail",
         subject,
-        source: "cone footprint D + 2h·tanα [calc/practice]",
+        source:
+          "footprint diameter 2·rc at the gasket plane: calibrated on FE (thickness-dependent setting) or D + 2h·tanα (fixed angle) [calc/practice]",
         note: overlapApplies
-          ? `Cone half-angle ${model.coneAngleDeg.toFixed(1)}°, depth to gasket ${model.coneDepthMm.toFixed(1)} mm. Where footprints do not overlap the gasket between the bolts is unloaded.`
+          ? `Footprint radius ${model.coneRadiusMm.toFixed(1)} mm at depth ${model.coneDepthMm.toFixed(1)} mm (${design.estimator.coneAngle.mode === "fixed" ? `fixed cone ${model.coneAngleDeg.toFixed(1)}°` : "calibrated on FE"}). Where footprints do not overlap the gasket between the bolts is unloaded.`
           : "Ring gasket loaded through flange bending; cone overlap does not govern sealing.",
       }),
     );

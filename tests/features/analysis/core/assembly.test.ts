@@ -4,6 +4,10 @@ import {
   buildAssemblyPlan,
   crossPatternOrder,
   farthestFirstOrder,
+  isEvenCircle,
+  PCC1_LEGACY_SEQUENCES,
+  sequenceNote,
+  sequenceRuleFor,
 } from "@/features/analysis/core/assembly";
 import type { PointMm } from "@/features/analysis/core/design";
 
@@ -23,7 +27,7 @@ describe("cross-pattern sequence", () => {
     expect(o.slice(0, 4)).toEqual([1, 9, 5, 13]);
     expect([...o].sort((a, b) => a - b)).toEqual(Array.from({ length: 16 }, (_, i) => i + 1));
   });
-  for (const n of [12, 20, 36, 96]) {
+  for (const n of [10, 14, 36, 96]) {
     it(`${n} bolts: every step takes a bolt farthest from those already tightened (property, not a table)`, () => {
       const pts = ring(n);
       const order = crossPatternOrder(pts);
@@ -40,6 +44,53 @@ describe("cross-pattern sequence", () => {
       expect(d(order[0], order[1])).toBeCloseTo(200, 6); // the second bolt is diametrically opposite
     });
   }
+  it("bolt counts the legacy table lists use it and say so; others say farthest first (or bit reversal) and that the table does not list them", () => {
+    for (const n of [4, 8, 12, 16, 20, 24]) {
+      expect(sequenceRuleFor(n)).toBe("pcc1-legacy");
+      expect(sequenceNote("pcc1-legacy")).toMatch(/PCC-1.*Appendix F.*\[mem/);
+    }
+    expect(sequenceRuleFor(32)).toBe("bit-reversal");
+    expect(sequenceRuleFor(10)).toBe("farthest-first");
+    expect(sequenceNote("farthest-first")).toMatch(/does not list/);
+  });
+  it("the table is for round flanges: 12 bolts on a rectangle use farthest first", () => {
+    const rect = [
+      ...[-150, -50, 50, 150].map((x) => ({ x, y: 100 })),
+      { x: 200, y: 50 },
+      { x: 200, y: -50 },
+      ...[150, 50, -50, -150].map((x) => ({ x, y: -100 })),
+      { x: -200, y: -50 },
+      { x: -200, y: 50 },
+    ];
+    expect(isEvenCircle(rect)).toBe(false);
+    expect(isEvenCircle(ring(12))).toBe(true);
+    expect(crossPatternOrder(rect)).toEqual(farthestFirstOrder(rect));
+  });
+  // The table is [mem] (not confirmed through a reproduction here), so it is checked for the
+  // properties of a cross pattern, not against remembered numbers.
+  for (const [n, seq] of Object.entries(PCC1_LEGACY_SEQUENCES)) {
+    it(`${n} bolts, PCC-1 legacy table: a permutation; in each group of four a bolt, the one opposite, then the two a quarter turn away`, () => {
+      const count = Number(n);
+      expect([...seq].sort((a, b) => a - b)).toEqual(Array.from({ length: count }, (_, i) => i + 1));
+      const at = (l: number) => ((l - 1) * 360) / count;
+      const gap = (a: number, b: number) => {
+        const g = Math.abs(at(a) - at(b)) % 360;
+        return Math.min(g, 360 - g);
+      };
+      for (let k = 0; k < count; k += 4) {
+        const [a, b, c, d] = seq.slice(k, k + 4);
+        expect(gap(a, b)).toBeCloseTo(180, 9);
+        expect(gap(c, d)).toBeCloseTo(180, 9);
+        expect(gap(a, c)).toBeCloseTo(90, 9);
+      }
+      expect(crossPatternOrder(ring(count)).map((i) => i + 1)).toEqual([...seq]);
+    });
+  }
+  it("12 bolts: not the farthest-first 1-7-4-10-3-9-2-8-12-6-11-5 that practitioners reject against the printed table (issue report)", () => {
+    expect(crossPatternOrder(ring(12)).map((i) => i + 1)).not.toEqual([
+      1, 7, 4, 10, 3, 9, 2, 8, 12, 6, 11, 5,
+    ]);
+  });
   it("works for odd and irregular patterns", () => {
     const pts = [
       { x: 0, y: 10 },

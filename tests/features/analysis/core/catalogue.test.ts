@@ -84,7 +84,10 @@ describe("nuts and thread lengths", () => {
     expect(mmToIn(inchBoltThreadLengthMm(19.05, 4 * 25.4))).toBeCloseTo(1.75, 10);
     expect(mmToIn(inchBoltThreadLengthMm(19.05, 8 * 25.4))).toBeCloseTo(2.0, 10);
   });
-  it("metric hex bolt thread length b = 2d + 6 / 12 / 25 mm (ISO 4014 [pub2/mem])", () => {
+  // [pub2]: ISO 888 rule as reproduced by a fastener distributor (andrewsfasteners.uk, "ISO 888 Thread
+  // lengths for ISO metric fasteners"); M20 b = 46 / 52 / 65 mm also in the DIN 603 / ISO 8677 table
+  // reproduced by torqbolt.com, and M20 46 / 52 in an ISO 4014 table reproduced by fabory.com.cn.
+  it("metric hex bolt thread length b = 2d + 6 / 12 / 25 mm: M20 → 46 / 52 / 65 mm (ISO 888 / ISO 4014 as reproduced [pub2])", () => {
     expect(metricBoltThreadLengthMm(20, 100)).toBe(46);
     expect(metricBoltThreadLengthMm(20, 150)).toBe(52);
     expect(metricBoltThreadLengthMm(20, 250)).toBe(65);
