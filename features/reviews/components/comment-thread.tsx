@@ -4,6 +4,7 @@ import { useActionState, useState } from "react";
 import type { ActionResult } from "@/server/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
+import { groupByRule } from "@/features/check-rules/model/rule-groups";
 import type { ReviewCheck } from "../model/review-checks";
 import type { CommentDto } from "../review-dto";
 
@@ -27,7 +28,12 @@ export function CommentThread(props: {
   const [state, formAction, pending] = useActionState(props.addCommentAction, null);
   const [target, setTarget] = useState("");
   const [kind, id] = target ? (target.split(/:(.*)/s) as [string, string]) : ["", ""];
-  const checkTitles = new Map(props.checks.map((c) => [c.id, c.title]));
+  const rules = groupByRule(props.checks);
+  // Titles of rules and of single checks (older comments point at one check of a rule).
+  const checkTitles = new Map([
+    ...props.checks.map((c) => [c.id, c.title] as const),
+    ...rules.map((r) => [r.rule, r.title] as const),
+  ]);
 
   return (
     <section aria-labelledby="comments-heading" className="flex flex-col gap-3">
@@ -93,9 +99,9 @@ export function CommentThread(props: {
                 ))}
               </optgroup>
               <optgroup label="Checks">
-                {props.checks.map((c) => (
-                  <option key={c.id} value={`check:${c.id}`}>
-                    {c.title} ({c.id})
+                {rules.map((r) => (
+                  <option key={r.rule} value={`check:${r.rule}`}>
+                    {r.title}
                   </option>
                 ))}
               </optgroup>
