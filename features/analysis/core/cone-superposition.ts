@@ -10,6 +10,7 @@ import type { GasketRegion } from "./gasket-region";
 import { isOnGasket } from "./gasket-region";
 import { buildPointHash, forEachNear, type PointHash } from "./point-hash";
 import { signedDistanceToShape } from "./shape";
+import * as fm from "./fixed-math";
 
 export interface ConeField {
   innerRadiusMm: number;
@@ -39,7 +40,7 @@ function clippedFraction(region: GasketRegion, x: number, y: number, ri: number,
     for (let b = 0; b < NT; b++) {
       const t = ((b + 0.5) * 2 * Math.PI) / NT;
       full += wgt;
-      if (isOnGasket(region, x + r * Math.cos(t), y + r * Math.sin(t))) on += wgt;
+      if (isOnGasket(region, x + r * fm.cos(t), y + r * fm.sin(t))) on += wgt;
     }
   }
   return on / full;

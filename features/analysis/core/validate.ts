@@ -12,6 +12,7 @@ import { buildPointHash, forEachNear } from "./point-hash";
 import { outlineToShape, signedDistanceToShape, type Shape } from "./shape";
 import { findThread } from "./catalogue/threads";
 import { getBoltMaterialById } from "./catalogue/bolt-materials";
+import * as fm from "./fixed-math";
 
 export interface DesignIssue {
   /** Field path, e.g. "bolts[3].position" or "gasket.geometry.outerDiameterMm". */
@@ -191,8 +192,8 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
       if (od <= id) add("gasket.geometry.outerDiameterMm", "must be larger than the inner diameter");
       const ring = (r: number) =>
         Array.from({ length: 256 }, (_, k) => ({
-          x: r * Math.cos((k * Math.PI) / 128),
-          y: r * Math.sin((k * Math.PI) / 128),
+          x: r * fm.cos((k * Math.PI) / 128),
+          y: r * fm.sin((k * Math.PI) / 128),
         }));
       if (od > 0 && maxSdf(outline, ring(od / 2)) >= 0)
         add("gasket.geometry.outerDiameterMm", "ring gasket extends beyond the flange outline");
