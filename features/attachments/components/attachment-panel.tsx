@@ -7,6 +7,7 @@ import { fetchJson } from "@/features/ui/fetch-json";
 import { attachmentsKey, attachmentUrl } from "../cache-keys";
 import { ACCEPTED_KINDS_TEXT, MAX_ATTACHMENT_BYTES, type AttachmentListDto } from "../model/dto";
 import { uploadFile } from "./upload-file";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
 // The Drawing drawer: datasheets, photos and drawings attached to a design. Files are dropped or
 // chosen, sent one by one with a progress bar, and checked by the server by content.
@@ -187,7 +188,7 @@ export function AttachmentPanel({ designId, canUpload, canDeleteAny, viewerId }:
                 <td className="num">{size(a.sizeBytes)}</td>
                 <td>{a.uploadedByName}</td>
                 <td className="num">
-                  <time dateTime={a.createdAt}>{new Date(a.createdAt).toLocaleString()}</time>
+                  <time dateTime={a.createdAt}>{formatUtcMinute(a.createdAt)}</time>
                 </td>
                 <td className="text-right">
                   {!data.locked && (canDeleteAny || a.uploadedById === viewerId) ? (

@@ -102,7 +102,6 @@ function base(
   return {
     schemaVersion: 1,
     name: meta.name,
-    ...(meta.equipmentTag ? { description: meta.equipmentTag } : {}),
     units: meta.units,
     ...defaultJointSettings(),
   };

@@ -7,6 +7,7 @@ import { FormStatus } from "@/features/ui/form-status";
 import { groupByRule } from "@/features/check-rules/model/rule-groups";
 import type { ReviewCheck } from "../model/review-checks";
 import type { CommentDto } from "../review-dto";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
 export type AddCommentAction = (
   previous: ActionResult<CommentDto> | null,
@@ -60,7 +61,7 @@ export function CommentThread(props: {
             >
               <p className="text-micro text-ink-500">
                 <span className="font-medium text-ink-800">{c.authorName}</span> ·{" "}
-                <time dateTime={c.at}>{c.at.slice(0, 16).replace("T", " ")}</time>
+                <time dateTime={c.at}>{formatUtcMinute(c.at)}</time>
               </p>
               {label ? (
                 <button

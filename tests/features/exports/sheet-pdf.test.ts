@@ -1,3 +1,4 @@
+import { getBoltMaterialById } from "@/features/analysis/core/catalogue/bolt-materials";
 import { describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
 import {
@@ -73,6 +74,9 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     expect(text).toMatch(/revision 7/);
     expect(text).toContain(input.revision.contentHash!.slice(0, 40));
     expect(text).toContain("Dana Designer");
+    // The bolt material by its name, never its catalogue id.
+    expect(text.replace(/\s+/g, " ")).toContain(getBoltMaterialById(design.fastener.materialId)!.name);
+    expect(text).not.toContain(design.fastener.materialId);
     expect(text).toContain("Arlo Approver");
     expect(text).toContain("2026-11-30");
     expect(text).not.toContain("NOT APPROVED");
