@@ -6,8 +6,8 @@ import { analyzeJoint } from "@/features/analysis/core/analyze";
 import { CORE_VERSION } from "@/features/analysis/core/version";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
 import { recordActivity } from "@/features/activity/queries";
-import type { ActionResult } from "@/server/action-result";
-import { computeContentHash, verifySnapshot } from "./model/content-hash";
+import type { ActionResult } from "@/features/forms/action-result";
+import { computeContentHash, verifySnapshot } from "@/features/analysis/content-hash";
 import {
   decideTransition,
   type ReviewActor,
@@ -17,6 +17,7 @@ import {
 } from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
 import { ruleOf, rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
+import { listRevisionEditorIds } from "./queries";
 import type { CommentDto } from "./review-dto";
 import type {
   AddCommentInput,
@@ -29,7 +30,9 @@ import type {
 // Every review transition runs in ONE transaction that first takes the revision's row lock
 // (select … for update). A second approver acting at the same moment waits for the lock, then
 // reads the state the first one committed and is refused by the same rules. The database adds its
-// own guards (migration 000600: allowed status steps, four-eyes check; 000400: approved is frozen).
+// own guards (migration 000600: allowed status steps, four-eyes check; 000400: approved is frozen;
+// 131700: everyone who created, saved or submitted the revision is recorded in revision_editors by a
+// trigger, and a decision by any of them is refused).
 
 export interface TransitionActor extends ReviewActor {
   organizationId: string;
@@ -96,6 +99,7 @@ export async function lockRevisionForUpdate(
     createdBy: row.created_by,
     lastEditedBy: row.last_edited_by,
     submittedBy: row.submitted_by,
+    editorIds: await listRevisionEditorIds(trx, row.id),
     isWorking: Number(newest.max) === row.number,
   };
   return { ...row, facts };

@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Database } from "@/db/types";
 import { listActivity, recordActivity } from "@/features/activity/queries";
 import { saveWorkingRevision } from "@/features/designs/mutations";
-import { computeContentHash } from "@/features/reviews/model/content-hash";
+import { computeContentHash } from "@/features/analysis/content-hash";
 import { readChecks } from "@/features/reviews/model/review-checks";
 import { rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
 import { getDeskLists, getRevisionReview, listJustifications } from "@/features/reviews/queries";
@@ -298,7 +298,7 @@ describe("review transitions (real PostgreSQL)", () => {
       sql`update design_revisions set status = 'approved', decided_by = ${org.designer.userId} where design_id = ${designId}`.execute(
         db,
       ),
-    ).rejects.toThrow(/design_revisions_four_eyes/);
+    ).rejects.toThrow(/four.eyes/);
     expect((await revisionRow(designId)).status).toBe("in_review");
   });
 

@@ -3,7 +3,7 @@ import { jobIdSchema } from "@/features/exports/schema";
 import { fileResponse } from "@/features/exports/http";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { findExportFileBytes, findExportJob } from "@/server/jobs/export-files";
-import { ensureSheetWorker } from "@/server/jobs/sheet-job";
+import { ensureSheetWorker } from "@/features/exports/sheet-job";
 
 type Context = { params: Promise<{ jobId: string }> };
 
