@@ -26,7 +26,7 @@ export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
 export const approveRevisionSchema = z.object({
   ...revisionRef,
   comment: z.string().trim().max(5000, "Keep the comment under 5000 characters.").default(""),
-  /** rule id (features/check-rules) → written justification, for every rule with a warn or fail check. */
+  /** rule id (features/analysis/rule-groups.ts) → written justification, for every rule with a warn or fail check. */
   justifications: z
     .record(
       z.string().min(1).max(200),

@@ -16,7 +16,7 @@ import {
   type RevisionFacts,
 } from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
-import { ruleOf, rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
+import { ruleOf, rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { listRevisionEditorIds } from "./queries";
 import type { CommentDto } from "./review-dto";
 import type {

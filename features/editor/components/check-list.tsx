@@ -1,7 +1,7 @@
 "use client";
 
 import type { UnitSystem } from "@/features/analysis/core/design";
-import { RuleList } from "@/features/check-rules/components/rule-list";
+import { RuleList } from "@/features/ui/rule-list";
 import type { CheckView } from "../model/readout-view";
 import { quantityOfUnit, toDisplay, unitLabel } from "../model/quantities";
 

@@ -6,7 +6,7 @@
  */
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { CheckRecord, CheckStatus } from "@/features/analysis/core/checks/check-record";
-import { groupByRule } from "@/features/check-rules/model/rule-groups";
+import { groupByRule } from "@/features/analysis/rule-groups";
 
 export type { CheckStatus };
 

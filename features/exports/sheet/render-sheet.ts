@@ -18,7 +18,7 @@ import {
   rulesNeedingJustification,
   subjectLabel,
   type RuleRow,
-} from "@/features/check-rules/model/rule-groups";
+} from "@/features/analysis/rule-groups";
 import { jointDataItems } from "./joint-data";
 import {
   normaliseStatus,

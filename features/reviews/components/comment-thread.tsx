@@ -4,7 +4,7 @@ import { useActionState, useState } from "react";
 import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
-import { groupByRule } from "@/features/check-rules/model/rule-groups";
+import { groupByRule } from "@/features/analysis/rule-groups";
 import type { ReviewCheck } from "../model/review-checks";
 import type { CommentDto } from "../review-dto";
 import { formatUtcMinute } from "@/features/ui/format-when";

@@ -5,7 +5,7 @@ import { useActionState, useEffect } from "react";
 import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
-import { coverageText, rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
+import { coverageText, rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import type { ReviewCheck } from "../model/review-checks";
 import type { RevisionPermissions } from "../review-dto";
 import type { ReviewStatus } from "../model/review-states";

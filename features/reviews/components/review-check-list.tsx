@@ -1,8 +1,8 @@
 "use client";
 
 import type { UnitSystem } from "@/features/analysis/core/design";
-import { RuleList } from "@/features/check-rules/components/rule-list";
-import { coverageText, justificationsByRule } from "@/features/check-rules/model/rule-groups";
+import { RuleList } from "@/features/ui/rule-list";
+import { coverageText, justificationsByRule } from "@/features/analysis/rule-groups";
 import type { ReviewCheck } from "../model/review-checks";
 import type { JustificationDto } from "../review-dto";
 import { formatCheckValue } from "./format-check-value";

@@ -2,7 +2,7 @@
 
 import { useState, type ReactNode } from "react";
 import type { UnitSystem } from "@/features/analysis/core/design";
-import { groupByRule } from "@/features/check-rules/model/rule-groups";
+import { groupByRule } from "@/features/analysis/rule-groups";
 import type { CommentDto, RevisionReviewDto } from "../review-dto";
 import { CommentThread, type AddCommentAction } from "./comment-thread";
 import { DecisionPanel, type DecisionActions } from "./decision-panel";

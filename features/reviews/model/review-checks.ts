@@ -1,7 +1,7 @@
 // Reads the checks out of a stored JointAnalysis. The result is JSON from the core
 // (features/analysis/core/analyze.ts: each check `{id, title, value, limit, unit, status, source,
 // note}`); it is read defensively because a frozen snapshot may come from an older core version.
-import { rulesNeedingJustification, type RuleRow } from "@/features/check-rules/model/rule-groups";
+import { rulesNeedingJustification, type RuleRow } from "@/features/analysis/rule-groups";
 
 export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable";
 

@@ -14,7 +14,7 @@ import {
   submitRevision,
 } from "@/features/reviews/transitions";
 import { readChecks } from "@/features/reviews/model/review-checks";
-import { rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb } from "../../setup/test-db";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
 

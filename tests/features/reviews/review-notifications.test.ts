@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { notifyReviewOutcome } from "@/features/reviews/notifications";
 import { approveRevision, returnRevision, submitRevision } from "@/features/reviews/transitions";
 import { readChecks } from "@/features/reviews/model/review-checks";
-import { rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb } from "../../setup/test-db";
 import { messagesTo } from "../accounts/outbox";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";

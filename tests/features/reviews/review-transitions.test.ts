@@ -6,7 +6,7 @@ import { listActivity, recordActivity } from "@/features/activity/queries";
 import { saveWorkingRevision } from "@/features/designs/mutations";
 import { computeContentHash } from "@/features/analysis/content-hash";
 import { readChecks } from "@/features/reviews/model/review-checks";
-import { rulesNeedingJustification } from "@/features/check-rules/model/rule-groups";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getDeskLists, getRevisionReview, listJustifications } from "@/features/reviews/queries";
 import { returnRevisionSchema } from "@/features/reviews/schema";
 import {

@@ -8,7 +8,7 @@ import {
   justificationsByRule,
   ruleOf,
   rulesNeedingJustification,
-} from "@/features/check-rules/model/rule-groups";
+} from "@/features/analysis/rule-groups";
 
 const check = (
   id: string,

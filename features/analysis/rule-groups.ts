@@ -76,7 +76,7 @@ function senseOf(checks: GroupableCheck[]): "at-least" | "at-most" | null {
   return null;
 }
 
-function useOf(c: GroupableCheck, sense: "at-least" | "at-most" | null): number | null {
+function limitUseOf(c: GroupableCheck, sense: "at-least" | "at-most" | null): number | null {
   const v = num(c.value);
   const l = num(c.limit);
   if (v === null || l === null || sense === null) return null;
@@ -98,11 +98,11 @@ export function groupByRule<C extends GroupableCheck>(checks: readonly C[]): Rul
     const sense = senseOf(list);
     const counts: Record<RuleStatus, number> = { pass: 0, warn: 0, fail: 0, "not-applicable": 0 };
     let worst = list[0]!;
-    let worstUse = useOf(worst, sense);
+    let worstUse = limitUseOf(worst, sense);
     for (const c of list) {
       counts[ruleStatus(c.status)]++;
       const r = RANK[ruleStatus(c.status)] - RANK[ruleStatus(worst.status)];
-      const u = useOf(c, sense);
+      const u = limitUseOf(c, sense);
       if (r > 0 || (r === 0 && u !== null && (worstUse === null || u > worstUse))) {
         worst = c;
         worstUse = u;

@@ -10,7 +10,7 @@ import {
   type GroupableCheck,
   type RuleRow,
   type RuleStatus,
-} from "../model/rule-groups";
+} from "@/features/analysis/rule-groups";
 
 export interface ListedCheck extends GroupableCheck {
   unit: string;
