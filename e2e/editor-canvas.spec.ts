@@ -76,9 +76,18 @@ test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, sw
   expect(failed).toBe(true);
   await expect(page.getByRole("status", { name: "Drag gauge" })).toHaveCount(0);
   await expect(page.getByTestId("save-state")).toHaveText("Unsaved changes");
-  const row = page.locator('tr[data-check-id="spacing.min-pitch:b1-b2"]');
+  // The Readout groups checks by rule: one row for the minimum-spacing rule, failing, whose
+  // pairs are listed on expand; picking the rule highlights its failing pair on the drawing.
+  const row = page.getByRole("list", { name: "Checks by rule" }).locator('li[data-rule="spacing.min-pitch"]');
+  await expect(row).toHaveCount(1);
   await expect(row).toHaveAttribute("data-status", "fail");
-  await row.getByRole("button").click();
+  await row.getByRole("button", { name: /^Show the \d+ pairs$/ }).click();
+  await expect(row.locator('[data-check-id="spacing.min-pitch:b1-b2"]')).toHaveAttribute(
+    "data-status",
+    "fail",
+  );
+  await expect(row).not.toContainText("spacing.min-pitch");
+  await row.getByRole("button", { name: /Minimum bolt spacing/ }).click();
   await expect
     .poll(() => violationIds(page, "highlight-"))
     .toEqual(expect.arrayContaining(["highlight-b1", "highlight-b2"]));

@@ -103,7 +103,7 @@ test("an admin adds a gasket to the Stockroom and a designer picks it in a desig
     catalogueId: expect.stringMatching(/^org:/),
   });
   // The seating check now judges against the copied Qmin, as the Readout says.
-  await expect(dana.locator('tr[data-check-id="gasket.seating"]')).toContainText(/Qmin|12/);
+  await expect(dana.locator('li[data-rule="gasket.seating"]').first()).toContainText(/Qmin|12/);
 });
 
 test("a designer attaches a datasheet PDF and downloads it byte-identical; a renamed program is refused", async ({

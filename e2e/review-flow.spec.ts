@@ -146,11 +146,33 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await expect(danaDesk.getByTestId("desk-returned")).not.toContainText(name, { timeout: 15_000 });
   await expect(arloDesk.getByTestId("desk-waiting")).toContainText(name, { timeout: 15_000 });
 
-  // Arlo approves, justifying every warning.
+  // Arlo approves, justifying every warning: one justification per rule, however many pairs warn.
   await arlo.goto(reviewPath);
+  const ruleList = arlo.getByRole("list", { name: "Checks of this revision by rule" });
+  const pitchRule = ruleList.locator('li[data-rule="spacing.max-pitch"]');
+  await expect(pitchRule).toHaveCount(1);
+  await expect(pitchRule.getByTestId("rule-counts")).toHaveText(/^12 pairs: /);
+  await expect(ruleList).not.toContainText("spacing.");
+  await pitchRule.getByRole("button", { name: "Show the 12 pairs" }).click();
+  await expect(pitchRule.locator("[data-check-id]")).toHaveCount(12);
   const approveForm = arlo.getByRole("form", { name: "Approve" });
   const justifications = approveForm.getByRole("textbox", { name: /^Justification for/ });
   const count = await justifications.count();
+  const ruleIds = await ruleList
+    .locator("li[data-rule]")
+    .evaluateAll((els) =>
+      els
+        .filter((e) => ["warn", "fail"].includes(e.getAttribute("data-status") ?? ""))
+        .map((e) => e.getAttribute("data-rule")),
+    );
+  expect(count).toBe(ruleIds.length);
+  await expect(approveForm).not.toContainText("spacing.");
+  const pitchBox = approveForm.getByRole("textbox", { name: /^Justification for Maximum bolt pitch/ });
+  // At least 13 warning checks (the 12 pitch pairs, the assembly stress, what moving b3 changed)
+  // need no more than three justifications.
+  expect(count).toBeGreaterThanOrEqual(2);
+  expect(count).toBeLessThanOrEqual(3);
+  await expect(pitchBox).toHaveAccessibleName(/Covers 1[0-2] pairs that (warn|fail|warn or fail)/);
   for (let i = 0; i < count; i++)
     await justifications.nth(i).fill("Accepted: pitch checked against the gasket maker's data sheet.");
   await approveForm.getByRole("button", { name: "Approve revision" }).click();

@@ -21,12 +21,12 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
   return (
     <div className="min-h-screen">
       <header className="bg-ink-900 text-ink-50">
-        <div className="mx-auto flex max-w-7xl items-center gap-4 px-gutter py-2">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-1 px-gutter py-2">
           <Link href="/desk" className="flex items-center gap-2 font-semibold text-white">
             <BrandMark size={24} /> Sealpitch
           </Link>
           <WorkspaceNav roles={viewer.roles} />
-          <div className="ml-auto flex items-center gap-3">
+          <div className="ml-auto flex min-w-0 flex-wrap items-center justify-end gap-x-3 gap-y-1">
             <OrganizationSwitcher
               organizations={organizations}
               activeId={viewer.organizationId}

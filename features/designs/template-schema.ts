@@ -90,7 +90,22 @@ const pointsField = z.preprocess(
     .max(200, { error: "Vertices: at most 200 points" }),
 );
 
+const roundFlangeFields = {
+  outsideDiameterMm: length("Outside diameter"),
+  boreDiameterMm: numberField("Bore diameter", {
+    unit: "mm",
+    min: 0,
+    exclusiveMin: false,
+    max: MAX_DIMENSION_MM,
+  }),
+  boltCircleDiameterMm: length("Bolt circle diameter"),
+  boltCount,
+  boltSize,
+  flangeThicknessMm: length("Flange thickness"),
+};
+
 const shapes = [
+  z.object({ kind: z.literal("full-face-flange"), ...roundFlangeFields }),
   z.object({
     kind: z.literal("circular-flange"),
     outsideDiameterMm: length("Outside diameter"),
@@ -161,7 +176,7 @@ function fail(ctx: Ctx, field: string, message: string): void {
 
 /** Field rules that need two numbers, then the core's validator on the built document. */
 function checkTemplateGeometry(input: TemplateInput, ctx: Ctx): void {
-  if (input.kind === "circular-flange") {
+  if (input.kind === "circular-flange" || input.kind === "full-face-flange") {
     const hole = metricHoleDiameterMm(nominalDiameterMm(input.boltSize));
     if (input.boltCircleDiameterMm + hole >= input.outsideDiameterMm)
       return fail(
@@ -169,7 +184,13 @@ function checkTemplateGeometry(input: TemplateInput, ctx: Ctx): void {
         "boltCircleDiameterMm",
         `Bolt circle diameter must leave the Ø${hole} mm holes inside the outside diameter (at most ${input.outsideDiameterMm - hole - 1} mm)`,
       );
-    if (input.boreDiameterMm + 12 + hole >= input.boltCircleDiameterMm)
+    if (input.kind === "full-face-flange" && input.boreDiameterMm + hole + 2 >= input.boltCircleDiameterMm)
+      return fail(
+        ctx,
+        "boreDiameterMm",
+        "Bore diameter leaves no gasket between the bore and the bolt holes",
+      );
+    if (input.kind === "circular-flange" && input.boreDiameterMm + 12 + hole >= input.boltCircleDiameterMm)
       return fail(ctx, "boreDiameterMm", "Bore diameter leaves no room for a gasket inside the bolt holes");
   } else if (input.kind !== "pipe-flange") {
     const { holeDiameterMm, boreOffsetMm } = coverBandLayout(input);

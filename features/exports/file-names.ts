@@ -1,5 +1,5 @@
 // Download names of the shop files (our own pattern, listed in the DEVELOPERS.md glossary):
-// <tag-or-name>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf.
+// <tag>-<name>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf.
 export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template";
 
 const SUFFIX: Record<ExportKind, string> = {
@@ -14,20 +14,32 @@ export const CONTENT_TYPES: Record<ExportKind, string> = {
   "drilling-template": "application/dxf",
 };
 
-/** `exportFileName({ equipmentTag: "E-2107", designName: "…" }, 3, "hole-list")` → "e-2107-rev3-hole-list.csv". */
+function slug(text: string, max: number): string {
+  return text
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "") // accents dropped: "Flänge" → "flange"
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, max)
+    .replace(/-+$/, "");
+}
+
+/**
+ * `exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "hole-list")` →
+ * "e-2107-channel-cover-rev3-hole-list.csv". The tag and the design name both go in, so two
+ * designs of one equipment tag never share a file name.
+ */
 export function exportFileName(
   design: { equipmentTag: string; designName: string },
   revisionNumber: number,
   kind: ExportKind,
 ): string {
-  const base =
-    (design.equipmentTag.trim() || design.designName)
-      .normalize("NFKD")
-      .replace(/[\u0300-\u036f]/g, "") // accents dropped: "Flänge" → "flange"
-      .toLowerCase()
-      .replace(/[^a-z0-9]+/g, "-")
-      .replace(/^-+|-+$/g, "")
-      .slice(0, 60) || "design";
+  const tag = slug(design.equipmentTag.trim(), 30);
+  let name = slug(design.designName, 60);
+  // A name that starts with the tag ("E-2107 inlet nozzle") does not repeat it.
+  if (tag && (name === tag || name.startsWith(`${tag}-`))) name = name.slice(tag.length + 1);
+  const base = [tag, name].filter(Boolean).join("-").slice(0, 80).replace(/-+$/, "") || "design";
   return `${base}-rev${revisionNumber}-${SUFFIX[kind]}`;
 }
 

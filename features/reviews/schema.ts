@@ -26,7 +26,7 @@ export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
 export const approveRevisionSchema = z.object({
   ...revisionRef,
   comment: multilineText().trim().max(5000, "Keep the comment under 5000 characters.").default(""),
-  /** check id → written justification, for every check that is warn or fail. */
+  /** rule id (features/analysis/rule-groups.ts) → written justification, for every rule with a warn or fail check. */
   justifications: z
     .record(
       plainText().min(1).max(200),

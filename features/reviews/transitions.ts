@@ -16,6 +16,7 @@ import {
   type RevisionFacts,
 } from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
+import { ruleOf, rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { listRevisionEditorIds } from "./queries";
 import type { CommentDto } from "./review-dto";
 import type {
@@ -228,24 +229,28 @@ export async function approveRevision(
     const missing = missingJustifications(checks, input.justifications);
     if (missing.length > 0) {
       const fieldErrors = Object.fromEntries(
-        missing.map((id) => [`justifications.${id}`, ["Write why this warning or failure is acceptable."]]),
+        missing.map((r) => [
+          `justifications.${r.rule}`,
+          ["Write why this warning or failure is acceptable."],
+        ]),
       );
       return refused(
-        `Every check that warns or fails needs a written justification before approval (${missing.join(", ")}).`,
+        `Every rule that warns or fails needs a written justification before approval (${missing.map((r) => r.title).join("; ")}).`,
         fieldErrors,
       );
     }
-    const needing = checks.filter((c) => c.status === "warn" || c.status === "fail");
+    // One justification per rule, stored under the rule id (older approvals stored one per check).
+    const needing = rulesNeedingJustification(checks);
     if (needing.length > 0) {
       await trx
         .insertInto("revision_justifications")
         .values(
-          needing.map((c) => ({
+          needing.map((r) => ({
             revision_id: revision.id,
             organization_id: actor.organizationId,
-            check_id: c.id,
-            check_status: c.status as "warn" | "fail",
-            text: input.justifications[c.id]!.trim(),
+            check_id: r.rule,
+            check_status: r.status as "warn" | "fail",
+            text: input.justifications[r.rule]!.trim(),
             author_id: actor.userId,
           })),
         )
@@ -281,7 +286,7 @@ export async function approveRevision(
       actorId: actor.userId,
       kind: "approved",
       detail:
-        needing.length > 0 ? `with ${needing.length} justified check${needing.length === 1 ? "" : "s"}` : "",
+        needing.length > 0 ? `with ${needing.length} justified rule${needing.length === 1 ? "" : "s"}` : "",
     });
     return { ok: true, data: outcomeOf(revision, "approved", actor, input.comment) };
   });
@@ -380,7 +385,7 @@ export async function startNewRevision(
   });
 }
 
-/** Adds a comment to a revision's thread; a target must exist in that revision (bolt id or check id). */
+/** Adds a comment to a revision's thread; a target must exist in that revision (bolt id, rule id or check id). */
 export async function addComment(
   db: Kysely<Database>,
   actor: TransitionActor,
@@ -402,7 +407,14 @@ export async function addComment(
     ) {
       return refused("That bolt is not in this revision.", { targetId: ["Choose a bolt of this revision."] });
     }
-    if (input.targetKind === "check" && !readChecks(revision.result).some((c) => c.id === targetId)) {
+    const checks = readChecks(revision.result);
+    // A comment points at a rule (what the sign-off sheet offers) or, as older comments did, one check.
+    const target =
+      input.targetKind === "check"
+        ? (checks.find((c) => c.id === targetId)?.title ??
+          checks.find((c) => ruleOf(c.id) === targetId)?.title)
+        : targetId;
+    if (input.targetKind === "check" && target === undefined) {
       return refused("That check is not in this revision's result.", {
         targetId: ["Choose a check of this revision."],
       });
@@ -430,7 +442,7 @@ export async function addComment(
       revisionId: revision.id,
       actorId: actor.userId,
       kind: "commented",
-      detail: targetId ? `on ${input.targetKind} ${targetId}` : "",
+      detail: targetId ? `on ${input.targetKind} ${target}` : "",
     });
     return {
       ok: true,

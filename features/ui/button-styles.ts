@@ -8,3 +8,12 @@ export const buttonStyles = {
   quiet: `${base} text-ink-700 hover:bg-ink-100`,
   danger: `${base} border border-verdict-fail text-verdict-fail hover:bg-verdict-fail-bg`,
 } as const;
+
+// A size smaller, for dense toolbars (the Pattern bench fits one row at 1440 px with these).
+const compact =
+  "inline-flex items-center justify-center gap-1 rounded-plate px-2 py-1 text-table font-medium transition-colors disabled:cursor-not-allowed disabled:opacity-50";
+
+export const toolButtonStyles = {
+  secondary: `${compact} border border-ink-200 bg-white text-ink-800 hover:bg-ink-50`,
+  quiet: `${compact} text-ink-700 hover:bg-ink-100`,
+} as const;

@@ -34,7 +34,7 @@ export default async function DesignsPage({
             {query.archived === "only" ? "Joint register: archived" : "Joint register"}
           </h1>
         </div>
-        <div className="flex gap-3">
+        <div className="flex flex-wrap gap-3">
           <Link
             href={registerHref(query, { archived: query.archived === "only" ? "hide" : "only", page: 1 })}
             className={buttonStyles.quiet}
@@ -42,9 +42,14 @@ export default async function DesignsPage({
             {query.archived === "only" ? "Show current joints" : "Show archived"}
           </Link>
           {canCreateDesign(viewer) ? (
-            <Link href="/designs/new" className={buttonStyles.primary}>
-              New design
-            </Link>
+            <>
+              <Link href="/designs/import" className={buttonStyles.secondary}>
+                From a DXF drawing
+              </Link>
+              <Link href="/designs/new" className={buttonStyles.primary}>
+                New design
+              </Link>
+            </>
           ) : null}
         </div>
       </header>

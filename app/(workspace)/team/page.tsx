@@ -32,44 +32,46 @@ export default async function TeamPage() {
         <h2 id="members" className="text-lead font-semibold">
           Members
         </h2>
-        <table className="mt-3 w-full">
-          <thead className="text-left text-ink-500">
-            <tr>
-              <th className="py-2">Name</th>
-              <th>E-mail</th>
-              <th>Roles</th>
-              <th>
-                <span className="sr-only">Remove</span>
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {team.members.map((m) => (
-              <tr key={m.userId} className="border-t border-ink-100 align-middle">
-                <td className="py-2 font-medium">
-                  {m.displayName}
-                  {m.userId === viewer.userId ? " (you)" : ""}
-                </td>
-                <td className="num">{m.email}</td>
-                <td>
-                  <MemberRoleForm
-                    userId={m.userId}
-                    displayName={m.displayName}
-                    roles={m.roles}
-                    changeMemberRolesAction={changeMemberRolesAction}
-                  />
-                </td>
-                <td>
-                  <RemoveMemberForm
-                    userId={m.userId}
-                    displayName={m.displayName}
-                    removeMemberAction={removeMemberAction}
-                  />
-                </td>
+        <div className="max-w-full overflow-x-auto">
+          <table className="mt-3 w-full">
+            <thead className="text-left text-ink-500">
+              <tr>
+                <th className="py-2">Name</th>
+                <th>E-mail</th>
+                <th>Roles</th>
+                <th>
+                  <span className="sr-only">Remove</span>
+                </th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {team.members.map((m) => (
+                <tr key={m.userId} className="border-t border-ink-100 align-middle">
+                  <td className="py-2 font-medium">
+                    {m.displayName}
+                    {m.userId === viewer.userId ? " (you)" : ""}
+                  </td>
+                  <td className="num">{m.email}</td>
+                  <td>
+                    <MemberRoleForm
+                      userId={m.userId}
+                      displayName={m.displayName}
+                      roles={m.roles}
+                      changeMemberRolesAction={changeMemberRolesAction}
+                    />
+                  </td>
+                  <td>
+                    <RemoveMemberForm
+                      userId={m.userId}
+                      displayName={m.displayName}
+                      removeMemberAction={removeMemberAction}
+                    />
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       </section>
 
       <section aria-labelledby="pending" className="rounded-plate bg-white p-5 shadow-plate">
@@ -79,35 +81,37 @@ export default async function TeamPage() {
         {team.invitations.length === 0 ? (
           <p className="mt-2 text-ink-600">No invitations are waiting.</p>
         ) : (
-          <table className="mt-3 w-full">
-            <thead className="text-left text-ink-500">
-              <tr>
-                <th className="py-2">E-mail</th>
-                <th>Roles</th>
-                <th>Link valid until</th>
-                <th>
-                  <span className="sr-only">Actions</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {team.invitations.map((i) => (
-                <tr key={i.invitationId} className="border-t border-ink-100">
-                  <td className="num py-2">{i.email}</td>
-                  <td>{i.roles.join(", ")}</td>
-                  <td className="num">{i.expired ? "expired" : i.expiresAt.slice(0, 10)}</td>
-                  <td>
-                    <InvitationButtons
-                      invitationId={i.invitationId}
-                      email={i.email}
-                      resendInvitationAction={resendInvitationAction}
-                      revokeInvitationAction={revokeInvitationAction}
-                    />
-                  </td>
+          <div className="max-w-full overflow-x-auto">
+            <table className="mt-3 w-full">
+              <thead className="text-left text-ink-500">
+                <tr>
+                  <th className="py-2">E-mail</th>
+                  <th>Roles</th>
+                  <th>Link valid until</th>
+                  <th>
+                    <span className="sr-only">Actions</span>
+                  </th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {team.invitations.map((i) => (
+                  <tr key={i.invitationId} className="border-t border-ink-100">
+                    <td className="num py-2">{i.email}</td>
+                    <td>{i.roles.join(", ")}</td>
+                    <td className="num">{i.expired ? "expired" : i.expiresAt.slice(0, 10)}</td>
+                    <td>
+                      <InvitationButtons
+                        invitationId={i.invitationId}
+                        email={i.email}
+                        resendInvitationAction={resendInvitationAction}
+                        revokeInvitationAction={revokeInvitationAction}
+                      />
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         )}
       </section>
 

@@ -1,4 +1,5 @@
 import { ACTIVITY_LABELS, type ActivityEntryDto } from "../activity-kinds";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
 // Server-renderable list of a design's activity (who did what when). Pass the entries from
 // listActivity(db, organizationId, designId) — the component does no data access itself.
@@ -21,7 +22,7 @@ export function ActivityList({
           {entries.map((entry) => (
             <li key={entry.id} className="text-table text-ink-700">
               <time dateTime={entry.at} className="num mr-2 text-ink-500">
-                {entry.at.slice(0, 16).replace("T", " ")}
+                {formatUtcMinute(entry.at)}
               </time>
               <span className="font-medium text-ink-900">{entry.actorName}</span>{" "}
               {ACTIVITY_LABELS[entry.kind]}

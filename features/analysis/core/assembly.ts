@@ -7,10 +7,11 @@
 import type { PointMm } from "./design";
 import { torqueFromPreloadNmm } from "./torque";
 import { nmmToFtLb, nmmToNm } from "./units";
+import * as fm from "./fixed-math";
 
 /** Bit reversal of 0…n−1 for n = 2^k. Example: n = 8 → 0, 4, 2, 6, 1, 5, 3, 7 (labels 1-5-3-7-2-6-4-8). */
 export function bitReversalOrder(n: number): number[] {
-  const bits = Math.round(Math.log2(n));
+  const bits = Math.round(fm.log2(n));
   return Array.from({ length: n }, (_, i) => {
     let r = 0;
     for (let b = 0; b < bits; b++) if (i & (1 << b)) r |= 1 << (bits - 1 - b);

@@ -7,10 +7,11 @@
  * the contact set stops changing. The gasket never carries tension.
  * Units: N, mm, MPa; k is the foundation modulus per unit path length (N/mm per mm of deflection).
  */
+import * as fm from "./fixed-math";
 
 /** λ = (k / 4EI)^¼, 1/mm. Example: k = 2000 MPa, EI = 1e10 N·mm² → 0.0150 /mm. */
 export function foundationLambdaPerMm(foundationModulusMpa: number, flexuralRigidityNmm2: number): number {
-  return Math.pow(foundationModulusMpa / (4 * flexuralRigidityNmm2), 0.25);
+  return fm.pow(foundationModulusMpa / (4 * flexuralRigidityNmm2), 0.25);
 }
 
 /**
@@ -24,9 +25,7 @@ export function hetenyiDeflectionMm(
   xMm: number,
 ): number {
   const lx = lambdaPerMm * Math.abs(xMm);
-  return (
-    ((forceN * lambdaPerMm) / (2 * foundationModulusMpa)) * Math.exp(-lx) * (Math.cos(lx) + Math.sin(lx))
-  );
+  return ((forceN * lambdaPerMm) / (2 * foundationModulusMpa)) * fm.exp(-lx) * (fm.cos(lx) + fm.sin(lx));
 }
 
 /**

@@ -6,6 +6,7 @@
  * measurements show. Clamped to 15°–45°.
  */
 import type { ConeAngleSetting } from "./design";
+import * as fm from "./fixed-math";
 
 export const CONE_ANGLE_RULE_TEXT =
   "thickness-dependent: tanφ = 0.362 + 0.032·ln(βL/2) + 0.153·ln y, βL = grip/dW, y = DA/dW (DA: available bearing diameter, capped at 3·dW), φ clamped to 15°–45° (VDI 2230-1 substitute cone) [mem]";
@@ -20,8 +21,8 @@ export function thicknessDependentConeAngleDeg(
 ): number {
   const betaL = gripMm / bearingDiameterMm;
   const y = Math.min(Math.max(availableDiameterMm / bearingDiameterMm, 1), 3);
-  const tanPhi = 0.362 + 0.032 * Math.log(betaL / 2) + 0.153 * Math.log(y);
-  const deg = (Math.atan(tanPhi) * 180) / Math.PI;
+  const tanPhi = 0.362 + 0.032 * fm.log(betaL / 2) + 0.153 * fm.log(y);
+  const deg = (fm.atan(tanPhi) * 180) / Math.PI;
   return Math.min(Math.max(Number.isFinite(deg) ? deg : 30, 15), 45);
 }
 

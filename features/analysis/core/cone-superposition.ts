@@ -19,6 +19,7 @@ export interface FootprintShape {
   b: number;
 }
 export const LINEAR_SHAPE: FootprintShape = { a: 1, b: 1 };
+import * as fm from "./fixed-math";
 
 export interface ConeField {
   innerRadiusMm: number;
@@ -71,7 +72,7 @@ function clippedFraction(
     for (let b = 0; b < NT; b++) {
       const t = ((b + 0.5) * 2 * Math.PI) / NT;
       full += wgt;
-      if (isOnGasket(region, x + r * Math.cos(t), y + r * Math.sin(t))) on += wgt;
+      if (isOnGasket(region, x + r * fm.cos(t), y + r * fm.sin(t))) on += wgt;
     }
   }
   return on / full;

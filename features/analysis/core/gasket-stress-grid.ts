@@ -12,6 +12,7 @@ import { isOnGasket } from "./gasket-region";
 import { projectOntoPath } from "./path";
 import type { EstimatorName } from "./estimator-choice";
 import { validateJointDesign, formatIssue } from "./validate";
+import * as fm from "./fixed-math";
 
 /** Value stored in cells that are not gasket material (outside, bore, bolt holes). */
 export const OUTSIDE_GASKET = -1;
@@ -87,7 +88,7 @@ export function computeGridFromProfiles(
       else {
         let s: number;
         if (circular) {
-          const t = Math.atan2(x, y);
+          const t = fm.atan2(x, y);
           s = (t < 0 ? t + 2 * Math.PI : t) * rPath;
         } else s = projectOntoPath(path, { x, y }).sMm;
         const u = (s / L) * N;

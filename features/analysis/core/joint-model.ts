@@ -37,6 +37,7 @@ import { periodicBeamCompliancePerN } from "./beam-foundation";
 import { jointConstant, distributeExternalLoadN } from "./joint-loads";
 import { applyScatterN, computeTargetPreloadN, effectiveProofMpa, resolveScatter } from "./preload";
 import { asmeGasketGeometry, type AsmeGasketGeometry } from "./asme-gasket-width";
+import * as fm from "./fixed-math";
 
 export interface JointModel {
   design: JointDesign;
@@ -160,7 +161,7 @@ export function buildJointModel(design: JointDesign): JointModel {
   const minEdge = Math.min(...boltPoints.map((p) => -signedDistanceToShape(outline, p.x, p.y)));
   const availableDiameterMm = Math.min(median(spacings.map((s) => s.chordMm)), 2 * minEdge);
   const cone = resolveConeAngle(design.estimator.coneAngle, gripMm, bearingDiameterMm, availableDiameterMm);
-  const tan = Math.tan((cone.degrees * Math.PI) / 180);
+  const tan = fm.tan((cone.degrees * Math.PI) / 180);
 
   const stack: { thicknessMm: number; modulusMpa: number }[] = [];
   stack.push(...above);
@@ -259,14 +260,14 @@ export function buildJointModel(design: JointDesign): JointModel {
 
   const b = region.stripWidthMm;
   const ei = (layers: { thicknessMm: number; modulusMpa: number }[]) =>
-    layers.reduce((a, l) => a + (l.modulusMpa * b * l.thicknessMm ** 3) / 12, 0);
+    layers.reduce((a, l) => a + (l.modulusMpa * b * fm.pow(l.thicknessMm, 3)) / 12, 0);
   const eiTop = ei(above);
   const eiBottom =
-    ei(below) + (tapped ? (tapped.memberModulusMpa * b * tapped.memberThicknessMm ** 3) / 12 : 0);
+    ei(below) + (tapped ? (tapped.memberModulusMpa * b * fm.pow(tapped.memberThicknessMm, 3)) / 12 : 0);
   const flexuralRigidityNmm2 =
     eiBottom > 0 && eiTop > 0 ? 1 / (1 / eiTop + 1 / eiBottom) : Math.max(eiTop, eiBottom);
   const foundationModulusMpa = (gm.modulusMpa * region.foundationWidthMm) / gm.thicknessMm;
-  const lambdaPerMm = Math.pow(foundationModulusMpa / (4 * flexuralRigidityNmm2), 0.25);
+  const lambdaPerMm = fm.pow(foundationModulusMpa / (4 * flexuralRigidityNmm2), 0.25);
 
   // A soft full-face gasket under a stiff flange: where the beam on an elastic foundation governs,
   // the flange spreads each bolt's load along the path, so the gasket is not one frustum layer:

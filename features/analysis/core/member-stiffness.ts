@@ -5,6 +5,7 @@
  * reached at that depth; 1/km = Σ 1/ki. Units: mm, MPa, N/mm. The hole diameter dh and the
  * bearing diameter D are the real ones (washer OD, or ≈ 1.5·d for a nut face).
  */
+import * as fm from "./fixed-math";
 
 export interface FrustumResult {
   layerIndex: number;
@@ -25,12 +26,12 @@ export function frustumStiffnessNPerMm(
   holeDiameterMm: number,
   coneAngleDeg: number,
 ): number {
-  const tan = Math.tan((coneAngleDeg * Math.PI) / 180);
+  const tan = fm.tan((coneAngleDeg * Math.PI) / 180);
   const D = narrowDiameterMm;
   const d = holeDiameterMm;
   const a = 2 * thicknessMm * tan;
   const ratio = ((a + D - d) * (D + d)) / ((a + D + d) * (D - d));
-  return (Math.PI * modulusMpa * d * tan) / Math.log(ratio);
+  return (Math.PI * modulusMpa * d * tan) / fm.log(ratio);
 }
 
 /**
@@ -46,7 +47,7 @@ export function computeMemberStiffness(input: {
 }): { stiffnessNPerMm: number; frusta: FrustumResult[] } {
   const total = input.layers.reduce((a, l) => a + l.thicknessMm, 0);
   const mid = total / 2;
-  const tan = Math.tan((input.coneAngleDeg * Math.PI) / 180);
+  const tan = fm.tan((input.coneAngleDeg * Math.PI) / 180);
   const frusta: FrustumResult[] = [];
   let z = 0;
   input.layers.forEach((layer, i) => {
@@ -110,5 +111,5 @@ export function wilemanMemberStiffnessNPerMm(
   material: keyof typeof WILEMAN_CONSTANTS = "steel",
 ): number {
   const c = WILEMAN_CONSTANTS[material];
-  return modulusMpa * diameterMm * c.a * Math.exp((c.b * diameterMm) / gripMm);
+  return modulusMpa * diameterMm * c.a * fm.exp((c.b * diameterMm) / gripMm);
 }

@@ -5,6 +5,7 @@
  */
 import type { PointMm } from "./design";
 import { shapeBounds, type Shape } from "./shape";
+import * as fm from "./fixed-math";
 
 export type PathSegment =
   | { kind: "line"; x0: number; y0: number; x1: number; y1: number; lengthMm: number }
@@ -126,8 +127,8 @@ export function pointAtArcLength(path: ClosedPath, sMm: number): PathPoint {
     return { x: seg.x0 + (seg.x1 - seg.x0) * t, y: seg.y0 + (seg.y1 - seg.y0) * t, tx, ty };
   }
   const a = seg.startRad + Math.sign(seg.sweepRad) * (local / seg.radiusMm);
-  const c = Math.cos(a);
-  const s = Math.sin(a);
+  const c = fm.cos(a);
+  const s = fm.sin(a);
   const dir = Math.sign(seg.sweepRad);
   return { x: seg.cx + seg.radiusMm * c, y: seg.cy + seg.radiusMm * s, tx: -s * dir, ty: c * dir };
 }
@@ -150,14 +151,14 @@ function projectInternal(path: ClosedPath, p: PointMm): { uMm: number; dist2: nu
       qy = seg.y0 + t * dy;
       local = t * seg.lengthMm;
     } else {
-      const phi = Math.atan2(p.y - seg.cy, p.x - seg.cx);
+      const phi = fm.atan2(p.y - seg.cy, p.x - seg.cx);
       const sweep = Math.abs(seg.sweepRad);
       const dir = Math.sign(seg.sweepRad);
       let delta = wrap(dir < 0 ? seg.startRad - phi : phi - seg.startRad, 2 * Math.PI);
       if (delta > sweep) delta = delta - sweep < 2 * Math.PI - delta ? sweep : 0;
       const a = seg.startRad + dir * delta;
-      qx = seg.cx + seg.radiusMm * Math.cos(a);
-      qy = seg.cy + seg.radiusMm * Math.sin(a);
+      qx = seg.cx + seg.radiusMm * fm.cos(a);
+      qy = seg.cy + seg.radiusMm * fm.sin(a);
       local = delta * seg.radiusMm;
     }
     const d2 = (p.x - qx) * (p.x - qx) + (p.y - qy) * (p.y - qy);
@@ -219,8 +220,8 @@ export function samplePathUniform(path: ClosedPath, count: number, xs: Float64Ar
       ys[j] = s.y0 + (s.y1 - s.y0) * t;
     } else {
       const a = s.startRad + Math.sign(s.sweepRad) * (local / s.radiusMm);
-      xs[j] = s.cx + s.radiusMm * Math.cos(a);
-      ys[j] = s.cy + s.radiusMm * Math.sin(a);
+      xs[j] = s.cx + s.radiusMm * fm.cos(a);
+      ys[j] = s.cy + s.radiusMm * fm.sin(a);
     }
   }
 }

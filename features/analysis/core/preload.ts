@@ -4,6 +4,7 @@
  */
 import type { AssemblySettings, PreloadRule } from "./design";
 import { getTighteningMethodById } from "./catalogue/tightening-methods";
+import { percent } from "./units";
 
 export interface PreloadStrength {
   tensileStressAreaMm2: number;
@@ -60,7 +61,7 @@ export function resolveScatter(assembly: AssemblySettings): { scatter: number; s
   return {
     scatter: m?.scatter ?? 0.3,
     source: m
-      ? `${m.name}: ±${m.rangeLow * 100}–${m.rangeHigh * 100} % [pub2], midpoint used`
+      ? `${m.name}: ±${percent(m.rangeLow)}–${percent(m.rangeHigh)} % [pub2], midpoint used`
       : "default ±30 %",
   };
 }

@@ -8,10 +8,14 @@ import type { UnitSystem } from "./design";
 export const MM_PER_IN = 25.4;
 /** 1 lbf = 0.45359237 kg × 9.80665 m/s². */
 export const N_PER_LBF = 4.4482216152605;
+// Derived factors are written out as the doubles they evaluate to (N_PER_LBF / 25.4², then
+// 12 · 25.4 · N_PER_LBF left to right): a bundler that folds the expression in another order
+// (12 · (25.4 · N_PER_LBF) is one unit in the last place higher) would make the browser's result
+// differ from the server's. tests/features/analysis/core/fixed-math.test.ts pins both.
 /** 1 psi = 1 lbf/in². */
-export const MPA_PER_PSI = N_PER_LBF / (MM_PER_IN * MM_PER_IN);
+export const MPA_PER_PSI = 0.006894757293168361;
 /** 1 ft·lb = 12 in × 1 lbf, in N·mm. */
-export const NMM_PER_FTLB = 12 * MM_PER_IN * N_PER_LBF;
+export const NMM_PER_FTLB = 1355.8179483314;
 
 export const mmToIn = (mm: number): number => mm / MM_PER_IN;
 export const inToMm = (inches: number): number => inches * MM_PER_IN;
@@ -31,8 +35,14 @@ export const nmToNmm = (nm: number): number => nm * 1000;
 /** Rounds to a number of significant digits; keeps 0 as 0. Example: `roundSignificant(1234.5, 3)` → 1230. */
 export function roundSignificant(value: number, digits = 4): number {
   if (value === 0 || !Number.isFinite(value)) return 0;
-  const p = Math.pow(10, digits - 1 - Math.floor(Math.log10(Math.abs(value))));
-  return Math.round(value * p) / p;
+  // toPrecision is exactly specified (the nearest decimal of that many digits), so every engine
+  // agrees and no binary residue such as 55.00000000000001 survives.
+  return Number(value.toPrecision(Math.min(100, Math.max(1, Math.round(digits)))));
+}
+
+/** A fraction as a percentage for text, without binary residue: `percent(0.55)` → "55" (not 55.00000000000001). */
+export function percent(fraction: number, decimals = 1): string {
+  return String(Number((fraction * 100).toFixed(decimals)));
 }
 
 function fmt(value: number, digits: number): string {

@@ -13,6 +13,7 @@ import { outlineToShape, signedDistanceToShape, type Shape } from "./shape";
 import { findThread } from "./catalogue/threads";
 import { getBoltMaterialById } from "./catalogue/bolt-materials";
 import { validateFlangeInputs } from "./flange-design/validate-flange-inputs";
+import * as fm from "./fixed-math";
 
 export interface DesignIssue {
   /** Field path, e.g. "bolts[3].position" or "gasket.geometry.outerDiameterMm". */
@@ -195,8 +196,8 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
       if (od <= id) add("gasket.geometry.outerDiameterMm", "must be larger than the inner diameter");
       const ring = (r: number) =>
         Array.from({ length: 256 }, (_, k) => ({
-          x: r * Math.cos((k * Math.PI) / 128),
-          y: r * Math.sin((k * Math.PI) / 128),
+          x: r * fm.cos((k * Math.PI) / 128),
+          y: r * fm.sin((k * Math.PI) / 128),
         }));
       if (od > 0 && maxSdf(outline, ring(od / 2)) >= 0)
         add("gasket.geometry.outerDiameterMm", "ring gasket extends beyond the flange outline");

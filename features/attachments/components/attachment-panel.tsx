@@ -7,6 +7,7 @@ import { fetchJson } from "@/features/ui/fetch-json";
 import { attachmentsKey, attachmentUrl } from "../cache-keys";
 import { ACCEPTED_KINDS_TEXT, MAX_ATTACHMENT_BYTES, type AttachmentListDto } from "../model/dto";
 import { uploadFile } from "./upload-file";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
 // The Drawing drawer: datasheets, photos and drawings attached to a design. Files are dropped or
 // chosen, sent one by one with a progress bar, and checked by the server by content.
@@ -160,51 +161,53 @@ export function AttachmentPanel({ designId, canUpload, canDeleteAny, viewerId }:
         <p className="text-table text-ink-500">Nothing attached yet.</p>
       ) : null}
       {data && data.attachments.length > 0 ? (
-        <table className="w-full text-table" aria-label="Attachments">
-          <thead className="text-left text-ink-600">
-            <tr>
-              <th className="py-1 font-medium">File</th>
-              <th className="font-medium">Kind</th>
-              <th className="font-medium">Size</th>
-              <th className="font-medium">Attached by</th>
-              <th className="font-medium">When</th>
-              <th />
-            </tr>
-          </thead>
-          <tbody>
-            {data.attachments.map((a) => (
-              <tr key={a.id} className="border-t border-ink-100">
-                <td className="py-1.5">
-                  <a
-                    href={attachmentUrl(designId, a.id)}
-                    download={a.fileName}
-                    className="text-ink-900 underline underline-offset-2"
-                  >
-                    {a.fileName}
-                  </a>
-                </td>
-                <td className="uppercase">{a.kind}</td>
-                <td className="num">{size(a.sizeBytes)}</td>
-                <td>{a.uploadedByName}</td>
-                <td className="num">
-                  <time dateTime={a.createdAt}>{new Date(a.createdAt).toLocaleString()}</time>
-                </td>
-                <td className="text-right">
-                  {!data.locked && (canDeleteAny || a.uploadedById === viewerId) ? (
-                    <button
-                      type="button"
-                      onClick={() => remove(a.id, a.fileName)}
-                      className="text-verdict-fail underline-offset-2 hover:underline"
-                      aria-label={`Remove ${a.fileName}`}
-                    >
-                      Remove
-                    </button>
-                  ) : null}
-                </td>
+        <div className="max-w-full overflow-x-auto">
+          <table className="w-full text-table" aria-label="Attachments">
+            <thead className="text-left text-ink-600">
+              <tr>
+                <th className="py-1 font-medium">File</th>
+                <th className="font-medium">Kind</th>
+                <th className="font-medium">Size</th>
+                <th className="font-medium">Attached by</th>
+                <th className="font-medium">When</th>
+                <th />
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {data.attachments.map((a) => (
+                <tr key={a.id} className="border-t border-ink-100">
+                  <td className="py-1.5">
+                    <a
+                      href={attachmentUrl(designId, a.id)}
+                      download={a.fileName}
+                      className="text-ink-900 underline underline-offset-2"
+                    >
+                      {a.fileName}
+                    </a>
+                  </td>
+                  <td className="uppercase">{a.kind}</td>
+                  <td className="num">{size(a.sizeBytes)}</td>
+                  <td>{a.uploadedByName}</td>
+                  <td className="num">
+                    <time dateTime={a.createdAt}>{formatUtcMinute(a.createdAt)}</time>
+                  </td>
+                  <td className="text-right">
+                    {!data.locked && (canDeleteAny || a.uploadedById === viewerId) ? (
+                      <button
+                        type="button"
+                        onClick={() => remove(a.id, a.fileName)}
+                        className="text-verdict-fail underline-offset-2 hover:underline"
+                        aria-label={`Remove ${a.fileName}`}
+                      >
+                        Remove
+                      </button>
+                    ) : null}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       ) : null}
       {data?.locked ? (
         <p className="text-micro text-ink-500">

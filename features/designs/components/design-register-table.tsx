@@ -57,7 +57,7 @@ export function DesignRegisterTable({
   }
   return (
     <div className="flex flex-col gap-3">
-      <div className="overflow-x-auto rounded-plate border border-ink-100 bg-white shadow-plate">
+      <div className="relative overflow-x-auto rounded-plate border border-ink-100 bg-white shadow-plate">
         <table className="w-full text-table">
           <caption className="sr-only">Joint register</caption>
           <thead className="bg-steel-50 text-ink-700">

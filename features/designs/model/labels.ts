@@ -16,6 +16,4 @@ export const UPDATED_LABELS: Record<string, string> = {
 };
 
 /** "2026-12-01 14:05 UTC": the same text on the server and in every browser, whatever its zone. */
-export function formatUtcMinute(iso: string): string {
-  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
-}
+export { formatUtcMinute } from "@/features/ui/format-when";

@@ -9,6 +9,8 @@ import { findThread } from "@/features/analysis/core/catalogue/threads";
 export const STEEL_MODULUS_MPA = 200_000;
 export const DEFAULT_GASKET_TYPE_ID = "compressed-fibre-1-8";
 export const DEFAULT_PIPE_GASKET_TYPE_ID = "compressed-fibre-1-16";
+/** A soft sheet for full-face joints (elastomer with fabric insertion, ASME VIII-1 Table 2-5.1) [practice]. */
+export const FULL_FACE_GASKET_TYPE_ID = "elastomer-cotton-insertion";
 
 /** Metric sizes offered for covers and custom flanges (all in catalogue/threads.ts). */
 export const METRIC_BOLT_SIZES = ["M12", "M16", "M20", "M24", "M27", "M30", "M36"] as const;

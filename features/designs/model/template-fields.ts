@@ -64,6 +64,20 @@ export const TEMPLATE_CHOICES: readonly TemplateChoice[] = [
     ],
   },
   {
+    kind: "full-face-flange",
+    label: "Full-face round flange",
+    description:
+      "A round flange pair with one gasket sheet over the whole face, through the bolt holes (elastomer with fabric insertion).",
+    fields: [
+      mm("outsideDiameterMm", "Outside diameter", "400"),
+      mm("boreDiameterMm", "Bore diameter", "200", "0 for a blind flange"),
+      mm("boltCircleDiameterMm", "Bolt circle diameter", "340"),
+      count("12"),
+      size("M20"),
+      mm("flangeThicknessMm", "Flange thickness", "30"),
+    ],
+  },
+  {
     kind: "pipe-flange",
     label: "Catalogue pipe flange",
     description: "ASME B16.5 Class 150 outside diameter, bolt circle and bolting from the catalogue.",

@@ -10,6 +10,7 @@ import {
 import {
   DEFAULT_GASKET_TYPE_ID,
   DEFAULT_PIPE_GASKET_TYPE_ID,
+  FULL_FACE_GASKET_TYPE_ID,
   STEEL_MODULUS_MPA,
   buildFastener,
   defaultJointSettings,
@@ -20,7 +21,12 @@ import {
 } from "./template-defaults";
 
 export type TemplateKind =
-  "circular-flange" | "pipe-flange" | "rectangular-cover" | "obround-manway" | "polygon-cover";
+  | "circular-flange"
+  | "full-face-flange"
+  | "pipe-flange"
+  | "rectangular-cover"
+  | "obround-manway"
+  | "polygon-cover";
 
 export interface CircularFlangeParams {
   outsideDiameterMm: number;
@@ -57,6 +63,7 @@ export interface PolygonCoverParams extends CoverParams {
 
 export type TemplateInput =
   | ({ kind: "circular-flange" } & CircularFlangeParams)
+  | ({ kind: "full-face-flange" } & CircularFlangeParams)
   | ({ kind: "pipe-flange" } & PipeFlangeParams)
   | ({ kind: "rectangular-cover" } & RectangularCoverParams)
   | ({ kind: "obround-manway" } & ObroundManwayParams)
@@ -102,31 +109,44 @@ function base(
   return {
     schemaVersion: 1,
     name: meta.name,
-    ...(meta.equipmentTag ? { description: meta.equipmentTag } : {}),
     units: meta.units,
     ...defaultJointSettings(),
   };
 }
 
 export function buildCircularFlange(meta: DocumentMeta, p: CircularFlangeParams): JointDesign {
+  return roundFlange(meta, p, "ring");
+}
+
+/** The Full-face round flange: the round flange pair with a gasket over the whole face, through the holes. */
+export function buildFullFaceFlange(meta: DocumentMeta, p: CircularFlangeParams): JointDesign {
+  return roundFlange(meta, p, "full-face");
+}
+
+function roundFlange(meta: DocumentMeta, p: CircularFlangeParams, form: "ring" | "full-face"): JointDesign {
   const d = nominalDiameterMm(p.boltSize);
   const hole = metricHoleDiameterMm(d);
-  const gasket = gasketMaterialFromCatalogue(DEFAULT_GASKET_TYPE_ID);
+  const gasket = gasketMaterialFromCatalogue(
+    form === "ring" ? DEFAULT_GASKET_TYPE_ID : FULL_FACE_GASKET_TYPE_ID,
+  );
   const innerDiameterMm = p.boreDiameterMm > 0 ? p.boreDiameterMm + 2 * GAP_MM : 2 * GAP_MM;
   return withEqualBolts(
     {
       ...base(meta),
       outline: { kind: "circle", diameterMm: p.outsideDiameterMm },
       bore: p.boreDiameterMm > 0 ? { kind: "circle", diameterMm: p.boreDiameterMm } : null,
-      gasket: {
-        kind: "ring",
-        geometry: {
-          kind: "annulus",
-          innerDiameterMm,
-          outerDiameterMm: p.boltCircleDiameterMm - hole - 2 * GAP_MM,
-        },
-        material: gasket,
-      },
+      gasket:
+        form === "full-face"
+          ? { kind: "full-face", material: gasket }
+          : {
+              kind: "ring",
+              geometry: {
+                kind: "annulus",
+                innerDiameterMm,
+                outerDiameterMm: p.boltCircleDiameterMm - hole - 2 * GAP_MM,
+              },
+              material: gasket,
+            },
       boltPath: { kind: "circle", diameterMm: p.boltCircleDiameterMm },
       fastener: buildFastener({
         designation: p.boltSize,
@@ -271,6 +291,8 @@ export function buildDesignFromTemplate(meta: DocumentMeta, input: TemplateInput
   switch (input.kind) {
     case "circular-flange":
       return buildCircularFlange(meta, input);
+    case "full-face-flange":
+      return buildFullFaceFlange(meta, input);
     case "pipe-flange":
       return buildPipeFlange(meta, input);
     case "rectangular-cover":

@@ -241,9 +241,13 @@ export function DesignWorkspace({
                   setSelected(id);
                 }}
               />
-              {heat.scale && <StressLegend scale={heat.scale} units={units} basis="minimum preload" />}
               {editor.dragging && <DragGauge view={view} issues={live.issues} units={units} />}
             </div>
+            {heat.scale && (
+              <div className="border-t border-ink-100 px-1">
+                <StressLegend scale={heat.scale} units={units} basis="minimum preload" />
+              </div>
+            )}
           </div>
           <ReadoutPanel
             view={readoutView}

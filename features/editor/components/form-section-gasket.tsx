@@ -4,6 +4,7 @@ import { choiceIdOfMaterial, useGasketChoices } from "@/features/library/hooks/u
 import { LEAKAGE_CLASSES, type GasketChoiceDto, type LeakageClass } from "@/features/library/model/dto";
 import { toGasketMaterial } from "@/features/library/model/gasket-material";
 import { FIELD_SPECS } from "../model/field-specs";
+import { withGasketForm } from "../model/gasket-form";
 import { formatQuantity } from "../model/quantities";
 import { fieldDomId, type FormContext } from "./form-context";
 import { NumberField } from "./number-field";
@@ -107,7 +108,24 @@ export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
           />
         </div>
       )}
-      <p className="col-span-2 text-micro text-ink-500">
+      <div role="radiogroup" aria-label="Gasket form" className="col-span-2 flex flex-wrap gap-3 text-table">
+        {(["ring", "full-face"] as const).map((form) => (
+          <label key={form} className="flex items-center gap-1">
+            <input
+              type="radio"
+              name="gasket-form"
+              value={form}
+              checked={g.kind === form}
+              disabled={ctx.readOnly}
+              onChange={() =>
+                ctx.dispatch({ type: "set-field", path: "gasket", value: withGasketForm(ctx.design, form) })
+              }
+            />
+            {form === "ring" ? "Ring gasket" : "Full-face gasket"}
+          </label>
+        ))}
+      </div>
+      <p className="col-span-2 text-micro text-ink-500" data-testid="gasket-form-note">
         {g.kind === "full-face"
           ? "Full-face gasket: covers the face inside the outline, less the bore and the holes."
           : g.geometry.kind === "annulus"

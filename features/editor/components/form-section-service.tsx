@@ -58,7 +58,8 @@ export function FormSectionService({ ctx, meta, onMeta }: Props) {
         l.role === "gasket" ? null : (
           <div key={i} className="col-span-2 grid grid-cols-2 gap-2 rounded border border-ink-100 p-1.5">
             <p className="col-span-2 text-micro font-medium text-ink-700">
-              {l.role === "cover" ? "Cover" : "Flange"} plate {i + 1}
+              {l.role === "cover" ? "Cover" : "Flange"} plate{" "}
+              {d.layers.slice(0, i + 1).filter((x) => x.role !== "gasket").length}
             </p>
             <NumberField
               ctx={ctx}

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { buttonStyles } from "@/features/ui/button-styles";
+import { toolButtonStyles } from "@/features/ui/button-styles";
 import { MAX_BOLT_COUNT } from "@/features/analysis/core/design";
 import { ShortcutHelp } from "./shortcut-help";
 
@@ -45,7 +45,7 @@ export function PatternToolbar(p: Props) {
     <div
       role="toolbar"
       aria-label="Pattern bench"
-      className="flex flex-wrap items-end gap-2 border-b border-ink-100 bg-steel-50 px-3 py-2 text-table"
+      className="flex flex-wrap items-end gap-x-1.5 gap-y-2 border-b border-ink-100 bg-steel-50 px-3 py-2 text-table"
     >
       {!p.readOnly && (
         <>
@@ -65,7 +65,7 @@ export function PatternToolbar(p: Props) {
             <input type="checkbox" checked={straddle} onChange={(e) => setStraddle(e.target.checked)} />{" "}
             straddle centre lines
           </label>
-          <button type="button" className={buttonStyles.secondary} onClick={place}>
+          <button type="button" className={toolButtonStyles.secondary} onClick={place}>
             Place equally
           </button>
           <label className="flex flex-col">
@@ -79,7 +79,7 @@ export function PatternToolbar(p: Props) {
           </label>
           <button
             type="button"
-            className={buttonStyles.quiet}
+            className={toolButtonStyles.quiet}
             aria-label="Turn pattern anticlockwise"
             onClick={() => rot(-1)}
           >
@@ -87,25 +87,25 @@ export function PatternToolbar(p: Props) {
           </button>
           <button
             type="button"
-            className={buttonStyles.quiet}
+            className={toolButtonStyles.quiet}
             aria-label="Turn pattern clockwise"
             onClick={() => rot(1)}
           >
             ⟳
           </button>
-          <button type="button" className={buttonStyles.quiet} onClick={p.onRenumber}>
+          <button type="button" className={toolButtonStyles.quiet} onClick={p.onRenumber}>
             Renumber
           </button>
           <span className="mx-1 h-6 w-px bg-ink-200" />
-          <button type="button" className={buttonStyles.quiet} disabled={!p.canUndo} onClick={p.onUndo}>
+          <button type="button" className={toolButtonStyles.quiet} disabled={!p.canUndo} onClick={p.onUndo}>
             Undo
           </button>
-          <button type="button" className={buttonStyles.quiet} disabled={!p.canRedo} onClick={p.onRedo}>
+          <button type="button" className={toolButtonStyles.quiet} disabled={!p.canRedo} onClick={p.onRedo}>
             Redo
           </button>
         </>
       )}
-      <button type="button" className={buttonStyles.quiet} onClick={p.onFit}>
+      <button type="button" className={toolButtonStyles.quiet} onClick={p.onFit}>
         Fit
       </button>
       <div className="ml-auto">

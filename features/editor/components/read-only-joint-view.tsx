@@ -28,26 +28,28 @@ export function ReadOnlyJointView({ document, result, unitSystem, highlight }: R
   const bolts = highlightedBolts(view, { boltIds: highlight?.boltIds, checkId: picked ?? undefined });
   return (
     <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_26rem]">
-      <div className="relative h-[560px] rounded-plate shadow-plate">
-        <JointCanvas
-          design={document}
-          checks={view?.checks ?? []}
-          heat={heat.stage}
-          units={unitSystem}
-          selectedId={selected}
-          highlightBoltIds={bolts}
-          readOnly
-          fitToken={fitToken}
-          onSelect={setSelected}
-        />
+      <div className="min-w-0">
+        <div className="relative h-[560px] rounded-plate shadow-plate">
+          <JointCanvas
+            design={document}
+            checks={view?.checks ?? []}
+            heat={heat.stage}
+            units={unitSystem}
+            selectedId={selected}
+            highlightBoltIds={bolts}
+            readOnly
+            fitToken={fitToken}
+            onSelect={setSelected}
+          />
+          <button
+            type="button"
+            className="absolute right-2 top-2 rounded bg-white/90 px-2 py-1 text-micro shadow-plate"
+            onClick={() => setFitToken((t) => t + 1)}
+          >
+            Fit
+          </button>
+        </div>
         {heat.scale && <StressLegend scale={heat.scale} units={unitSystem} basis="minimum preload" />}
-        <button
-          type="button"
-          className="absolute right-2 top-2 rounded bg-white/90 px-2 py-1 text-micro shadow-plate"
-          onClick={() => setFitToken((t) => t + 1)}
-        >
-          Fit
-        </button>
       </div>
       <ReadoutPanel
         view={view}

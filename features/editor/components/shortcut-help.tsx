@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { buttonStyles } from "@/features/ui/button-styles";
+import { toolButtonStyles } from "@/features/ui/button-styles";
 
 export const SHORTCUTS: [string, string][] = [
   ["Drag a bolt", "move along the bolt path, snapping to equal pitch"],
@@ -23,7 +23,7 @@ export function ShortcutHelp() {
     <div className="relative">
       <button
         type="button"
-        className={buttonStyles.quiet}
+        className={toolButtonStyles.quiet}
         aria-expanded={open}
         aria-controls="shortcut-help"
         onClick={() => setOpen((o) => !o)}

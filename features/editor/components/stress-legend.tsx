@@ -2,7 +2,7 @@ import type { UnitSystem } from "@/features/analysis/core/design";
 import type { HeatScale } from "../model/heat-scale";
 import { formatQuantity } from "../model/quantities";
 
-/** Colour key of the heat map, with the stress at each stop in the chosen units. */
+/** Colour key of the heat map, with the stress at each stop in the chosen units. Drawn below the drawing, never over bolts. */
 export function StressLegend({
   scale,
   units,
@@ -19,7 +19,7 @@ export function StressLegend({
   return (
     <figure
       aria-label="Gasket stress colour key"
-      className="pointer-events-none absolute bottom-2 left-2 w-56 rounded-plate bg-white/90 p-2 text-micro text-ink-700 shadow-plate"
+      className="w-full max-w-xs rounded-plate bg-white p-2 text-micro text-ink-700"
     >
       <figcaption className="mb-1 font-medium">Gasket stress ({basis})</figcaption>
       <div className="h-2.5 rounded" style={{ background: `linear-gradient(to right, ${gradient})` }} />

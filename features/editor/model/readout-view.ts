@@ -6,6 +6,7 @@
  */
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { CheckRecord, CheckStatus } from "@/features/analysis/core/checks/check-record";
+import { groupByRule } from "@/features/analysis/rule-groups";
 
 export type { CheckStatus };
 
@@ -72,7 +73,13 @@ export function highlightedBolts(
   highlight?: { boltIds?: string[]; checkId?: string },
 ): string[] {
   if (!highlight) return [];
-  const fromCheck =
-    highlight.checkId && view ? (view.checks.find((c) => c.id === highlight.checkId)?.boltIds ?? []) : [];
+  const fromCheck = highlight.checkId && view ? boltsOfPick(view.checks, highlight.checkId) : [];
   return [...new Set([...(highlight.boltIds ?? []), ...fromCheck])];
+}
+
+/** Bolts of a picked check id, or of a picked rule id (its warning and failing pairs, else all). */
+export function boltsOfPick(checks: CheckView[], id: string): string[] {
+  const one = checks.find((c) => c.id === id);
+  if (one) return one.boltIds;
+  return groupByRule(checks).find((r) => r.rule === id)?.boltIds ?? [];
 }

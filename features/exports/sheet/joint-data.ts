@@ -1,6 +1,7 @@
 import "server-only";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { SheetUnits } from "./format";
+import { getBoltMaterialById } from "@/features/analysis/core/catalogue/bolt-materials";
 
 const METHOD: Record<string, string> = {
   "torque-wrench": "Torque wrench",
@@ -58,7 +59,10 @@ export function jointDataItems(d: JointDesign, u: SheetUnits): { label: string; 
           : `outline offset ${L(d.boltPath.offsetMm)}`,
     },
     { label: "Bolts", value: `${d.bolts.length} × ${d.fastener.designation} ${d.fastener.form}` },
-    { label: "Bolt material", value: d.fastener.materialId },
+    {
+      label: "Bolt material",
+      value: getBoltMaterialById(d.fastener.materialId)?.name ?? d.fastener.materialId,
+    },
     { label: "Hole diameter", value: L(d.fastener.holeDiameterMm) },
     { label: "Fastener length", value: L(d.fastener.lengthMm) },
     { label: "Gasket", value: g.material.name },

@@ -8,13 +8,24 @@ import { getSheetFonts } from "./fonts";
 import { drawFlange } from "./draw-flange";
 import { drawProfileChart } from "./draw-profile-chart";
 import { drawKeyValues, drawTable, type Cell } from "./draw-table";
+import {
+  countNoun,
+  countsText,
+  coverageText,
+  groupByRule,
+  justificationsByRule,
+  ruleOf,
+  rulesNeedingJustification,
+  subjectLabel,
+  type RuleRow,
+} from "@/features/analysis/rule-groups";
 import { jointDataItems } from "./joint-data";
 import { flangeSummaryLines } from "@/features/analysis/flange-summary";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import {
-  groupChecks,
+  normaliseStatus,
+  type SheetCheck,
   readResultView,
-  type SheetCheckGroup,
   type SheetResultView,
   type SheetStatus,
 } from "./result-view";
@@ -135,22 +146,24 @@ function boltTable(ctx: SheetContext, rows: BoltRow[]): void {
   );
 }
 
-function subjectsNote(g: SheetCheckGroup, limit = 14): string {
-  if (g.count === 1) return g.boltIds.length ? ` (${g.boltIds.join(", ")})` : "";
-  const tally = (["fail", "warn", "rated", "pass", "na"] as const)
-    .map((st) => [st, g.statusCounts[st]] as const)
-    .filter(([, k]) => k > 0)
-    .map(([st, k]) => `${k} ${STATUS_STYLE[st].text.toLowerCase()}`)
-    .join(", ");
-  const label = STATUS_STYLE[g.status].text.toLowerCase();
-  const shown = g.worstSubjects.slice(0, limit).join(", ");
-  const more = g.worstSubjects.length > limit ? ` and ${g.worstSubjects.length - limit} more` : "";
-  const which = g.worstSubjects.length === g.count ? "" : ` ${label}: ${shown}${more};`;
-  return ` — ${g.count} checks: ${tally};${which} values of the first ${label}`;
+/** " — 16 pairs: 12 warn · 4 pass; worst b3–b4" for a rule of many checks; the bolts of a single one. */
+function rulesNote(g: RuleRow<SheetCheck>): string {
+  const subject = subjectLabel(g.worst);
+  if (g.checks.length === 1) return subject ? ` (${subject})` : "";
+  return ` — ${countNoun(g.checks.length, g.subject)}: ${countsText(g.counts)}${subject ? `; worst ${subject}` : ""}`;
+}
+
+/** "116 % of limit" (floor rules: how much of the value the limit asks for). */
+function marginText(g: RuleRow<SheetCheck>): string {
+  return g.use === null ? "—" : `${Math.round(g.use * 100)} %`;
 }
 
 function checkTable(ctx: SheetContext, view: SheetResultView): void {
-  heading(ctx, "Checks", "as stored with the revision; per-pair and per-bolt checks of one kind share a row");
+  heading(
+    ctx,
+    "Checks",
+    "as stored with the revision; one row per rule, with its worst value; use = share of the limit taken up",
+  );
   if (view.checks.length === 0) {
     ctx.doc
       .font("sans")
@@ -163,20 +176,22 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
   drawTable(
     ctx,
     [
-      { header: "Check", width: 3, wrap: true },
-      { header: "Value", width: 1.1, align: "right", mono: true },
+      { header: "Rule", width: 3, wrap: true },
+      { header: "Worst value", width: 1.1, align: "right", mono: true },
       { header: "Limit", width: 1.1, align: "right", mono: true },
+      { header: "Use", width: 0.6, align: "right", mono: true },
       { header: "Status", width: 0.65, align: "center" },
-      { header: "Source", width: 2.4, wrap: true },
+      { header: "Source", width: 2.2, wrap: true },
     ],
-    groupChecks(view.checks).map((g): Cell[] => {
-      const st = STATUS_STYLE[g.status];
+    groupByRule(view.checks).map((g): Cell[] => {
+      const st = STATUS_STYLE[normaliseStatus(g.worst.status)];
       return [
-        `${g.title}${subjectsNote(g)}`,
-        g.value,
-        g.limit,
+        `${g.title}${rulesNote(g)}`,
+        g.worst.valueText,
+        g.worst.limitText,
+        marginText(g),
         { text: st.text, style: { bold: true, color: st.color, fill: st.fill } },
-        g.source || "—",
+        g.worst.source || "—",
       ];
     }),
   );
@@ -201,37 +216,51 @@ function flangeSection(ctx: SheetContext): void {
 
 function justifications(ctx: SheetContext, view: SheetResultView): void {
   const list = ctx.input.justifications;
-  const open = groupChecks(view.checks.filter((c) => c.status === "warn" || c.status === "fail"));
+  const open = rulesNeedingJustification(view.checks);
   if (open.length === 0 && list.length === 0) return;
-  heading(ctx, "Justifications", "approved reasons for accepting a warn or fail");
-  const byId = new Map(view.checks.map((c) => [c.id, c]));
-  const rows: Cell[][] = list.map((j) => {
-    const c = byId.get(j.checkId);
-    const title = c ? `${c.title}${c.boltIds.length ? ` (${c.boltIds.join(", ")})` : ""}` : j.checkId;
-    return [
-      title,
-      { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } },
-      j.text,
-      `${j.by}, ${j.at.slice(0, 10)}`,
-    ];
-  });
-  const justified = new Set(list.map((j) => j.checkId));
+  heading(ctx, "Justifications", "approved reasons for accepting a rule that warns or fails; one per rule");
+  const byRule = justificationsByRule(list);
+  const rows: Cell[][] = [];
+  const seen = new Set<string>();
   for (const g of open) {
-    const missing = g.worstIds.filter((id) => !justified.has(id));
-    if (missing.length === 0) continue;
-    const note =
-      g.count === 1 ? subjectsNote(g) : ` — ${missing.length} of ${g.count} without a justification`;
-    rows.push([
-      `${g.title}${note}`,
-      { text: STATUS_STYLE[g.status].text, style: { bold: true, color: STATUS_STYLE[g.status].color } },
-      "No approved justification.",
-      "—",
-    ]);
+    seen.add(g.rule);
+    const st = STATUS_STYLE[normaliseStatus(g.status)];
+    const given = byRule.get(g.rule) ?? [];
+    const cover = coverageText(g);
+    const title = `${g.title}${cover ? ` — ${cover}` : rulesNote(g)}`;
+    if (given.length === 0) {
+      rows.push([
+        title,
+        { text: st.text, style: { bold: true, color: st.color } },
+        "No approved justification.",
+        "—",
+      ]);
+      continue;
+    }
+    for (const j of given)
+      rows.push([
+        title,
+        { text: st.text, style: { bold: true, color: st.color } },
+        j.text,
+        `${j.by}, ${j.at.slice(0, 10)}`,
+      ]);
+  }
+  // Justifications of rules that no longer warn or fail in the stored result (kept, never hidden).
+  for (const [rule, given] of byRule) {
+    if (seen.has(rule)) continue;
+    const title = view.checks.find((c) => ruleOf(c.id) === rule)?.title ?? "A check no longer in the result";
+    for (const j of given)
+      rows.push([
+        title,
+        { text: j.status.toUpperCase(), style: { bold: true, color: STATUS_STYLE[j.status].color } },
+        j.text,
+        `${j.by}, ${j.at.slice(0, 10)}`,
+      ]);
   }
   drawTable(
     ctx,
     [
-      { header: "Check", width: 2.4, wrap: true },
+      { header: "Rule", width: 2.4, wrap: true },
       { header: "Status", width: 0.6 },
       { header: "Justification", width: 3.6, wrap: true },
       { header: "Accepted by", width: 1.4, wrap: true },

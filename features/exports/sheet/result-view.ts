@@ -15,8 +15,12 @@ export interface SheetCheck {
   title: string;
   /** Bolts the check is about (pair and per-bolt checks), as stored. */
   boltIds: string[];
-  value: string;
-  limit: string;
+  /** As stored, in the core's unit (the Margin column reads these). */
+  value: number | null;
+  limit: number | null;
+  /** Formatted in the sheet's units. */
+  valueText: string;
+  limitText: string;
   status: SheetStatus;
   source: string;
 }
@@ -99,54 +103,16 @@ export function formatCheckValue(v: number | null, unit: string, u: SheetUnits):
   }
 }
 
-const RANK: Record<SheetStatus, number> = { fail: 4, warn: 3, rated: 2, pass: 1, na: 0 };
-
-export interface SheetCheckGroup extends SheetCheck {
-  /** Stored checks in the group (per pair or per bolt checks of one kind share a group). */
-  count: number;
-  /** The ids of the checks with the group's (worst) status, in stored order. */
-  worstIds: string[];
-  worstSubjects: string[];
-  statusCounts: Record<SheetStatus, number>;
-}
-
-/**
- * Groups the per-pair and per-bolt checks of one kind ("spacing.max-pitch:b3-b4" → the kind
- * before the colon) into one row showing the first check of the worst status, how many there
- * are and which bolts. Selection only; the values are the stored ones. Keeps a 96-bolt sheet's
- * check table to one row per kind instead of hundreds.
- */
-export function groupChecks(checks: SheetCheck[]): SheetCheckGroup[] {
-  const groups = new Map<string, SheetCheck[]>();
-  for (const c of checks) {
-    const key = c.id.includes(":") ? c.id.slice(0, c.id.indexOf(":")) : c.id;
-    const list = groups.get(key) ?? [];
-    list.push(c);
-    groups.set(key, list);
-  }
-  return [...groups.values()].map((list) => {
-    const worst = list.reduce((w, c) => (RANK[c.status] > RANK[w.status] ? c : w), list[0]);
-    const same = list.filter((c) => c.status === worst.status);
-    const statusCounts: Record<SheetStatus, number> = { pass: 0, warn: 0, fail: 0, na: 0, rated: 0 };
-    for (const c of list) statusCounts[c.status]++;
-    return {
-      ...worst,
-      count: list.length,
-      worstIds: same.map((c) => c.id),
-      worstSubjects: same.map((c) => c.boltIds.join("–")).filter(Boolean),
-      statusCounts,
-    };
-  });
-}
-
 export function readResultView(stored: unknown, u: SheetUnits): SheetResultView {
   const r = (isObj(stored) ? stored : {}) as Partial<JointAnalysis>;
   const checks: SheetCheck[] = (r.checks ?? []).map((c) => ({
     id: c.id,
     title: text(c.title),
     boltIds: c.boltIds ?? [],
-    value: formatCheckValue(c.value, c.unit, u),
-    limit: formatCheckValue(c.limit, c.unit, u),
+    value: c.value,
+    limit: c.limit,
+    valueText: formatCheckValue(c.value, c.unit, u),
+    limitText: formatCheckValue(c.limit, c.unit, u),
     status: normaliseStatus(c.status),
     source: text(c.source),
   }));

@@ -81,7 +81,6 @@ export function buildImportedDesign(
   const design: JointDesign = {
     schemaVersion: 1,
     name: meta.name,
-    ...(meta.equipmentTag ? { description: meta.equipmentTag } : {}),
     units: meta.units,
     outline,
     bore,

@@ -111,7 +111,7 @@ export function DataTable<T extends { id: string; origin: string; hidden: boolea
         </label>
         <div className="ml-auto flex flex-wrap gap-2">{toolbar}</div>
       </div>
-      <div className="overflow-x-auto rounded-plate border border-ink-100 bg-white shadow-plate">
+      <div className="relative overflow-x-auto rounded-plate border border-ink-100 bg-white shadow-plate">
         <table className="w-full text-table" aria-label={label}>
           <thead className="bg-steel-50 text-left text-ink-700">
             {table.getHeaderGroups().map((hg) => (

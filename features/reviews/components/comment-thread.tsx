@@ -4,8 +4,10 @@ import { useActionState, useState } from "react";
 import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
+import { groupByRule } from "@/features/analysis/rule-groups";
 import type { ReviewCheck } from "../model/review-checks";
 import type { CommentDto } from "../review-dto";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
 export type AddCommentAction = (
   previous: ActionResult<CommentDto> | null,
@@ -27,7 +29,12 @@ export function CommentThread(props: {
   const [state, formAction, pending] = useActionState(props.addCommentAction, null);
   const [target, setTarget] = useState("");
   const [kind, id] = target ? (target.split(/:(.*)/s) as [string, string]) : ["", ""];
-  const checkTitles = new Map(props.checks.map((c) => [c.id, c.title]));
+  const rules = groupByRule(props.checks);
+  // Titles of rules and of single checks (older comments point at one check of a rule).
+  const checkTitles = new Map([
+    ...props.checks.map((c) => [c.id, c.title] as const),
+    ...rules.map((r) => [r.rule, r.title] as const),
+  ]);
 
   return (
     <section aria-labelledby="comments-heading" className="flex flex-col gap-3">
@@ -54,7 +61,7 @@ export function CommentThread(props: {
             >
               <p className="text-micro text-ink-500">
                 <span className="font-medium text-ink-800">{c.authorName}</span> ·{" "}
-                <time dateTime={c.at}>{c.at.slice(0, 16).replace("T", " ")}</time>
+                <time dateTime={c.at}>{formatUtcMinute(c.at)}</time>
               </p>
               {label ? (
                 <button
@@ -93,9 +100,9 @@ export function CommentThread(props: {
                 ))}
               </optgroup>
               <optgroup label="Checks">
-                {props.checks.map((c) => (
-                  <option key={c.id} value={`check:${c.id}`}>
-                    {c.title} ({c.id})
+                {rules.map((r) => (
+                  <option key={r.rule} value={`check:${r.rule}`}>
+                    {r.title}
                   </option>
                 ))}
               </optgroup>

@@ -5,7 +5,8 @@ import { useActionState, useEffect } from "react";
 import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
-import { checksNeedingJustification, type ReviewCheck } from "../model/review-checks";
+import { coverageText, rulesNeedingJustification } from "@/features/analysis/rule-groups";
+import type { ReviewCheck } from "../model/review-checks";
 import type { RevisionPermissions } from "../review-dto";
 import type { ReviewStatus } from "../model/review-states";
 
@@ -58,7 +59,7 @@ export function DecisionPanel(props: {
     if (newState?.ok) router.push(newState.data.href);
   }, [newState, router]);
 
-  const needing = checksNeedingJustification(props.checks);
+  const needing = rulesNeedingJustification(props.checks);
   const { canSubmit, canApprove, canReturn, canStartNew } = props.permissions;
   const fieldError = (state: ActionResult<unknown> | null, key: string) =>
     state && !state.ok ? state.fieldErrors?.[key]?.join(" ") : undefined;
@@ -97,22 +98,25 @@ export function DecisionPanel(props: {
           {needing.length > 0 ? (
             <fieldset className="flex flex-col gap-2">
               <legend className="text-table font-semibold text-ink-800">
-                {needing.length} check{needing.length === 1 ? "" : "s"} warn or fail: write why each is
-                acceptable
+                {needing.length} rule{needing.length === 1 ? "" : "s"} warn or fail: write why each is
+                acceptable (one justification covers every pair or bolt of its rule)
               </legend>
-              {needing.map((c) => (
-                <label key={c.id} className="text-table text-ink-700">
-                  Justification for {c.title} ({c.id})
+              {needing.map((r) => (
+                <label key={r.rule} className="text-table text-ink-700" data-rule={r.rule}>
+                  Justification for {r.title}
+                  {coverageText(r) ? (
+                    <span className="block text-micro text-ink-500">{coverageText(r)}</span>
+                  ) : null}
                   <textarea
-                    name={`justification:${c.id}`}
+                    name={`justification:${r.rule}`}
                     required
                     rows={2}
                     maxLength={5000}
                     className={fieldClass}
                   />
-                  {fieldError(approveState, `justifications.${c.id}`) ? (
+                  {fieldError(approveState, `justifications.${r.rule}`) ? (
                     <span className="text-verdict-fail">
-                      {fieldError(approveState, `justifications.${c.id}`)}
+                      {fieldError(approveState, `justifications.${r.rule}`)}
                     </span>
                   ) : null}
                 </label>

@@ -4,6 +4,7 @@ import Link from "next/link";
 import useSWR from "swr";
 import { DESK_LISTS_KEY, DESK_REFRESH_MS } from "../cache-keys";
 import type { DeskItemDto, DeskListsDto } from "../review-dto";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
 async function fetchDesk(url: string): Promise<DeskListsDto> {
   const response = await fetch(url, { headers: { accept: "application/json" }, cache: "no-store" });
@@ -45,7 +46,7 @@ function DeskList({
               <p className="text-table text-ink-600">
                 {item.equipmentTag ? `${item.equipmentTag} · ` : ""}
                 {kind === "waiting" ? `submitted by ${item.personName}` : `returned by ${item.personName}`}
-                {item.at ? ` · ${item.at.slice(0, 16).replace("T", " ")}` : ""}
+                {item.at ? ` · ${formatUtcMinute(item.at)}` : ""}
               </p>
               {kind === "returned" && item.comment ? (
                 <p className="text-table text-ink-800">“{item.comment}”</p>

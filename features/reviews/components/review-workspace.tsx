@@ -2,11 +2,11 @@
 
 import { useState, type ReactNode } from "react";
 import type { UnitSystem } from "@/features/analysis/core/design";
-import type { ReviewCheck } from "../model/review-checks";
+import { groupByRule } from "@/features/analysis/rule-groups";
 import type { CommentDto, RevisionReviewDto } from "../review-dto";
 import { CommentThread, type AddCommentAction } from "./comment-thread";
 import { DecisionPanel, type DecisionActions } from "./decision-panel";
-import { ReviewCheckList } from "./review-check-list";
+import { ReviewCheckList, type CheckPick } from "./review-check-list";
 
 export interface ReviewHighlight {
   boltIds?: string[];
@@ -32,13 +32,13 @@ export function ReviewWorkspace(props: {
     label: string;
   } | null>(null);
 
-  const pickCheck = (check: ReviewCheck | null) =>
+  const pickCheck = (pick: CheckPick | null) =>
     setHighlight(
-      check
+      pick
         ? {
-            source: `check:${check.id}`,
-            value: { checkId: check.id, boltIds: check.boltIds },
-            label: `check ${check.title}`,
+            source: `check:${pick.id}`,
+            value: { checkId: pick.id, boltIds: pick.boltIds },
+            label: `check ${pick.title}`,
           }
         : null,
     );
@@ -51,10 +51,11 @@ export function ReviewWorkspace(props: {
         label: `bolt ${comment.targetId}`,
       });
     const check = review.checks.find((c) => c.id === comment.targetId);
+    const rule = groupByRule(review.checks).find((r) => r.rule === comment.targetId);
     setHighlight({
       source: `comment:${comment.id}`,
-      value: { checkId: comment.targetId, boltIds: check?.boltIds ?? [] },
-      label: `check ${check?.title ?? comment.targetId}`,
+      value: { checkId: comment.targetId, boltIds: check?.boltIds ?? rule?.boltIds ?? [] },
+      label: `check ${check?.title ?? rule?.title ?? "no longer in the result"}`,
     });
   };
   const activeCommentId = highlight?.source.startsWith("comment:")

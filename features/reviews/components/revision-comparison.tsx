@@ -59,24 +59,26 @@ export function RevisionComparison({ comparison }: { comparison: RevisionCompari
         {comparison.fieldChanges.length === 0 ? (
           <p className="text-body text-ink-500">No input changed.</p>
         ) : (
-          <table className="mt-2 w-full text-table" aria-label="Inputs that changed">
-            <thead>
-              <tr>
-                <th className={th}>Field</th>
-                <th className={th}>Before</th>
-                <th className={th}>After</th>
-              </tr>
-            </thead>
-            <tbody>
-              {comparison.fieldChanges.map((c) => (
-                <tr key={c.path}>
-                  <td className={`${td} num`}>{c.path}</td>
-                  <td className={`${td} num break-all`}>{show(c.before)}</td>
-                  <td className={`${td} num break-all`}>{show(c.after)}</td>
+          <div className="max-w-full overflow-x-auto">
+            <table className="mt-2 w-full text-table" aria-label="Inputs that changed">
+              <thead>
+                <tr>
+                  <th className={th}>Field</th>
+                  <th className={th}>Before</th>
+                  <th className={th}>After</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {comparison.fieldChanges.map((c) => (
+                  <tr key={c.path}>
+                    <td className={`${td} num`}>{c.path}</td>
+                    <td className={`${td} num break-all`}>{show(c.before)}</td>
+                    <td className={`${td} num break-all`}>{show(c.after)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         )}
       </section>
 
@@ -87,28 +89,30 @@ export function RevisionComparison({ comparison }: { comparison: RevisionCompari
         {comparison.boltMoves.length === 0 ? (
           <p className="text-body text-ink-500">No bolt moved.</p>
         ) : (
-          <table className="mt-2 w-full text-table" aria-label="Bolts moved">
-            <thead>
-              <tr>
-                <th className={th}>Bolt</th>
-                <th className={th}>Change</th>
-                <th className={th}>Δx</th>
-                <th className={th}>Δy</th>
-                <th className={th}>Δs along the path</th>
-              </tr>
-            </thead>
-            <tbody>
-              {comparison.boltMoves.map((m) => (
-                <tr key={m.boltId}>
-                  <td className={td}>{m.boltId}</td>
-                  <td className={td}>{m.change}</td>
-                  <td className={`${td} num`}>{mm(m.dxMm)}</td>
-                  <td className={`${td} num`}>{mm(m.dyMm)}</td>
-                  <td className={`${td} num`}>{mm(m.dsMm)}</td>
+          <div className="max-w-full overflow-x-auto">
+            <table className="mt-2 w-full text-table" aria-label="Bolts moved">
+              <thead>
+                <tr>
+                  <th className={th}>Bolt</th>
+                  <th className={th}>Change</th>
+                  <th className={th}>Δx</th>
+                  <th className={th}>Δy</th>
+                  <th className={th}>Δs along the path</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {comparison.boltMoves.map((m) => (
+                  <tr key={m.boltId}>
+                    <td className={td}>{m.boltId}</td>
+                    <td className={td}>{m.change}</td>
+                    <td className={`${td} num`}>{mm(m.dxMm)}</td>
+                    <td className={`${td} num`}>{mm(m.dyMm)}</td>
+                    <td className={`${td} num`}>{mm(m.dsMm)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         )}
       </section>
 
@@ -119,26 +123,28 @@ export function RevisionComparison({ comparison }: { comparison: RevisionCompari
         {comparison.checkChanges.length === 0 ? (
           <p className="text-body text-ink-500">Every check kept its status.</p>
         ) : (
-          <table className="mt-2 w-full text-table" aria-label="Checks whose status changed">
-            <thead>
-              <tr>
-                <th className={th}>Check</th>
-                <th className={th}>Before</th>
-                <th className={th}>After</th>
-              </tr>
-            </thead>
-            <tbody>
-              {comparison.checkChanges.map((c) => (
-                <tr key={c.checkId}>
-                  <td className={td}>
-                    {c.title} <span className="text-micro text-ink-400">{c.checkId}</span>
-                  </td>
-                  <td className={td}>{c.before ? CHECK_STATUS_LABELS[c.before] : "absent"}</td>
-                  <td className={td}>{c.after ? CHECK_STATUS_LABELS[c.after] : "absent"}</td>
+          <div className="max-w-full overflow-x-auto">
+            <table className="mt-2 w-full text-table" aria-label="Checks whose status changed">
+              <thead>
+                <tr>
+                  <th className={th}>Check</th>
+                  <th className={th}>Before</th>
+                  <th className={th}>After</th>
                 </tr>
-              ))}
-            </tbody>
-          </table>
+              </thead>
+              <tbody>
+                {comparison.checkChanges.map((c) => (
+                  <tr key={c.checkId}>
+                    <td className={td}>
+                      {c.title} <span className="text-micro text-ink-400">{c.checkId}</span>
+                    </td>
+                    <td className={td}>{c.before ? CHECK_STATUS_LABELS[c.before] : "absent"}</td>
+                    <td className={td}>{c.after ? CHECK_STATUS_LABELS[c.after] : "absent"}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
         )}
       </section>
     </div>

@@ -4,8 +4,9 @@ import type { RevisionReviewDto } from "../review-dto";
 import { ExportLinks } from "./export-links";
 import { IntegrityNotice } from "./integrity-notice";
 import { StatusBadge } from "./status-badge";
+import { formatUtcMinute } from "@/features/ui/format-when";
 
-const when = (iso: string | null) => (iso ? iso.slice(0, 16).replace("T", " ") : "");
+const when = (iso: string | null) => (iso ? formatUtcMinute(iso) : "");
 
 /** Title block of the review screen: who did what, the snapshot's integrity, shop documents. */
 export function RevisionHeader({ review }: { review: RevisionReviewDto }) {

@@ -1,6 +1,8 @@
 // Reads the checks out of a stored JointAnalysis. The result is JSON from the core
 // (features/analysis/core/analyze.ts: each check `{id, title, value, limit, unit, status, source,
 // note}`); it is read defensively because a frozen snapshot may come from an older core version.
+import { rulesNeedingJustification, type RuleRow } from "@/features/analysis/rule-groups";
+
 export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable" | "accepted-by-rating";
 
 export interface ReviewCheck {
@@ -77,12 +79,13 @@ export function checksNeedingJustification(checks: ReviewCheck[]): ReviewCheck[]
   return checks.filter((c) => c.status === "warn" || c.status === "fail");
 }
 
-/** Ids of the warn/fail checks that have no non-blank justification. */
+/**
+ * Rules (see rule-groups.ts) with a warn/fail check and no non-blank justification. One written
+ * justification per rule covers every pair or bolt of that rule that warns or fails.
+ */
 export function missingJustifications(
   checks: ReviewCheck[],
   justifications: Record<string, string>,
-): string[] {
-  return checksNeedingJustification(checks)
-    .filter((c) => !(justifications[c.id] ?? "").trim())
-    .map((c) => c.id);
+): RuleRow<ReviewCheck>[] {
+  return rulesNeedingJustification(checks).filter((r) => !(justifications[r.rule] ?? "").trim());
 }

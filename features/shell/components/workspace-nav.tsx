@@ -6,12 +6,15 @@ import { NAV_ITEMS } from "@/features/shell/nav-items";
 export function WorkspaceNav({ roles }: { roles: Role[] }) {
   const items = NAV_ITEMS.filter((item) => !item.roles || item.roles.some((r) => roles.includes(r)));
   return (
-    <nav aria-label="Workspace" className="flex items-center gap-1">
+    <nav
+      aria-label="Workspace"
+      className="order-last -mx-2 flex w-full items-center gap-1 overflow-x-auto sm:order-none sm:mx-0 sm:w-auto"
+    >
       {items.map((item) => (
         <Link
           key={item.href}
           href={item.href}
-          className="rounded-plate px-3 py-1.5 text-body text-ink-100 hover:bg-ink-700 hover:text-white"
+          className="shrink-0 whitespace-nowrap rounded-plate px-3 py-1.5 text-body text-ink-100 hover:bg-ink-700 hover:text-white"
         >
           {item.label}
         </Link>

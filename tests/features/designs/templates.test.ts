@@ -5,6 +5,7 @@ import { jointDesignSchema } from "@/features/analysis/schema";
 import { buildDesignFromTemplate, type TemplateInput } from "@/features/designs/model/templates";
 import { TEMPLATE_CHOICES } from "@/features/designs/model/template-fields";
 import { newDesignFormSchema } from "@/features/designs/template-schema";
+import { withGasketForm } from "@/features/editor/model/gasket-form";
 
 // Templates in Node: each builds a document the core's schema accepts and the core analyses
 // with finite numbers everywhere; the new-design form's defaults are valid; bad input in every
@@ -72,6 +73,48 @@ describe("design templates", () => {
     expect(d.bolts).toHaveLength(8);
     expect(d.fastener.designation).toBe("3/4");
     expect(d.templateId).toBe("asme-b16.5-cl150-nps6");
+  });
+});
+
+describe("full-face gaskets from the interface", () => {
+  const params = {
+    outsideDiameterMm: 400,
+    boreDiameterMm: 200,
+    boltCircleDiameterMm: 340,
+    boltCount: 12,
+    boltSize: "M20" as const,
+    flangeThicknessMm: 30,
+  };
+  it("the Full-face round flange template puts one elastomer sheet over the face; Service / notes starts empty", () => {
+    const d = buildDesignFromTemplate(meta, { kind: "full-face-flange", ...params });
+    expect(d.gasket.kind).toBe("full-face");
+    expect(d.gasket.material.catalogueId).toBe("elastomer-cotton-insertion");
+    expect(d.description).toBeUndefined();
+    // The stress is reported along the bolt path, where the sheet must seal between the bolts.
+    expect(analyzeJoint(d).gasketStress.pathKind).toBe("bolt-path");
+  });
+
+  it("the editor's ring/full-face switch keeps the material and puts a new ring inside the holes", () => {
+    const ring = buildDesignFromTemplate(meta, { kind: "circular-flange", ...params });
+    const full = { ...ring, gasket: withGasketForm(ring, "full-face") };
+    expect(full.gasket).toEqual({ kind: "full-face", material: ring.gasket.material });
+    const back = withGasketForm(full, "ring");
+    expect(back).toEqual(ring.gasket); // the template's ring: bore + 2·3 mm to bolt circle − hole − 2·3 mm
+    expect(jointDesignSchema.safeParse({ ...full, gasket: back }).success).toBe(true);
+    const cover = buildDesignFromTemplate(meta, {
+      kind: "rectangular-cover",
+      widthMm: 600,
+      heightMm: 400,
+      cornerRadiusMm: 40,
+      boltEdgeDistanceMm: 35,
+      boltCount: 16,
+      boltSize: "M20",
+      coverThicknessMm: 30,
+      flangeThicknessMm: 30,
+      gasketWidthMm: 20,
+    });
+    const band = withGasketForm({ ...cover, gasket: withGasketForm(cover, "full-face") }, "ring");
+    expect(band).toEqual(cover.gasket); // the cover template's band sits where the switch puts it
   });
 });
 

@@ -1,3 +1,4 @@
+import { getBoltMaterialById } from "@/features/analysis/core/catalogue/bolt-materials";
 import { describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
 import {
@@ -73,6 +74,13 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     expect(text).toMatch(/revision 7/);
     expect(text).toContain(input.revision.contentHash!.slice(0, 40));
     expect(text).toContain("Dana Designer");
+    // The bolt material by its name, never its catalogue id.
+    // (pdftotext joins a word hyphenated at a cell's line break, so hyphens are left out of the match)
+    expect(text.replace(/\s+/g, " ").replace(/-/g, "")).toContain(
+      getBoltMaterialById(design.fastener.materialId)!.name.replace(/-/g, ""),
+    );
+    // (the catalogue id stays only in "Tables and editions used", as the row's reference)
+    expect(text).not.toMatch(new RegExp(`Bolt material\\s+${design.fastener.materialId}`));
     expect(text).toContain("Arlo Approver");
     expect(text).toContain("2026-11-30");
     expect(text).not.toContain("NOT APPROVED");
@@ -80,8 +88,8 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     for (let i = 1; i <= design.bolts.length; i++)
       expect(text).toMatch(new RegExp(`^${i}\\s+${design.bolts[i - 1].id}\\b`, "m"));
     const result = input.result as ReturnType<typeof analyse>;
-    // One row per check kind (pair and per-bolt checks grouped): each row shows the worst stored
-    // status of its kind, and its tally names every stored status of the kind.
+    // One row per rule (pair and per-bolt checks grouped): each row shows the worst stored
+    // status of its rule and how many pairs or bolts it holds; internal ids never print.
     const flat = text.replace(/\s+/g, " ");
     const word = {
       pass: "PASS",
@@ -99,8 +107,9 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     for (const list of kinds.values()) {
       const worst = list.reduce((w, c) => (rank[c.status] > rank[w.status] ? c : w));
       expect(flat).toContain(word[worst.status]);
-      if (list.length > 1) expect(flat).toContain(`${list.length} checks:`);
+      if (list.length > 1) expect(flat).toMatch(new RegExp(`${list.length} (pairs|bolts):`));
     }
+    expect(flat).not.toMatch(/spacing\.[a-z-]+:b\d/);
     // Stored counts appear as stored (no recomputation): "<p> pass · <w> warn · <f> fail".
     expect(text.replace(/\s+/g, " ")).toContain(
       `${result.summary.passCount} pass · ${result.summary.warnCount} warn · ${result.summary.failCount} fail`,

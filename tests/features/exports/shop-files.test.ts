@@ -89,9 +89,18 @@ describe.each(cases)("shop files of the %s", (_label, design) => {
 });
 
 describe("export file names", () => {
-  it("use the equipment tag, else the design name, with the revision and the kind", () => {
+  it("use the equipment tag and the design name, with the revision and the kind", () => {
     expect(exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "spacing-sheet")).toBe(
-      "e-2107-rev3-spacing-sheet.pdf",
+      "e-2107-channel-cover-rev3-spacing-sheet.pdf",
+    );
+    // Two designs of one tag get two names; a name that starts with the tag does not repeat it.
+    expect(
+      exportFileName({ equipmentTag: "E-2107", designName: "E-2107 inlet nozzle N1" }, 1, "hole-list"),
+    ).toBe("e-2107-inlet-nozzle-n1-rev1-hole-list.csv");
+    expect(
+      exportFileName({ equipmentTag: "E-2107", designName: "E-2107 channel cover" }, 1, "hole-list"),
+    ).not.toBe(
+      exportFileName({ equipmentTag: "E-2107", designName: "E-2107 inlet nozzle N1" }, 1, "hole-list"),
     );
     expect(exportFileName({ equipmentTag: " ", designName: "Manway M1 / north" }, 12, "hole-list")).toBe(
       "manway-m1-north-rev12-hole-list.csv",

@@ -13,7 +13,8 @@ import {
   startNewRevision,
   submitRevision,
 } from "@/features/reviews/transitions";
-import { checksNeedingJustification, readChecks } from "@/features/reviews/model/review-checks";
+import { readChecks } from "@/features/reviews/model/review-checks";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
 
@@ -72,7 +73,7 @@ async function latestNumber(designId: string) {
 
 function justifyAll(result: unknown): Record<string, string> {
   return Object.fromEntries(
-    checksNeedingJustification(readChecks(result)).map((c) => [c.id, `Accepted for ${c.id}: hydrotest`]),
+    rulesNeedingJustification(readChecks(result)).map((r) => [r.rule, `Accepted for ${r.title}: hydrotest`]),
   );
 }
 

@@ -148,7 +148,10 @@ describe("checks and comparison", () => {
     expect(checks.map((c) => c.status)).toEqual(["pass", "warn", "fail", "not-applicable", "fail"]);
     expect(checks[0]!.boltIds).toEqual(["b1", "b2"]);
     expect(checksNeedingJustification(checks).map((c) => c.id)).toEqual(["b", "c", "e"]);
-    expect(missingJustifications(checks, { b: "accepted: hydrotest", c: "   " })).toEqual(["c", "e"]);
+    expect(missingJustifications(checks, { b: "accepted: hydrotest", c: "   " }).map((r) => r.rule)).toEqual([
+      "c",
+      "e",
+    ]);
   });
 
   it("diffs documents by field path, matching bolts by id", () => {

@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { notifyReviewOutcome } from "@/features/reviews/notifications";
 import { approveRevision, returnRevision, submitRevision } from "@/features/reviews/transitions";
-import { checksNeedingJustification, readChecks } from "@/features/reviews/model/review-checks";
+import { readChecks } from "@/features/reviews/model/review-checks";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb } from "../../setup/test-db";
 import { messagesTo } from "../accounts/outbox";
 import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
@@ -63,7 +64,7 @@ describe("review notifications (fake SMTP)", () => {
       .where("design_id", "=", designId)
       .executeTakeFirstOrThrow();
     const justifications = Object.fromEntries(
-      checksNeedingJustification(readChecks(row.result)).map((c) => [c.id, "accepted"]),
+      rulesNeedingJustification(readChecks(row.result)).map((r) => [r.rule, "accepted"]),
     );
     const approved = await approveRevision(db, org.approver2, {
       designId,

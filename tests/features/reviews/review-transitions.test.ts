@@ -5,7 +5,8 @@ import type { Database } from "@/db/types";
 import { listActivity, recordActivity } from "@/features/activity/queries";
 import { saveWorkingRevision } from "@/features/designs/mutations";
 import { computeContentHash } from "@/features/analysis/content-hash";
-import { checksNeedingJustification, readChecks } from "@/features/reviews/model/review-checks";
+import { readChecks } from "@/features/reviews/model/review-checks";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getDeskLists, getRevisionReview, listJustifications } from "@/features/reviews/queries";
 import { returnRevisionSchema } from "@/features/reviews/schema";
 import {
@@ -42,9 +43,9 @@ async function revisionRow(designId: string, number = 1) {
 
 function justifyAll(result: unknown): Record<string, string> {
   return Object.fromEntries(
-    checksNeedingJustification(readChecks(result)).map((c) => [
-      c.id,
-      `Accepted for ${c.id}: confirmed by hydrotest`,
+    rulesNeedingJustification(readChecks(result)).map((r) => [
+      r.rule,
+      `Accepted for ${r.title}: confirmed by hydrotest`,
     ]),
   );
 }
@@ -108,8 +109,10 @@ describe("review transitions (real PostgreSQL)", () => {
     );
 
     row = await revisionRow(designId);
-    const needing = checksNeedingJustification(readChecks(row.result));
+    const needing = rulesNeedingJustification(readChecks(row.result));
     expect(needing.length).toBeGreaterThan(0); // the sample has warnings (max pitch), so justifications are exercised
+    // One rule with many warning pairs needs one justification, not one per pair.
+    expect(needing.some((r) => r.open.length > 1)).toBe(true);
     const bare = await approveRevision(db, org.approver, {
       designId,
       number: 1,
@@ -121,7 +124,8 @@ describe("review transitions (real PostgreSQL)", () => {
       designId,
       number: 1,
       comment: "",
-      justifications: { [needing[0]!.id]: "fine" },
+      // A justification keyed by one pair's check id (as older approvals did) does not cover the rule.
+      justifications: { [needing[0]!.open[0]!.id]: "fine" },
     });
     expect(partial).toMatchObject({ ok: false });
     expect((await revisionRow(designId)).status).toBe("in_review");
@@ -133,7 +137,7 @@ describe("review transitions (real PostgreSQL)", () => {
     });
     expect(approved).toMatchObject({ ok: true, data: { status: "approved" } });
     expect((await listJustifications(db, org.organizationId, row.id)).map((j) => j.checkId).sort()).toEqual(
-      needing.map((c) => c.id).sort(),
+      needing.map((r) => r.rule).sort(),
     );
     expect((await getDeskLists(db, org.approver)).waitingForMyReview.map((i) => i.designId)).not.toContain(
       designId,

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { createDesignAction } from "@/features/designs/actions";
 import { NewDesignForm } from "@/features/designs/components/new-design-form";
 import { requireViewer } from "@/server/auth/guard";
@@ -14,6 +15,13 @@ export default async function NewDesignPage() {
         <h1 className="mt-1 text-display font-semibold">New design</h1>
         <p className="mt-2 text-body text-ink-700">
           Pick a starting shape and its main dimensions in millimetres; everything else is set in the editor.
+        </p>
+        <p className="mt-1 text-body text-ink-700">
+          Have a DXF of the flange outline and holes?{" "}
+          <Link href="/designs/import" className="font-medium text-brass-700 underline">
+            Start from the drawing (Drawing intake)
+          </Link>
+          .
         </p>
       </header>
       <NewDesignForm createDesignAction={createDesignAction} />

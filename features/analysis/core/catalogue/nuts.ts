@@ -5,6 +5,7 @@
  */
 import { inToMm } from "../units";
 import type { Provenance } from "./confidence";
+import * as fm from "../fixed-math";
 
 export type NutSeries = "asme-b18.2.2-heavy-hex" | "iso-4032" | "iso-old";
 
@@ -19,7 +20,7 @@ export interface NutRow extends Provenance {
 
 /** Across corners from across flats: AC = AF / cos 30°. Example: AF 30 mm → 34.64 mm. */
 export function acrossCornersFromFlatsMm(acrossFlatsMm: number): number {
-  return acrossFlatsMm / Math.cos(Math.PI / 6);
+  return acrossFlatsMm / fm.cos(Math.PI / 6);
 }
 
 /** ASME B18.2.2 heavy hex: F = 1.5·D + 1/8 in. Example: D = 3/4 in → 1.25 in. */

@@ -6,6 +6,7 @@
  */
 import type { JointModel } from "../joint-model";
 import { makeCheck, type CheckRecord } from "./check-record";
+import { percent } from "../units";
 
 export const ASSEMBLY_STRESS_MIN_FRACTION_OF_YIELD = 0.3;
 export const ASSEMBLY_STRESS_MAX_FRACTION_OF_YIELD = 0.55;
@@ -32,7 +33,7 @@ export function checkBolts(model: JointModel): CheckRecord[] {
       unit: "MPa",
       status: sMin >= lo ? "pass" : "warn",
       source: src,
-      note: `Lower limit ${ASSEMBLY_STRESS_MIN_FRACTION_OF_YIELD * 100} % of yield ${sy.toFixed(0)} MPa.`,
+      note: `Lower limit ${percent(ASSEMBLY_STRESS_MIN_FRACTION_OF_YIELD)} % of yield ${sy.toFixed(0)} MPa.`,
     }),
   );
   out.push(
@@ -44,7 +45,7 @@ export function checkBolts(model: JointModel): CheckRecord[] {
       unit: "MPa",
       status: sMax <= hi ? "pass" : sMax <= sy ? "warn" : "fail",
       source: src,
-      note: `Upper limit ${ASSEMBLY_STRESS_MAX_FRACTION_OF_YIELD * 100} % of yield; above yield fails.`,
+      note: `Upper limit ${percent(ASSEMBLY_STRESS_MAX_FRACTION_OF_YIELD)} % of yield; above yield fails.`,
     }),
   );
   const sService = (p.maxN + C * pMax) / As;

@@ -7,12 +7,13 @@ import type { JointModel } from "../joint-model";
 import { signedDistanceToShape } from "../shape";
 import { findWrenchClearance } from "../catalogue/wrench-clearance";
 import { makeCheck, type CheckRecord } from "./check-record";
+import * as fm from "../fixed-math";
 
 export function checkEdgesAndPattern(model: JointModel): CheckRecord[] {
   const design = model.design;
   const out: CheckRecord[] = [];
   const d = model.nominalDiameterMm;
-  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / Math.cos(Math.PI / 6);
+  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / fm.cos(Math.PI / 6);
   const bearingRadius = Math.max(ac, design.fastener.washer?.outerDiameterMm ?? 0) / 2;
   const tema = findWrenchClearance(model.thread.designation);
   model.boltPoints.forEach((p, i) => {

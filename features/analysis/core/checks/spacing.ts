@@ -17,6 +17,7 @@ import { standardFlangeRating } from "../flange-design/rating";
 import { getTighteningMethodById } from "../catalogue/tightening-methods";
 import { findWrenchClearance } from "../catalogue/wrench-clearance";
 import { makeCheck, type CheckRecord } from "./check-record";
+import * as fm from "../fixed-math";
 
 /** Tool outside diameter around a nut of across-corners AC: socket wall ≈ 0.1·AC + 2 mm; tensioner ≈ 2.6·d [practice]. */
 export function toolOutsideDiameterMm(
@@ -43,7 +44,7 @@ export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckReco
   const m = design.gasket.material.m;
   const bsMax = maxBoltPitchMm(d, t, m);
   const bsMoment = 2 * d + t;
-  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / Math.cos(Math.PI / 6);
+  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / fm.cos(Math.PI / 6);
   const tool = getTighteningMethodById(design.assembly.method)?.tool ?? "socket";
   const toolOd = toolOutsideDiameterMm(tool, ac, d);
   const minChord = ac / 2 + toolOd / 2;
