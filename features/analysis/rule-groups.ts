@@ -5,7 +5,7 @@
  * per rule through this module, and approvals are justified per rule. Pure: no React, no server.
  * Works for any rule id, including ones this module has never heard of.
  */
-export type RuleStatus = "pass" | "warn" | "fail" | "not-applicable";
+export type RuleStatus = "pass" | "warn" | "fail" | "not-applicable" | "accepted-by-rating";
 
 /** The least a check needs to be grouped (the core's record, the review's and the sheet's all fit). */
 export interface GroupableCheck {
@@ -43,8 +43,22 @@ export interface RuleRow<C extends GroupableCheck> {
   sense: "at-least" | "at-most" | null;
 }
 
-const RANK: Record<RuleStatus, number> = { fail: 3, warn: 2, pass: 1, "not-applicable": 0 };
-export const RULE_ORDER: Record<RuleStatus, number> = { fail: 0, warn: 1, pass: 2, "not-applicable": 3 };
+// "accepted-by-rating": a rule meant for flanges designed by rule, on a catalogue flange used within its
+// pressure-temperature rating (ASME VIII-1 UG-44(a)); neither a pass nor a fail, and never asks for a justification.
+const RANK: Record<RuleStatus, number> = {
+  fail: 4,
+  warn: 3,
+  "accepted-by-rating": 2,
+  pass: 1,
+  "not-applicable": 0,
+};
+export const RULE_ORDER: Record<RuleStatus, number> = {
+  fail: 0,
+  warn: 1,
+  "accepted-by-rating": 2,
+  pass: 3,
+  "not-applicable": 4,
+};
 
 /** The rule a check id belongs to: the part before the first colon (the whole id when there is none). */
 export function ruleOf(checkId: string): string {
@@ -53,7 +67,15 @@ export function ruleOf(checkId: string): string {
 }
 
 export function ruleStatus(raw: string): RuleStatus {
-  if (raw === "pass" || raw === "warn" || raw === "fail" || raw === "not-applicable") return raw;
+  if (
+    raw === "pass" ||
+    raw === "warn" ||
+    raw === "fail" ||
+    raw === "not-applicable" ||
+    raw === "accepted-by-rating"
+  )
+    return raw;
+  if (raw === "rated") return "accepted-by-rating";
   if (raw === "na" || raw === "n/a") return "not-applicable";
   return "fail";
 }
@@ -96,7 +118,13 @@ export function groupByRule<C extends GroupableCheck>(checks: readonly C[]): Rul
   const rows: RuleRow<C>[] = [];
   for (const [rule, list] of byRule) {
     const sense = senseOf(list);
-    const counts: Record<RuleStatus, number> = { pass: 0, warn: 0, fail: 0, "not-applicable": 0 };
+    const counts: Record<RuleStatus, number> = {
+      pass: 0,
+      warn: 0,
+      fail: 0,
+      "not-applicable": 0,
+      "accepted-by-rating": 0,
+    };
     let worst = list[0]!;
     let worstUse = limitUseOf(worst, sense);
     for (const c of list) {
@@ -138,6 +166,7 @@ export function countsText(counts: Record<RuleStatus, number>): string {
   const parts: string[] = [];
   if (counts.fail) parts.push(`${counts.fail} fail`);
   if (counts.warn) parts.push(`${counts.warn} warn`);
+  if (counts["accepted-by-rating"]) parts.push(`${counts["accepted-by-rating"]} accepted by its rating`);
   if (counts.pass) parts.push(`${counts.pass} pass`);
   if (counts["not-applicable"]) parts.push(`${counts["not-applicable"]} not applicable`);
   return parts.join(" · ");

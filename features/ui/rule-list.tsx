@@ -24,24 +24,28 @@ const VERDICT: Record<RuleStatus, string> = {
   warn: "Warns",
   pass: "Holds",
   "not-applicable": "Not applicable",
+  "accepted-by-rating": "Accepted by its rating",
 };
 const EDGE: Record<RuleStatus, string> = {
   fail: "border-l-verdict-fail",
   warn: "border-l-verdict-warn",
   pass: "border-l-verdict-pass",
   "not-applicable": "border-l-steel-300",
+  "accepted-by-rating": "border-l-brass-700",
 };
 const WORD: Record<RuleStatus, string> = {
   fail: "text-verdict-fail",
   warn: "text-verdict-warn",
   pass: "text-verdict-pass",
   "not-applicable": "text-ink-500",
+  "accepted-by-rating": "text-brass-700",
 };
 const FILL: Record<RuleStatus, string> = {
   fail: "fill-verdict-fail",
   warn: "fill-verdict-warn",
   pass: "fill-verdict-pass",
   "not-applicable": "fill-steel-300",
+  "accepted-by-rating": "fill-brass-700",
 };
 
 /** The bar spans 0 … 1.5 × the limit; the notch marks the limit itself. */
