@@ -106,10 +106,12 @@ test.describe("security headers", () => {
     cspViolations,
   }) => {
     await page.goto("/sign-in");
+    // A parser-inserted inline handler: 'strict-dynamic' trusts scripts created by script, not markup.
     await page.evaluate(() => {
-      const script = document.createElement("script");
-      script.textContent = "window.__injected = true";
-      document.body.append(script);
+      document.body.insertAdjacentHTML(
+        "beforeend",
+        '<img src="/missing.png" onerror="window.__injected = true">',
+      );
     });
     await expect.poll(() => cspViolations.length).toBeGreaterThan(0);
     expect(await page.evaluate(() => (window as { __injected?: boolean }).__injected)).toBeUndefined();
