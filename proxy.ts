@@ -1,14 +1,95 @@
 import { NextResponse, type NextRequest } from "next/server";
 
-// Tells server components which page was asked for, so requireViewer() can send a signed-out
-// visitor to /sign-in?next=<that page>. Nothing else happens here: access is checked where the
-// data is read (server/auth/guard.ts), never in this file.
+// The HTTP edge of every response: pages, route handlers (/api/…) and file downloads.
+//  - Security headers (a per-request nonce Content-Security-Policy, no framing, no sniffing, a strict
+//    referrer and a Permissions-Policy that turns off every device API), set here and nowhere else.
+//  - Tells server components which page was asked for, so requireViewer() can send a signed-out
+//    visitor to /sign-in?next=<that page>. Access itself is checked where the data is read
+//    (server/auth/guard.ts), never in this file.
+//
+// The nonce follows Next.js's CSP guide: a fresh random nonce per request goes into the request's
+// own Content-Security-Policy header (Next reads it there and puts it on the framework's <script>
+// tags) and into `x-nonce`; the root layout reads the headers, so every page renders dynamically
+// with its own nonce. 'strict-dynamic' lets those nonced scripts load the app's chunks.
+//
+// style-src: <style> elements and stylesheets need 'self' or the nonce, but style *attributes* are
+// allowed with 'unsafe-inline' in style-src-attr only. React server-renders `style={…}` props as
+// attributes (Konva's stage container, chart and bar widths), and a nonce cannot be put on an
+// attribute. An attribute can set CSS properties of its own element only: it cannot load a
+// stylesheet, hold selectors or run script, so the CSS-injection attacks a CSP guards against
+// (selector-based exfiltration, imported sheets) stay blocked by the nonce on <style>. Konva and
+// React's client updates set styles through the CSSOM, which CSP does not restrict.
+
+const PERMISSIONS_POLICY = [
+  "accelerometer=()",
+  "autoplay=()",
+  "camera=()",
+  "display-capture=()",
+  "encrypted-media=()",
+  "fullscreen=(self)",
+  "geolocation=()",
+  "gyroscope=()",
+  "magnetometer=()",
+  "microphone=()",
+  "midi=()",
+  "payment=()",
+  "picture-in-picture=()",
+  "publickey-credentials-get=()",
+  "screen-wake-lock=()",
+  "serial=()",
+  "usb=()",
+  "xr-spatial-tracking=()",
+].join(", ");
+
+/** The policy of an HTML page; `development` adds what `next dev` needs (eval for React's debug info, HMR socket). */
+export function pageContentSecurityPolicy(nonce: string, development = false): string {
+  return [
+    "default-src 'self'",
+    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${development ? " 'unsafe-eval'" : ""}`,
+    `style-src 'self' 'nonce-${nonce}'`,
+    "style-src-attr 'unsafe-inline'",
+    "img-src 'self' data: blob:",
+    "font-src 'self'",
+    `connect-src 'self'${development ? " ws: wss:" : ""}`,
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
+  ].join("; ");
+}
+
+/** JSON and file downloads are never documents to render: nothing may load, run or frame them. */
+export const API_CONTENT_SECURITY_POLICY =
+  "default-src 'none'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
+
+/** The headers every response carries besides the Content-Security-Policy. */
+export const SECURITY_HEADERS: Record<string, string> = {
+  "x-frame-options": "DENY",
+  "x-content-type-options": "nosniff",
+  "referrer-policy": "strict-origin-when-cross-origin",
+  "permissions-policy": PERMISSIONS_POLICY,
+  "cross-origin-opener-policy": "same-origin",
+};
+
 export function proxy(request: NextRequest) {
+  const isApi = request.nextUrl.pathname.startsWith("/api/");
   const headers = new Headers(request.headers);
-  headers.set("x-sealpitch-path", request.nextUrl.pathname + request.nextUrl.search);
-  return NextResponse.next({ request: { headers } });
+  let policy = API_CONTENT_SECURITY_POLICY;
+  if (!isApi) {
+    const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(18))).toString("base64");
+    policy = pageContentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
+    headers.set("x-nonce", nonce);
+    headers.set("content-security-policy", policy);
+    headers.set("x-sealpitch-path", request.nextUrl.pathname + request.nextUrl.search);
+  }
+  const response = NextResponse.next({ request: { headers } });
+  response.headers.set("content-security-policy", policy);
+  for (const [name, value] of Object.entries(SECURITY_HEADERS)) response.headers.set(name, value);
+  return response;
 }
 
 export const config = {
-  matcher: ["/((?!api/|_next/static|_next/image|favicon|sealpitch-mark).*)"],
+  // Everything except the build's hashed static files (scripts, CSS, fonts), which carry no
+  // document and are served with their exact content types.
+  matcher: ["/((?!_next/static|_next/image).*)"],
 };

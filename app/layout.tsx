@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { connection } from "next/server";
 import type { ReactNode } from "react";
 import { plexMono, plexSans } from "./fonts";
 import "./globals.css";
@@ -10,7 +11,11 @@ export const metadata: Metadata = {
   icons: { icon: "/sealpitch-mark.svg" },
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+// Every page renders per request (connection()), so each one gets the fresh CSP nonce that
+// proxy.ts puts in the request's Content-Security-Policy; Next adds it to its own scripts. A
+// prerendered page would carry no nonce and its scripts would be refused.
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await connection();
   return (
     <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
       <body className="min-h-screen">{children}</body>

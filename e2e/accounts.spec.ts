@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 import { signIn, signOut } from "./helpers/sign-in";
 
 const DEMO = [

@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 // The Joint register as the demo designer: the seeded examples, search, a filter, and a new

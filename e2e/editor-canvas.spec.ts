@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 const DESIGNER = "dana.designer@kestrel-ridge.example";
@@ -143,7 +143,7 @@ test("bad input is refused at the field and nothing is saved", async ({ page }) 
   const original = await length.inputValue();
   const cases: [string, RegExp][] = [
     ["", /Bolt length is required/],
-    ["-5", /Bolt length must be greater than zero/],
+    ["-5", /Bolt length must be at least 1 mm/],
     ["1e9", /Bolt length must be at most/],
     ["twelve", /Bolt length must be a number/],
   ];

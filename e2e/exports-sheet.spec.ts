@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 // The shop files through the running production build: a signed-in member downloads the sheet,

@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, test } from "./helpers/test";
 
 test("the landing page renders with the product's job and the cautions", async ({ page }) => {
   await page.goto("/");

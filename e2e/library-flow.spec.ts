@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import Drawing from "dxf-writer";
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test, type Browser, type Page } from "./helpers/test";
 import { buildCircularFlange } from "@/features/designs/model/templates";
 import { signIn } from "./helpers/sign-in";
 

@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { expect, test, type APIRequestContext, type Browser, type Page } from "@playwright/test";
+import { expect, test, type APIRequestContext, type Browser, type Page } from "./helpers/test";
 import { buildCircularFlange } from "@/features/designs/model/templates";
 import { signIn } from "./helpers/sign-in";
 

@@ -8,40 +8,64 @@ import { z } from "zod";
 import { multilineText, plainText } from "@/features/forms/plain-text";
 import type { JointDesign } from "./core/design";
 import { MAX_BOLT_COUNT } from "./core/design";
+import { INPUT_BOUNDS, boundMessage, describeBound, type BoundName, type InputBound } from "./core/bounds";
 import { validateJointDesign } from "./core/validate";
 
-const positive = (what = "must be greater than zero") => z.number().finite().positive({ message: what });
-const nonNegative = () => z.number().finite().min(0, { message: "must be zero or positive" });
-const point = z.object({ x: z.number().finite(), y: z.number().finite() });
+/**
+ * A number within its plausible range from the core's one bounds table (core/bounds.ts): the
+ * message gives the range and the reason, and the JSON Schema publishes minimum, maximum and the
+ * reason as the description.
+ */
+const bounded = (name: BoundName) => {
+  const b: InputBound = INPUT_BOUNDS[name];
+  const message = boundMessage(b);
+  let n = z.number({ error: "must be a number" }).finite({ message });
+  if (b.integer) n = n.int({ message });
+  n = b.minExclusive ? n.gt(b.min, { message }) : n.min(b.min, { message });
+  return n.max(b.max, { message }).meta({ description: `${describeBound(b)}: ${b.why}` });
+};
+const point = z.object({ x: bounded("planCoordinateMm"), y: bounded("planCoordinateMm") });
 
 export const outlineSchema = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("circle"), diameterMm: positive() }),
+  z.object({ kind: z.literal("circle"), diameterMm: bounded("planDimensionMm") }),
   z.object({
     kind: z.literal("rectangle"),
-    widthMm: positive(),
-    heightMm: positive(),
-    cornerRadiusMm: nonNegative(),
+    widthMm: bounded("planDimensionMm"),
+    heightMm: bounded("planDimensionMm"),
+    cornerRadiusMm: bounded("cornerRadiusMm"),
   }),
-  z.object({ kind: z.literal("obround"), lengthMm: positive(), widthMm: positive() }),
+  z.object({
+    kind: z.literal("obround"),
+    lengthMm: bounded("planDimensionMm"),
+    widthMm: bounded("planDimensionMm"),
+  }),
   z.object({ kind: z.literal("polygon"), points: z.array(point).min(3).max(4096) }),
 ]);
 
 export const gasketMaterialSchema = z.object({
   name: plainText().min(1).max(200),
   catalogueId: plainText().max(100).optional(),
-  m: nonNegative(),
-  yMpa: nonNegative(),
-  qMinMpa: nonNegative().optional(),
-  qsMinMpa: nonNegative().optional(),
-  qsMaxMpa: positive().optional(),
-  modulusMpa: positive(),
-  thicknessMm: positive(),
+  m: bounded("gasketFactorM"),
+  yMpa: bounded("gasketStressMpa"),
+  qMinMpa: bounded("gasketStressMpa").optional(),
+  qsMinMpa: bounded("gasketStressMpa").optional(),
+  qsMaxMpa: bounded("gasketCrushMpa").optional(),
+  modulusMpa: bounded("gasketModulusMpa"),
+  thicknessMm: bounded("gasketThicknessMm"),
   source: plainText().max(500),
 });
 
 const ringGeometrySchema = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("annulus"), innerDiameterMm: positive(), outerDiameterMm: positive() }),
-  z.object({ kind: z.literal("band"), centreOffsetMm: positive(), widthMm: positive() }),
+  z.object({
+    kind: z.literal("annulus"),
+    innerDiameterMm: bounded("planDimensionMm"),
+    outerDiameterMm: bounded("planDimensionMm"),
+  }),
+  z.object({
+    kind: z.literal("band"),
+    centreOffsetMm: bounded("planDimensionMm"),
+    widthMm: bounded("planDimensionMm"),
+  }),
 ]);
 
 const gasketSchema = z.discriminatedUnion("kind", [
@@ -50,8 +74,8 @@ const gasketSchema = z.discriminatedUnion("kind", [
 ]);
 
 const boltPathSchema = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("circle"), diameterMm: positive() }),
-  z.object({ kind: z.literal("offset"), offsetMm: positive() }),
+  z.object({ kind: z.literal("circle"), diameterMm: bounded("planDimensionMm") }),
+  z.object({ kind: z.literal("offset"), offsetMm: bounded("planDimensionMm") }),
 ]);
 
 const boltSchema = z.object({
@@ -64,9 +88,9 @@ const terminationSchema = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("nut") }),
   z.object({
     kind: z.literal("tapped-hole"),
-    engagementMm: positive(),
-    memberThicknessMm: positive(),
-    memberModulusMpa: positive(),
+    engagementMm: bounded("engagementMm"),
+    memberThicknessMm: bounded("tappedMemberThicknessMm"),
+    memberModulusMpa: bounded("plateModulusMpa"),
   }),
 ]);
 
@@ -75,15 +99,17 @@ const fastenerSchema = z.object({
   threadSeries: z.enum(["metric-coarse", "unified-8un", "unc"]),
   materialId: plainText().min(1).max(60),
   form: z.enum(["stud", "hex-bolt"]),
-  lengthMm: positive(),
-  holeDiameterMm: positive(),
-  washer: z.object({ thicknessMm: positive(), outerDiameterMm: positive() }).nullable(),
+  lengthMm: bounded("boltLengthMm"),
+  holeDiameterMm: bounded("holeDiameterMm"),
+  washer: z
+    .object({ thicknessMm: bounded("washerThicknessMm"), outerDiameterMm: bounded("washerOuterDiameterMm") })
+    .nullable(),
   washerActsAs: z.enum(["rigid", "flexible"]).optional(),
   nutSeries: z.enum(["iso-4032", "iso-old"]).optional(),
   termination: terminationSchema,
   enteredAllowable: z
     .object({
-      valueMpa: positive(),
+      valueMpa: bounded("allowableStressMpa"),
       source: plainText().trim().min(1, { message: "name the source" }).max(300),
     })
     .nullable()
@@ -91,14 +117,21 @@ const fastenerSchema = z.object({
 });
 
 const enteredAllowableSchema = z.object({
-  designMpa: positive(),
-  ambientMpa: positive(),
+  designMpa: bounded("allowableStressMpa"),
+  ambientMpa: bounded("allowableStressMpa"),
   source: plainText().trim().min(1, { message: "name the source" }).max(300),
 });
 
 export const flangeDesignSchema = z.object({
   kind: z.enum(["integral-hub", "integral-no-hub", "ring-loose", "not-entered"]),
-  hub: z.object({ g0Mm: positive(), g1Mm: positive(), hMm: nonNegative() }).nullable().optional(),
+  hub: z
+    .object({
+      g0Mm: bounded("hubDimensionMm"),
+      g1Mm: bounded("hubDimensionMm"),
+      hMm: bounded("hubDimensionMm"),
+    })
+    .nullable()
+    .optional(),
   flangeMaterialId: plainText().max(60).nullable().optional(),
   coverMaterialId: plainText().max(60).nullable().optional(),
   flangeAllowable: enteredAllowableSchema.nullable().optional(),
@@ -114,25 +147,25 @@ export const flangeDesignSchema = z.object({
     ])
     .nullable()
     .optional(),
-  testPressureMpa: positive().nullable().optional(),
+  testPressureMpa: bounded("designPressureMpa").nullable().optional(),
 });
 
 const layerSchema = z.discriminatedUnion("role", [
   z.object({ role: z.literal("gasket") }),
   z.object({
     role: z.enum(["flange", "cover"]),
-    thicknessMm: positive(),
+    thicknessMm: bounded("plateThicknessMm"),
     materialName: plainText().max(100),
-    modulusMpa: positive(),
+    modulusMpa: bounded("plateModulusMpa"),
   }),
 ]);
 
 const preloadSchema = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("fraction-of-proof"), value: z.number().finite().positive().max(1.2) }),
-  z.object({ kind: z.literal("fraction-of-yield"), value: z.number().finite().positive().max(1.2) }),
+  z.object({ kind: z.literal("fraction-of-proof"), value: bounded("preloadFraction") }),
+  z.object({ kind: z.literal("fraction-of-yield"), value: bounded("preloadFraction") }),
   z.object({
     kind: z.literal("bolt-stress"),
-    value: positive(),
+    value: bounded("preloadStressMpa"),
     areaBasis: z.enum(["tensile", "root"]).optional(),
   }),
 ]);
@@ -154,14 +187,14 @@ export const jointDesignBaseSchema = z.object({
   fastener: fastenerSchema,
   layers: z.array(layerSchema).min(2).max(12),
   loads: z.object({
-    designPressureMpa: nonNegative(),
-    designTemperatureC: z.number().finite(),
-    axialLoadN: z.number().finite(),
-    momentNmm: z.number().finite(),
+    designPressureMpa: bounded("designPressureMpa"),
+    designTemperatureC: bounded("designTemperatureC"),
+    axialLoadN: bounded("axialLoadN"),
+    momentNmm: bounded("momentNmm"),
   }),
   assembly: z.object({
     preload: preloadSchema,
-    nutFactor: z.object({ value: z.number().finite().min(0.05).max(0.5), source: plainText().max(300) }),
+    nutFactor: z.object({ value: bounded("nutFactor"), source: plainText().max(300) }),
     method: z.enum([
       "torque-wrench",
       "turn-of-nut",
@@ -170,16 +203,16 @@ export const jointDesignBaseSchema = z.object({
       "bolt-elongation",
       "ultrasonic",
     ]),
-    scatterOverride: z.number().finite().min(0).max(0.9).nullable(),
+    scatterOverride: bounded("scatter").nullable(),
   }),
   estimator: z.object({
     coneAngle: z.discriminatedUnion("mode", [
       z.object({ mode: z.literal("thickness-dependent") }),
-      z.object({ mode: z.literal("fixed"), degrees: z.number().finite().min(5).max(60) }),
+      z.object({ mode: z.literal("fixed"), degrees: bounded("coneAngleDeg") }),
     ]),
     estimator: z.enum(["auto", "cone", "beam"]),
-    samplesPerPitch: z.number().int().min(8).max(1024),
-    grid: z.object({ nx: z.number().int().min(2).max(2048), ny: z.number().int().min(2).max(2048) }),
+    samplesPerPitch: bounded("samplesPerPitch"),
+    grid: z.object({ nx: bounded("gridCells"), ny: bounded("gridCells") }),
   }),
   flangeDesign: flangeDesignSchema.optional(),
 });

@@ -5,6 +5,11 @@
 // justifications, descriptions) keep line feed, carriage return and tab.
 import { z } from "zod";
 
+// zod 4 probes `new Function` to compile fast parsers; the Content-Security-Policy (proxy.ts) has no
+// 'unsafe-eval', so the probe is reported as a violation in the browser. Every schema imports this
+// module, so turning the compiler off here keeps zod eval-free everywhere.
+z.config({ jitless: true });
+
 /** Text without C0 controls, DEL or C1 controls, and without the Unicode line/paragraph separators. */
 export const SINGLE_LINE_TEXT = /^[^\u0000-\u001f\u007f-\u009f\u2028\u2029]*$/;
 /** As SINGLE_LINE_TEXT, but tab, line feed and carriage return are allowed. */

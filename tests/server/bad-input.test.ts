@@ -251,6 +251,35 @@ describe("control characters in text get a field message and store nothing", () 
   });
 });
 
+describe("work limits of one analysis", () => {
+  it("a 2048² grid is a 422 naming the limit (bolts × samples: tests/features/analysis/bounds.test.ts)", async () => {
+    const created = await designsPost(
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: dana,
+        body: { name: "Work", template: COVER_TEMPLATE },
+      }),
+    );
+    const { designId } = await created.json();
+    const { document } = await db
+      .selectFrom("design_revisions")
+      .select("document")
+      .where("design_id", "=", designId)
+      .executeTakeFirstOrThrow();
+    const base = document as { estimator: Record<string, unknown> };
+    const heavy = {
+      ...base,
+      estimator: { ...base.estimator, samplesPerPitch: 1024, grid: { nx: 2048, ny: 2048 } },
+    };
+    const response = await analysesPost(
+      appRequest("/api/v1/analyses", { method: "POST", cookie: dana, body: heavy }),
+    );
+    expect(response.status).toBe(422);
+    const text = JSON.stringify(await response.json());
+    expect(text).toContain("2048 × 2048 = 4194304 heat-map cells, over the work limit of 1048576");
+  });
+});
+
 describe("JSON bodies: size and nesting limits", () => {
   const deep = (levels: number) => "[".repeat(levels) + "]".repeat(levels);
 

@@ -7,9 +7,14 @@
  */
 import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
-import { formatIssue, validateJointDesign } from "./validate";
+import { DesignRefusedError, formatIssue, validateJointDesign } from "./validate";
 import { buildJointModel, type JointModel } from "./joint-model";
-import { computeGasketStressProfiles, governingProfile, type ProfileSummary } from "./gasket-stress";
+import {
+  computeGasketStressProfiles,
+  forceBalanceIssue,
+  governingProfile,
+  type ProfileSummary,
+} from "./gasket-stress";
 import { computeSafetyFactors, shareExternalLoad } from "./joint-loads";
 import { torqueFromPreloadNmm } from "./torque";
 import { getNeighbourSpacings } from "./geometry";
@@ -174,12 +179,17 @@ export interface JointAnalysis {
   catalogueEditions: CatalogueEdition[];
 }
 
-/** Analyses a design. Throws only for a design that `validateJointDesign` rejects. */
+/**
+ * Analyses a design. Throws a DesignRefusedError, and returns no numbers, for a design that
+ * `validateJointDesign` rejects and for results whose own force balance is off by more than 0.5 %.
+ */
 export function analyzeJoint(design: JointDesign): JointAnalysis {
   const issues = validateJointDesign(design);
-  if (issues.length > 0) throw new Error(`invalid design: ${issues.map(formatIssue).join("; ")}`);
+  if (issues.length > 0) throw new DesignRefusedError(issues);
   const model = buildJointModel(design);
   const profiles = computeGasketStressProfiles(model);
+  const imbalance = forceBalanceIssue(profiles);
+  if (imbalance) throw new DesignRefusedError([imbalance], "results refused");
   const gov = governingProfile(profiles);
   const p = model.preload;
   const C = model.jointConstant;

@@ -11,7 +11,7 @@ import { conePressureAtMpa } from "./cone-superposition";
 import { isOnGasket } from "./gasket-region";
 import { projectOntoPath } from "./path";
 import type { EstimatorName } from "./estimator-choice";
-import { validateJointDesign, formatIssue } from "./validate";
+import { DesignRefusedError, formatIssue, validateJointDesign } from "./validate";
 import * as fm from "./fixed-math";
 
 /** Value stored in cells that are not gasket material (outside, bore, bolt holes). */
@@ -45,7 +45,7 @@ export function computeGasketStressGrid(
   options: { estimator?: EstimatorName } = {},
 ): GasketStressGrid {
   const issues = validateJointDesign(design);
-  if (issues.length > 0) throw new Error(`invalid design: ${issues.map(formatIssue).join("; ")}`);
+  if (issues.length > 0) throw new DesignRefusedError(issues);
   const model = buildJointModel(design);
   return computeGridFromProfiles(model, computeGasketStressProfiles(model), nx, ny, options.estimator);
 }

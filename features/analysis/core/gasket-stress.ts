@@ -216,3 +216,23 @@ export function governingProfile(p: GasketStressProfiles): {
     ? { estimator: "cone", values: p.coneMpa, summary: p.cone }
     : { estimator: "beam", values: p.beamMpa, summary: p.beam };
 }
+
+/** Largest relative difference between the beam estimate's gasket force and the bolt forces. */
+export const FORCE_BALANCE_TOLERANCE = 0.005;
+
+/**
+ * The beam estimate integrates to Σ Fi by construction; when the inputs are outside what the
+ * solver resolves (a gasket modulus of 1e300 or 1e-300 MPa) it does not, and its numbers mean
+ * nothing. Returns the refusal for such profiles, null when the balance holds within 0.5 %.
+ */
+export function forceBalanceIssue(
+  p: Pick<GasketStressProfiles, "beamInfo" | "totalForceN">,
+): { path: string; message: string } | null {
+  const ratio = p.beamInfo.forceBalanceRatio;
+  if (Number.isFinite(ratio) && Math.abs(ratio - 1) <= FORCE_BALANCE_TOLERANCE) return null;
+  const off = Number.isFinite(ratio) ? `${(ratio * 100).toPrecision(4)} % of` : "not comparable with";
+  return {
+    path: "design",
+    message: `the beam estimate's gasket force is ${off} the bolt forces (${p.totalForceN.toPrecision(4)} N), more than ${FORCE_BALANCE_TOLERANCE * 100} % off; the inputs lie outside what the solver resolves (check the gasket modulus and thickness and the flange thicknesses and moduli), so no numbers are returned`,
+  };
+}

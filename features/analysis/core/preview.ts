@@ -11,9 +11,9 @@
  */
 import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
-import { formatIssue, validateJointDesign } from "./validate";
+import { DesignRefusedError, validateJointDesign } from "./validate";
 import { buildJointModel } from "./joint-model";
-import { computeGasketStressProfiles, governingProfile } from "./gasket-stress";
+import { computeGasketStressProfiles, forceBalanceIssue, governingProfile } from "./gasket-stress";
 import { checkGasketStress } from "./checks/gasket-stress-checks";
 import { checkSpacing } from "./checks/spacing";
 import type { CheckRecord } from "./checks/check-record";
@@ -46,10 +46,12 @@ export interface JointPreview {
 export function previewJoint(design: JointDesign, options: { validate?: boolean } = {}): JointPreview {
   if (options.validate !== false) {
     const issues = validateJointDesign(design);
-    if (issues.length > 0) throw new Error(`invalid design: ${issues.map(formatIssue).join("; ")}`);
+    if (issues.length > 0) throw new DesignRefusedError(issues);
   }
   const model = buildJointModel(design);
   const profiles = computeGasketStressProfiles(model);
+  const imbalance = forceBalanceIssue(profiles);
+  if (imbalance) throw new DesignRefusedError([imbalance], "results refused");
   const gov = governingProfile(profiles);
   const withIds = (c: CheckRecord): PreviewCheck => ({ ...c, boltIds: c.subject ?? [] });
   // Plain arrays with non-finite values as null: what toFiniteJson gives analyzeJoint, in one pass.

@@ -6,6 +6,7 @@
  */
 import type { JointDesign, Outline, PointMm } from "./design";
 import { MAX_BOLT_COUNT } from "./design";
+import { INPUT_BOUNDS, WORK_LIMITS, boundMessage, withinBound, type InputBound } from "./bounds";
 import { getBoltPath, getBoltPoint, outlineToPolyline } from "./geometry";
 import { pathToPolyline } from "./path";
 import { buildPointHash, forEachNear } from "./point-hash";
@@ -26,22 +27,41 @@ export function formatIssue(issue: DesignIssue): string {
   return `${issue.path}: ${issue.message}`;
 }
 
-function outlineNumbers(o: Outline): [string, number][] {
+/**
+ * What the core throws instead of returning numbers: a design its validator rejects ("invalid
+ * design: …"), or results that fail their own force balance ("results refused: …").
+ */
+export class DesignRefusedError extends Error {
+  override name = "DesignRefusedError";
+  constructor(
+    readonly issues: DesignIssue[],
+    prefix = "invalid design",
+  ) {
+    super(`${prefix}: ${issues.map(formatIssue).join("; ")}`);
+  }
+}
+
+function outlineNumbers(o: Outline): [string, number, InputBound][] {
+  const plan = INPUT_BOUNDS.planDimensionMm;
   switch (o.kind) {
     case "circle":
-      return [["diameterMm", o.diameterMm]];
+      return [["diameterMm", o.diameterMm, plan]];
     case "rectangle":
       return [
-        ["widthMm", o.widthMm],
-        ["heightMm", o.heightMm],
+        ["widthMm", o.widthMm, plan],
+        ["heightMm", o.heightMm, plan],
+        ["cornerRadiusMm", o.cornerRadiusMm, INPUT_BOUNDS.cornerRadiusMm],
       ];
     case "obround":
       return [
-        ["lengthMm", o.lengthMm],
-        ["widthMm", o.widthMm],
+        ["lengthMm", o.lengthMm, plan],
+        ["widthMm", o.widthMm, plan],
       ];
     case "polygon":
-      return [];
+      return o.points.flatMap((p, i): [string, number, InputBound][] => [
+        [`points[${i}].x`, p.x, INPUT_BOUNDS.planCoordinateMm],
+        [`points[${i}].y`, p.y, INPUT_BOUNDS.planCoordinateMm],
+      ]);
   }
 }
 
@@ -72,61 +92,98 @@ function maxSdf(shape: Shape, pts: PointMm[]): number {
 export function validateJointDesign(design: JointDesign): DesignIssue[] {
   const issues: DesignIssue[] = [];
   const add = (path: string, message: string) => issues.push({ path, message });
-  const positive = (path: string, v: number) => {
+  // Every physical input within its plausible range (core/bounds.ts), the range and reason in the message.
+  const inRange = (path: string, v: number | undefined, bound: InputBound) => {
+    if (v === undefined) return;
     if (!Number.isFinite(v)) add(path, "must be a finite number");
-    else if (v <= 0) add(path, "must be greater than zero");
+    else if (!withinBound(bound, v)) add(path, boundMessage(bound));
   };
+  const B = INPUT_BOUNDS;
 
   if (design.schemaVersion !== 1) add("schemaVersion", "unsupported schema version (expected 1)");
-  for (const [k, v] of outlineNumbers(design.outline)) positive(`outline.${k}`, v);
+  for (const [k, v, bound] of outlineNumbers(design.outline)) inRange(`outline.${k}`, v, bound);
   if (design.outline.kind === "polygon" && design.outline.points.length < 3)
     add("outline.points", "a polygon needs at least 3 points");
-  if (design.bore) for (const [k, v] of outlineNumbers(design.bore)) positive(`bore.${k}`, v);
-  if (design.boltPath.kind === "circle") positive("boltPath.diameterMm", design.boltPath.diameterMm);
-  else positive("boltPath.offsetMm", design.boltPath.offsetMm);
+  if (design.bore) for (const [k, v, bound] of outlineNumbers(design.bore)) inRange(`bore.${k}`, v, bound);
+  if (design.boltPath.kind === "circle")
+    inRange("boltPath.diameterMm", design.boltPath.diameterMm, B.planDimensionMm);
+  else inRange("boltPath.offsetMm", design.boltPath.offsetMm, B.planDimensionMm);
   const f = design.fastener;
-  positive("fastener.lengthMm", f.lengthMm);
-  positive("fastener.holeDiameterMm", f.holeDiameterMm);
+  inRange("fastener.lengthMm", f.lengthMm, B.boltLengthMm);
+  inRange("fastener.holeDiameterMm", f.holeDiameterMm, B.holeDiameterMm);
   if (f.washer) {
-    positive("fastener.washer.thicknessMm", f.washer.thicknessMm);
-    positive("fastener.washer.outerDiameterMm", f.washer.outerDiameterMm);
+    inRange("fastener.washer.thicknessMm", f.washer.thicknessMm, B.washerThicknessMm);
+    inRange("fastener.washer.outerDiameterMm", f.washer.outerDiameterMm, B.washerOuterDiameterMm);
   }
   if (f.termination.kind === "tapped-hole") {
-    positive("fastener.termination.engagementMm", f.termination.engagementMm);
-    positive("fastener.termination.memberThicknessMm", f.termination.memberThicknessMm);
-    positive("fastener.termination.memberModulusMpa", f.termination.memberModulusMpa);
+    inRange("fastener.termination.engagementMm", f.termination.engagementMm, B.engagementMm);
+    inRange(
+      "fastener.termination.memberThicknessMm",
+      f.termination.memberThicknessMm,
+      B.tappedMemberThicknessMm,
+    );
+    inRange("fastener.termination.memberModulusMpa", f.termination.memberModulusMpa, B.plateModulusMpa);
   }
   const gm = design.gasket.material;
-  positive("gasket.material.modulusMpa", gm.modulusMpa);
-  positive("gasket.material.thicknessMm", gm.thicknessMm);
-  if (!(gm.m >= 0)) add("gasket.material.m", "must be zero or positive");
-  if (!(gm.yMpa >= 0)) add("gasket.material.yMpa", "must be zero or positive");
+  inRange("gasket.material.modulusMpa", gm.modulusMpa, B.gasketModulusMpa);
+  inRange("gasket.material.thicknessMm", gm.thicknessMm, B.gasketThicknessMm);
+  inRange("gasket.material.m", gm.m, B.gasketFactorM);
+  inRange("gasket.material.yMpa", gm.yMpa, B.gasketStressMpa);
+  inRange("gasket.material.qMinMpa", gm.qMinMpa, B.gasketStressMpa);
+  inRange("gasket.material.qsMinMpa", gm.qsMinMpa, B.gasketStressMpa);
+  inRange("gasket.material.qsMaxMpa", gm.qsMaxMpa, B.gasketCrushMpa);
+  const g0 = design.gasket;
+  if (g0.kind === "ring" && g0.geometry.kind === "annulus") {
+    inRange("gasket.geometry.innerDiameterMm", g0.geometry.innerDiameterMm, B.planDimensionMm);
+    inRange("gasket.geometry.outerDiameterMm", g0.geometry.outerDiameterMm, B.planDimensionMm);
+  } else if (g0.kind === "ring" && g0.geometry.kind === "band") {
+    inRange("gasket.geometry.centreOffsetMm", g0.geometry.centreOffsetMm, B.planDimensionMm);
+    inRange("gasket.geometry.widthMm", g0.geometry.widthMm, B.planDimensionMm);
+  }
   design.layers.forEach((l, i) => {
     if (l.role !== "gasket") {
-      positive(`layers[${i}].thicknessMm`, l.thicknessMm);
-      positive(`layers[${i}].modulusMpa`, l.modulusMpa);
+      inRange(`layers[${i}].thicknessMm`, l.thicknessMm, B.plateThicknessMm);
+      inRange(`layers[${i}].modulusMpa`, l.modulusMpa, B.plateModulusMpa);
     }
   });
   const gasketLayers = design.layers.filter((l) => l.role === "gasket").length;
   if (gasketLayers !== 1) add("layers", `exactly one layer must be the gasket (found ${gasketLayers})`);
   if (design.layers.length - gasketLayers < 1) add("layers", "at least one flange or cover layer is needed");
-  positive("assembly.nutFactor.value", design.assembly.nutFactor.value);
-  positive("assembly.preload.value", design.assembly.preload.value);
+  const loads = design.loads;
+  inRange("loads.designPressureMpa", loads.designPressureMpa, B.designPressureMpa);
+  inRange("loads.designTemperatureC", loads.designTemperatureC, B.designTemperatureC);
+  inRange("loads.axialLoadN", loads.axialLoadN, B.axialLoadN);
+  inRange("loads.momentNmm", loads.momentNmm, B.momentNmm);
+  inRange("assembly.nutFactor.value", design.assembly.nutFactor.value, B.nutFactor);
+  const preload = design.assembly.preload;
+  inRange(
+    "assembly.preload.value",
+    preload.value,
+    preload.kind === "bolt-stress" ? B.preloadStressMpa : B.preloadFraction,
+  );
   const so = design.assembly.scatterOverride;
-  if (so !== null && !(so >= 0 && so < 1))
-    add("assembly.scatterOverride", "must be a fraction between 0 and 1");
+  if (so !== null) inRange("assembly.scatterOverride", so, B.scatter);
   const est = design.estimator;
-  if (!(Number.isInteger(est.samplesPerPitch) && est.samplesPerPitch >= 8 && est.samplesPerPitch <= 1024))
-    add("estimator.samplesPerPitch", "must be an integer from 8 to 1024");
-  if (est.coneAngle.mode === "fixed" && !(est.coneAngle.degrees >= 5 && est.coneAngle.degrees <= 60))
-    add("estimator.coneAngle.degrees", "must be between 5° and 60°");
-  for (const k of ["nx", "ny"] as const) {
-    if (!(Number.isInteger(est.grid[k]) && est.grid[k] >= 2 && est.grid[k] <= 2048))
-      add(`estimator.grid.${k}`, "must be an integer from 2 to 2048");
-  }
+  inRange("estimator.samplesPerPitch", est.samplesPerPitch, B.samplesPerPitch);
+  if (est.coneAngle.mode === "fixed")
+    inRange("estimator.coneAngle.degrees", est.coneAngle.degrees, B.coneAngleDeg);
+  for (const k of ["nx", "ny"] as const) inRange(`estimator.grid.${k}`, est.grid[k], B.gridCells);
   const n = design.bolts.length;
   if (n < 1 || n > MAX_BOLT_COUNT)
     add("bolts", `bolt count must be between 1 and ${MAX_BOLT_COUNT} (got ${n})`);
+  // The work of one analysis is capped (core/bounds.ts WORK_LIMITS).
+  const samples = n * est.samplesPerPitch;
+  if (samples > WORK_LIMITS.pathSamples.max)
+    add(
+      "estimator.samplesPerPitch",
+      `${n} bolts × ${est.samplesPerPitch} samples per pitch = ${samples} gasket-path samples, over the work limit of ${WORK_LIMITS.pathSamples.max} (${WORK_LIMITS.pathSamples.why}); lower the samples per pitch`,
+    );
+  const cells = est.grid.nx * est.grid.ny;
+  if (cells > WORK_LIMITS.gridCells.max)
+    add(
+      "estimator.grid",
+      `${est.grid.nx} × ${est.grid.ny} = ${cells} heat-map cells, over the work limit of ${WORK_LIMITS.gridCells.max} (${WORK_LIMITS.gridCells.why})`,
+    );
   const thread = findThread(f.designation, f.threadSeries);
   if (!thread)
     add("fastener.designation", `no ${f.threadSeries} thread "${f.designation}" in the thread catalogue`);
@@ -191,8 +248,6 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
   if (g.kind === "ring") {
     if (g.geometry.kind === "annulus") {
       const { innerDiameterMm: id, outerDiameterMm: od } = g.geometry;
-      positive("gasket.geometry.innerDiameterMm", id);
-      positive("gasket.geometry.outerDiameterMm", od);
       if (od <= id) add("gasket.geometry.outerDiameterMm", "must be larger than the inner diameter");
       const ring = (r: number) =>
         Array.from({ length: 256 }, (_, k) => ({
@@ -213,7 +268,6 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
       });
     } else {
       const { centreOffsetMm: c, widthMm: w } = g.geometry;
-      positive("gasket.geometry.widthMm", w);
       if (!(c - w / 2 >= 0))
         add("gasket.geometry.centreOffsetMm", "ring gasket band extends beyond the flange outline");
       pts.forEach((p, i) => {

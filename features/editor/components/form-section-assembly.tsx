@@ -5,7 +5,7 @@ import {
 } from "@/features/analysis/core/catalogue/tightening-methods";
 import type { ConeAngleSetting, PreloadRule, TighteningMethod } from "@/features/analysis/core/design";
 import { DEFAULT_FIXED_CONE_ANGLE_DEG } from "@/features/analysis/core/design";
-import { FIELD_SPECS } from "../model/field-specs";
+import { FIELD_SPECS, fromBound } from "../model/field-specs";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
@@ -24,11 +24,11 @@ export function FormSectionAssembly({ ctx }: { ctx: FormContext }) {
   const method = getTighteningMethodById(a.method);
   const preloadSpec =
     a.preload.kind === "bolt-stress"
-      ? { ...FIELD_SPECS.preloadValue, label: "Target bolt stress", quantity: "stress" as const, max: 2000 }
+      ? { ...FIELD_SPECS.preloadValue, label: "Target bolt stress", quantity: "stress" as const }
       : {
           ...FIELD_SPECS.preloadValue,
+          ...fromBound("preloadFraction"),
           label: a.preload.kind === "fraction-of-proof" ? "Fraction of proof load" : "Fraction of yield",
-          max: 1.2,
         };
   return (
     <fieldset className="grid grid-cols-2 gap-2">

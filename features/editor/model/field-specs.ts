@@ -1,9 +1,10 @@
 /**
  * The numeric fields of the joint data form: where each lives in the design, its quantity, and
- * the bounds the form enforces before a value reaches the document. The bounds are the sane range
- * of the product (the zod schema and the core's validation remain the authority on the whole
- * document); internal units as in core/design.ts.
+ * the bounds the form enforces before a value reaches the document. The bounds come from the
+ * core's one table (core/bounds.ts), which the zod schema and the core's validator read too;
+ * internal units as in core/design.ts.
  */
+import { INPUT_BOUNDS, type BoundName, type InputBound } from "@/features/analysis/core/bounds";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { fromDisplay, unitLabel, type Quantity } from "./quantities";
 
@@ -16,6 +17,14 @@ export interface NumberFieldSpec {
   minExclusive?: boolean;
   max: number;
   integer?: boolean;
+  /** Why the range is where it is (core/bounds.ts), added to out-of-range messages. */
+  why?: string;
+}
+
+/** min, max and the reason from the core's bounds table (the same ranges the schema enforces). */
+export function fromBound(name: BoundName): Pick<NumberFieldSpec, "min" | "minExclusive" | "max" | "why"> {
+  const b: InputBound = INPUT_BOUNDS[name];
+  return { min: b.min, minExclusive: b.minExclusive, max: b.max, why: b.why };
 }
 
 export const FIELD_SPECS = {
@@ -23,143 +32,121 @@ export const FIELD_SPECS = {
     path: "loads.designPressureMpa",
     label: "Design pressure",
     quantity: "stress",
-    min: 0,
-    max: 700,
+    ...fromBound("designPressureMpa"),
   },
   designTemperature: {
     path: "loads.designTemperatureC",
     label: "Design temperature",
     quantity: "temperature",
-    min: -273,
-    max: 1000,
+    ...fromBound("designTemperatureC"),
   },
-  axialLoad: { path: "loads.axialLoadN", label: "External axial load", quantity: "force", min: 0, max: 1e9 },
-  moment: { path: "loads.momentNmm", label: "External moment", quantity: "moment", min: 0, max: 1e12 },
+  axialLoad: {
+    path: "loads.axialLoadN",
+    label: "External axial load",
+    quantity: "force",
+    ...fromBound("axialLoadN"),
+  },
+  moment: {
+    path: "loads.momentNmm",
+    label: "External moment",
+    quantity: "moment",
+    ...fromBound("momentNmm"),
+  },
   boltLength: {
     path: "fastener.lengthMm",
     label: "Bolt length",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 5000,
+    ...fromBound("boltLengthMm"),
   },
   holeDiameter: {
     path: "fastener.holeDiameterMm",
     label: "Hole diameter",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 300,
+    ...fromBound("holeDiameterMm"),
   },
   washerThickness: {
     path: "fastener.washer.thicknessMm",
     label: "Washer thickness",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 100,
+    ...fromBound("washerThicknessMm"),
   },
   washerOuter: {
     path: "fastener.washer.outerDiameterMm",
     label: "Washer outer diameter",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 500,
+    ...fromBound("washerOuterDiameterMm"),
   },
   engagement: {
     path: "fastener.termination.engagementMm",
     label: "Thread engagement",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 1000,
+    ...fromBound("engagementMm"),
   },
   memberThickness: {
     path: "fastener.termination.memberThicknessMm",
     label: "Tapped member thickness",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 5000,
+    ...fromBound("tappedMemberThicknessMm"),
   },
   memberModulus: {
     path: "fastener.termination.memberModulusMpa",
     label: "Tapped member modulus",
     quantity: "stress",
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
+    ...fromBound("plateModulusMpa"),
   },
   gasketThickness: {
     path: "gasket.material.thicknessMm",
     label: "Gasket thickness",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 100,
+    ...fromBound("gasketThicknessMm"),
   },
   gasketModulus: {
     path: "gasket.material.modulusMpa",
     label: "Gasket modulus",
     quantity: "stress",
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
+    ...fromBound("gasketModulusMpa"),
   },
   gasketInner: {
     path: "gasket.geometry.innerDiameterMm",
     label: "Gasket inner diameter",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 20000,
+    ...fromBound("planDimensionMm"),
   },
   gasketOuter: {
     path: "gasket.geometry.outerDiameterMm",
     label: "Gasket outer diameter",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 20000,
+    ...fromBound("planDimensionMm"),
   },
   bandOffset: {
     path: "gasket.geometry.centreOffsetMm",
     label: "Gasket band centre from edge",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 10000,
+    ...fromBound("planDimensionMm"),
   },
   bandWidth: {
     path: "gasket.geometry.widthMm",
     label: "Gasket band width",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 10000,
+    ...fromBound("planDimensionMm"),
   },
   nutFactor: {
     path: "assembly.nutFactor.value",
     label: "Nut factor K",
     quantity: "ratio",
-    min: 0.05,
-    max: 0.6,
+    ...fromBound("nutFactor"),
   },
   preloadValue: {
     path: "assembly.preload.value",
     label: "Target preload",
     quantity: "ratio",
-    min: 0,
-    minExclusive: true,
-    max: 2000,
+    ...fromBound("preloadStressMpa"),
   },
   coneDegrees: {
     path: "estimator.coneAngle.degrees",
     label: "Cone angle",
     quantity: "angle",
-    min: 5,
-    max: 60,
+    ...fromBound("coneAngleDeg"),
   },
   boltCount: { path: "bolts", label: "Bolt count", quantity: "count", min: 1, max: 512, integer: true },
 } satisfies Record<string, NumberFieldSpec>;
@@ -169,9 +156,7 @@ export function layerThicknessSpec(index: number): NumberFieldSpec {
     path: `layers.${index}.thicknessMm`,
     label: "Flange thickness",
     quantity: "length",
-    min: 0,
-    minExclusive: true,
-    max: 2000,
+    ...fromBound("plateThicknessMm"),
   };
 }
 
@@ -180,9 +165,7 @@ export function layerModulusSpec(index: number): NumberFieldSpec {
     path: `layers.${index}.modulusMpa`,
     label: "Flange modulus",
     quantity: "stress",
-    min: 0,
-    minExclusive: true,
-    max: 1e6,
+    ...fromBound("plateModulusMpa"),
   };
 }
 
@@ -208,17 +191,18 @@ export function parseNumberField(spec: NumberFieldSpec, raw: string, units: Unit
       spec.quantity === "temperature" && units === "US" ? (v * 9) / 5 + 32 : displayBound(spec, v, units);
     return `${Number(d.toPrecision(4))}${unit ? ` ${unit}` : ""}`;
   };
+  const because = spec.why ? ` (${spec.why})` : "";
   if (spec.minExclusive ? !(value > spec.min) : !(value >= spec.min - 1e-12)) {
     return {
       ok: false,
       message:
         spec.minExclusive && spec.min === 0
           ? `${spec.label} must be greater than zero.`
-          : `${spec.label} must be at least ${bound(spec.min)}.`,
+          : `${spec.label} must be at least ${bound(spec.min)}${because}.`,
     };
   }
   if (value > spec.max * (1 + 1e-12))
-    return { ok: false, message: `${spec.label} must be at most ${bound(spec.max)}.` };
+    return { ok: false, message: `${spec.label} must be at most ${bound(spec.max)}${because}.` };
   return { ok: true, value };
 }
 

@@ -13,11 +13,13 @@ describe("number fields", () => {
     expect(parseNumberField(spec, "12abc", "SI").ok).toBe(false);
     expect(parseNumberField(spec, "-5", "SI")).toEqual({
       ok: false,
-      message: "Bolt length must be greater than zero.",
+      message:
+        "Bolt length must be at least 1 mm (a bolt is longer than 1 mm; studs over 5 m do not occur in flanged joints [practice]).",
     });
     expect(parseNumberField(spec, "1e9", "SI")).toEqual({
       ok: false,
-      message: "Bolt length must be at most 5000 mm.",
+      message:
+        "Bolt length must be at most 5000 mm (a bolt is longer than 1 mm; studs over 5 m do not occur in flanged joints [practice]).",
     });
     expect(parseNumberField(spec, "Infinity", "SI").ok).toBe(false);
   });
