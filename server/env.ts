@@ -20,6 +20,8 @@ const envSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().min(3).default("Sealpitch <no-reply@sealpitch.local>"),
   SESSION_IDLE_DAYS: z.coerce.number().int().min(1).max(90).default(14),
+  /** Sheet-queue workers this process runs (0: it only queues, another instance works the jobs). */
+  JOB_WORKERS: z.coerce.number().int().min(0).max(8).default(1),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

@@ -43,19 +43,22 @@ export function getQueue(): Promise<PgBoss> {
   return globalForBoss.sealpitchBoss;
 }
 
-/** Registers a worker for `name` once per process. */
+/** Registers `count` workers for `name` once per process (none when count is 0). */
 export async function ensureWorker<T extends object>(
   name: string,
   handler: (data: T) => Promise<void>,
+  count: number = getEnv().JOB_WORKERS,
 ): Promise<void> {
   const workers = (globalForBoss.sealpitchWorkers ??= new Set());
-  if (workers.has(name)) return;
+  if (workers.has(name) || count < 1) return;
   workers.add(name);
   try {
     const boss = await getQueue();
-    await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async (jobs) => {
-      for (const job of jobs) await handler(job.data);
-    });
+    for (let i = 0; i < count; i++) {
+      await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async (jobs) => {
+        for (const job of jobs) await handler(job.data);
+      });
+    }
   } catch (error) {
     workers.delete(name);
     throw error;

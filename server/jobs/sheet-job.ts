@@ -53,7 +53,10 @@ export async function runSheetJob(db: Kysely<Database>, exportFileId: string): P
   }
 }
 
-/** Makes sure this process works the sheet queue (called by the routes that use it). */
+/**
+ * Makes sure this process works the sheet queue with JOB_WORKERS workers (none when 0). Called at
+ * server start (instrumentation.ts) and by enqueueSheetJob, so scripts and tests that queue work it too.
+ */
 export async function ensureSheetWorker(db: Kysely<Database>): Promise<void> {
   await ensureWorker<SheetJobData>(SHEET_QUEUE, (data) => runSheetJob(db, data.exportFileId));
 }

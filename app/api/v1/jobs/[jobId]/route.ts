@@ -3,7 +3,6 @@ import { jobIdSchema } from "@/features/exports/schema";
 import { fileResponse } from "@/features/exports/http";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { findExportFileBytes, findExportJob } from "@/server/jobs/export-files";
-import { ensureSheetWorker } from "@/server/jobs/sheet-job";
 
 type Context = { params: Promise<{ jobId: string }> };
 
@@ -15,10 +14,6 @@ export async function GET(request: Request, { params }: Context) {
   const parsed = jobIdSchema.safeParse((await params).jobId);
   if (!parsed.success) return jsonError(404, "This export job does not exist.");
   const db = getDb();
-  // A restarted server resumes queued jobs as soon as anyone asks about one.
-  ensureSheetWorker(db).catch((error) =>
-    console.error(`[jobs] worker not started: ${error instanceof Error ? error.message : String(error)}`),
-  );
   if (new URL(request.url).searchParams.get("download") === "1") {
     const file = await findExportFileBytes(db, auth.viewer.organizationId, parsed.data);
     if (file) return fileResponse(file.bytes, file.fileName, file.contentType);
