@@ -58,7 +58,19 @@ export interface DesignActivityTable {
   created_at: CreatedAt;
 }
 
+/**
+ * Everyone who created, saved or submitted a revision, one row per person
+ * (migrations/2026_12_02_131700_revision_editors.ts). Written by a trigger on design_revisions;
+ * append-only. The four-eyes rule refuses a decision by anyone listed here.
+ */
+export interface RevisionEditorsTable {
+  revision_id: string;
+  user_id: string;
+  first_at: CreatedAt;
+}
+
 export interface ReviewTables {
+  revision_editors: RevisionEditorsTable;
   revision_comments: RevisionCommentsTable;
   revision_decisions: RevisionDecisionsTable;
   revision_justifications: RevisionJustificationsTable;

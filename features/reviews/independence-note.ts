@@ -6,7 +6,7 @@ export function independenceNote(
   viewer: { roles: readonly string[] },
 ): string | null {
   if (review.status === "in_review" && viewer.roles.includes("approver") && !review.permissions.canApprove) {
-    return "You created, last edited or submitted this revision, so another approver has to decide on it (four-eyes rule).";
+    return "You created, saved or submitted this revision, so another approver has to decide on it (four-eyes rule).";
   }
   if (review.status === "in_review" && !viewer.roles.includes("approver")) return "Waiting for an approver.";
   if (review.status === "approved")

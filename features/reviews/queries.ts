@@ -32,6 +32,16 @@ import type {
 const iso = (value: unknown): string | null =>
   value === null || value === undefined ? null : new Date(value as string).toISOString();
 
+/** Everyone who created, saved or submitted a revision (revision_editors); read inside the caller's transaction. */
+export async function listRevisionEditorIds(db: Kysely<Database>, revisionId: string): Promise<string[]> {
+  const rows = await db
+    .selectFrom("revision_editors")
+    .select("user_id")
+    .where("revision_id", "=", revisionId)
+    .execute();
+  return rows.map((r) => r.user_id);
+}
+
 /** The integrity of a stored revision: recomputed for In review / Approved, "not-frozen" otherwise. */
 export function integrityOf(row: {
   status: RevisionFacts["status"];
@@ -196,6 +206,7 @@ export async function getRevisionReview(
     createdBy: row.created_by,
     lastEditedBy: row.last_edited_by,
     submittedBy: row.submitted_by,
+    editorIds: await listRevisionEditorIds(db, row.id),
     isWorking: numbers.at(-1) === row.number,
   };
   const [comments, justifications, decisions] = await Promise.all([
@@ -266,8 +277,8 @@ export async function compareRevisions(
 
 /**
  * The desk's two lists. "Waiting for my review": In review revisions of the organisation that the
- * viewer (an approver) did not create, last edit or submit. "Returned to me": Returned revisions the
- * viewer created, last edited or submitted.
+ * viewer (an approver) did not create, save or submit. "Returned to me": Returned revisions the
+ * viewer created, saved or submitted.
  */
 export async function getDeskLists(
   db: Kysely<Database>,
@@ -297,6 +308,16 @@ export async function getDeskLists(
         .where("r.created_by", "<>", me)
         .where("r.last_edited_by", "<>", me)
         .where((eb) => eb.or([eb("r.submitted_by", "is", null), eb("r.submitted_by", "<>", me)]))
+        .where(({ not, exists, selectFrom }) =>
+          not(
+            exists(
+              selectFrom("revision_editors as e")
+                .select("e.user_id")
+                .whereRef("e.revision_id", "=", "r.id")
+                .where("e.user_id", "=", me),
+            ),
+          ),
+        )
         .orderBy("r.submitted_at")
         .limit(50)
         .execute()
@@ -322,7 +343,18 @@ export async function getDeskLists(
     ])
     .where("r.status", "=", "returned")
     .where((eb) =>
-      eb.or([eb("r.created_by", "=", me), eb("r.last_edited_by", "=", me), eb("r.submitted_by", "=", me)]),
+      eb.or([
+        eb("r.created_by", "=", me),
+        eb("r.last_edited_by", "=", me),
+        eb("r.submitted_by", "=", me),
+        eb.exists(
+          eb
+            .selectFrom("revision_editors as e")
+            .select("e.user_id")
+            .whereRef("e.revision_id", "=", "r.id")
+            .where("e.user_id", "=", me),
+        ),
+      ]),
     )
     .orderBy("r.decided_at", "desc")
     .limit(50)

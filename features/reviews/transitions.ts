@@ -16,6 +16,7 @@ import {
   type RevisionFacts,
 } from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
+import { listRevisionEditorIds } from "./queries";
 import type { CommentDto } from "./review-dto";
 import type {
   AddCommentInput,
@@ -28,7 +29,9 @@ import type {
 // Every review transition runs in ONE transaction that first takes the revision's row lock
 // (select … for update). A second approver acting at the same moment waits for the lock, then
 // reads the state the first one committed and is refused by the same rules. The database adds its
-// own guards (migration 000600: allowed status steps, four-eyes check; 000400: approved is frozen).
+// own guards (migration 000600: allowed status steps, four-eyes check; 000400: approved is frozen;
+// 131700: everyone who created, saved or submitted the revision is recorded in revision_editors by a
+// trigger, and a decision by any of them is refused).
 
 export interface TransitionActor extends ReviewActor {
   organizationId: string;
@@ -95,6 +98,7 @@ export async function lockRevisionForUpdate(
     createdBy: row.created_by,
     lastEditedBy: row.last_edited_by,
     submittedBy: row.submitted_by,
+    editorIds: await listRevisionEditorIds(trx, row.id),
     isWorking: Number(newest.max) === row.number,
   };
   return { ...row, facts };

@@ -25,6 +25,8 @@ export interface RevisionFacts {
   createdBy: string;
   lastEditedBy: string;
   submittedBy: string | null;
+  /** Everyone who created, saved or submitted this revision (table revision_editors). */
+  editorIds: readonly string[];
   /** Whether this is the design's highest-numbered revision. */
   isWorking: boolean;
 }
@@ -44,11 +46,13 @@ export function isFrozenStatus(status: ReviewStatus): boolean {
 }
 
 /**
- * Four-eyes rule: whoever created, last edited or submitted the revision is not independent of
- * it, so cannot decide on it (approve or return).
+ * Four-eyes rule: whoever created, saved (at any time, not only last) or submitted the revision is
+ * not independent of it, so cannot decide on it (approve or return). The database refuses the same.
  */
 export function isIndependentOf(actor: ReviewActor, revision: RevisionFacts): boolean {
-  return ![revision.createdBy, revision.lastEditedBy, revision.submittedBy].includes(actor.userId);
+  return ![revision.createdBy, revision.lastEditedBy, revision.submittedBy, ...revision.editorIds].includes(
+    actor.userId,
+  );
 }
 
 export function decideTransition(
@@ -75,7 +79,7 @@ export function decideTransition(
         );
       if (!isIndependentOf(actor, revision)) {
         return refuse(
-          `You created, last edited or submitted this revision, so you cannot ${verb} it: another approver must decide (four-eyes rule).`,
+          `You created, saved or submitted this revision, so you cannot ${verb} it: another approver must decide (four-eyes rule).`,
         );
       }
       return { allowed: true, to: command === "approve" ? "approved" : "returned" };

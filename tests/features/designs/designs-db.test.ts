@@ -415,7 +415,7 @@ describe("the register query", () => {
         .execute();
       await db
         .updateTable("design_revisions")
-        .set({ status: "returned" })
+        .set({ status: "returned", decided_by: org.users.a.userId, decided_at: new Date() })
         .where("design_id", "=", charlie)
         .execute();
       const q = (params: Record<string, string>) =>

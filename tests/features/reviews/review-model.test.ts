@@ -25,6 +25,7 @@ const facts = (over: Partial<RevisionFacts> = {}): RevisionFacts => ({
   createdBy: "dana",
   lastEditedBy: "dana",
   submittedBy: null,
+  editorIds: ["dana"],
   isWorking: true,
   ...over,
 });
@@ -67,6 +68,15 @@ describe("review state machine (pure)", () => {
         facts({ status: "in_review", lastEditedBy: "piet", submittedBy: "dana" }),
       ).allowed,
     ).toBe(false);
+    // saved once by the approver between two saves of the designer: neither last editor nor
+    // submitter, but an editor all the same
+    const savedInBetween = facts({ status: "in_review", submittedBy: "dana", editorIds: ["dana", "piet"] });
+    expect(decideTransition("approve", piet, savedInBetween)).toMatchObject({
+      allowed: false,
+      reason: expect.stringContaining("four-eyes"),
+    });
+    expect(decideTransition("return", piet, savedInBetween).allowed).toBe(false);
+    expect(decideTransition("approve", arlo, savedInBetween).allowed).toBe(true);
     expect(decideTransition("submit", arlo, facts()).allowed).toBe(false);
     expect(decideTransition("submit", dana, facts({ status: "in_review" })).allowed).toBe(false);
     expect(decideTransition("submit", dana, facts({ status: "approved" })).allowed).toBe(false);

@@ -294,7 +294,7 @@ describe("review transitions (real PostgreSQL)", () => {
       sql`update design_revisions set status = 'approved', decided_by = ${org.designer.userId} where design_id = ${designId}`.execute(
         db,
       ),
-    ).rejects.toThrow(/design_revisions_four_eyes/);
+    ).rejects.toThrow(/four.eyes/);
     expect((await revisionRow(designId)).status).toBe("in_review");
   });
 
