@@ -5,6 +5,9 @@
 // Node-only import out of the edge bundle.
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const { startBackgroundServices } = await import("./server/background");
-  startBackgroundServices();
+  const [{ getDb }, { startSheetWorkers }] = await Promise.all([
+    import("./db/index"),
+    import("./features/exports/sheet-job"),
+  ]);
+  startSheetWorkers(getDb());
 }

@@ -3,7 +3,7 @@
  * machine, warm process), and its hole list and drilling template. Renders from a stored result
  * (analyzeJoint runs once, outside the timing), as the route and the background job do.
  */
-import { renderSpacingSheet } from "@/server/pdf/render-sheet";
+import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { drillingTemplateFor, holeListFor } from "@/features/exports/shop-files";
 import { manyBoltFlange, sheetInputFor } from "@/tests/features/exports/fixtures";
 import { medianMs, printMedian } from "./measure";

@@ -13,8 +13,8 @@ export class ProjectMigrationProvider implements MigrationProvider {
   async getMigrations(): Promise<Record<string, Migration>> {
     const migrations: Record<string, Migration> = {};
     for (const name of await listMigrationNames(this.folder)) {
-      const module = (await import(pathToFileURL(path.join(this.folder, `${name}.ts`)).href)) as Migration;
-      migrations[name] = { up: module.up, down: module.down };
+      const migration = (await import(pathToFileURL(path.join(this.folder, `${name}.ts`)).href)) as Migration;
+      migrations[name] = { up: migration.up, down: migration.down };
     }
     return migrations;
   }

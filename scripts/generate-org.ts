@@ -18,7 +18,7 @@ import { readChecks } from "@/features/reviews/model/review-checks";
 import { approveRevision, submitRevision, type TransitionActor } from "@/features/reviews/transitions";
 import { exportFileName, CONTENT_TYPES } from "@/features/exports/file-names";
 import { createExportFile } from "@/server/jobs/export-files";
-import { runSheetJob } from "@/server/jobs/sheet-job";
+import { runSheetJob } from "@/features/exports/sheet-job";
 import { parseEnvKeys } from "@/server/env";
 
 interface Options {

@@ -14,6 +14,8 @@ STARTED_AT=$(date +%s)
 ensure_node_modules
 say "format check (prettier)"
 npx prettier --check . --log-level=warn || die "files are not formatted: run npm run format"
+say "lint (eslint: Next, react-hooks, typescript-eslint, import boundaries)"
+npm run --silent lint -- --quiet || die "lint errors: see above (npm run lint)"
 
 stack_up
 

@@ -4,7 +4,7 @@ import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { getDb } from "@/db/index";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { getViewerContext } from "@/server/auth/guard";
 import { clientAddressKey } from "@/server/auth/rate-limit";
 import { endAllSessions, endSession, startSession, switchSessionOrganization } from "@/server/auth/session";

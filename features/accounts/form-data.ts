@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 
 // Parsing FormData into a schema the same way in every account action.
 export function formFields(formData: FormData, arrays: string[] = []): Record<string, unknown> {

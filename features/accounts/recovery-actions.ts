@@ -3,7 +3,7 @@
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/index";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { clientAddressKey } from "@/server/auth/rate-limit";
 import { startSession } from "@/server/auth/session";
 import { formFields, invalid } from "./form-data";

@@ -3,7 +3,7 @@ import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/index";
 import { requireViewer } from "@/server/auth/guard";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import {
   createDesignFromForm,

@@ -3,7 +3,7 @@
 // unit-system actions, to <DesignWorkspace />. Types only: importable from client and server.
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 
 export type { JointAnalysis };
 

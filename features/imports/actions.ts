@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { z } from "zod";
 import { getDb } from "@/db/index";
 import { createDesign } from "@/features/designs/mutations";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
 import { prepareImport } from "./model/prepare-import";
 import { MAX_IMPORT_FILE_BYTES, importDesignSchema } from "./schema";

@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { getDb } from "@/db/index";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer, type Viewer } from "@/server/auth/guard";
 import { revisionPath } from "./cache-keys";
 import { notifyReviewOutcome } from "./notifications";

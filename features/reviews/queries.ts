@@ -2,7 +2,7 @@ import "server-only";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { verifySnapshot, type SnapshotIntegrity } from "./model/content-hash";
+import { verifySnapshot, type SnapshotIntegrity } from "@/features/analysis/content-hash";
 import { isFrozenStatus, type ReviewActor, type RevisionFacts } from "./model/review-states";
 import { readChecks } from "./model/review-checks";
 import { diffDocuments, listBoltMoves, listCheckChanges } from "./model/compare-revisions";

@@ -1,6 +1,6 @@
 // DTOs of the review feature (types only: safe to import from client components).
 import type { JointDesign } from "@/features/analysis/core/design";
-import type { SnapshotIntegrity } from "./model/content-hash";
+import type { SnapshotIntegrity } from "@/features/analysis/content-hash";
 import type { ReviewStatus } from "./model/review-states";
 import type { ReviewCheck } from "./model/review-checks";
 import type { BoltMove, CheckChange, FieldChange } from "./model/compare-revisions";

@@ -6,8 +6,8 @@ import { analyzeJoint } from "@/features/analysis/core/analyze";
 import { CORE_VERSION } from "@/features/analysis/core/version";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
 import { recordActivity } from "@/features/activity/queries";
-import type { ActionResult } from "@/server/action-result";
-import { computeContentHash, verifySnapshot } from "./model/content-hash";
+import type { ActionResult } from "@/features/forms/action-result";
+import { computeContentHash, verifySnapshot } from "@/features/analysis/content-hash";
 import {
   decideTransition,
   type ReviewActor,

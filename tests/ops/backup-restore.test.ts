@@ -6,7 +6,7 @@ import type { Kysely } from "kysely";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Database } from "@/db/types";
 import { migrateToLatest } from "@/db/migrate-to-latest";
-import { verifySnapshot } from "@/features/reviews/model/content-hash";
+import { verifySnapshot } from "@/features/analysis/content-hash";
 import { generateOrganisation } from "../../scripts/generate-org";
 import { createScratchDatabase, runScript, type ScratchDatabase } from "./ops-db";
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { DeskLists } from "@/features/desk/desk-lists";
+import { DeskLists } from "./_components/desk-lists";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { requireViewer } from "@/server/auth/guard";
 

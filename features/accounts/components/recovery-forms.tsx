@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";

@@ -2,7 +2,7 @@
 
 import { useActionState, type ReactNode } from "react";
 import type { Role } from "@/db/tables/core";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { TextField } from "@/features/ui/text-field";
 import { useRememberedValues } from "@/features/ui/use-remembered-values";

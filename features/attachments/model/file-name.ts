@@ -4,7 +4,6 @@ const EXTENSIONS = { pdf: ".pdf", png: ".png", jpeg: ".jpg", dxf: ".dxf" } as co
 
 export function cleanFileName(raw: string, kind: keyof typeof EXTENSIONS): string {
   const base = raw.split(/[\\/]/).pop() ?? "";
-  // eslint-disable-next-line no-control-regex
   let name =
     base
       .replace(/[\u0000-\u001f\u007f"]/g, "")

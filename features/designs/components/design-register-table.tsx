@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { OUTLINE_LABELS, STATUS_LABELS, formatUtcMinute } from "../model/labels";
 import { canArchiveDesign, canDuplicateDesign, type PolicyViewer } from "../policies";
 import type { DesignListPage } from "../queries";

@@ -1,7 +1,7 @@
 "use client";
 import { useActionState } from "react";
 import { buttonStyles } from "@/features/ui/button-styles";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 
 type RowAction<T> = (state: ActionResult<T> | null, formData: FormData) => Promise<ActionResult<T> | null>;
 

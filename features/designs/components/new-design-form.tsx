@@ -4,7 +4,7 @@ import { FLANGE_TEMPLATES } from "@/features/analysis/core/catalogue/flange-temp
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { METRIC_BOLT_SIZES } from "../model/template-defaults";
 import { TEMPLATE_CHOICES, type TemplateField } from "../model/template-fields";
 import type { TemplateKind } from "../model/templates";

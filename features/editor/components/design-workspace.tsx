@@ -3,7 +3,7 @@ import { useCallback, useDeferredValue, useMemo, useRef, useState, useTransition
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { SaveWorkingRevisionAction, WorkspaceDesignDto } from "@/features/designs/workspace-contract";
-import type { ActionResult } from "@/server/action-result";
+import type { ActionResult } from "@/features/forms/action-result";
 import { nextBoltId } from "../model/bolt-path";
 import type { DesignAction } from "../model/editor-action";
 import { highlightedBolts, toReadoutView } from "../model/readout-view";

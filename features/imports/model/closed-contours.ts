@@ -7,6 +7,14 @@ export interface Pt {
   y: number;
 }
 
+/** The members of CIRCLE and (LW)POLYLINE entities read here (dxf-parser types them per entity class). */
+interface DxfFields {
+  center?: Pt;
+  radius?: number;
+  vertices?: unknown[];
+  shape?: boolean;
+}
+
 export type Contour =
   | { kind: "circle"; cx: number; cy: number; r: number; layer: string }
   | { kind: "polyline"; points: Pt[]; layer: string };
@@ -60,17 +68,17 @@ export function collectClosedContours(entities: IEntity[]): { contours: Contour[
   const contours: Contour[] = [];
   let skipped = 0;
   for (const e of entities) {
-    const any = e as unknown as Record<string, any>;
-    if (e.type === "CIRCLE" && any.center && any.radius > 0) {
+    const fields = e as IEntity & DxfFields;
+    if (e.type === "CIRCLE" && fields.center && fields.radius !== undefined && fields.radius > 0) {
       contours.push({
         kind: "circle",
-        cx: any.center.x,
-        cy: any.center.y,
-        r: any.radius,
+        cx: fields.center.x,
+        cy: fields.center.y,
+        r: fields.radius,
         layer: e.layer ?? "0",
       });
     } else if (e.type === "LWPOLYLINE" || e.type === "POLYLINE") {
-      const pts = polylinePoints((any.vertices ?? []) as BulgeVertex[], Boolean(any.shape));
+      const pts = polylinePoints((fields.vertices ?? []) as BulgeVertex[], Boolean(fields.shape));
       if (pts) contours.push({ kind: "polyline", points: pts, layer: e.layer ?? "0" });
       else skipped++;
     } else {

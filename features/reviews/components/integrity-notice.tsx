@@ -1,4 +1,4 @@
-import { describeIntegrity, type SnapshotIntegrity } from "../model/content-hash";
+import { describeIntegrity, type SnapshotIntegrity } from "@/features/analysis/content-hash";
 
 // A mismatch is an alert in the page's main column, never folded away: someone changed the
 // stored snapshot outside the review flow, and a reader must not trust it.

@@ -11,7 +11,7 @@ import {
 } from "@/app/api/v1/designs/[designId]/revisions/[number]/sheet.pdf/route";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { CORE_VERSION } from "@/features/analysis/core/version";
-import { computeContentHash } from "@/features/reviews/model/content-hash";
+import { computeContentHash } from "@/features/analysis/content-hash";
 import { stopQueue } from "@/server/jobs/queue";
 import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";

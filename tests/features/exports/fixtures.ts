@@ -6,7 +6,7 @@ import { inflateSync } from "node:zlib";
 import { analyzeJoint, type JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getBoltPathLengthMm, placeBoltsEqually } from "@/features/analysis/core/geometry";
-import type { SheetInput } from "@/server/pdf/sheet-input";
+import type { SheetInput } from "@/features/exports/sheet/sheet-input";
 
 // Shared helpers of the export suites: the example documents, a 96-bolt flange built from one by
 // re-placing its bolts with the core's geometry helper, and poppler (pdftotext/pdftoppm) wrappers.

@@ -6,9 +6,9 @@ import {
   getNeighbourSpacings,
   pointAtArcLength,
 } from "@/features/analysis/core/geometry";
-import { flangeTransform } from "@/server/pdf/draw-flange";
-import { drawingBox, renderSpacingSheet } from "@/server/pdf/render-sheet";
-import type { SheetInput } from "@/server/pdf/sheet-input";
+import { flangeTransform } from "@/features/exports/sheet/draw-flange";
+import { drawingBox, renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
+import type { SheetInput } from "@/features/exports/sheet/sheet-input";
 import {
   analyse,
   loadExample,

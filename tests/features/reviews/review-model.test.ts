@@ -4,7 +4,7 @@ import {
   computeContentHash,
   describeIntegrity,
   verifySnapshot,
-} from "@/features/reviews/model/content-hash";
+} from "@/features/analysis/content-hash";
 import {
   decideTransition,
   type ReviewActor,

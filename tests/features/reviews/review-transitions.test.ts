@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Database } from "@/db/types";
 import { listActivity, recordActivity } from "@/features/activity/queries";
 import { saveWorkingRevision } from "@/features/designs/mutations";
-import { computeContentHash } from "@/features/reviews/model/content-hash";
+import { computeContentHash } from "@/features/analysis/content-hash";
 import { checksNeedingJustification, readChecks } from "@/features/reviews/model/review-checks";
 import { getDeskLists, getRevisionReview, listJustifications } from "@/features/reviews/queries";
 import { returnRevisionSchema } from "@/features/reviews/schema";

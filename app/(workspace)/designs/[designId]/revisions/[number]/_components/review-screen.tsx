@@ -8,7 +8,7 @@ import type { DecisionActions } from "@/features/reviews/components/decision-pan
 import { ReviewWorkspace } from "@/features/reviews/components/review-workspace";
 import type { RevisionReviewDto } from "@/features/reviews/review-dto";
 
-// Where the review feature meets the editor's read-only drawing (features never import each other).
+// Where the review feature meets the editor's read-only drawing (reviews may not import the editor: DEVELOPERS.md, "Dependency rule").
 export function ReviewScreen(props: {
   review: RevisionReviewDto;
   unitSystem: UnitSystem;

@@ -3,9 +3,9 @@ import { recordActivity } from "@/features/activity/queries";
 import { CONTENT_TYPES, exportFileName } from "@/features/exports/file-names";
 import { fileResponse, parseExportPath, parseSheetOptions } from "@/features/exports/http";
 import { authorizeApi, jsonError, type Viewer } from "@/server/auth/guard";
-import { enqueueSheetJob } from "@/server/jobs/sheet-job";
-import { loadSheetInput } from "@/server/pdf/load-sheet-input";
-import { renderSpacingSheet } from "@/server/pdf/render-sheet";
+import { enqueueSheetJob } from "@/features/exports/sheet-job";
+import { loadSheetInput } from "@/features/exports/sheet/load-sheet-input";
+import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 
 type Context = { params: Promise<{ designId: string; number: string }> };
 

@@ -4,7 +4,7 @@ import type { Database } from "@/db/types";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { findExportRevision, type ExportRevisionDto } from "@/features/exports/queries";
 import { listJustifications } from "@/features/reviews/queries";
-import { describeIntegrity, verifySnapshot } from "@/features/reviews/model/content-hash";
+import { describeIntegrity, verifySnapshot } from "@/features/analysis/content-hash";
 import type { SheetInput, SheetPaper } from "./sheet-input";
 
 /**

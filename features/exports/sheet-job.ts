@@ -2,8 +2,8 @@ import "server-only";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import { exportFileName, CONTENT_TYPES } from "@/features/exports/file-names";
-import { loadSheetInput } from "@/server/pdf/load-sheet-input";
-import { renderSpacingSheet } from "@/server/pdf/render-sheet";
+import { loadSheetInput } from "@/features/exports/sheet/load-sheet-input";
+import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import {
   claimExportFile,
   createExportFile,
@@ -11,8 +11,8 @@ import {
   finishExportFile,
   setExportProgress,
   type SheetJobOptions,
-} from "./export-files";
-import { SHEET_QUEUE, ensureWorker, getQueue } from "./queue";
+} from "@/server/jobs/export-files";
+import { SHEET_QUEUE, ensureWorker, getQueue } from "@/server/jobs/queue";
 
 /** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
 export { BACKGROUND_SHEET_MIN_BOLTS } from "@/features/exports/cache-keys";
@@ -99,4 +99,17 @@ export async function enqueueSheetJob(
     );
   }
   return id;
+}
+
+/**
+ * Server start (instrumentation.ts): this process's sheet workers, without blocking the start;
+ * a database that is down is retried every few seconds until it answers.
+ */
+export function startSheetWorkers(db: Kysely<Database>, retryMs = 5000): void {
+  ensureSheetWorker(db).catch((error: unknown) => {
+    console.error(
+      `[jobs] workers not started, retrying: ${error instanceof Error ? error.message : String(error)}`,
+    );
+    setTimeout(() => startSheetWorkers(db, retryMs), retryMs).unref();
+  });
 }
