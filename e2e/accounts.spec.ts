@@ -1,4 +1,5 @@
 import { expect, test } from "@playwright/test";
+import { latestLink, uniqueEmail } from "./helpers/outbox";
 import { signIn, signOut } from "./helpers/sign-in";
 
 const DEMO = [
@@ -42,25 +43,6 @@ test("a designer gets the 403 page on the admin screen", async ({ page }) => {
   expect(response?.status()).toBe(403);
   await expect(page.getByRole("heading", { level: 1 })).toContainText("Your role does not open this page");
 });
-
-const OUTBOX = process.env.OUTBOX_URL ?? "http://127.0.0.1:2590";
-
-async function latestLink(address: string, path: string): Promise<string> {
-  for (let attempt = 0; attempt < 40; attempt += 1) {
-    const response = await fetch(`${OUTBOX}/api/messages?to=${encodeURIComponent(address)}`);
-    const messages = (await response.json()) as { text: string }[];
-    const match = messages.length
-      ? new RegExp(`https?://[^\\s"<>]+${path}/[A-Za-z0-9_-]+`).exec(messages.at(-1)!.text)
-      : null;
-    if (match) return new URL(match[0]).pathname;
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  throw new Error(`no ${path} mail for ${address}`);
-}
-
-function uniqueEmail(prefix: string): string {
-  return `${prefix}-${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}@halden-creek.example`;
-}
 
 async function signUp(
   page: import("@playwright/test").Page,

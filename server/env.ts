@@ -22,6 +22,9 @@ const envSchema = z.object({
   SESSION_IDLE_DAYS: z.coerce.number().int().min(1).max(90).default(14),
   /** Sheet-queue workers this process runs (0: it only queues, another instance works the jobs). */
   JOB_WORKERS: z.coerce.number().int().min(0).max(8).default(1),
+  LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+  /** Bearer token for GET /api/metrics; unset (the default) turns the endpoint off (404). */
+  METRICS_TOKEN: z.string().min(24, "must be at least 24 characters").optional(),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

@@ -15,6 +15,7 @@ import {
 } from "./commands";
 import { formDataToObject } from "./field-errors";
 import type { SaveWorkingRevisionInput, SaveWorkingRevisionResult } from "./workspace-contract";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Server actions of the designs feature: authenticate, then hand over to commands.ts, which
 // parses, authorises and delegates; then revalidate. `reason` stays server-side.
@@ -29,7 +30,7 @@ function toActionResult<T>(result: CommandResult<T>): ActionResult<T> {
 type CreateDesignState = (ActionResult<{ designId: string }> & { values?: Record<string, string> }) | null;
 
 /** New-design form (useActionState); on success goes straight to the editor. */
-export async function createDesignAction(
+async function createDesignActionImpl(
   _previous: CreateDesignState,
   formData: FormData,
 ): Promise<CreateDesignState> {
@@ -42,7 +43,7 @@ export async function createDesignAction(
   redirect(`/designs/${result.data.designId}`);
 }
 
-export async function saveWorkingRevisionAction(
+async function saveWorkingRevisionActionImpl(
   input: SaveWorkingRevisionInput,
 ): Promise<SaveWorkingRevisionResult> {
   const viewer = await requireViewer();
@@ -55,7 +56,7 @@ export async function saveWorkingRevisionAction(
   return result;
 }
 
-export async function duplicateDesignAction(
+async function duplicateDesignActionImpl(
   _previous: ActionResult<{ designId: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ designId: string }>> {
@@ -65,7 +66,7 @@ export async function duplicateDesignAction(
   return toActionResult(result);
 }
 
-export async function setDesignArchivedAction(
+async function setDesignArchivedActionImpl(
   _previous: ActionResult<{ archived: boolean }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ archived: boolean }>> {
@@ -81,7 +82,7 @@ export async function setDesignArchivedAction(
 }
 
 /** Remembers the viewer's unit system (users.unit_system) for every screen. */
-export async function setUnitSystemAction(
+async function setUnitSystemActionImpl(
   unitSystem: UnitSystem,
 ): Promise<ActionResult<{ unitSystem: UnitSystem }>> {
   const viewer = await requireViewer();
@@ -89,3 +90,12 @@ export async function setUnitSystemAction(
   if (result.ok) revalidatePath("/", "layout");
   return toActionResult(result);
 }
+
+export const createDesignAction = loggedAction("designs.createDesign", createDesignActionImpl);
+export const saveWorkingRevisionAction = loggedAction(
+  "designs.saveWorkingRevision",
+  saveWorkingRevisionActionImpl,
+);
+export const duplicateDesignAction = loggedAction("designs.duplicateDesign", duplicateDesignActionImpl);
+export const setDesignArchivedAction = loggedAction("designs.setDesignArchived", setDesignArchivedActionImpl);
+export const setUnitSystemAction = loggedAction("designs.setUnitSystem", setUnitSystemActionImpl);

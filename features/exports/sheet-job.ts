@@ -13,6 +13,8 @@ import {
   type SheetJobOptions,
 } from "@/server/jobs/export-files";
 import { SHEET_QUEUE, ensureWorker, getQueue } from "@/server/jobs/queue";
+import { errorText, getLogger } from "@/server/log/logger";
+import { observeJob } from "@/server/metrics/registry";
 
 /** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
 export { BACKGROUND_SHEET_MIN_BOLTS } from "@/features/exports/cache-keys";
@@ -28,6 +30,23 @@ interface SheetJobData {
 export async function runSheetJob(db: Kysely<Database>, exportFileId: string): Promise<void> {
   const row = await claimExportFile(db, exportFileId);
   if (!row) return;
+  const started = performance.now();
+  const logJob = (outcome: "done" | "failed", err?: string) => {
+    const durationMs = Math.round(performance.now() - started);
+    observeJob(SHEET_QUEUE, outcome, durationMs / 1000);
+    getLogger()[outcome === "done" ? "info" : "warn"](
+      {
+        queue: SHEET_QUEUE,
+        jobId: exportFileId,
+        organizationId: row.organization_id,
+        userId: row.requested_by,
+        outcome,
+        durationMs,
+        ...(err ? { err } : {}),
+      },
+      "job",
+    );
+  };
   try {
     const options = row.options as SheetJobOptions;
     const loaded = await loadSheetInput(db, row.organization_id, row.design_id, options.revisionNumber, {
@@ -48,8 +67,10 @@ export async function runSheetJob(db: Kysely<Database>, exportFileId: string): P
       },
     });
     await finishExportFile(db, exportFileId, bytes);
+    logJob("done");
   } catch (error) {
-    await failExportFile(db, exportFileId, error instanceof Error ? error.message : String(error));
+    await failExportFile(db, exportFileId, errorText(error));
+    logJob("failed", errorText(error));
   }
 }
 
@@ -107,9 +128,7 @@ export async function enqueueSheetJob(
  */
 export function startSheetWorkers(db: Kysely<Database>, retryMs = 5000): void {
   ensureSheetWorker(db).catch((error: unknown) => {
-    console.error(
-      `[jobs] workers not started, retrying: ${error instanceof Error ? error.message : String(error)}`,
-    );
+    getLogger().warn({ event: "jobs", err: errorText(error) }, "queue workers not started, retrying");
     setTimeout(() => startSheetWorkers(db, retryMs), retryMs).unref();
   });
 }

@@ -8,6 +8,7 @@ import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
 import { prepareImport } from "./model/prepare-import";
 import { MAX_IMPORT_FILE_BYTES, importDesignSchema } from "./schema";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Creates a new design from a DXF (and optionally a CSV of bolt positions). The server parses the
 // files itself: the browser's preview is a courtesy, never the source of the stored geometry.
@@ -21,7 +22,7 @@ async function fileText(
   return { text: await value.text() };
 }
 
-export async function importDesignAction(
+async function importDesignActionImpl(
   _prev: ActionResult<{ designId: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ designId: string }>> {
@@ -66,3 +67,5 @@ export async function importDesignAction(
   });
   redirect(`/designs/${designId}`);
 }
+
+export const importDesignAction = loggedAction("imports.importDesign", importDesignActionImpl);

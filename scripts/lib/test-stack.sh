@@ -59,6 +59,8 @@ stack_app_up() {
   npx tsx bench/run.ts route-size || true
 
   npx tsx --conditions=react-server scripts/seed.ts --e2e >"$WORK/seed.log" 2>&1 || { cat "$WORK/seed.log" >&2; die "seeding the test database failed"; }
+  # The app's JSON log lines; e2e/ops-logs.spec.ts reads them back.
+  export SEALPITCH_APP_LOG="$WORK/app.log"
   setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$WORK/app.log" 2>&1 &
   APP_PID=$!
   local healthy=""

@@ -1,6 +1,7 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { getEnv } from "@/server/env";
+import { getLogger } from "@/server/log/logger";
 
 // The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss", which
 // pg-boss installs and migrates itself on start). Started lazily, the first time a route needs
@@ -21,7 +22,7 @@ async function startBoss(): Promise<PgBoss> {
     // No cron schedules; maintenance (expiry, archiving) stays on.
     schedule: false,
   });
-  boss.on("error", (error: Error) => console.error(`[jobs] ${error.message}`));
+  boss.on("error", (error: Error) => getLogger().error({ event: "jobs", err: error.message }, "queue error"));
   await boss.start();
   await boss.createQueue(SHEET_QUEUE, {
     name: SHEET_QUEUE,

@@ -52,8 +52,8 @@ beforeAll(async () => {
   source = await createScratchDatabase("bksrc");
   target = await createScratchDatabase("bkdst");
   await migrateToLatest(source.db);
-  const made = await generateOrganisation(source.db, { designs: 6, attachmentKb: 24, approveEvery: 2 });
-  expect(made).toMatchObject({ designs: 6, attachments: 6, approved: 3, sheets: 3 });
+  const made = await generateOrganisation(source.db, { designs: 4, attachmentKb: 24, approveEvery: 2 });
+  expect(made).toMatchObject({ designs: 4, attachments: 4, approved: 2, sheets: 2 });
 }, 120_000);
 
 afterAll(async () => {
@@ -76,7 +76,7 @@ describe("backup and restore", () => {
     readSync(fd, head, 0, 5, 0);
     closeSync(fd);
     expect(head.toString("latin1")).toBe("PGDMP"); // pg_dump's custom format signature
-    expect(statSync(dumpFile).size).toBeGreaterThan(6 * 24 * 1024); // the attachments are in it
+    expect(statSync(dumpFile).size).toBeGreaterThan(4 * 24 * 1024); // the attachments are in it
   });
 
   it("restores into an empty database: snapshots verify, files are byte-identical", async () => {
@@ -87,7 +87,7 @@ describe("backup and restore", () => {
     const before = await approvedRevisions(source.db);
     const after = await approvedRevisions(target.db);
     expect(after.map((r) => r.id)).toEqual(before.map((r) => r.id));
-    expect(after).toHaveLength(3);
+    expect(after).toHaveLength(2);
     for (const revision of after) {
       const integrity = verifySnapshot({
         document: revision.document,
@@ -100,7 +100,7 @@ describe("backup and restore", () => {
 
     const filesBefore = await attachmentBytes(source.db);
     const filesAfter = await attachmentBytes(target.db);
-    expect(filesAfter).toHaveLength(6);
+    expect(filesAfter).toHaveLength(4);
     expect(filesAfter.map((f) => f.id)).toEqual(filesBefore.map((f) => f.id));
     filesAfter.forEach((file, i) => {
       expect(Buffer.compare(file.bytes, filesBefore[i]!.bytes)).toBe(0);
@@ -109,7 +109,7 @@ describe("backup and restore", () => {
 
     const sheetsBefore = await sheetBytes(source.db);
     const sheetsAfter = await sheetBytes(target.db);
-    expect(sheetsAfter).toHaveLength(3);
+    expect(sheetsAfter).toHaveLength(2);
     sheetsAfter.forEach((sheet, i) => {
       expect(sheet.bytes!.subarray(0, 5).toString("latin1")).toBe("%PDF-");
       expect(sheet.byte_size).toBe(sheet.bytes!.length);
@@ -139,7 +139,7 @@ describe("backup and restore", () => {
     expect(
       await target.db.selectFrom("organizations").where("id", "=", marker.id).select("id").execute(),
     ).toHaveLength(0);
-    expect(await approvedRevisions(target.db)).toHaveLength(3);
+    expect(await approvedRevisions(target.db)).toHaveLength(2);
   });
 
   it("fails with one line and leaves no file when the database cannot be reached", async () => {

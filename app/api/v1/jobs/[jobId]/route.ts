@@ -3,12 +3,13 @@ import { jobIdSchema } from "@/features/exports/schema";
 import { fileResponse } from "@/features/exports/http";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { findExportFileBytes, findExportJob } from "@/server/jobs/export-files";
+import { withRequestLog } from "@/server/log/with-logging";
 
 type Context = { params: Promise<{ jobId: string }> };
 
 // Status of a background export ({ jobId, status, progress, fileName, downloadUrl, error }) and,
 // with ?download=1, the finished file. Another organisation's job is a 404.
-export async function GET(request: Request, { params }: Context) {
+async function handleGET(request: Request, { params }: Context) {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const parsed = jobIdSchema.safeParse((await params).jobId);
@@ -26,3 +27,5 @@ export async function GET(request: Request, { params }: Context) {
   if (!job) return jsonError(404, "This export job does not exist.");
   return Response.json(job, { headers: { "cache-control": "no-store" } });
 }
+
+export const GET = withRequestLog("/api/v1/jobs/[jobId]", handleGET);
