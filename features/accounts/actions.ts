@@ -6,6 +6,7 @@ import { revalidatePath } from "next/cache";
 import { getDb } from "@/db/index";
 import type { ActionResult } from "@/features/forms/action-result";
 import { getViewerContext } from "@/server/auth/guard";
+import { getEnv } from "@/server/env";
 import { clientAddressKey } from "@/server/auth/rate-limit";
 import { endAllSessions, endSession, startSession, switchSessionOrganization } from "@/server/auth/session";
 import { authenticate } from "./credentials";
@@ -28,7 +29,7 @@ async function signInActionImpl(_previous: ActionResult | null, formData: FormDa
   });
   if (!outcome.ok) return { ok: false, message: outcome.message };
   await startSession(outcome.userId, outcome.organizationId);
-  redirect(safeNextPath(parsed.data.next));
+  redirect(safeNextPath(parsed.data.next, getEnv().APP_URL));
 }
 
 async function signUpActionImpl(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {

@@ -5,6 +5,7 @@
  * every message names its field path, e.g. `bolts[3].position: bolt hole lies outside the flange outline`.
  */
 import { z } from "zod";
+import { multilineText, plainText } from "@/features/forms/plain-text";
 import type { JointDesign } from "./core/design";
 import { MAX_BOLT_COUNT } from "./core/design";
 import { validateJointDesign } from "./core/validate";
@@ -26,8 +27,8 @@ export const outlineSchema = z.discriminatedUnion("kind", [
 ]);
 
 export const gasketMaterialSchema = z.object({
-  name: z.string().min(1).max(200),
-  catalogueId: z.string().max(100).optional(),
+  name: plainText().min(1).max(200),
+  catalogueId: plainText().max(100).optional(),
   m: nonNegative(),
   yMpa: nonNegative(),
   qMinMpa: nonNegative().optional(),
@@ -35,7 +36,7 @@ export const gasketMaterialSchema = z.object({
   qsMaxMpa: positive().optional(),
   modulusMpa: positive(),
   thicknessMm: positive(),
-  source: z.string().max(500),
+  source: plainText().max(500),
 });
 
 const ringGeometrySchema = z.discriminatedUnion("kind", [
@@ -54,7 +55,7 @@ const boltPathSchema = z.discriminatedUnion("kind", [
 ]);
 
 const boltSchema = z.object({
-  id: z.string().min(1).max(40),
+  id: plainText().min(1).max(40),
   sMm: z.number().finite(),
   offPathMm: z.number().finite().optional(),
 });
@@ -70,9 +71,9 @@ const terminationSchema = z.discriminatedUnion("kind", [
 ]);
 
 const fastenerSchema = z.object({
-  designation: z.string().min(1).max(20),
+  designation: plainText().min(1).max(20),
   threadSeries: z.enum(["metric-coarse", "unified-8un", "unc"]),
-  materialId: z.string().min(1).max(60),
+  materialId: plainText().min(1).max(60),
   form: z.enum(["stud", "hex-bolt"]),
   lengthMm: positive(),
   holeDiameterMm: positive(),
@@ -86,7 +87,7 @@ const layerSchema = z.discriminatedUnion("role", [
   z.object({
     role: z.enum(["flange", "cover"]),
     thicknessMm: positive(),
-    materialName: z.string().max(100),
+    materialName: plainText().max(100),
     modulusMpa: positive(),
   }),
 ]);
@@ -103,9 +104,9 @@ const preloadSchema = z.discriminatedUnion("kind", [
 
 export const jointDesignBaseSchema = z.object({
   schemaVersion: z.literal(1),
-  name: z.string().min(1).max(200),
-  description: z.string().max(2000).optional(),
-  templateId: z.string().max(100).optional(),
+  name: plainText().min(1).max(200),
+  description: multilineText().max(2000).optional(),
+  templateId: plainText().max(100).optional(),
   units: z.enum(["SI", "US"]),
   outline: outlineSchema,
   bore: outlineSchema.nullable(),
@@ -125,7 +126,7 @@ export const jointDesignBaseSchema = z.object({
   }),
   assembly: z.object({
     preload: preloadSchema,
-    nutFactor: z.object({ value: z.number().finite().min(0.05).max(0.5), source: z.string().max(300) }),
+    nutFactor: z.object({ value: z.number().finite().min(0.05).max(0.5), source: plainText().max(300) }),
     method: z.enum([
       "torque-wrench",
       "turn-of-nut",

@@ -14,17 +14,6 @@ const STATUS: Record<CommandFailureReason, number> = {
 
 export const NO_STORE = { "cache-control": "private, no-store" };
 
-/** The body as JSON, or a 400 Response when it is not JSON at all. */
-export async function readJsonBody(
-  request: Request,
-): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
-  try {
-    return { ok: true, body: await request.json() };
-  } catch {
-    return { ok: false, response: jsonError(400, "The request body must be JSON.") };
-  }
-}
-
 export function commandResponse<T>(result: CommandResult<T>, successStatus = 200): Response {
   if (result.ok) return Response.json(result.data, { status: successStatus, headers: NO_STORE });
   const response = jsonError(STATUS[result.reason], result.message, result.fieldErrors);

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "@/features/forms/plain-text";
 import { designDocumentSchema } from "./document-schema";
 import { designNameSchema, equipmentTagSchema, templateParamsSchema } from "./template-schema";
 
@@ -20,7 +21,7 @@ function lenient<T extends z.ZodType>(schema: T) {
 }
 
 export const listDesignsQuerySchema = z.object({
-  q: lenient(z.string().trim().max(120)),
+  q: lenient(plainText().trim().max(120)),
   status: lenient(z.enum(REVISION_STATUSES)),
   owner: lenient(uuid),
   outline: lenient(z.enum(OUTLINE_KINDS)),
@@ -53,8 +54,7 @@ export const saveWorkingRevisionSchema = z.object({
     .min(1, { error: "baseVersion must be at least 1" }),
   document: designDocumentSchema,
   name: designNameSchema.optional(),
-  equipmentTag: z
-    .string()
+  equipmentTag: plainText()
     .trim()
     .max(60, { error: "Equipment tag must be at most 60 characters" })
     .optional(),

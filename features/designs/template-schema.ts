@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plainText } from "@/features/forms/plain-text";
 import type { PointMm } from "@/features/analysis/core/design";
 import { validateJointDesign } from "@/features/analysis/core/validate";
 import {
@@ -45,13 +46,11 @@ const length = (label: string) => numberField(label, { unit: "mm", max: MAX_DIME
 const boltCount = numberField("Number of bolts", { integer: true, min: 3, exclusiveMin: false, max: 512 });
 const boltSize = z.enum(METRIC_BOLT_SIZES, { error: "Bolt size: choose one of the listed sizes" });
 
-export const designNameSchema = z
-  .string({ error: "Name is required" })
+export const designNameSchema = plainText({ error: "Name is required" })
   .trim()
   .min(1, { error: "Name is required" })
   .max(120, { error: "Name must be at most 120 characters" });
-export const equipmentTagSchema = z
-  .string()
+export const equipmentTagSchema = plainText()
   .trim()
   .max(60, { error: "Equipment tag must be at most 60 characters" })
   .default("");
@@ -108,11 +107,12 @@ const shapes = [
   }),
   z.object({
     kind: z.literal("pipe-flange"),
-    flangeTemplateId: z
-      .string({ error: "Pipe flange: choose a size" })
-      .refine((id) => pipeFlangeRow(id) !== undefined, {
+    flangeTemplateId: plainText({ error: "Pipe flange: choose a size" }).refine(
+      (id) => pipeFlangeRow(id) !== undefined,
+      {
         error: "Pipe flange: choose a size from the catalogue",
-      }),
+      },
+    ),
     flangeThicknessMm: length("Flange thickness"),
   }),
   z.object({

@@ -1,9 +1,10 @@
 import { z } from "zod";
+import { plainText } from "@/features/forms/plain-text";
 
 // The import form's fields besides the files themselves.
 export const importDesignSchema = z.object({
-  name: z.string().trim().min(1, "Give the design a name.").max(120, "At most 120 characters."),
-  equipmentTag: z.string().trim().max(60, "At most 60 characters.").optional().default(""),
+  name: plainText().trim().min(1, "Give the design a name.").max(120, "At most 120 characters."),
+  equipmentTag: plainText().trim().max(60, "At most 60 characters.").optional().default(""),
   csvUnit: z.enum(["mm", "in"]).default("mm"),
 });
 

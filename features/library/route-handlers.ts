@@ -2,6 +2,7 @@ import "server-only";
 import { getDb } from "@/db/index";
 import type { LibraryKind } from "@/db/tables/library";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { readBodyWithLimit } from "@/server/http/request-body";
 import { KIND_LABELS } from "./model/csv-columns";
 import { boltingToCsv, flangesToCsv, gasketsToCsv, parseLibraryCsv } from "./model/library-csv";
 import { importLibraryCsv } from "./mutations";
@@ -57,11 +58,9 @@ export async function importCsv(request: Request, kind: LibraryKind): Promise<Re
   if (!auth.ok) return auth.response;
   const step = new URL(request.url).searchParams.get("step");
   if (step !== "preview" && step !== "commit") return jsonError(400, "Say ?step=preview or ?step=commit.");
-  const declared = Number(request.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > MAX_CSV_BYTES)
-    return jsonError(413, "The CSV file is larger than 2 MB; split it.");
-  const text = await request.text();
-  if (text.length > MAX_CSV_BYTES) return jsonError(413, "The CSV file is larger than 2 MB; split it.");
+  const bytes = await readBodyWithLimit(request, MAX_CSV_BYTES);
+  if (bytes === null) return jsonError(413, "The CSV file is larger than 2 MB; split it.");
+  const text = new TextDecoder().decode(bytes);
   if (step === "preview") {
     const parsed = parseLibraryCsv(kind, text);
     return Response.json(

@@ -2,15 +2,15 @@
 // Every schema reads flat string fields (FormData and CSV cells) and produces numbers in the
 // core's units (mm, MPa). Field names are the CSV column names, so an error names the column.
 import { z } from "zod";
+import { plainText } from "@/features/forms/plain-text";
 
 const text = (max: number) =>
-  z
-    .string({ error: "is required" })
+  plainText({ error: "is required" })
     .trim()
     .min(1, "is required")
     .max(max, `must be at most ${max} characters`);
 const optionalText = (max: number) =>
-  z.string().trim().max(max, `must be at most ${max} characters`).optional().default("");
+  plainText().trim().max(max, `must be at most ${max} characters`).optional().default("");
 
 function toNumber(v: unknown): unknown {
   if (typeof v === "string") {
@@ -107,7 +107,7 @@ export const libraryKindSchema = z.enum(["gasket", "bolting", "flange"]);
 
 export const hideBuiltinSchema = z.object({
   kind: libraryKindSchema,
-  builtinId: z.string().min(1).max(120),
+  builtinId: plainText().min(1).max(120),
   hidden: z.enum(["true", "false"]).transform((v) => v === "true"),
 });
 

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multilineText, plainText } from "@/features/forms/plain-text";
 
 // Inputs of the review actions. The forms use them for quick feedback; the actions are the authority.
 const revisionRef = {
@@ -15,8 +16,7 @@ export type SubmitRevisionInput = z.infer<typeof submitRevisionSchema>;
 
 export const returnRevisionSchema = z.object({
   ...revisionRef,
-  comment: z
-    .string()
+  comment: multilineText()
     .trim()
     .min(1, "Say what needs to change: a returned revision needs a comment.")
     .max(5000, "Keep the comment under 5000 characters."),
@@ -25,12 +25,12 @@ export type ReturnRevisionInput = z.infer<typeof returnRevisionSchema>;
 
 export const approveRevisionSchema = z.object({
   ...revisionRef,
-  comment: z.string().trim().max(5000, "Keep the comment under 5000 characters.").default(""),
+  comment: multilineText().trim().max(5000, "Keep the comment under 5000 characters.").default(""),
   /** check id → written justification, for every check that is warn or fail. */
   justifications: z
     .record(
-      z.string().min(1).max(200),
-      z.string().trim().max(5000, "Keep each justification under 5000 characters."),
+      plainText().min(1).max(200),
+      multilineText().trim().max(5000, "Keep each justification under 5000 characters."),
     )
     .default({}),
 });
@@ -42,13 +42,12 @@ export type StartNewRevisionInput = z.infer<typeof startNewRevisionSchema>;
 export const addCommentSchema = z
   .object({
     ...revisionRef,
-    body: z
-      .string()
+    body: multilineText()
       .trim()
       .min(1, "Write a comment first.")
       .max(5000, "Keep the comment under 5000 characters."),
     targetKind: z.enum(["bolt", "check"]).nullable().default(null),
-    targetId: z.string().trim().max(200).nullable().default(null),
+    targetId: plainText().trim().max(200).nullable().default(null),
   })
   .refine((v) => (v.targetKind === null) === (v.targetId === null || v.targetId === ""), {
     error: "Choose what the comment points at, or nothing.",

@@ -108,3 +108,17 @@ export function appRequest(
     body: init.body === undefined ? undefined : JSON.stringify(init.body),
   });
 }
+
+/** The rectangular cover the API tests create designs from (POST /api/v1/designs `template`). */
+export const COVER_TEMPLATE = {
+  kind: "rectangular-cover",
+  widthMm: 600,
+  heightMm: 400,
+  cornerRadiusMm: 40,
+  boltEdgeDistanceMm: 35,
+  boltCount: 16,
+  boltSize: "M20",
+  coverThicknessMm: 30,
+  flangeThicknessMm: 30,
+  gasketWidthMm: 20,
+} as const;

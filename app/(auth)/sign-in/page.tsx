@@ -4,6 +4,7 @@ import { signInAction } from "@/features/accounts/actions";
 import { SignInForm } from "@/features/accounts/components/sign-in-form";
 import { safeNextPath } from "@/features/accounts/schema";
 import { getViewer } from "@/server/auth/guard";
+import { getEnv } from "@/server/env";
 
 export const metadata: Metadata = { title: "Sign in" };
 
@@ -19,7 +20,7 @@ export default async function SignInPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const params = await searchParams;
-  const next = typeof params.next === "string" ? safeNextPath(params.next) : undefined;
+  const next = typeof params.next === "string" ? safeNextPath(params.next, getEnv().APP_URL) : undefined;
   if (await getViewer()) redirect(next ?? "/desk");
   const note =
     params["signed-out"] === "everywhere"

@@ -1,6 +1,6 @@
-import { stringify } from "csv-stringify/sync";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { BoltRow } from "./bolt-rows";
+import { stringifyCsv } from "@/features/forms/csv-cells";
 import { fixed, lengthUnitFor } from "./length-unit";
 
 /**
@@ -33,5 +33,5 @@ export function buildHoleListCsv(
     design.fastener.designation,
     r.tighteningOrder === null ? "" : String(r.tighteningOrder),
   ]);
-  return stringify([header, ...records], { record_delimiter: "\r\n" });
+  return stringifyCsv([header, ...records], { record_delimiter: "\r\n" });
 }

@@ -1,8 +1,8 @@
 // Parsing and writing Stockroom CSV files. Pure: the preview and the commit both call
 // `parseLibraryCsv`, so what the user previewed is exactly what is validated again on commit.
 import { parse } from "csv-parse/sync";
-import { stringify } from "csv-stringify/sync";
 import { z } from "zod";
+import { restoreCsvText, stringifyCsv } from "@/features/forms/csv-cells";
 import {
   boltingInputSchema,
   flangeInputSchema,
@@ -93,7 +93,7 @@ export function parseLibraryCsv<K extends LibraryKind>(kind: K, text: string): P
   const seen = new Map<string, number>();
   records.slice(1).forEach((record, i) => {
     const line = i + 2;
-    const cells = Object.fromEntries(header.map((h, j) => [h, record[j] ?? ""]));
+    const cells = Object.fromEntries(header.map((h, j) => [h, restoreCsvText(record[j] ?? "")]));
     const errors: CsvFieldError[] = [];
     if (record.length > header.length)
       errors.push({
@@ -145,24 +145,22 @@ function duplicateKey(kind: LibraryKind, input: GasketInput | BoltingInput | Fla
   return (input as GasketInput).name.toLowerCase();
 }
 
-const cell = (v: number | string | null | undefined) => (v === null || v === undefined ? "" : String(v));
-
 export function gasketsToCsv(rows: GasketChoiceDto[]): string {
-  return stringify(
+  return stringifyCsv(
     rows.map((g) => [
       g.name,
       g.gasketType,
       g.m,
       g.yMpa,
-      cell(g.tightness["L1.0"]?.qMinMpa),
-      cell(g.tightness["L1.0"]?.qsMinMpa),
-      cell(g.tightness["L0.1"]?.qMinMpa),
-      cell(g.tightness["L0.1"]?.qsMinMpa),
-      cell(g.tightness["L0.01"]?.qMinMpa),
-      cell(g.tightness["L0.01"]?.qsMinMpa),
-      cell(g.qsMaxMpa),
-      cell(g.pqr),
-      cell(g.egMpa),
+      g.tightness["L1.0"]?.qMinMpa,
+      g.tightness["L1.0"]?.qsMinMpa,
+      g.tightness["L0.1"]?.qMinMpa,
+      g.tightness["L0.1"]?.qsMinMpa,
+      g.tightness["L0.01"]?.qMinMpa,
+      g.tightness["L0.01"]?.qsMinMpa,
+      g.qsMaxMpa,
+      g.pqr,
+      g.egMpa,
       g.modulusMpa,
       g.thicknessMm,
       g.source,
@@ -173,16 +171,16 @@ export function gasketsToCsv(rows: GasketChoiceDto[]): string {
 }
 
 export function boltingToCsv(rows: BoltingChoiceDto[]): string {
-  return stringify(
+  return stringifyCsv(
     rows.flatMap((b) =>
       b.ranges.map((r) => [
         b.name,
         b.modulusMpa,
         r.maxDiameterMm,
-        cell(r.proofMpa),
+        r.proofMpa,
         r.yieldMpa,
         r.tensileMpa,
-        cell(r.allowableMpa),
+        r.allowableMpa,
         b.source,
         b.edition,
       ]),
@@ -192,13 +190,13 @@ export function boltingToCsv(rows: BoltingChoiceDto[]): string {
 }
 
 export function flangesToCsv(rows: FlangeTemplateChoiceDto[]): string {
-  return stringify(
+  return stringifyCsv(
     rows.map((f) => [
       f.standard,
       f.pressureClass,
       f.size,
       f.outsideDiameterMm,
-      cell(f.boreDiameterMm),
+      f.boreDiameterMm,
       f.boltCircleDiameterMm,
       f.boltCount,
       f.boltDesignation,

@@ -79,10 +79,38 @@ describe("account form inputs", () => {
     expect(inviteMemberSchema.safeParse({ email: "x@y.example", roles: ["owner"] }).success).toBe(false);
   });
 
-  it("follows only our own paths after sign-in", () => {
-    expect(safeNextPath("/designs/1?tab=x")).toBe("/designs/1?tab=x");
-    for (const bad of ["https://evil.example", "//evil.example", "/\\evil.example", "", undefined])
-      expect(safeNextPath(bad)).toBe("/desk");
+  it("follows only our own pages after sign-in, resolved against APP_URL", () => {
+    const app = "http://127.0.0.1:3100";
+    // Good paths keep their query and fragment; a relative path resolves under the app too.
+    expect(safeNextPath("/designs/1?tab=x", app)).toBe("/designs/1?tab=x");
+    expect(safeNextPath("/designs/1?next=%2F%2Fevil.example#checks", app)).toBe(
+      "/designs/1?next=%2F%2Fevil.example#checks",
+    );
+    expect(safeNextPath("http://127.0.0.1:3100/library/gaskets", app)).toBe("/library/gaskets");
+    // An encoded tab stays inside our path (the browser does not decode it into the Location).
+    expect(safeNextPath("/%09/evil.example", app)).toBe("/%09/evil.example");
+    for (const bad of [
+      "/\t/evil.example", // the decoded form of next=/%09/evil.example
+      "/\n/evil.example",
+      "//evil.example",
+      "//evil",
+      "/\\evil.example",
+      "\\\\evil.example",
+      "https://evil.example",
+      "https://127.0.0.1:3100.evil.example/",
+      "http://127.0.0.1:3101/desk",
+      "https://127.0.0.1:3100/desk",
+      "javascript:alert(1)",
+      " javascript:alert(1)",
+      "JaVaScRiPt:alert(1)",
+      "data:text/html,<script>alert(1)</script>",
+      decodeURIComponent("%2F%2Fevil.example"),
+      decodeURIComponent("%2F%5Cevil.example"),
+      decodeURIComponent("%2F%09%2Fevil.example"),
+      "",
+      undefined,
+    ])
+      expect(safeNextPath(bad, app), JSON.stringify(bad)).toBe("/desk");
   });
 });
 

@@ -8,7 +8,12 @@ import {
 } from "@/app/api/v1/designs/[designId]/route";
 import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/route";
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
-import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
+import {
+  COVER_TEMPLATE,
+  appRequest,
+  createOrganizationWithMembers,
+  type OrganizationFixture,
+} from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";
 
 // The /api/v1 designs handlers called directly with real session cookies.
@@ -18,25 +23,12 @@ let foreign: OrganizationFixture<"other">;
 const cookies: Record<string, string> = {};
 const params = (designId: string) => ({ params: Promise.resolve({ designId }) });
 
-const coverTemplate = {
-  kind: "rectangular-cover",
-  widthMm: 600,
-  heightMm: 400,
-  cornerRadiusMm: 40,
-  boltEdgeDistanceMm: 35,
-  boltCount: 16,
-  boltSize: "M20",
-  coverThicknessMm: 30,
-  flangeThicknessMm: 30,
-  gasketWidthMm: 20,
-};
-
 async function createViaApi(name: string, cookie = cookies.dana): Promise<string> {
   const response = await designsPost(
     appRequest("/api/v1/designs", {
       method: "POST",
       cookie,
-      body: { name, equipmentTag: "E-2107", template: coverTemplate },
+      body: { name, equipmentTag: "E-2107", template: COVER_TEMPLATE },
     }),
   );
   expect(response.status).toBe(201);
@@ -85,7 +77,7 @@ describe("designs API", () => {
       appRequest("/api/v1/designs", {
         method: "POST",
         cookie: cookies.arlo,
-        body: { name: "x", template: coverTemplate },
+        body: { name: "x", template: COVER_TEMPLATE },
       }),
     );
     expect(denied.status).toBe(403);
@@ -131,7 +123,7 @@ describe("designs API", () => {
         appRequest("/api/v1/designs", {
           method: "POST",
           cookie: cookies.dana,
-          body: { name: "Bad", template: { ...coverTemplate, [field]: value } },
+          body: { name: "Bad", template: { ...COVER_TEMPLATE, [field]: value } },
         }),
       );
       expect(response.status, `${field}=${String(value)}`).toBe(422);
@@ -142,7 +134,7 @@ describe("designs API", () => {
       appRequest("/api/v1/designs", {
         method: "POST",
         cookie: cookies.dana,
-        body: { name: "", template: coverTemplate },
+        body: { name: "", template: COVER_TEMPLATE },
       }),
     );
     expect((await noName.json()).error.fieldErrors).toHaveProperty("name");
@@ -168,7 +160,7 @@ describe("designs API", () => {
         method: "POST",
         cookie: cookies.dana,
         origin: "http://evil.example",
-        body: { name: "x", template: coverTemplate },
+        body: { name: "x", template: COVER_TEMPLATE },
       }),
     );
     expect(response.status).toBe(403);

@@ -9,7 +9,7 @@ import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/rou
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
 import { buildRectangularCover } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
-import { appRequest } from "../../setup/fixtures";
+import { COVER_TEMPLATE, appRequest } from "../../setup/fixtures";
 import { runAuthorizationMatrix, type MatrixContext, type MatrixRow } from "../../setup/authorization-matrix";
 import { getTestDb } from "../../setup/test-db";
 
@@ -38,17 +38,7 @@ afterAll(async () => {
 
 const document = buildRectangularCover(
   { name: "Matrix cover", equipmentTag: "E-2107", units: "SI" },
-  {
-    widthMm: 600,
-    heightMm: 400,
-    cornerRadiusMm: 40,
-    boltEdgeDistanceMm: 35,
-    boltCount: 16,
-    boltSize: "M20",
-    coverThicknessMm: 30,
-    flangeThicknessMm: 30,
-    gasketWidthMm: 20,
-  },
+  COVER_TEMPLATE,
 );
 
 async function designIn(ctx: MatrixContext, org: "home" | "foreign", submitted = false): Promise<string> {

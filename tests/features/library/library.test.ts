@@ -1,3 +1,4 @@
+import { parse } from "csv-parse/sync";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { buildCircularFlange } from "@/features/designs/model/templates";
@@ -239,6 +240,43 @@ describe("Stockroom (real PostgreSQL)", () => {
     const strip = (rows: Awaited<ReturnType<typeof listOwnGaskets>>) =>
       rows.map(({ id: _i, rowId: _r, ...rest }) => rest);
     expect(strip(await listOwnGaskets(db, other.organizationId))).toEqual(strip(own));
+  });
+
+  it("neutralises formula cells in the export and reads its own export back unchanged (OWASP CSV injection)", async () => {
+    const source = await createOrgWithUsers("stockroom-formula");
+    const target = await createOrgWithUsers("stockroom-formula-target");
+    try {
+      const hostile = {
+        name: "=cmd|' /C calc'!A0",
+        gasket_type: "+SUM(1;2)",
+        source: '@HYPERLINK("http://evil.example")',
+        edition: "-2+3",
+      };
+      expect((await createGasket(db, source.organizationId, source.adminId, gasketForm(hostile))).ok).toBe(
+        true,
+      );
+      const own = await listOwnGaskets(db, source.organizationId);
+      const csv = gasketsToCsv(own);
+      const [, cells] = parse(csv) as string[][];
+      expect(cells.slice(0, 2)).toEqual(["'=cmd|' /C calc'!A0", "'+SUM(1;2)"]);
+      expect(cells.slice(-2)).toEqual(['\'@HYPERLINK("http://evil.example")', "'-2+3"]);
+      // Numeric columns stay numbers (m, y_mpa): nothing is prefixed there.
+      expect(cells.slice(2, 4)).toEqual(["2.5", "20"]);
+      expect(await importLibraryCsv(db, target.organizationId, target.adminId, "gasket", csv)).toMatchObject({
+        ok: true,
+        imported: 1,
+      });
+      const [back] = await listOwnGaskets(db, target.organizationId);
+      expect(back).toMatchObject({
+        name: hostile.name,
+        gasketType: hostile.gasket_type,
+        source: hostile.source,
+        edition: hostile.edition,
+      });
+    } finally {
+      await dropOrg(source.organizationId);
+      await dropOrg(target.organizationId);
+    }
   });
 
   it("imports bolting lines of one name as one material with its size ranges, and flange templates", async () => {

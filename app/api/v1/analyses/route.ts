@@ -1,7 +1,8 @@
 import { issuesToFieldErrors } from "@/features/designs/field-errors";
-import { NO_STORE, readJsonBody } from "@/features/designs/http";
+import { NO_STORE } from "@/features/designs/http";
 import { runAnalysis } from "@/features/designs/run-analysis";
 import { analysisRequestSchema } from "@/features/designs/schema";
+import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
 

@@ -1,8 +1,9 @@
 import { getDb } from "@/db/index";
 import { createDesignFromApi } from "@/features/designs/commands";
-import { NO_STORE, commandResponse, readJsonBody } from "@/features/designs/http";
+import { NO_STORE, commandResponse } from "@/features/designs/http";
 import { listDesigns } from "@/features/designs/queries";
 import { listDesignsQuerySchema, searchParamsToObject } from "@/features/designs/schema";
+import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
 

@@ -3,6 +3,7 @@ import { getTeam } from "@/features/accounts/team";
 import { inviteMemberCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
+import { readJsonBody } from "@/server/http/request-body";
 
 // The Crew (members and open invitations) of the viewer's organisation. Admin only.
 async function handleGET(request: Request): Promise<Response> {
@@ -17,8 +18,9 @@ async function handleGET(request: Request): Promise<Response> {
 async function handlePOST(request: Request): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
-  const body = await request.json().catch(() => null);
-  const result = await inviteMemberCommand(auth.viewer, body);
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  const result = await inviteMemberCommand(auth.viewer, body.body);
   return result.ok
     ? Response.json(result.data, { status: 201 })
     : jsonError(result.status, result.message, result.fieldErrors);

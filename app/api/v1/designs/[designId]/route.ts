@@ -1,8 +1,9 @@
 import { getDb } from "@/db/index";
 import { deleteDesignForViewer, saveWorkingRevisionForViewer } from "@/features/designs/commands";
-import { NO_STORE, commandResponse, readJsonBody, toApiDesign } from "@/features/designs/http";
+import { NO_STORE, commandResponse, toApiDesign } from "@/features/designs/http";
 import { findDesign } from "@/features/designs/queries";
 import { designIdSchema } from "@/features/designs/schema";
+import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
 

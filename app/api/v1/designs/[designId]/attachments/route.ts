@@ -1,15 +1,11 @@
 import { getDb } from "@/db/index";
-import {
-  decodeFileNameHeader,
-  idParamSchema,
-  readBodyWithLimit,
-  uploadHeadersSchema,
-} from "@/features/attachments/http";
+import { decodeFileNameHeader, idParamSchema, uploadHeadersSchema } from "@/features/attachments/http";
 import { MAX_ATTACHMENT_BYTES } from "@/features/attachments/model/dto";
 import { checkUpload, uploadAttachment } from "@/features/attachments/mutations";
 import { listAttachments } from "@/features/attachments/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
+import { readBodyWithLimit } from "@/server/http/request-body";
 
 type Context = { params: Promise<{ designId: string }> };
 

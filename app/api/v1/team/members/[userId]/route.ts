@@ -1,6 +1,7 @@
 import { changeMemberRolesCommand, removeMemberCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
+import { readJsonBody } from "@/server/http/request-body";
 
 type Context = { params: Promise<{ userId: string }> };
 
@@ -9,8 +10,10 @@ async function handlePATCH(request: Request, context: Context): Promise<Response
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const { userId } = await context.params;
-  const body = (await request.json().catch(() => null)) as { roles?: unknown } | null;
-  const result = await changeMemberRolesCommand(auth.viewer, { userId, roles: body?.roles });
+  const body = await readJsonBody(request);
+  if (!body.ok) return body.response;
+  const fields = body.body as { roles?: unknown } | null;
+  const result = await changeMemberRolesCommand(auth.viewer, { userId, roles: fields?.roles });
   return result.ok
     ? new Response(null, { status: 204 })
     : jsonError(result.status, result.message, result.fieldErrors);
