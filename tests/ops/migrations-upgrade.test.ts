@@ -41,13 +41,13 @@ function git(args: string[]): string {
 describe("migrations", () => {
   it("every migration has a down, or says why it cannot have one", async () => {
     for (const name of await listMigrationNames()) {
-      const module = (await import(path.join(MIGRATIONS_DIR, `${name}.ts`))) as {
+      const migration = (await import(path.join(MIGRATIONS_DIR, `${name}.ts`))) as {
         down?: unknown;
         irreversible?: unknown;
       };
-      const reason = typeof module.irreversible === "string" ? module.irreversible.trim() : "";
+      const reason = typeof migration.irreversible === "string" ? migration.irreversible.trim() : "";
       expect(
-        typeof module.down === "function" || reason.length > 10,
+        typeof migration.down === "function" || reason.length > 10,
         `${name} has no down and no reason`,
       ).toBe(true);
     }
@@ -61,8 +61,8 @@ describe("migrations", () => {
     const tablesAtLatest = await publicTables(database);
     const migrator = new Migrator({ db: database.db, provider: new ProjectMigrationProvider() });
     for (const name of [...all].reverse()) {
-      const module = (await import(path.join(MIGRATIONS_DIR, `${name}.ts`))) as { irreversible?: unknown };
-      if (typeof module.irreversible === "string") break; // nothing older can be undone past it
+      const migration = (await import(path.join(MIGRATIONS_DIR, `${name}.ts`))) as { irreversible?: unknown };
+      if (typeof migration.irreversible === "string") break; // nothing older can be undone past it
       const { error, results } = await migrator.migrateDown();
       expect(error, `down of ${name}`).toBeUndefined();
       expect(results?.map((r) => [r.migrationName, r.status])).toEqual([[name, "Success"]]);
