@@ -71,9 +71,17 @@ export const SECURITY_HEADERS: Record<string, string> = {
   "cross-origin-opener-policy": "same-origin",
 };
 
+// Each request gets an id: the caller's X-Request-Id when it looks like one, else a new one, passed on
+// to the route (whose log line carries it, server/log/with-logging.ts) and returned in the response.
+// The proxy cannot log the request itself: the final status is known only after the route has run.
+const REQUEST_ID = /^[A-Za-z0-9._:-]{8,80}$/;
+
 export function proxy(request: NextRequest) {
   const isApi = request.nextUrl.pathname.startsWith("/api/");
   const headers = new Headers(request.headers);
+  const incoming = request.headers.get("x-request-id");
+  const requestId = incoming && REQUEST_ID.test(incoming) ? incoming : crypto.randomUUID();
+  headers.set("x-request-id", requestId);
   let policy = API_CONTENT_SECURITY_POLICY;
   if (!isApi) {
     const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(18))).toString("base64");
@@ -85,6 +93,7 @@ export function proxy(request: NextRequest) {
   const response = NextResponse.next({ request: { headers } });
   response.headers.set("content-security-policy", policy);
   for (const [name, value] of Object.entries(SECURITY_HEADERS)) response.headers.set(name, value);
+  response.headers.set("x-request-id", requestId);
   return response;
 }
 

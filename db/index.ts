@@ -9,7 +9,7 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number.parseInt(value,
 
 // One pool per process. In development, hot reloads re-evaluate modules, so the instance is kept
 // on globalThis instead of opening a new pool every time.
-const globalForDb = globalThis as unknown as { sealpitchDb?: Kysely<Database> };
+const globalForDb = globalThis as unknown as { sealpitchDb?: Kysely<Database>; sealpitchPool?: pg.Pool };
 
 function createDb(): Kysely<Database> {
   const env = getEnv();
@@ -23,7 +23,14 @@ function createDb(): Kysely<Database> {
     connectionTimeoutMillis: 5000,
   });
   pool.on("error", (error) => console.error(`[db] idle connection lost: ${error.message}`));
+  globalForDb.sealpitchPool = pool;
   return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
+}
+
+/** Clients of this process's pool (for the metrics endpoint); zeros before the first query. */
+export function getPoolStats(): { total: number; idle: number; waiting: number } {
+  const pool = globalForDb.sealpitchPool;
+  return { total: pool?.totalCount ?? 0, idle: pool?.idleCount ?? 0, waiting: pool?.waitingCount ?? 0 };
 }
 
 export function getDb(): Kysely<Database> {

@@ -1,4 +1,5 @@
 import { expect, test } from "./helpers/test";
+import { latestLink, uniqueEmail } from "./helpers/outbox";
 import { signIn, signOut } from "./helpers/sign-in";
 
 const DEMO = [
@@ -42,31 +43,6 @@ test("a designer gets the 403 page on the admin screen", async ({ page }) => {
   expect(response?.status()).toBe(403);
   await expect(page.getByRole("heading", { level: 1 })).toContainText("Your role does not open this page");
 });
-
-const OUTBOX = process.env.OUTBOX_URL ?? "http://127.0.0.1:2590";
-
-async function latestLink(address: string, path: string): Promise<string> {
-  let link: string | null = null;
-  await expect
-    .poll(
-      async () => {
-        const response = await fetch(`${OUTBOX}/api/messages?to=${encodeURIComponent(address)}`);
-        const messages = (await response.json()) as { text: string }[];
-        const match = messages.length
-          ? new RegExp(`https?://[^\\s"<>]+${path}/[A-Za-z0-9_-]+`).exec(messages.at(-1)!.text)
-          : null;
-        link = match ? new URL(match[0]).pathname : null;
-        return link;
-      },
-      { message: `a ${path} mail for ${address}`, timeout: 10_000 },
-    )
-    .not.toBeNull();
-  return link!;
-}
-
-function uniqueEmail(prefix: string): string {
-  return `${prefix}-${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}@halden-creek.example`;
-}
 
 async function signUp(
   page: import("@playwright/test").Page,

@@ -22,7 +22,7 @@ stack_up
 
 say "unit and integration tests (vitest)"
 set +e
-NODE_ENV=test npx vitest run ${VITEST_ARGS:-} --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
+NODE_ENV=test LOG_LEVEL="${VITEST_LOG_LEVEL:-warn}" npx vitest run ${VITEST_ARGS:-} --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
 VITEST_CODE=$?
 set -e
 

@@ -33,6 +33,11 @@ const envSchema = z.object({
    * 0 (no proxy): the address is the TCP peer that Next's server writes into that header.
    */
   TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  /** Sheet-queue workers this process runs (0: it only queues, another instance works the jobs). */
+  JOB_WORKERS: z.coerce.number().int().min(0).max(8).default(1),
+  LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+  /** Bearer token for GET /api/metrics; unset (the default) turns the endpoint off (404). */
+  METRICS_TOKEN: z.string().min(24, "must be at least 24 characters").optional(),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

@@ -13,14 +13,12 @@ import { authenticate } from "./credentials";
 import { createOrganizationWithFounder } from "./organizations";
 import { formFields, invalidForm } from "@/features/forms/form-data";
 import { safeNextPath, signInSchema, signUpSchema, switchOrganizationSchema } from "./schema";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Session entry points. Each action parses its own input and never trusts the form for who
 // the user is: that comes from the session cookie.
 
-export async function signInAction(
-  _previous: ActionResult | null,
-  formData: FormData,
-): Promise<ActionResult> {
+async function signInActionImpl(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
   const parsed = signInSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalidForm(parsed.error);
   const addressKey = clientAddressKey(await headers());
@@ -34,10 +32,7 @@ export async function signInAction(
   redirect(safeNextPath(parsed.data.next, getEnv().APP_URL));
 }
 
-export async function signUpAction(
-  _previous: ActionResult | null,
-  formData: FormData,
-): Promise<ActionResult> {
+async function signUpActionImpl(_previous: ActionResult | null, formData: FormData): Promise<ActionResult> {
   const parsed = signUpSchema.safeParse(formFields(formData));
   if (!parsed.success) return invalidForm(parsed.error);
   const outcome = await createOrganizationWithFounder(getDb(), parsed.data);
@@ -47,19 +42,19 @@ export async function signUpAction(
   redirect("/desk");
 }
 
-export async function signOutAction(): Promise<void> {
+async function signOutActionImpl(): Promise<void> {
   const context = await getViewerContext();
   if (context) await endSession(context.sessionId);
   redirect("/sign-in?signed-out=1");
 }
 
-export async function signOutEverywhereAction(): Promise<void> {
+async function signOutEverywhereActionImpl(): Promise<void> {
   const context = await getViewerContext();
   if (context) await endAllSessions(context.viewer.userId);
   redirect("/sign-in?signed-out=everywhere");
 }
 
-export async function switchOrganizationAction(formData: FormData): Promise<void> {
+async function switchOrganizationActionImpl(formData: FormData): Promise<void> {
   const context = await getViewerContext();
   if (!context) redirect("/sign-in");
   const parsed = switchOrganizationSchema.safeParse(formFields(formData));
@@ -69,3 +64,15 @@ export async function switchOrganizationAction(formData: FormData): Promise<void
   revalidatePath("/", "layout");
   redirect("/desk");
 }
+
+export const signInAction = loggedAction("accounts.signIn", signInActionImpl);
+export const signUpAction = loggedAction("accounts.signUp", signUpActionImpl);
+export const signOutAction = loggedAction("accounts.signOut", signOutActionImpl);
+export const signOutEverywhereAction = loggedAction(
+  "accounts.signOutEverywhere",
+  signOutEverywhereActionImpl,
+);
+export const switchOrganizationAction = loggedAction(
+  "accounts.switchOrganization",
+  switchOrganizationActionImpl,
+);

@@ -10,10 +10,11 @@ import { INVALID_FORM_MESSAGE, formFields, invalidForm } from "@/features/forms/
 import { acceptInvitation } from "./invitations";
 import { requestPasswordReset, resetPassword } from "./password-reset";
 import { acceptInvitationSchema, forgotPasswordSchema, resetPasswordSchema } from "./schema";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Entry points reached from e-mailed links: accept an invitation, ask for and use a reset link.
 
-export async function acceptInvitationAction(
+async function acceptInvitationActionImpl(
   _previous: ActionResult | null,
   formData: FormData,
 ): Promise<ActionResult> {
@@ -32,7 +33,7 @@ export async function acceptInvitationAction(
   redirect("/desk");
 }
 
-export async function requestPasswordResetAction(
+async function requestPasswordResetActionImpl(
   _previous: ActionResult<string> | null,
   formData: FormData,
 ): Promise<ActionResult<string>> {
@@ -45,7 +46,7 @@ export async function requestPasswordResetAction(
   return outcome.ok ? { ok: true, data: outcome.message } : { ok: false, message: outcome.message };
 }
 
-export async function resetPasswordAction(
+async function resetPasswordActionImpl(
   _previous: ActionResult | null,
   formData: FormData,
 ): Promise<ActionResult> {
@@ -55,3 +56,10 @@ export async function resetPasswordAction(
   if (!outcome.ok) return { ok: false, message: outcome.message };
   redirect("/sign-in?reset=1");
 }
+
+export const acceptInvitationAction = loggedAction("accounts.acceptInvitation", acceptInvitationActionImpl);
+export const requestPasswordResetAction = loggedAction(
+  "accounts.requestPasswordReset",
+  requestPasswordResetActionImpl,
+);
+export const resetPasswordAction = loggedAction("accounts.resetPassword", resetPasswordActionImpl);

@@ -12,6 +12,7 @@ import {
   revokeInvitationCommand,
   type CommandResult,
 } from "./team-commands";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Crew screen forms. Admin only: requireViewer renders the 403 page for anybody else.
 function toActionResult(result: CommandResult<unknown>, success: string): ActionResult<string> {
@@ -22,7 +23,7 @@ function toActionResult(result: CommandResult<unknown>, success: string): Action
   return { ok: false, message: result.message, fieldErrors: result.fieldErrors };
 }
 
-export async function inviteMemberAction(
+async function inviteMemberActionImpl(
   _previous: ActionResult<string> | null,
   formData: FormData,
 ): Promise<ActionResult<string>> {
@@ -36,7 +37,7 @@ export async function inviteMemberAction(
   );
 }
 
-export async function resendInvitationAction(
+async function resendInvitationActionImpl(
   _previous: ActionResult<string> | null,
   formData: FormData,
 ): Promise<ActionResult<string>> {
@@ -47,7 +48,7 @@ export async function resendInvitationAction(
   );
 }
 
-export async function revokeInvitationAction(
+async function revokeInvitationActionImpl(
   _previous: ActionResult<string> | null,
   formData: FormData,
 ): Promise<ActionResult<string>> {
@@ -55,7 +56,7 @@ export async function revokeInvitationAction(
   return toActionResult(await revokeInvitationCommand(viewer, formFields(formData)), "Invitation withdrawn.");
 }
 
-export async function changeMemberRolesAction(
+async function changeMemberRolesActionImpl(
   _previous: ActionResult<string> | null,
   formData: FormData,
 ): Promise<ActionResult<string>> {
@@ -66,10 +67,19 @@ export async function changeMemberRolesAction(
   );
 }
 
-export async function removeMemberAction(
+async function removeMemberActionImpl(
   _previous: ActionResult<string> | null,
   formData: FormData,
 ): Promise<ActionResult<string>> {
   const viewer = await requireViewer({ role: "admin" });
   return toActionResult(await removeMemberCommand(viewer, formFields(formData)), "Member removed.");
 }
+
+export const inviteMemberAction = loggedAction("accounts.inviteMember", inviteMemberActionImpl);
+export const resendInvitationAction = loggedAction("accounts.resendInvitation", resendInvitationActionImpl);
+export const revokeInvitationAction = loggedAction("accounts.revokeInvitation", revokeInvitationActionImpl);
+export const changeMemberRolesAction = loggedAction(
+  "accounts.changeMemberRoles",
+  changeMemberRolesActionImpl,
+);
+export const removeMemberAction = loggedAction("accounts.removeMember", removeMemberActionImpl);

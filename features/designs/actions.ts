@@ -16,6 +16,7 @@ import {
 import { formStrings } from "@/features/forms/form-data";
 import type { SaveWorkingRevisionInput, SaveWorkingRevisionResult } from "./workspace-contract";
 import type { CreateDesignState } from "./components/new-design-form";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Server actions of the designs feature: authenticate, then hand over to commands.ts, which
 // parses, authorises and delegates; then revalidate. `reason` stays server-side.
@@ -28,7 +29,7 @@ function toActionResult<T>(result: CommandResult<T>): ActionResult<T> {
 }
 
 /** New-design form (useActionState); on success goes straight to the editor. */
-export async function createDesignAction(
+async function createDesignActionImpl(
   _previous: CreateDesignState,
   formData: FormData,
 ): Promise<CreateDesignState> {
@@ -41,7 +42,7 @@ export async function createDesignAction(
   redirect(`/designs/${result.data.designId}`);
 }
 
-export async function saveWorkingRevisionAction(
+async function saveWorkingRevisionActionImpl(
   input: SaveWorkingRevisionInput,
 ): Promise<SaveWorkingRevisionResult> {
   const viewer = await requireViewer();
@@ -54,7 +55,7 @@ export async function saveWorkingRevisionAction(
   return result;
 }
 
-export async function duplicateDesignAction(
+async function duplicateDesignActionImpl(
   _previous: ActionResult<{ designId: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ designId: string }>> {
@@ -64,7 +65,7 @@ export async function duplicateDesignAction(
   return toActionResult(result);
 }
 
-export async function setDesignArchivedAction(
+async function setDesignArchivedActionImpl(
   _previous: ActionResult<{ archived: boolean }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ archived: boolean }>> {
@@ -80,7 +81,7 @@ export async function setDesignArchivedAction(
 }
 
 /** Remembers the viewer's unit system (users.unit_system) for every screen. */
-export async function setUnitSystemAction(
+async function setUnitSystemActionImpl(
   unitSystem: UnitSystem,
 ): Promise<ActionResult<{ unitSystem: UnitSystem }>> {
   const viewer = await requireViewer();
@@ -88,3 +89,12 @@ export async function setUnitSystemAction(
   if (result.ok) revalidatePath("/", "layout");
   return toActionResult(result);
 }
+
+export const createDesignAction = loggedAction("designs.createDesign", createDesignActionImpl);
+export const saveWorkingRevisionAction = loggedAction(
+  "designs.saveWorkingRevision",
+  saveWorkingRevisionActionImpl,
+);
+export const duplicateDesignAction = loggedAction("designs.duplicateDesign", duplicateDesignActionImpl);
+export const setDesignArchivedAction = loggedAction("designs.setDesignArchived", setDesignArchivedActionImpl);
+export const setUnitSystemAction = loggedAction("designs.setUnitSystem", setUnitSystemActionImpl);

@@ -6,6 +6,7 @@ import { CONTENT_TYPES, exportFileName } from "./file-names";
 import { fileResponse, parseExportPath } from "./http";
 import { findExportRevision } from "./queries";
 import { drillingTemplateFor, holeListFor } from "./shop-files";
+import { errorText, getLogger } from "@/server/log/logger";
 
 const BUILDERS = { "hole-list": holeListFor, "drilling-template": drillingTemplateFor } as const;
 
@@ -38,9 +39,7 @@ export async function serveShopFile(
       detail: fileName,
     });
   } catch (error) {
-    console.error(
-      `[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`,
-    );
+    getLogger().error({ event: "activity", err: errorText(error) }, "export activity not recorded");
   }
   return fileResponse(body, fileName, CONTENT_TYPES[kind]);
 }

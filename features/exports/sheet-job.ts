@@ -13,6 +13,8 @@ import {
   type SheetJobOptions,
 } from "@/server/jobs/export-files";
 import { SHEET_QUEUE, ensureWorker, getQueue } from "@/server/jobs/queue";
+import { errorText, getLogger } from "@/server/log/logger";
+import { observeJob } from "@/server/metrics/registry";
 
 /** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
 export { BACKGROUND_SHEET_MIN_BOLTS } from "@/features/exports/cache-keys";
@@ -28,6 +30,23 @@ interface SheetJobData {
 export async function runSheetJob(db: Kysely<Database>, exportFileId: string): Promise<void> {
   const row = await claimExportFile(db, exportFileId);
   if (!row) return;
+  const started = performance.now();
+  const logJob = (outcome: "done" | "failed", err?: string) => {
+    const durationMs = Math.round(performance.now() - started);
+    observeJob(SHEET_QUEUE, outcome, durationMs / 1000);
+    getLogger()[outcome === "done" ? "info" : "warn"](
+      {
+        queue: SHEET_QUEUE,
+        jobId: exportFileId,
+        organizationId: row.organization_id,
+        userId: row.requested_by,
+        outcome,
+        durationMs,
+        ...(err ? { err } : {}),
+      },
+      "job",
+    );
+  };
   try {
     const options = row.options as SheetJobOptions;
     const loaded = await loadSheetInput(db, row.organization_id, row.design_id, options.revisionNumber, {
@@ -48,12 +67,17 @@ export async function runSheetJob(db: Kysely<Database>, exportFileId: string): P
       },
     });
     await finishExportFile(db, exportFileId, bytes);
+    logJob("done");
   } catch (error) {
-    await failExportFile(db, exportFileId, error instanceof Error ? error.message : String(error));
+    await failExportFile(db, exportFileId, errorText(error));
+    logJob("failed", errorText(error));
   }
 }
 
-/** Makes sure this process works the sheet queue (called by the routes that use it). */
+/**
+ * Makes sure this process works the sheet queue with JOB_WORKERS workers (none when 0). Called at
+ * server start (instrumentation.ts) and by enqueueSheetJob, so scripts and tests that queue work it too.
+ */
 export async function ensureSheetWorker(db: Kysely<Database>): Promise<void> {
   await ensureWorker<SheetJobData>(SHEET_QUEUE, (data) => runSheetJob(db, data.exportFileId));
 }
@@ -96,4 +120,15 @@ export async function enqueueSheetJob(
     );
   }
   return id;
+}
+
+/**
+ * Server start (instrumentation.ts): this process's sheet workers, without blocking the start;
+ * a database that is down is retried every few seconds until it answers.
+ */
+export function startSheetWorkers(db: Kysely<Database>, retryMs = 5000): void {
+  ensureSheetWorker(db).catch((error: unknown) => {
+    getLogger().warn({ event: "jobs", err: errorText(error) }, "queue workers not started, retrying");
+    setTimeout(() => startSheetWorkers(db, retryMs), retryMs).unref();
+  });
 }

@@ -5,9 +5,10 @@ import { getDb } from "@/db/index";
 import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer } from "@/server/auth/guard";
 import { createDesignFromFiles, fileBytes } from "./mutations";
+import { loggedAction } from "@/server/log/with-logging";
 
 // The Drawing intake's "Create design": files and fields from the form, parsed again on the server.
-export async function importDesignAction(
+async function importDesignActionImpl(
   _prev: ActionResult<{ designId: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ designId: string }>> {
@@ -31,3 +32,5 @@ export async function importDesignAction(
   if (!result.ok) return result;
   redirect(`/designs/${result.data.designId}`);
 }
+
+export const importDesignAction = loggedAction("imports.importDesign", importDesignActionImpl);

@@ -23,6 +23,7 @@ import {
   hideBuiltinSchema,
 } from "./schema";
 import { INVALID_FORM_MESSAGE, fieldErrorsOf, invalidForm } from "@/features/forms/form-data";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Stockroom entry points: authenticate, parse, authorise (admin), delegate, revalidate.
 const PATHS: Record<LibraryKind, string> = {
@@ -43,7 +44,7 @@ async function editor() {
   return canEditLibrary(viewer) ? viewer : null;
 }
 
-export async function saveGasketAction(
+async function saveGasketActionImpl(
   _prev: ActionResult<{ id: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ id: string }>> {
@@ -64,7 +65,7 @@ export async function saveGasketAction(
 }
 
 /** One material with up to three size ranges: fields `<name>_1`, `<name>_2`, `<name>_3`; empty ranges are skipped. */
-export async function createBoltingAction(
+async function createBoltingActionImpl(
   _prev: ActionResult<{ id: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ id: string }>> {
@@ -93,7 +94,7 @@ export async function createBoltingAction(
   return { ok: true, data: { id: result.data.id } };
 }
 
-export async function createFlangeTemplateAction(
+async function createFlangeTemplateActionImpl(
   _prev: ActionResult<{ id: string }> | null,
   formData: FormData,
 ): Promise<ActionResult<{ id: string }>> {
@@ -107,7 +108,7 @@ export async function createFlangeTemplateAction(
   return { ok: true, data: { id: result.data.id } };
 }
 
-export async function deleteLibraryRowAction(formData: FormData): Promise<void> {
+async function deleteLibraryRowActionImpl(formData: FormData): Promise<void> {
   const viewer = await editor();
   const parsed = deleteRowSchema.safeParse(fields(formData));
   if (!viewer || !parsed.success) return;
@@ -115,7 +116,7 @@ export async function deleteLibraryRowAction(formData: FormData): Promise<void> 
   revalidatePath(PATHS[parsed.data.kind]);
 }
 
-export async function setBuiltinHiddenAction(formData: FormData): Promise<void> {
+async function setBuiltinHiddenActionImpl(formData: FormData): Promise<void> {
   const viewer = await editor();
   const parsed = hideBuiltinSchema.safeParse(fields(formData));
   if (!viewer || !parsed.success) return;
@@ -129,3 +130,12 @@ export async function setBuiltinHiddenAction(formData: FormData): Promise<void> 
   );
   revalidatePath(PATHS[parsed.data.kind]);
 }
+
+export const saveGasketAction = loggedAction("library.saveGasket", saveGasketActionImpl);
+export const createBoltingAction = loggedAction("library.createBolting", createBoltingActionImpl);
+export const createFlangeTemplateAction = loggedAction(
+  "library.createFlangeTemplate",
+  createFlangeTemplateActionImpl,
+);
+export const deleteLibraryRowAction = loggedAction("library.deleteLibraryRow", deleteLibraryRowActionImpl);
+export const setBuiltinHiddenAction = loggedAction("library.setBuiltinHidden", setBuiltinHiddenActionImpl);

@@ -25,6 +25,7 @@ import {
   type TransitionOutcome,
 } from "./transitions";
 import { invalidForm } from "@/features/forms/form-data";
+import { loggedAction } from "@/server/log/with-logging";
 
 // Review entry points: authenticate, parse, delegate (the transition checks role and state
 // inside its row-locked transaction), revalidate, then mail. Form-shaped: (previous, FormData).
@@ -78,7 +79,7 @@ async function finish(
   };
 }
 
-export async function submitRevisionAction(
+async function submitRevisionActionImpl(
   _previous: ActionResult<TransitionSummary> | null,
   formData: FormData,
 ): Promise<ActionResult<TransitionSummary>> {
@@ -88,7 +89,7 @@ export async function submitRevisionAction(
   return finish(viewer, await submitRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function approveRevisionAction(
+async function approveRevisionActionImpl(
   _previous: ActionResult<TransitionSummary> | null,
   formData: FormData,
 ): Promise<ActionResult<TransitionSummary>> {
@@ -98,7 +99,7 @@ export async function approveRevisionAction(
   return finish(viewer, await approveRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function returnRevisionAction(
+async function returnRevisionActionImpl(
   _previous: ActionResult<TransitionSummary> | null,
   formData: FormData,
 ): Promise<ActionResult<TransitionSummary>> {
@@ -108,7 +109,7 @@ export async function returnRevisionAction(
   return finish(viewer, await returnRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function startNewRevisionAction(
+async function startNewRevisionActionImpl(
   _previous: ActionResult<TransitionSummary> | null,
   formData: FormData,
 ): Promise<ActionResult<TransitionSummary>> {
@@ -118,7 +119,7 @@ export async function startNewRevisionAction(
   return finish(viewer, await startNewRevision(getDb(), actorOf(viewer), parsed.data));
 }
 
-export async function addCommentAction(
+async function addCommentActionImpl(
   _previous: ActionResult<CommentDto> | null,
   formData: FormData,
 ): Promise<ActionResult<CommentDto>> {
@@ -129,3 +130,9 @@ export async function addCommentAction(
   if (result.ok) revalidatePath(revisionPath(parsed.data.designId, parsed.data.number));
   return result;
 }
+
+export const submitRevisionAction = loggedAction("reviews.submitRevision", submitRevisionActionImpl);
+export const approveRevisionAction = loggedAction("reviews.approveRevision", approveRevisionActionImpl);
+export const returnRevisionAction = loggedAction("reviews.returnRevision", returnRevisionActionImpl);
+export const startNewRevisionAction = loggedAction("reviews.startNewRevision", startNewRevisionActionImpl);
+export const addCommentAction = loggedAction("reviews.addComment", addCommentActionImpl);

@@ -8,6 +8,7 @@ import {
 } from "@/server/mail/review-messages";
 import { listApproverContacts, listUserContacts } from "./queries";
 import type { TransitionOutcome } from "./transitions";
+import { errorText, getLogger } from "@/server/log/logger";
 
 // Mail after a committed transition. A mail failure never undoes the transition: it is logged
 // and the desk lists (which read the database) still show the revision to the right people.
@@ -42,8 +43,9 @@ export async function notifyReviewOutcome(
       else await sendRevisionReturnedMail(designers, info);
     }
   } catch (error) {
-    console.error(
-      `sealpitch: review mail for ${outcome.designName} revision ${outcome.number} was not sent: ${error instanceof Error ? error.message : String(error)}`,
+    getLogger().error(
+      { event: "mail", designId: outcome.designId, revision: outcome.number, err: errorText(error) },
+      "review mail not sent",
     );
   }
 }

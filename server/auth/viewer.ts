@@ -3,6 +3,7 @@ import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { Role, UnitSystem } from "@/db/tables/core";
 import { getLucia } from "./lucia";
+import { noteViewer } from "@/server/log/request-context";
 
 // Who is signed in, in which organisation, with which roles. The Viewer is a DTO safe to hand to
 // client components: no session id, no password hash.
@@ -50,6 +51,7 @@ export async function resolveViewerContext(
     .execute();
   const active = memberships.find((m) => m.id === session.activeOrganizationId) ?? memberships[0];
   if (!active) return null;
+  noteViewer(user.id, active.id);
   return {
     sessionId: session.id,
     viewer: {

@@ -1,6 +1,7 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { getEnv } from "@/server/env";
+import { getLogger } from "@/server/log/logger";
 
 // The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss"). The
 // runtime role may not create tables, so the schema and the queues are installed by
@@ -24,7 +25,7 @@ async function startBoss(): Promise<PgBoss> {
     migrate: false,
     schedule: false,
   });
-  boss.on("error", (error: Error) => console.error(`[jobs] ${error.message}`));
+  boss.on("error", (error: Error) => getLogger().error({ event: "jobs", err: error.message }, "queue error"));
   await boss.start();
   return boss;
 }
@@ -40,19 +41,22 @@ export function getQueue(): Promise<PgBoss> {
   return globalForBoss.sealpitchBoss;
 }
 
-/** Registers a worker for `name` once per process. */
+/** Registers `count` workers for `name` once per process (none when count is 0). */
 export async function ensureWorker<T extends object>(
   name: string,
   handler: (data: T) => Promise<void>,
+  count: number = getEnv().JOB_WORKERS,
 ): Promise<void> {
   const workers = (globalForBoss.sealpitchWorkers ??= new Set());
-  if (workers.has(name)) return;
+  if (workers.has(name) || count < 1) return;
   workers.add(name);
   try {
     const boss = await getQueue();
-    await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async (jobs) => {
-      for (const job of jobs) await handler(job.data);
-    });
+    for (let i = 0; i < count; i++) {
+      await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async (jobs) => {
+        for (const job of jobs) await handler(job.data);
+      });
+    }
   } catch (error) {
     workers.delete(name);
     throw error;

@@ -1,14 +1,12 @@
-import { getDb } from "@/db/index";
-import { getHealth } from "@/features/health/queries";
+import { readinessResponse } from "@/features/health/readiness";
 
 export const dynamic = "force-dynamic";
 
-export async function GET(): Promise<Response> {
-  try {
-    const report = await getHealth(getDb());
-    return Response.json(report, { status: report.ok ? 200 : 503, headers: { "cache-control": "no-store" } });
-  } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
-    return Response.json({ ok: false, reason }, { status: 503, headers: { "cache-control": "no-store" } });
-  }
+// Public readiness, answered from the cached state that a background timer refreshes
+// (server/health/readiness.ts): 200 { ok: true } when the database answers, every migration is
+// applied and the job queue runs, else 503 { ok: false }. /api/health/ready gives the same
+// answer, /api/health/live only says the process is up. Probes are not logged per request
+// (a balancer polls every few seconds); a change of readiness is, with its reason.
+export function GET(): Promise<Response> {
+  return readinessResponse();
 }

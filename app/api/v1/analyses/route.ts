@@ -4,10 +4,11 @@ import { runAnalysis } from "@/features/designs/run-analysis";
 import { analysisRequestSchema } from "@/features/designs/schema";
 import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 
 // Stateless analysis: a design document in (bare, or as `{ document }`), the core's JointAnalysis
 // out. Nothing is stored. Bad input is a 422 naming each field path.
-export async function POST(request: Request): Promise<Response> {
+async function handlePOST(request: Request): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const body = await readJsonBody(request);
@@ -20,5 +21,7 @@ export async function POST(request: Request): Promise<Response> {
   const parsed = analysisRequestSchema.safeParse(wrapped);
   if (!parsed.success)
     return jsonError(422, "The design document is not valid.", fieldErrorsOf(parsed.error, { nested: true }));
-  return Response.json(runAnalysis(parsed.data.document).result, { headers: NO_STORE });
+  return Response.json(runAnalysis(parsed.data.document, "stateless").result, { headers: NO_STORE });
 }
+
+export const POST = withRequestLog("/api/v1/analyses", handlePOST);

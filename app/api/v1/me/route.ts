@@ -1,9 +1,12 @@
 import { toViewerDto } from "@/features/accounts/viewer-dto";
 import { authorizeApi } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 
 // The signed-in viewer (no secrets): for client components that refresh with SWR.
-export async function GET(request: Request): Promise<Response> {
+async function handleGET(request: Request): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   return Response.json(toViewerDto(auth.viewer), { headers: { "cache-control": "private, no-store" } });
 }
+
+export const GET = withRequestLog("/api/v1/me", handleGET);

@@ -2,10 +2,11 @@ import { getDb } from "@/db/index";
 import { getTeam } from "@/features/accounts/team";
 import { inviteMemberCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 import { readJsonBody } from "@/server/http/request-body";
 
 // The Crew (members and open invitations) of the viewer's organisation. Admin only.
-export async function GET(request: Request): Promise<Response> {
+async function handleGET(request: Request): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   return Response.json(await getTeam(getDb(), auth.viewer.organizationId), {
@@ -14,7 +15,7 @@ export async function GET(request: Request): Promise<Response> {
 }
 
 /** Invite: { email, roles }. */
-export async function POST(request: Request): Promise<Response> {
+async function handlePOST(request: Request): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const body = await readJsonBody(request);
@@ -24,3 +25,6 @@ export async function POST(request: Request): Promise<Response> {
     ? Response.json(result.data, { status: 201 })
     : jsonError(result.status, result.message, result.fieldErrors);
 }
+
+export const GET = withRequestLog("/api/v1/team", handleGET);
+export const POST = withRequestLog("/api/v1/team", handlePOST);

@@ -5,12 +5,13 @@ import { findDesign } from "@/features/designs/queries";
 import { designIdSchema } from "@/features/designs/schema";
 import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 
 type Context = { params: Promise<{ designId: string }> };
 
 // One design. PUT saves its working revision: the body carries `baseVersion`, and a save based on
 // an older version is refused with 409 (nothing written). DELETE only for never-submitted drafts.
-export async function GET(request: Request, { params }: Context): Promise<Response> {
+async function handleGET(request: Request, { params }: Context): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const design = await findDesign(getDb(), auth.viewer.organizationId, (await params).designId);
@@ -18,7 +19,7 @@ export async function GET(request: Request, { params }: Context): Promise<Respon
   return Response.json(toApiDesign(design), { headers: NO_STORE });
 }
 
-export async function PUT(request: Request, { params }: Context): Promise<Response> {
+async function handlePUT(request: Request, { params }: Context): Promise<Response> {
   const auth = await authorizeApi(request, { role: "designer" });
   if (!auth.ok) return auth.response;
   const body = await readJsonBody(request);
@@ -30,9 +31,13 @@ export async function PUT(request: Request, { params }: Context): Promise<Respon
   return commandResponse(await saveWorkingRevisionForViewer(getDb(), auth.viewer, { ...fields, designId }));
 }
 
-export async function DELETE(request: Request, { params }: Context): Promise<Response> {
+async function handleDELETE(request: Request, { params }: Context): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const result = await deleteDesignForViewer(getDb(), auth.viewer, (await params).designId);
   return result.ok ? new Response(null, { status: 204 }) : commandResponse(result);
 }
+
+export const GET = withRequestLog("/api/v1/designs/[designId]", handleGET);
+export const PUT = withRequestLog("/api/v1/designs/[designId]", handlePUT);
+export const DELETE = withRequestLog("/api/v1/designs/[designId]", handleDELETE);

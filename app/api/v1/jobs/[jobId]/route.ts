@@ -3,22 +3,18 @@ import { jobIdSchema } from "@/features/exports/schema";
 import { fileResponse } from "@/features/exports/http";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { findExportFileBytes, findExportJob } from "@/server/jobs/export-files";
-import { ensureSheetWorker } from "@/features/exports/sheet-job";
+import { withRequestLog } from "@/server/log/with-logging";
 
 type Context = { params: Promise<{ jobId: string }> };
 
 // Status of a background export ({ jobId, status, progress, fileName, downloadUrl, error }) and,
 // with ?download=1, the finished file. Another organisation's job is a 404.
-export async function GET(request: Request, { params }: Context) {
+async function handleGET(request: Request, { params }: Context) {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const parsed = jobIdSchema.safeParse((await params).jobId);
   if (!parsed.success) return jsonError(404, "This export job does not exist.");
   const db = getDb();
-  // A restarted server resumes queued jobs as soon as anyone asks about one.
-  ensureSheetWorker(db).catch((error) =>
-    console.error(`[jobs] worker not started: ${error instanceof Error ? error.message : String(error)}`),
-  );
   if (new URL(request.url).searchParams.get("download") === "1") {
     const file = await findExportFileBytes(db, auth.viewer.organizationId, parsed.data);
     if (file) return fileResponse(file.bytes, file.fileName, file.contentType);
@@ -31,3 +27,5 @@ export async function GET(request: Request, { params }: Context) {
   if (!job) return jsonError(404, "This export job does not exist.");
   return Response.json(job, { headers: { "cache-control": "no-store" } });
 }
+
+export const GET = withRequestLog("/api/v1/jobs/[jobId]", handleGET);

@@ -1,6 +1,9 @@
 import { getChoices } from "@/features/library/route-handlers";
+import { withRequestLog } from "@/server/log/with-logging";
 
 // The organisation's gaskets for pickers: built-in rows minus hidden ones, plus its own rows.
-export function GET(request: Request) {
+async function handleGET(request: Request) {
   return getChoices(request, "gasket");
 }
+
+export const GET = withRequestLog("/api/v1/library/gaskets", handleGET);

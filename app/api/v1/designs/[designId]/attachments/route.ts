@@ -4,13 +4,14 @@ import { MAX_ATTACHMENT_BYTES } from "@/features/attachments/model/dto";
 import { checkUpload, uploadAttachment } from "@/features/attachments/mutations";
 import { listAttachments } from "@/features/attachments/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 import { readBodyWithLimit } from "@/server/http/request-body";
 
 type Context = { params: Promise<{ designId: string }> };
 
 // GET: the design's attachments. POST: upload one file; the body is the raw file, its name in
 // the X-File-Name header (URI-encoded). Origin, role, size and content are checked in that order.
-export async function GET(request: Request, { params }: Context) {
+async function handleGET(request: Request, { params }: Context) {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const id = idParamSchema.safeParse((await params).designId);
@@ -19,7 +20,7 @@ export async function GET(request: Request, { params }: Context) {
   return Response.json(list, { headers: { "cache-control": "no-store" } });
 }
 
-export async function POST(request: Request, { params }: Context) {
+async function handlePOST(request: Request, { params }: Context) {
   const auth = await authorizeApi(request, { role: ["designer", "admin"] });
   if (!auth.ok) return auth.response;
   const parsed = uploadHeadersSchema.safeParse({
@@ -60,3 +61,6 @@ function parsedFieldErrors(error: import("zod").ZodError): Record<string, string
   for (const issue of error.issues) (out[String(issue.path[0])] ??= []).push(issue.message);
   return out;
 }
+
+export const GET = withRequestLog("/api/v1/designs/[designId]/attachments", handleGET);
+export const POST = withRequestLog("/api/v1/designs/[designId]/attachments", handlePOST);

@@ -2,9 +2,10 @@ import { z } from "zod";
 import { getDb } from "@/db/index";
 import { listRevisionSummaries } from "@/features/reviews/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 
 // Every revision of a design: number, status, content hash and times (no documents).
-export async function GET(
+async function handleGET(
   request: Request,
   context: { params: Promise<{ designId: string }> },
 ): Promise<Response> {
@@ -16,3 +17,5 @@ export async function GET(
   if (revisions.length === 0) return jsonError(404, "No such design.");
   return Response.json({ revisions }, { headers: { "cache-control": "no-store" } });
 }
+
+export const GET = withRequestLog("/api/v1/designs/[designId]/revisions", handleGET);

@@ -1,10 +1,11 @@
 import { resendInvitationCommand, revokeInvitationCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 
 type Context = { params: Promise<{ invitationId: string }> };
 
 /** Resend with a new link. */
-export async function POST(request: Request, context: Context): Promise<Response> {
+async function handlePOST(request: Request, context: Context): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const result = await resendInvitationCommand(auth.viewer, await context.params);
@@ -14,7 +15,7 @@ export async function POST(request: Request, context: Context): Promise<Response
 }
 
 /** Revoke. */
-export async function DELETE(request: Request, context: Context): Promise<Response> {
+async function handleDELETE(request: Request, context: Context): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const result = await revokeInvitationCommand(auth.viewer, await context.params);
@@ -22,3 +23,6 @@ export async function DELETE(request: Request, context: Context): Promise<Respon
     ? new Response(null, { status: 204 })
     : jsonError(result.status, result.message, result.fieldErrors);
 }
+
+export const POST = withRequestLog("/api/v1/team/invitations/[invitationId]", handlePOST);
+export const DELETE = withRequestLog("/api/v1/team/invitations/[invitationId]", handleDELETE);

@@ -1,11 +1,12 @@
 import { changeMemberRolesCommand, removeMemberCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 import { readJsonBody } from "@/server/http/request-body";
 
 type Context = { params: Promise<{ userId: string }> };
 
 /** Change a member's roles: { roles }. */
-export async function PATCH(request: Request, context: Context): Promise<Response> {
+async function handlePATCH(request: Request, context: Context): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const { userId } = await context.params;
@@ -18,7 +19,7 @@ export async function PATCH(request: Request, context: Context): Promise<Respons
     : jsonError(result.status, result.message, result.fieldErrors);
 }
 
-export async function DELETE(request: Request, context: Context): Promise<Response> {
+async function handleDELETE(request: Request, context: Context): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   const { userId } = await context.params;
@@ -27,3 +28,6 @@ export async function DELETE(request: Request, context: Context): Promise<Respon
     ? new Response(null, { status: 204 })
     : jsonError(result.status, result.message, result.fieldErrors);
 }
+
+export const PATCH = withRequestLog("/api/v1/team/members/[userId]", handlePATCH);
+export const DELETE = withRequestLog("/api/v1/team/members/[userId]", handleDELETE);

@@ -4,6 +4,7 @@ import { deleteAttachment } from "@/features/attachments/mutations";
 import { findAttachment } from "@/features/attachments/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { getBlob } from "@/server/storage/blob-store";
+import { withRequestLog } from "@/server/log/with-logging";
 
 type Context = { params: Promise<{ designId: string; attachmentId: string }> };
 
@@ -15,7 +16,7 @@ async function ids(params: Context["params"]) {
 }
 
 // GET downloads the stored bytes exactly as uploaded; another organisation's id is a 404.
-export async function GET(request: Request, { params }: Context) {
+async function handleGET(request: Request, { params }: Context) {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const key = await ids(params);
@@ -36,7 +37,7 @@ export async function GET(request: Request, { params }: Context) {
   });
 }
 
-export async function DELETE(request: Request, { params }: Context) {
+async function handleDELETE(request: Request, { params }: Context) {
   const auth = await authorizeApi(request, { role: ["designer", "admin"] });
   if (!auth.ok) return auth.response;
   const key = await ids(params);
@@ -45,3 +46,6 @@ export async function DELETE(request: Request, { params }: Context) {
   if (!result.ok) return jsonError(result.status, result.message);
   return Response.json(result.data);
 }
+
+export const GET = withRequestLog("/api/v1/designs/[designId]/attachments/[attachmentId]", handleGET);
+export const DELETE = withRequestLog("/api/v1/designs/[designId]/attachments/[attachmentId]", handleDELETE);

@@ -2,13 +2,14 @@ import { z } from "zod";
 import { getDb } from "@/db/index";
 import { getRevisionReview } from "@/features/reviews/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
+import { withRequestLog } from "@/server/log/with-logging";
 
 const paramsSchema = z.object({ designId: z.uuid(), number: z.coerce.number().int().min(1).max(100_000) });
 
 // One revision as the review screen sees it: document, stored result, checks, comments,
 // justifications, and `integrity` — the content hash recomputed on this read (a mismatch is
 // reported as { state: "mismatch", storedHash, recomputedHash }, never hidden).
-export async function GET(
+async function handleGET(
   request: Request,
   context: { params: Promise<{ designId: string; number: string }> },
 ): Promise<Response> {
@@ -20,3 +21,5 @@ export async function GET(
   if (!review) return jsonError(404, "No such revision.");
   return Response.json(review, { headers: { "cache-control": "no-store" } });
 }
+
+export const GET = withRequestLog("/api/v1/designs/[designId]/revisions/[number]", handleGET);

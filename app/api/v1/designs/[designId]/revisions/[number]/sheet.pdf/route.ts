@@ -6,6 +6,8 @@ import { authorizeApi, jsonError, type Viewer } from "@/server/auth/guard";
 import { enqueueSheetJob } from "@/features/exports/sheet-job";
 import { loadSheetInput } from "@/features/exports/sheet/load-sheet-input";
 import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
+import { withRequestLog } from "@/server/log/with-logging";
+import { errorText, getLogger } from "@/server/log/logger";
 
 type Context = { params: Promise<{ designId: string; number: string }> };
 
@@ -63,13 +65,11 @@ async function logExport(
       detail,
     });
   } catch (error) {
-    console.error(
-      `[exports] activity not recorded: ${error instanceof Error ? error.message : String(error)}`,
-    );
+    getLogger().error({ event: "activity", err: errorText(error) }, "export activity not recorded");
   }
 }
 
-export async function GET(request: Request, { params }: Context) {
+async function handleGET(request: Request, { params }: Context) {
   const p = await prepare(request, params);
   if ("response" in p) return p.response;
   const { revision, input } = p.loaded;
@@ -85,7 +85,7 @@ export async function GET(request: Request, { params }: Context) {
   return fileResponse(bytes, fileName, CONTENT_TYPES["spacing-sheet"]);
 }
 
-export async function POST(request: Request, { params }: Context) {
+async function handlePOST(request: Request, { params }: Context) {
   const p = await prepare(request, params);
   if ("response" in p) return p.response;
   const { revision } = p.loaded;
@@ -113,3 +113,6 @@ export async function POST(request: Request, { params }: Context) {
     { status: 202, headers: { location: `/api/v1/jobs/${jobId}`, "cache-control": "no-store" } },
   );
 }
+
+export const GET = withRequestLog("/api/v1/designs/[designId]/revisions/[number]/sheet.pdf", handleGET);
+export const POST = withRequestLog("/api/v1/designs/[designId]/revisions/[number]/sheet.pdf", handlePOST);

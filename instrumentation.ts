@@ -1,0 +1,36 @@
+import type { Instrumentation } from "next";
+
+// Next.js calls register() once when a server process starts (not during `next build`), and
+// onRequestError() for any error that escapes a page, action or route. The Node.js side starts
+// this process's background services: the sheet-queue workers (so queued jobs resume after a
+// restart without waiting for a request) and the readiness refresh behind /api/health; escaped
+// errors become JSON log lines. NEXT_RUNTIME is set by Next itself and read here (not in
+// server/env.ts) because the bundler must see it literally to leave the Node-only imports out
+// of the edge bundle.
+export async function register(): Promise<void> {
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  const [{ getDb }, { startSheetWorkers }, { startReadinessRefresh }] = await Promise.all([
+    import("./db/index"),
+    import("./features/exports/sheet-job"),
+    import("./features/health/readiness"),
+  ]);
+  startSheetWorkers(getDb());
+  startReadinessRefresh();
+}
+
+export const onRequestError: Instrumentation.onRequestError = async (error, request, context) => {
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  const { getLogger, errorText } = await import("./server/log/logger");
+  const requestId = request.headers["x-request-id"];
+  getLogger().error(
+    {
+      reqId: typeof requestId === "string" ? requestId : undefined,
+      method: request.method,
+      route: context.routePath,
+      routeType: context.routeType,
+      err: errorText(error),
+      digest: (error as { digest?: string }).digest,
+    },
+    "unhandled error",
+  );
+};
