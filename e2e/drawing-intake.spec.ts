@@ -3,7 +3,8 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import iconv from "iconv-lite";
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test } from "./helpers/test";
+import type { Browser, Page } from "@playwright/test";
 import { signIn } from "./helpers/sign-in";
 
 // The Drawing intake's confirmation (layer switches, the drawing unit of a file that states none)
