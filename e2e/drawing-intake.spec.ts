@@ -3,8 +3,7 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import iconv from "iconv-lite";
-import { expect, test } from "./helpers/test";
-import type { Browser, Page } from "@playwright/test";
+import { expect, test, type Browser, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 // The Drawing intake's confirmation (layer switches, the drawing unit of a file that states none)

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 const DESIGNER = "dana.designer@kestrel-ridge.example";

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 // Every page at 390 px (a phone held upright): no horizontal scroll. A page that fails names the
