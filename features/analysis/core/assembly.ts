@@ -90,7 +90,7 @@ export function isEvenCircle(points: PointMm[]): boolean {
   const cy = points.reduce((a, p) => a + p.y, 0) / n;
   const r = points.map((p) => Math.hypot(p.x - cx, p.y - cy));
   const rm = r.reduce((a, v) => a + v, 0) / n;
-  const chord = 2 * rm * Math.sin(Math.PI / n);
+  const chord = 2 * rm * fm.sin(Math.PI / n);
   return (
     rm > 0 &&
     r.every((v) => Math.abs(v - rm) <= 0.01 * rm) &&

@@ -44,10 +44,10 @@ export function periodicBeamCompliancePerN(
   if (lp > 30) return single;
   if (lp < 1e-4) return 1 / (foundationModulusMpa * pitchMm);
   // sinh and cosh from exp (already used by the solver), for the same bits in every engine.
-  const e = Math.exp(lp);
+  const e = fm.exp(lp);
   const sinh = (e - 1 / e) / 2;
   const cosh = (e + 1 / e) / 2;
-  return (single * (sinh + Math.sin(lp))) / (cosh - Math.cos(lp));
+  return (single * (sinh + fm.sin(lp))) / (cosh - fm.cos(lp));
 }
 
 /** Periodic superposition of Hetényi's solution on a closed path of length L (images until negligible). */

@@ -10,6 +10,7 @@
  * Units: mm.
  */
 import { INTERFACE_CALIBRATION } from "./catalogue/interface-calibration";
+import * as fm from "./fixed-math";
 
 export interface FootprintCoefficients {
   radius: readonly number[];
@@ -48,13 +49,13 @@ export function contactTangent(
   c: FootprintCoefficients = INTERFACE_CALIBRATION,
 ): number {
   const d = input.nominalDiameterMm;
-  const L = Math.log(clampDepthRatio(input.depthMm / d));
+  const L = fm.log(clampDepthRatio(input.depthMm / d));
   const r = c.radius;
   const v =
     r[0] +
     r[1] * L +
     r[2] * L * L +
-    r[3] * Math.log(input.bearingDiameterMm / (1.5 * d)) +
+    r[3] * fm.log(input.bearingDiameterMm / (1.5 * d)) +
     r[4] * (input.holeDiameterMm / d - 1.1) +
     r[5] * input.modulusLogRatio;
   return Math.max(v, 0.05);
@@ -64,7 +65,7 @@ export function footprintShape(
   hOverD: number,
   c: FootprintCoefficients = INTERFACE_CALIBRATION,
 ): { a: number; b: number } {
-  const L = Math.log(clampDepthRatio(hOverD));
+  const L = fm.log(clampDepthRatio(hOverD));
   return {
     a: Math.max(c.shapeA[0] + c.shapeA[1] * L, 0.5),
     b: Math.max(c.shapeB[0] + c.shapeB[1] * L, 0.3),
@@ -90,8 +91,8 @@ export function interfaceFootprint(
 export function footprintShapeValue(xi: number, a: number, b: number): number {
   if (xi < 0 || xi >= 1) return 0;
   if (xi === 0) return 1;
-  const inner = 1 - Math.exp(a * Math.log(xi));
-  return inner <= 0 ? 0 : Math.exp(b * Math.log(inner));
+  const inner = 1 - fm.exp(a * fm.log(xi));
+  return inner <= 0 ? 0 : fm.exp(b * fm.log(inner));
 }
 
 /**

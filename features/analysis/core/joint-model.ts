@@ -247,11 +247,11 @@ export function buildJointModel(design: JointDesign): JointModel {
       nominalDiameterMm: d,
       bearingDiameterMm,
       holeDiameterMm,
-      modulusLogRatio: eUp > 0 && eDown > 0 ? Math.abs(Math.log(eUp / eDown)) : 0,
+      modulusLogRatio: eUp > 0 && eDown > 0 ? Math.abs(fm.log(eUp / eDown)) : 0,
     });
     coneRadiusMm = fp.outerRadiusMm;
     footprintShape = { a: fp.shapeA, b: fp.shapeB };
-    footprintRule = `calibrated footprint: rc = Dw/2 + h·tanφc, contact angle φc = ${((Math.atan(fp.contactTangent) * 180) / Math.PI).toFixed(1)}° at h/d = ${(coneDepthMm / d).toFixed(2)}, pressure (1 − ξ^${fp.shapeA.toFixed(2)})^${fp.shapeB.toFixed(2)} from the hole edge (${INTERFACE_CALIBRATION_SOURCE}; h/d outside 0.5–4 uses the nearest end)`;
+    footprintRule = `calibrated footprint: rc = Dw/2 + h·tanφc, contact angle φc = ${((fm.atan(fp.contactTangent) * 180) / Math.PI).toFixed(1)}° at h/d = ${(coneDepthMm / d).toFixed(2)}, pressure (1 − ξ^${fp.shapeA.toFixed(2)})^${fp.shapeB.toFixed(2)} from the hole edge (${INTERFACE_CALIBRATION_SOURCE}; h/d outside 0.5–4 uses the nearest end)`;
   } else {
     coneRadiusMm = Math.max(bearingDiameterMm / 2 + coneDepthMm * tan, holeDiameterMm / 2 + 1e-6);
     footprintShape = LINEAR_SHAPE;

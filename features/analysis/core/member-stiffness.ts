@@ -88,7 +88,7 @@ export function computeMemberStiffness(input: {
  * (catalogue/interface-calibration.ts). Example: grip = 2d → s0.
  */
 export function frustumCorrection(gripMm: number, nominalDiameterMm: number, s: readonly number[]): number {
-  const L = Math.log(Math.min(Math.max(gripMm / (2 * nominalDiameterMm), 0.5), 4));
+  const L = fm.log(Math.min(Math.max(gripMm / (2 * nominalDiameterMm), 0.5), 4));
   return s[0] + s[1] * L + s[2] * L * L;
 }
 

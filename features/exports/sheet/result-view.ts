@@ -77,7 +77,7 @@ const text = (v: unknown): string =>
   typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "";
 
 export function normaliseStatus(v: unknown): SheetStatus {
-  if (v === "accepted-by-rating") return "rated";
+  if (v === "accepted-by-rating" || v === "rated") return "rated";
   return v === "pass" || v === "warn" || v === "fail" ? v : "na";
 }
 

@@ -43,7 +43,7 @@ describe("rule rows (checks grouped by rule)", () => {
     expect(rows.map((r) => r.rule)).toEqual(["flange.new-rule", "spacing.max-pitch", "gasket.seating"]);
     const pitch = rows[1]!;
     expect(pitch.worst.id).toBe("spacing.max-pitch:b2-b3");
-    expect(pitch.counts).toEqual({ pass: 1, warn: 2, fail: 0, "not-applicable": 0 });
+    expect(pitch.counts).toEqual({ pass: 1, warn: 2, fail: 0, "not-applicable": 0, "accepted-by-rating": 0 });
     expect(pitch.sense).toBe("at-most");
     expect(pitch.use).toBeCloseTo(94.8 / 81.6, 9);
     expect(pitch.subject).toBe("pair");

@@ -17,6 +17,7 @@ import {
   type HubFactors,
   type RingFactors,
 } from "./shape-factors";
+import * as fm from "../fixed-math";
 
 export type Appendix2FlangeKind = "integral-hub" | "integral-no-hub" | "ring-loose";
 
@@ -130,7 +131,7 @@ export function computeAppendix2Flange(i: Appendix2FlangeInput): Appendix2Flange
         : NO_TAPER_HUB;
     const e = factors.F / h0;
     const d = (ring.U / factors.V) * h0 * g0 * g0;
-    const L = (i.tMm * e + 1) / ring.T + i.tMm ** 3 / d;
+    const L = (i.tMm * e + 1) / ring.T + (i.tMm * i.tMm * i.tMm) / d;
     hub = { ...factors, h0Mm: h0, e, d, L };
   }
   const operatingMoment = hdN * arms.hD + htN * arms.hT + hgOperatingN * arms.hG;
@@ -141,7 +142,7 @@ export function computeAppendix2Flange(i: Appendix2FlangeInput): Appendix2Flange
       : { name: "KI" as const, value: RIGIDITY_FACTOR.integral };
   const rigidity = (mo: number, E: number): number =>
     hub === null
-      ? (109.4 * mo) / (E * i.tMm ** 3 * rigidityFactor.value * Math.log(ring.K))
+      ? (109.4 * mo) / (E * i.tMm * i.tMm * i.tMm * rigidityFactor.value * fm.log(ring.K))
       : (52.14 * hub.V * mo) / (hub.L * E * g0 * g0 * rigidityFactor.value * hub.h0Mm);
   const condition = (
     name: Appendix2Condition["condition"],

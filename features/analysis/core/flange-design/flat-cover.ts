@@ -66,7 +66,7 @@ export function coverThicknessMm(g: CoverGeometry, k: CoverConditionInput): numb
   const SE = k.allowableMpa * g.jointEfficiency;
   const d = g.dMm;
   if (g.shape === "circular") {
-    return d * Math.sqrt((g.c * k.pressureMpa) / SE + (1.9 * k.boltLoadN * g.hGMm) / (SE * d ** 3));
+    return d * Math.sqrt((g.c * k.pressureMpa) / SE + (1.9 * k.boltLoadN * g.hGMm) / (SE * d * d * d));
   }
   const Z = nonCircularZ(d, g.longSpanMm ?? d);
   const L = g.perimeterMm ?? Math.PI * d;

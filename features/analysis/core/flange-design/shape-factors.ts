@@ -1,3 +1,4 @@
+import * as fm from "../fixed-math";
 /**
  * ASME VIII-1 Appendix 2 flange shape factors, from their equations (never read off the curves).
  *
@@ -24,7 +25,7 @@ export interface RingFactors {
 /** T, U, Y, Z for K = A/B (> 1). Example: K = 19/12.25 → T 1.6886, U 5.0524, Y 4.5977, Z 2.4228. */
 export function ringFactors(K: number): RingFactors {
   const K2 = K * K;
-  const lg = Math.log10(K);
+  const lg = fm.log10(K);
   const num = K2 * (1 + 8.55246 * lg) - 1;
   return {
     K,
@@ -54,14 +55,14 @@ export const NO_TAPER_HUB: HubFactors = { F: 0.90892, V: 0.550103, f: 1, fRaw: 1
 export function integralHubFactors(g1OverG0: number, hOverH0: number): HubFactors {
   if (g1OverG0 <= 1 + 1e-9 || hOverH0 <= 0) return NO_TAPER_HUB;
   const A = g1OverG0 - 1;
-  const C = 43.68 * hOverH0 ** 4;
+  const C = 43.68 * fm.pow(hOverH0, 4);
   const A2 = A * A,
     A3 = A2 * A;
   const C1 = 1 / 3 + A / 12;
   const C2 = 5 / 42 + (17 * A) / 336;
   const C3 = 1 / 210 + A / 360;
   const C4 = 11 / 360 + (59 * A) / 5040 + (1 + 3 * A) / C;
-  const C5 = 1 / 90 + (5 * A) / 1008 - (1 + A) ** 3 / C;
+  const C5 = 1 / 90 + (5 * A) / 1008 - fm.pow(1 + A, 3) / C;
   const C6 = 1 / 120 + (17 * A) / 5040 + 1 / C;
   const C7 = 215 / 2772 + (51 * A) / 1232 + (60 / 7 + (225 * A) / 14 + (75 * A2) / 7 + (5 * A3) / 2) / C;
   const C8 = 31 / 6930 + (128 * A) / 45045 + (6 / 7 + (15 * A) / 7 + (12 * A2) / 7 + (5 * A3) / 11) / C;
@@ -92,11 +93,11 @@ export function integralHubFactors(g1OverG0: number, hOverH0: number): HubFactor
     (C1 * C7 * C14 + C2 * C10 * C3 + C5 * C8 * C2 - (C3 * C7 * C5 + C8 * C10 * C1 + C2 * C2 * C14)) / C16;
   const C25 =
     (C1 * C7 * C15 + C2 * C11 * C3 + C6 * C8 * C2 - (C3 * C7 * C6 + C8 * C11 * C1 + C2 * C2 * C15)) / C16;
-  const C26 = -((C / 4) ** 0.25);
+  const C26 = -fm.pow(C / 4, 0.25);
   const C27 = C20 - C17 - 5 / 12 + C17 * C26;
   const C28 = C22 - C19 - 1 / 12 + C19 * C26;
-  const C29 = -((C / 4) ** 0.5);
-  const C30 = -((C / 4) ** 0.75);
+  const C29 = -fm.pow(C / 4, 0.5);
+  const C30 = -fm.pow(C / 4, 0.75);
   const C31 = (3 * A) / 2 - C17 * C30;
   const C32 = 1 / 2 - C19 * C30;
   const C33 = 0.5 * C26 * C32 + C28 * C31 * C29 - (0.5 * C30 * C28 + C32 * C27 * C29);
@@ -110,8 +111,8 @@ export function integralHubFactors(g1OverG0: number, hOverH0: number): HubFactor
   const E4 = 1 / 4 + C37 / 12 + C36 / 4 - E3 / 5 - (3 * E2) / 2 - E1;
   const E5 = E1 * (1 / 2 + A / 6) + E2 * (1 / 4 + (11 * A) / 84) + E3 * (1 / 70 + A / 105);
   const E6 = E5 - C36 * (7 / 120 + A / 36 + (3 * A) / C) - 1 / 40 - A / 72 - C37 * (1 / 60 + A / 120 + 1 / C);
-  const F = -E6 / (((C / 2.73) ** 0.25 * (1 + A) ** 3) / C);
-  const V = E4 / ((2.73 / C) ** 0.25 * (1 + A) ** 3);
+  const F = -E6 / ((fm.pow(C / 2.73, 0.25) * fm.pow(1 + A, 3)) / C);
+  const V = E4 / (fm.pow(2.73 / C, 0.25) * fm.pow(1 + A, 3));
   const fRaw = C36 / (1 + A);
   return { F, V, f: Math.max(1, fRaw), fRaw };
 }
