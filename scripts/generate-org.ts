@@ -15,6 +15,7 @@ import { buildCircularFlange } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
 import { uploadAttachment } from "@/features/attachments/mutations";
 import { readChecks } from "@/features/reviews/model/review-checks";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { approveRevision, submitRevision, type TransitionActor } from "@/features/reviews/transitions";
 import { exportFileName, CONTENT_TYPES } from "@/features/exports/file-names";
 import { createExportFile } from "@/server/jobs/export-files";
@@ -123,9 +124,10 @@ export async function generateOrganisation(
         .where("number", "=", 1)
         .executeTakeFirstOrThrow();
       const justifications = Object.fromEntries(
-        readChecks(revision.result)
-          .filter((check) => check.status === "warn" || check.status === "fail")
-          .map((check) => [check.id, "Accepted for the generated load-test organisation."]),
+        rulesNeedingJustification(readChecks(revision.result)).map((rule) => [
+          rule.rule,
+          "Accepted for the generated load-test organisation.",
+        ]),
       );
       const approved = await approveRevision(db, approver, {
         designId,

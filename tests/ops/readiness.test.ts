@@ -8,7 +8,7 @@ import {
   resetReadiness,
 } from "@/features/health/readiness";
 import { stopQueue } from "@/server/jobs/queue";
-import { getTestDb } from "../setup/test-db";
+import { getOwnerTestDb, getTestDb } from "../setup/test-db";
 
 // Readiness is a cached state refreshed in the background: the health routes answer from it,
 // and the public answer is { ok } alone (the reason goes to the server log).
@@ -30,7 +30,7 @@ describe("readiness", () => {
     const db = getTestDb();
     expect((await getReadiness()).ready).toBe(true);
     const newest = (await listMigrationNames()).at(-1)!;
-    await sql`delete from kysely_migration where name = ${newest}`.execute(db);
+    await sql`delete from kysely_migration where name = ${newest}`.execute(getOwnerTestDb());
     try {
       // The cached state still stands: a probe costs no query.
       expect((await readinessResponse()).status).toBe(200);
@@ -43,7 +43,9 @@ describe("readiness", () => {
       expect(JSON.parse(text)).toEqual({ ok: false });
       expect(text).not.toContain(newest);
     } finally {
-      await sql`insert into kysely_migration (name, timestamp) values (${newest}, now()::text)`.execute(db);
+      await sql`insert into kysely_migration (name, timestamp) values (${newest}, now()::text)`.execute(
+        getOwnerTestDb(),
+      );
     }
     expect((await refreshReadiness()).ready).toBe(true);
   });
