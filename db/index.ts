@@ -24,6 +24,11 @@ function createDb(): Kysely<Database> {
   });
   pool.on("error", (error) => console.error(`[db] idle connection lost: ${error.message}`));
   globalForDb.sealpitchPool = pool;
+  // A connection lost while a client is checked out errors on the client as well as failing its
+  // query (which the route answers with a 503): without a listener that event would end the process.
+  pool.on("connect", (client) =>
+    client.on("error", (error) => console.error(`[db] connection lost: ${error.message}`)),
+  );
   return new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
 }
 

@@ -53,6 +53,8 @@ beforeAll(async () => {
   // Like db/index.ts: a dropped idle connection is an 'error' event on the pool, not a crash.
   const pool = new pg.Pool({ connectionString: url.toString(), max: 2, connectionTimeoutMillis: 3000 });
   pool.on("error", () => undefined);
+  // A connection cut while a client is checked out errors on that client too; its query is refused.
+  pool.on("connect", (client) => client.on("error", () => undefined));
   appDb = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
   previous = globalForDb.sealpitchDb;
   globalForDb.sealpitchDb = appDb;
