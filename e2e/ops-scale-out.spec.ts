@@ -58,6 +58,9 @@ test.beforeAll(async () => {
   const env: NodeJS.ProcessEnv = {
     ...process.env,
     DATABASE_URL: base.toString(),
+    // The scratch database belongs to the test's login role, so it also runs the migrations there
+    // (the suite's MIGRATION_DATABASE_URL names the main test database).
+    MIGRATION_DATABASE_URL: base.toString(),
     APP_URL: A,
     NODE_ENV: "production",
   };
