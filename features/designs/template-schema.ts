@@ -106,20 +106,7 @@ const roundFlangeFields = {
 
 const shapes = [
   z.object({ kind: z.literal("full-face-flange"), ...roundFlangeFields }),
-  z.object({
-    kind: z.literal("circular-flange"),
-    outsideDiameterMm: length("Outside diameter"),
-    boreDiameterMm: numberField("Bore diameter", {
-      unit: "mm",
-      min: 0,
-      exclusiveMin: false,
-      max: MAX_DIMENSION_MM,
-    }),
-    boltCircleDiameterMm: length("Bolt circle diameter"),
-    boltCount,
-    boltSize,
-    flangeThicknessMm: length("Flange thickness"),
-  }),
+  z.object({ kind: z.literal("circular-flange"), ...roundFlangeFields }),
   z.object({
     kind: z.literal("pipe-flange"),
     flangeTemplateId: plainText({ error: "Pipe flange: choose a size" }).refine(

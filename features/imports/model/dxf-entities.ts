@@ -423,6 +423,15 @@ interface Scanner {
   isEOF(): boolean;
 }
 
+/** The groups every entity has (handle, layer, paper space); true when `curr` was one of them. */
+function readCommonGroup(e: EntityFields & { handle?: string; layer?: string }, curr: Group): boolean {
+  if (curr.code === 5) e.handle = curr.value;
+  else if (curr.code === 8) e.layer = curr.value;
+  else if (curr.code === 67) e.inPaperSpace = curr.value !== 0;
+  else return false;
+  return true;
+}
+
 /**
  * dxf-parser's SPLINE reader drops the weights (group 41), which makes every rational spline
  * (a NURBS arc or circle) the wrong curve; this one reads them, and the rest of the entity.
@@ -454,16 +463,8 @@ class SplineReader {
       return p;
     };
     for (curr = scanner.next(); !scanner.isEOF() && curr.code !== 0; curr = scanner.next()) {
+      if (readCommonGroup(e, curr)) continue;
       switch (curr.code) {
-        case 5:
-          e.handle = curr.value;
-          break;
-        case 8:
-          e.layer = curr.value;
-          break;
-        case 67:
-          e.inPaperSpace = curr.value !== 0;
-          break;
         case 10:
           e.controlPoints.push(point(curr));
           break;
@@ -504,16 +505,8 @@ class CircleReader {
   parseEntity(scanner: Scanner, curr: Group): object {
     const e: EntityFields & { type: string; handle?: string; layer?: string } = { type: curr.value };
     for (curr = scanner.next(); !scanner.isEOF() && curr.code !== 0; curr = scanner.next()) {
+      if (readCommonGroup(e, curr)) continue;
       switch (curr.code) {
-        case 5:
-          e.handle = curr.value;
-          break;
-        case 8:
-          e.layer = curr.value;
-          break;
-        case 67:
-          e.inPaperSpace = curr.value !== 0;
-          break;
         case 10:
           e.center = { x: curr.value, y: 0 };
           break;

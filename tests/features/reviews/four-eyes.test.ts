@@ -13,10 +13,8 @@ import {
   startNewRevision,
   submitRevision,
 } from "@/features/reviews/transitions";
-import { readChecks } from "@/features/reviews/model/review-checks";
-import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
-import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
+import { createReviewOrg, createSampleDesign, dropReviewOrg, justifyAll, revisionRow } from "./helpers";
 
 // Four-eyes independence over a revision's whole life: everyone who created, saved (at any time),
 // imported, started or submitted it is recorded in revision_editors in the same transaction, and
@@ -31,15 +29,6 @@ afterAll(async () => {
   await dropReviewOrg(org.organizationId);
 });
 
-async function revisionOf(designId: string, number = 1) {
-  return db
-    .selectFrom("design_revisions")
-    .selectAll()
-    .where("design_id", "=", designId)
-    .where("number", "=", number)
-    .executeTakeFirstOrThrow();
-}
-
 async function editorsOf(revisionId: string): Promise<string[]> {
   const rows = await db
     .selectFrom("revision_editors")
@@ -50,7 +39,7 @@ async function editorsOf(revisionId: string): Promise<string[]> {
 }
 
 async function save(designId: string, userId: string) {
-  const row = await revisionOf(designId, (await latestNumber(designId)) ?? 1);
+  const row = await revisionRow(designId, (await latestNumber(designId)) ?? 1);
   const document = row.document as JointDesign;
   const outcome = await saveWorkingRevision(db, {
     organizationId: org.organizationId,
@@ -71,18 +60,12 @@ async function latestNumber(designId: string) {
   return r?.n === null || r?.n === undefined ? undefined : Number(r.n);
 }
 
-function justifyAll(result: unknown): Record<string, string> {
-  return Object.fromEntries(
-    rulesNeedingJustification(readChecks(result)).map((r) => [r.rule, `Accepted for ${r.title}: hydrotest`]),
-  );
-}
-
 const sorted = (...ids: string[]) => [...new Set(ids)].sort();
 
 describe("four-eyes independence (real PostgreSQL)", () => {
   it("records the creator in the creating transaction, and every later saver and the submitter", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Recorded");
-    const rev = await revisionOf(designId);
+    const rev = await revisionRow(designId);
     expect(await editorsOf(rev.id)).toEqual([org.designer.userId]);
     await save(designId, org.lead.userId);
     expect(await editorsOf(rev.id)).toEqual(sorted(org.designer.userId, org.lead.userId));
@@ -98,7 +81,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     await save(designId, org.lead.userId);
     await save(designId, org.designer.userId);
     expect(await submitRevision(db, org.designer, { designId, number: 1 })).toMatchObject({ ok: true });
-    const row = await revisionOf(designId);
+    const row = await revisionRow(designId);
     // The lead is neither creator, last editor nor submitter: only the editors table knows.
     expect([row.created_by, row.last_edited_by, row.submitted_by]).not.toContain(org.lead.userId);
 
@@ -156,7 +139,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
         ),
       ).rejects.toThrow(refusal);
     }
-    expect((await revisionOf(designId)).status).toBe("in_review");
+    expect((await revisionRow(designId)).status).toBe("in_review");
 
     // An independent approver still can.
     const ok = await approveRevision(db, org.approver, {
@@ -171,7 +154,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
   it("records the person who starts revision N, and refuses their decision on it", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Revision two");
     await submitRevision(db, org.designer, { designId, number: 1 });
-    const first = await revisionOf(designId);
+    const first = await revisionRow(designId);
     await approveRevision(db, org.approver, {
       designId,
       number: 1,
@@ -179,7 +162,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
       justifications: justifyAll(first.result),
     });
     expect(await startNewRevision(db, org.lead, { designId, number: 1 })).toMatchObject({ ok: true });
-    const second = await revisionOf(designId, 2);
+    const second = await revisionRow(designId, 2);
     expect(await editorsOf(second.id)).toEqual([org.lead.userId]);
     await save(designId, org.designer.userId);
     expect(await submitRevision(db, org.designer, { designId, number: 2 })).toMatchObject({ ok: true });
@@ -200,7 +183,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
 
   it("records the submitter when someone other than the last editor submits", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Submitter");
-    const rev = await revisionOf(designId);
+    const rev = await revisionRow(designId);
     expect(await submitRevision(db, org.lead, { designId, number: 1 })).toMatchObject({ ok: true });
     expect(await editorsOf(rev.id)).toEqual(sorted(org.designer.userId, org.lead.userId));
     await expect(
@@ -237,7 +220,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
       equipmentTag: "E-2108",
       document: prepared.built.design,
     });
-    const rev = await revisionOf(designId);
+    const rev = await revisionRow(designId);
     expect(await editorsOf(rev.id)).toEqual([org.lead.userId]);
     await submitRevision(db, org.designer, { designId, number: 1 });
     expect(
@@ -252,7 +235,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
 
   it("records editors written by hand too (the trigger, not the app, writes the list)", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "By hand");
-    const rev = await revisionOf(designId);
+    const rev = await revisionRow(designId);
     await sql`update design_revisions set last_edited_by = ${org.lead.userId}, version = version + 1 where id = ${rev.id}`.execute(
       db,
     );
@@ -264,7 +247,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
 
   it("backfills existing revisions from creator, last editor, submitter and the activity log", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Backfilled");
-    const rev = await revisionOf(designId);
+    const rev = await revisionRow(designId);
     // An older save by the lead that only the activity log remembers.
     await recordActivity(db, {
       organizationId: org.organizationId,

@@ -3,6 +3,8 @@ import type { Role } from "@/db/tables/core";
 import { buildCircularFlange } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
 import type { TransitionActor } from "@/features/reviews/transitions";
+import { readChecks } from "@/features/reviews/model/review-checks";
+import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
 
 // Each review suite makes its own organisation and people (unique slugs and e-mails), so it never
@@ -83,4 +85,21 @@ export async function dropReviewOrg(organizationId: string) {
         members.map((m) => m.user_id),
       )
       .execute();
+}
+
+/** The stored row of revision `number` of a design. */
+export async function revisionRow(designId: string, number = 1) {
+  return getTestDb()
+    .selectFrom("design_revisions")
+    .selectAll()
+    .where("design_id", "=", designId)
+    .where("number", "=", number)
+    .executeTakeFirstOrThrow();
+}
+
+/** One written justification for every rule of a stored result that warns or fails. */
+export function justifyAll(result: unknown): Record<string, string> {
+  return Object.fromEntries(
+    rulesNeedingJustification(readChecks(result)).map((r) => [r.rule, `Accepted for ${r.title}: hydrotest`]),
+  );
 }

@@ -18,7 +18,7 @@ import {
 } from "@/features/reviews/transitions";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
-import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
+import { createReviewOrg, createSampleDesign, dropReviewOrg, justifyAll, revisionRow } from "./helpers";
 
 // The review state machine against the real PostgreSQL: every transition, the refused ones, the
 // database's own guards, two approvals racing, and tamper detection.
@@ -31,24 +31,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await dropReviewOrg(org.organizationId);
 });
-
-async function revisionRow(designId: string, number = 1) {
-  return db
-    .selectFrom("design_revisions")
-    .selectAll()
-    .where("design_id", "=", designId)
-    .where("number", "=", number)
-    .executeTakeFirstOrThrow();
-}
-
-function justifyAll(result: unknown): Record<string, string> {
-  return Object.fromEntries(
-    rulesNeedingJustification(readChecks(result)).map((r) => [
-      r.rule,
-      `Accepted for ${r.title}: confirmed by hydrotest`,
-    ]),
-  );
-}
 
 describe("review transitions (real PostgreSQL)", () => {
   it("walks submit → return → fix → resubmit → approve → new revision, freezing a verifiable snapshot", async () => {
