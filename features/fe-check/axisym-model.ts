@@ -50,11 +50,11 @@ export interface AxisymMesh {
 }
 
 /** Thickness of the interface layer relative to the element size; its axial modulus is stiff. */
-const LAYER_FRACTION = 0.005;
-const LAYER_STIFFNESS_FACTOR = 50;
-const OPEN_FACTOR = 1e-9;
+export const LAYER_FRACTION = 0.005;
+export const LAYER_STIFFNESS_FACTOR = 50;
+export const OPEN_FACTOR = 1e-9;
 
-function graded(start: number, end: number, h0: number, growth: number, hMax: number): number[] {
+export function graded(start: number, end: number, h0: number, growth: number, hMax: number): number[] {
   const out = [start];
   let h = h0;
   let x = start;
@@ -70,7 +70,7 @@ function graded(start: number, end: number, h0: number, growth: number, hMax: nu
   return out;
 }
 
-function uniform(start: number, end: number, h: number): number[] {
+export function uniform(start: number, end: number, h: number): number[] {
   const n = Math.max(1, Math.ceil((end - start) / h - 1e-9));
   return Array.from({ length: n + 1 }, (_, i) => start + ((end - start) * i) / n);
 }
@@ -121,11 +121,26 @@ export function buildAxisymMesh(spec: AxisymSpec): AxisymMesh {
   };
 }
 
-function fmt(x: number): string {
+/** Output requests of an interface model: displacements, bearing and support reactions, interface stresses. */
+export const INTERFACE_OUTPUT_REQUESTS = [
+  "*NODE PRINT, NSET=NALL",
+  "U",
+  "*NODE PRINT, NSET=NBEARBOT, TOTALS=YES",
+  "RF",
+  "*NODE PRINT, NSET=NBEARTOP, TOTALS=YES",
+  "RF",
+  "*NODE PRINT, NSET=NSUPPORT, TOTALS=YES",
+  "RF",
+  "*EL PRINT, ELSET=ELAYER",
+  "S",
+  "*END STEP",
+];
+
+export function fmt(x: number): string {
   return x.toPrecision(12);
 }
 
-function chunks(ids: number[], per = 12): string {
+export function chunks(ids: number[], per = 12): string {
   const lines: string[] = [];
   for (let i = 0; i < ids.length; i += per) lines.push(ids.slice(i, i + per).join(", ") + ",");
   return lines.join("\n");
@@ -228,18 +243,6 @@ export function writeAxisymDeck(spec: AxisymSpec, mesh: AxisymMesh, opt: DeckOpt
       L.push(`${firstLower + i}, P1, ${fmt(p)}`);
     }
   }
-  L.push(
-    "*NODE PRINT, NSET=NALL",
-    "U",
-    "*NODE PRINT, NSET=NBEARBOT, TOTALS=YES",
-    "RF",
-    "*NODE PRINT, NSET=NBEARTOP, TOTALS=YES",
-    "RF",
-    "*NODE PRINT, NSET=NSUPPORT, TOTALS=YES",
-    "RF",
-    "*EL PRINT, ELSET=ELAYER",
-    "S",
-    "*END STEP",
-  );
+  L.push(...INTERFACE_OUTPUT_REQUESTS);
   return L.join("\n") + "\n";
 }

@@ -54,6 +54,69 @@ export function readRun(
   blocks: DatBlock[],
 ): RunResult {
   const u = nodeVectors(findBlock(blocks, "displacements", "NALL"));
+  const gauss = interfaceGaussStresses(blocks);
+  const rfBot = findBlock(blocks, "total force", "NBEARBOT").rows[0]?.[1] ?? 0;
+  const rfSupport = findBlock(blocks, "total force", "NSUPPORT").rows[0]?.[1] ?? 0;
+  const rfTop = findBlock(blocks, "total force", "NBEARTOP").rows[0]?.[1] ?? 0;
+  const { rs, nodeUpper, nodeLower } = mesh;
+  const topLower = mesh.zLower.length - 1;
+  const uy = (n: number) => u.get(n)?.[1] ?? NaN;
+  const { cells, contactForceN: contact } = interfaceCells(
+    rs,
+    closed,
+    gauss,
+    (i) => mesh.interfaceElements[i],
+    (i) => uy(nodeUpper(i, 0)) - uy(nodeLower(i, topLower)),
+  );
+  const reaction = rfBot * CCX_AXISYM_FORCE_FACTOR;
+  let F = forceN;
+  let delta = approachMm;
+  if (spec.bearing === "rigid") F = reaction;
+  else {
+    const topU = mesh.zUpper.length - 1;
+    delta = bearingApproachMm(
+      rs,
+      mesh.bearingEnd,
+      uy,
+      (i) => nodeLower(i, 0),
+      (i) => nodeUpper(i, topU),
+    );
+  }
+  return {
+    cells,
+    forceN: F,
+    reactionN: (spec.bearing === "rigid" ? rfTop : rfSupport) * CCX_AXISYM_FORCE_FACTOR,
+    contactForceN: contact,
+    approachMm: delta,
+  };
+}
+
+/**
+ * Work-conjugate approach of two uniformly loaded bearing annuli: the area-weighted mean axial
+ * displacement of the lower annulus minus that of the upper one, mm.
+ */
+export function bearingApproachMm(
+  rs: number[],
+  bearingEnd: number,
+  uy: (node: number) => number,
+  lowerNode: (i: number) => number,
+  upperNode: (i: number) => number,
+): number {
+  const meanUy = (node: (i: number) => number) => {
+    let a = 0,
+      w = 0;
+    for (let i = 0; i < bearingEnd; i++) {
+      const dA = rs[i + 1] ** 2 - rs[i] ** 2;
+      a += ((uy(node(i)) + uy(node(i + 1))) / 2) * dA;
+      w += dA;
+    }
+    return a / w;
+  };
+  return meanUy(lowerNode) - meanUy(upperNode);
+}
+
+/** σzz at the inner and outer Gauss radius of each interface cell: element id → [sum in, sum out, n in, n out]. */
+export function interfaceGaussStresses(blocks: DatBlock[]): Map<number, [number, number, number, number]> {
   // Integration points of the expanded CAX4 cell: odd numbers at the inner Gauss radius, even at the outer.
   const gauss = new Map<number, [number, number, number, number]>();
   for (const row of findBlock(blocks, "stresses", "ELAYER").rows) {
@@ -63,16 +126,25 @@ export function readRun(
     g[k + 2]++;
     gauss.set(row[0], g);
   }
-  const rfBot = findBlock(blocks, "total force", "NBEARBOT").rows[0]?.[1] ?? 0;
-  const rfSupport = findBlock(blocks, "total force", "NSUPPORT").rows[0]?.[1] ?? 0;
-  const rfTop = findBlock(blocks, "total force", "NBEARTOP").rows[0]?.[1] ?? 0;
-  const { rs, nodeUpper, nodeLower } = mesh;
-  const topLower = mesh.zLower.length - 1;
-  const uy = (n: number) => u.get(n)?.[1] ?? NaN;
+  return gauss;
+}
+
+/**
+ * The cells of one interface from its Gauss stresses and node gaps: `element(i)` is cell i's
+ * element id, `gapAt(i)` the opening at radial node i (upper minus lower axial displacement).
+ * Also ∫ p dA over the closed cells, N.
+ */
+export function interfaceCells(
+  rs: number[],
+  closed: boolean[],
+  gauss: Map<number, [number, number, number, number]>,
+  element: (i: number) => number,
+  gapAt: (i: number) => number,
+): { cells: InterfaceCell[]; contactForceN: number } {
   const cells: InterfaceCell[] = [];
   let contact = 0;
   for (let i = 0; i < rs.length - 1; i++) {
-    const g = gauss.get(mesh.interfaceElements[i]);
+    const g = gauss.get(element(i));
     const sIn = g ? g[0] / g[2] : NaN;
     const sOut = g ? g[1] / g[3] : NaN;
     const sig = (sIn + sOut) / 2;
@@ -81,49 +153,19 @@ export function readRun(
     const rIn = (rs[i] + rs[i + 1]) / 2 - dr / (2 * Math.sqrt(3));
     const rOut = (rs[i] + rs[i + 1]) / 2 + dr / (2 * Math.sqrt(3));
     const cellForce = -Math.PI * dr * (sIn * rIn + sOut * rOut);
-    const gap =
-      (uy(nodeUpper(i, 0)) -
-        uy(nodeLower(i, topLower)) +
-        uy(nodeUpper(i + 1, 0)) -
-        uy(nodeLower(i + 1, topLower))) /
-      2;
-    const p = closed[i] ? Math.max(-sig, 0) : 0;
+    const gap = (gapAt(i) + gapAt(i + 1)) / 2;
     if (closed[i]) contact += cellForce;
     cells.push({
       r0: rs[i],
       r1: rs[i + 1],
       rMid: (rs[i] + rs[i + 1]) / 2,
-      pressureMpa: p,
+      pressureMpa: closed[i] ? Math.max(-sig, 0) : 0,
       sigmaZzMpa: sig,
       gapMm: gap,
       closed: closed[i],
     });
   }
-  const reaction = rfBot * CCX_AXISYM_FORCE_FACTOR;
-  let F = forceN;
-  let delta = approachMm;
-  if (spec.bearing === "rigid") F = reaction;
-  else {
-    const topU = mesh.zUpper.length - 1;
-    const meanUy = (node: (i: number) => number) => {
-      let a = 0,
-        w = 0;
-      for (let i = 0; i < mesh.bearingEnd; i++) {
-        const dA = rs[i + 1] ** 2 - rs[i] ** 2;
-        a += ((uy(node(i)) + uy(node(i + 1))) / 2) * dA;
-        w += dA;
-      }
-      return a / w;
-    };
-    delta = meanUy((i) => nodeLower(i, 0)) - meanUy((i) => nodeUpper(i, topU));
-  }
-  return {
-    cells,
-    forceN: F,
-    reactionN: (spec.bearing === "rigid" ? rfTop : rfSupport) * CCX_AXISYM_FORCE_FACTOR,
-    contactForceN: contact,
-    approachMm: delta,
-  };
+  return { cells, contactForceN: contact };
 }
 
 /** Next contact set: closed cells in tension open; open cells that penetrate close. */

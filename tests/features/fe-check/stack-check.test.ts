@@ -1,0 +1,69 @@
+import { readFileSync } from "node:fs";
+import { describe, expect, it } from "vitest";
+import { buildJointModel } from "@/features/analysis/core/joint-model";
+import type { JointDesign } from "@/features/analysis/core/design";
+import { solveInterface } from "@/features/fe-check/interface-study";
+import { solveStack } from "@/features/fe-check/stack-study";
+import { FeInputError, mapBoltStack, runStackCheck } from "@/features/fe-check/joint-stack";
+
+const rel = (a: number, b: number) => Math.abs(a / b - 1);
+const example = (name: string): JointDesign =>
+  JSON.parse(readFileSync(`examples/${name}.json`, "utf8")) as JointDesign;
+
+describe("bolt stack model (FE cross-check, model 1)", () => {
+  it("two layers give the two-plate engine's answer (the same problem meshed by both writers; internal)", () => {
+    const plate = { thicknessMm: 12, modulusMpa: 207_000, poisson: 0.3 };
+    const common = {
+      holeDiameterMm: 13,
+      bearingDiameterMm: 18,
+      outerRadiusMm: 100,
+      bearing: "flexible" as const,
+      elementSizeMm: 1.5,
+    };
+    const two = solveInterface({ ...common, upper: plate, lower: plate }, 10_000);
+    const stack = solveStack(
+      {
+        ...common,
+        layers: [
+          { name: "a", ...plate },
+          { name: "b", ...plate },
+        ],
+      },
+      10_000,
+    );
+    expect(rel(stack.memberStiffnessNPerMm, two.memberStiffnessNPerMm)).toBeLessThan(1e-6);
+    expect(rel(stack.interfaces[0].loadedRadiusMm, two.loadedRadiusMm)).toBeLessThan(1e-6);
+    expect(rel(stack.interfaces[0].peakMpa, two.peakMpa)).toBeLessThan(1e-6);
+  });
+
+  const model = buildJointModel(example("pipe-flange-nps6-spiral-wound"));
+  const res = runStackCheck(model, solveStack);
+  it("NPS 6 example: the bearing faces' reactions equal the bolt force within 0.1 %; the contact pressure integrates to it within 0.5 % (equilibrium)", () => {
+    expect(Math.abs(res.fe.reactionRatio - 1)).toBeLessThan(1e-3);
+    expect(Math.abs(res.fe.contactForceRatio - 1)).toBeLessThan(5e-3);
+    expect(res.forceN).toBe(model.preload.minN);
+  });
+  it("NPS 6 example: p(r) is compressive, zero at the plate's outer cells, and the loaded zone lies beyond the bearing face (internal)", () => {
+    expect(res.pressure.every((p) => p.feMpa >= 0)).toBe(true);
+    expect(res.pressure.at(-1)?.feMpa).toBe(0);
+    expect(res.fe.loadedRadiusMm).toBeGreaterThan(model.bearingDiameterMm / 2);
+  });
+
+  it("a full-face gasket is a layer of its own with two contact interfaces", () => {
+    const m = mapBoltStack(buildJointModel(example("rectangular-cover-full-face")));
+    expect(m.spec.layers.map((l) => l.name)).toEqual(["S355 plate", "gasket", "S355 frame"]);
+    expect(m.spec.layers[1]).toMatchObject({ thicknessMm: 3, modulusMpa: 50, poisson: 0 });
+    expect(m.gasketPlaneInterface).toBe(0);
+  });
+  it("a mesh over the cap and a tapped-hole stud are refused with a clear message, before any solver run", () => {
+    expect(() => runStackCheck(model, solveStack, { elementCap: 100 })).toThrow(/over the cap of 100/);
+    const d = example("pipe-flange-nps6-spiral-wound");
+    d.fastener.termination = {
+      kind: "tapped-hole",
+      engagementMm: 20,
+      memberThicknessMm: 40,
+      memberModulusMpa: 200_000,
+    };
+    expect(() => mapBoltStack({ ...model, design: d })).toThrow(FeInputError);
+  });
+});
