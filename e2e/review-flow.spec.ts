@@ -242,9 +242,14 @@ test("an approved revision starts the next one, and the comparison shows what ch
   const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
     workingRevision: { version: number; document: typeof document };
   };
+  // Revision 2 turns the whole pattern by 15° (a 24th of the 290 mm bolt circle), moves b5 a further
+  // 6 mm and raises the design pressure: the comparison must say so in the form's words.
+  const L = Math.PI * 290;
+  const doc = current.workingRevision.document;
   const moved = {
-    ...current.workingRevision.document,
-    bolts: current.workingRevision.document.bolts.map((b) => (b.id === "b5" ? { ...b, sMm: b.sMm + 6 } : b)),
+    ...doc,
+    loads: { ...doc.loads, designPressureMpa: doc.loads.designPressureMpa + 0.5 },
+    bolts: doc.bolts.map((b) => ({ ...b, sMm: (b.sMm + L / 24 + (b.id === "b5" ? 6 : 0)) % L })),
   };
   const saved = await dana.request.put(`/api/v1/designs/${designId}`, {
     data: { baseVersion: current.workingRevision.version, document: moved },
@@ -252,11 +257,31 @@ test("an approved revision starts the next one, and the comparison shows what ch
   });
   expect(saved.status(), await saved.text()).toBe(200);
 
+  await dana.setViewportSize({ width: 1280, height: 1000 });
   await dana.goto(`/designs/${designId}/compare?from=1&to=2`);
-  await expect(dana.getByRole("table", { name: "Inputs that changed" })).toContainText("bolts[b5].sMm");
-  const bolts = dana.getByRole("table", { name: "Bolts moved" });
+  const inputs = dana.getByRole("table", { name: "Inputs that changed" });
+  await expect(inputs).toContainText("Design pressure");
+  await expect(inputs).toContainText("MPa");
+  await expect(inputs).not.toContainText("loads.designPressureMpa");
+  await expect(dana.getByRole("list", { name: "Pattern changes" })).toHaveText(
+    "12 bolts moved along the bolt path.",
+  );
+  const keys = dana.getByRole("table", { name: "Key results" });
+  for (const row of ["Lowest seat stress", "Am against Ab", "Largest pitch", "Failing rules"])
+    await expect(keys).toContainText(row);
+  await expect(keys).toContainText("MPa");
+  const bolts = dana.getByRole("group").filter({ hasText: "Bolt by bolt" });
   await expect(bolts).toContainText("b5");
-  await expect(bolts).toContainText("+6 mm");
+  await expect(dana.locator("body")).not.toContainText("bolts[b5]");
+  // Before ghosted, after solid, 12 arrows: against the baseline drawn in this environment.
+  const overlay = dana.getByTestId("revision-overlay");
+  await expect(overlay).toHaveAttribute("aria-label", /12 bolts moved/);
+  await expect(overlay.locator("line[marker-end]")).toHaveCount(12);
+  await expect(overlay).toHaveScreenshot("revision-overlay.png", {
+    maxDiffPixelRatio: 0.01,
+    animations: "disabled",
+  });
+
   await dana.context().close();
   await arlo.context().close();
 });

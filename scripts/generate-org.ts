@@ -143,7 +143,7 @@ export async function generateOrganisation(
         revisionId: revision.id,
         kind: "spacing-sheet",
         options: { revisionNumber: 1, paper: "a4", units: "SI" },
-        fileName: exportFileName({ equipmentTag, designName: name }, 1, "spacing-sheet"),
+        fileName: exportFileName({ equipmentTag, designName: name, designId }, 1, "spacing-sheet"),
         contentType: CONTENT_TYPES["spacing-sheet"],
         requestedBy: designer.userId,
       });

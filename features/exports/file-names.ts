@@ -1,5 +1,5 @@
 // Download names of the shop files (our own pattern, listed in the DEVELOPERS.md glossary):
-// <tag>-<name>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf.
+// <tag>-<name>-<design id, 8 hex>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf.
 export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template";
 
 const SUFFIX: Record<ExportKind, string> = {
@@ -26,12 +26,12 @@ function slug(text: string, max: number): string {
 }
 
 /**
- * `exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "hole-list")` →
- * "e-2107-channel-cover-rev3-hole-list.csv". The tag and the design name both go in, so two
- * designs of one equipment tag never share a file name.
+ * `exportFileName({ equipmentTag: "E-2107", designName: "Channel cover", designId: "3f2a9c1e-…" }, 3, "hole-list")`
+ * → "e-2107-channel-cover-3f2a9c1e-rev3-hole-list.csv". The tag, the design name and the start of the
+ * design's id all go in, so two designs of one equipment tag (even of one name) never share a file name.
  */
 export function exportFileName(
-  design: { equipmentTag: string; designName: string },
+  design: { equipmentTag: string; designName: string; designId: string },
   revisionNumber: number,
   kind: ExportKind,
 ): string {
@@ -40,7 +40,11 @@ export function exportFileName(
   // A name that starts with the tag ("E-2107 inlet nozzle") does not repeat it.
   if (tag && (name === tag || name.startsWith(`${tag}-`))) name = name.slice(tag.length + 1);
   const base = [tag, name].filter(Boolean).join("-").slice(0, 80).replace(/-+$/, "") || "design";
-  return `${base}-rev${revisionNumber}-${SUFFIX[kind]}`;
+  const id = design.designId
+    .replace(/[^0-9a-f]/gi, "")
+    .slice(0, 8)
+    .toLowerCase();
+  return `${[base, id].filter(Boolean).join("-")}-rev${revisionNumber}-${SUFFIX[kind]}`;
 }
 
 /** Content-Disposition for a download (the name is ASCII by construction). */

@@ -101,7 +101,7 @@ export async function enqueueSheetJob(
     kind: "spacing-sheet",
     options: { revisionNumber: input.revisionNumber, paper: input.paper, units: input.units },
     fileName: exportFileName(
-      { equipmentTag: input.equipmentTag, designName: input.designName },
+      { equipmentTag: input.equipmentTag, designName: input.designName, designId: input.designId },
       input.revisionNumber,
       "spacing-sheet",
     ),

@@ -5,7 +5,7 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { verifySnapshot, type SnapshotIntegrity } from "@/features/analysis/content-hash";
 import { isFrozenStatus, type ReviewActor, type RevisionFacts } from "./model/review-states";
 import { readChecks } from "./model/review-checks";
-import { diffDocuments, listBoltMoves, listCheckChanges } from "./model/compare-revisions";
+import { diffDocuments, listBoltMoves, listCheckChanges, readKeyResults } from "./model/compare-revisions";
 import {
   canApproveRevision,
   canCommentOnRevision,
@@ -264,8 +264,18 @@ export async function compareRevisions(
   return {
     designId,
     designName: b.design_name,
-    from: { number: a.number, status: a.status },
-    to: { number: b.number, status: b.status },
+    from: {
+      number: a.number,
+      status: a.status,
+      document: a.document as JointDesign,
+      keyResults: readKeyResults(a.result),
+    },
+    to: {
+      number: b.number,
+      status: b.status,
+      document: b.document as JointDesign,
+      keyResults: readKeyResults(b.result),
+    },
     fieldChanges: diffDocuments(a.document, b.document),
     boltMoves: listBoltMoves(a.document as JointDesign, b.document as JointDesign),
     checkChanges: listCheckChanges(a.result, b.result),

@@ -3,7 +3,7 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import type { SnapshotIntegrity } from "@/features/analysis/content-hash";
 import type { ReviewStatus } from "./model/review-states";
 import type { ReviewCheck } from "./model/review-checks";
-import type { BoltMove, CheckChange, FieldChange } from "./model/compare-revisions";
+import type { BoltMove, CheckChange, FieldChange, KeyResults } from "./model/compare-revisions";
 
 export interface CommentDto {
   id: string;
@@ -99,8 +99,8 @@ export interface DeskListsDto {
 export interface RevisionComparisonDto {
   designId: string;
   designName: string;
-  from: { number: number; status: ReviewStatus };
-  to: { number: number; status: ReviewStatus };
+  from: { number: number; status: ReviewStatus; document: JointDesign; keyResults: KeyResults };
+  to: { number: number; status: ReviewStatus; document: JointDesign; keyResults: KeyResults };
   fieldChanges: FieldChange[];
   boltMoves: BoltMove[];
   checkChanges: CheckChange[];

@@ -1,21 +1,95 @@
 import Link from "next/link";
-import { CHECK_STATUS_LABELS } from "../model/review-checks";
+import type { ReactNode } from "react";
+import { ruleOf } from "@/features/analysis/rule-groups";
+import type { CheckChange, KeyResults } from "../model/compare-revisions";
+import { CHECK_STATUS_LABELS, type CheckStatus } from "../model/review-checks";
 import { STATUS_LABELS } from "../model/review-states";
 import { revisionPath } from "../cache-keys";
 import type { RevisionComparisonDto } from "../review-dto";
 
-const show = (v: unknown): string => {
-  if (v === null || v === undefined) return "—";
-  if (typeof v === "number") return String(Number(v.toPrecision(6)));
-  if (typeof v === "string") return v;
-  return JSON.stringify(v);
-};
+// One row per rule and change of status: a turned pattern moves a dozen pair checks the same way.
+function groupCheckChanges(changes: CheckChange[]) {
+  const rows = new Map<
+    string,
+    { key: string; title: string; before: CheckStatus | null; after: CheckStatus | null; count: number }
+  >();
+  for (const c of changes) {
+    const key = `${ruleOf(c.checkId)}|${c.before}|${c.after}`;
+    const row = rows.get(key);
+    if (row) row.count++;
+    else rows.set(key, { key, title: c.title, before: c.before, after: c.after, count: 1 });
+  }
+  return [...rows.values()];
+}
+
+const num = (v: number | null, unit: string, digits = 4) =>
+  v === null ? "—" : `${Number(v.toPrecision(digits))} ${unit}`;
+
+function KeyResultsTable({ comparison }: { comparison: RevisionComparisonDto }) {
+  const a = comparison.from.keyResults;
+  const b = comparison.to.keyResults;
+  const amAb = (k: KeyResults) =>
+    k.actualRootAreaMm2 === null
+      ? "—"
+      : `${k.requiredAreaMm2 === null ? "no allowable" : num(k.requiredAreaMm2, "mm²")} against ${num(k.actualRootAreaMm2, "mm²")}`;
+  const rows: { label: string; before: string; after: string }[] = [
+    {
+      label: "Lowest seat stress",
+      before: num(a.minSeatStressMpa, "MPa", 3),
+      after: num(b.minSeatStressMpa, "MPa", 3),
+    },
+    { label: "Am against Ab (Appendix 2)", before: amAb(a), after: amAb(b) },
+    { label: "Largest pitch", before: num(a.worstPitchMm, "mm"), after: num(b.worstPitchMm, "mm") },
+    {
+      label: "Failing rules",
+      before: a.failingRules === null ? "—" : String(a.failingRules),
+      after: b.failingRules === null ? "—" : String(b.failingRules),
+    },
+  ];
+  const th = "py-1 pr-3 text-left text-micro font-semibold text-ink-500";
+  const td = "border-t border-ink-100 py-1 pr-3 align-top";
+  return (
+    <section aria-labelledby="key-results-heading">
+      <h2 id="key-results-heading" className="text-lead font-semibold">
+        Key results
+      </h2>
+      <table className="mt-2 w-full text-table" aria-label="Key results">
+        <thead>
+          <tr>
+            <th className={th}>Result</th>
+            <th className={th}>Revision {comparison.from.number}</th>
+            <th className={th}>Revision {comparison.to.number}</th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.label}>
+              <td className={td}>{r.label}</td>
+              <td className={`${td} num`}>{r.before}</td>
+              <td className={`${td} num ${r.before !== r.after ? "font-semibold" : ""}`}>{r.after}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </section>
+  );
+}
 const mm = (v: number | null): string =>
   v === null ? "—" : `${v >= 0 ? "+" : ""}${Number(v.toFixed(3))} mm`;
 
 /** Revision against revision: changed inputs, moved bolts, checks whose status changed. */
-export function RevisionComparison({ comparison }: { comparison: RevisionComparisonDto }) {
+export function RevisionComparison({
+  comparison,
+  drawing,
+  inputs,
+}: {
+  comparison: RevisionComparisonDto;
+  /** The two drawings overlaid and the changed inputs in the form's words (the editor draws both). */
+  drawing: ReactNode;
+  inputs: ReactNode;
+}) {
   const { from, to } = comparison;
+  const changedRules = groupCheckChanges(comparison.checkChanges);
   const th = "py-1 pr-3 text-left text-micro font-semibold text-ink-500";
   const td = "border-t border-ink-100 py-1 pr-3 align-top";
   return (
@@ -52,40 +126,18 @@ export function RevisionComparison({ comparison }: { comparison: RevisionCompari
         ({STATUS_LABELS[to.status]})
       </p>
 
-      <section aria-labelledby="inputs-heading">
-        <h2 id="inputs-heading" className="text-lead font-semibold">
-          Inputs that changed ({comparison.fieldChanges.length})
-        </h2>
-        {comparison.fieldChanges.length === 0 ? (
-          <p className="text-body text-ink-500">No input changed.</p>
-        ) : (
-          <div className="max-w-full overflow-x-auto">
-            <table className="mt-2 w-full text-table" aria-label="Inputs that changed">
-              <thead>
-                <tr>
-                  <th className={th}>Field</th>
-                  <th className={th}>Before</th>
-                  <th className={th}>After</th>
-                </tr>
-              </thead>
-              <tbody>
-                {comparison.fieldChanges.map((c) => (
-                  <tr key={c.path}>
-                    <td className={`${td} num`}>{c.path}</td>
-                    <td className={`${td} num break-all`}>{show(c.before)}</td>
-                    <td className={`${td} num break-all`}>{show(c.after)}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
-      </section>
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,640px)_minmax(0,1fr)]">
+        <div className="min-w-0">{drawing}</div>
+        <div className="flex min-w-0 flex-col gap-6">
+          <KeyResultsTable comparison={comparison} />
+          {inputs}
+        </div>
+      </div>
 
-      <section aria-labelledby="bolts-heading">
-        <h2 id="bolts-heading" className="text-lead font-semibold">
-          Bolts moved ({comparison.boltMoves.length})
-        </h2>
+      <details aria-labelledby="bolts-heading">
+        <summary id="bolts-heading" className="cursor-pointer text-lead font-semibold">
+          Bolt by bolt ({comparison.boltMoves.length} moved, added or removed)
+        </summary>
         {comparison.boltMoves.length === 0 ? (
           <p className="text-body text-ink-500">No bolt moved.</p>
         ) : (
@@ -114,29 +166,30 @@ export function RevisionComparison({ comparison }: { comparison: RevisionCompari
             </table>
           </div>
         )}
-      </section>
+      </details>
 
       <section aria-labelledby="checks-changed-heading">
         <h2 id="checks-changed-heading" className="text-lead font-semibold">
-          Checks whose status changed ({comparison.checkChanges.length})
+          Rules whose status changed ({changedRules.length})
         </h2>
-        {comparison.checkChanges.length === 0 ? (
+        {changedRules.length === 0 ? (
           <p className="text-body text-ink-500">Every check kept its status.</p>
         ) : (
           <div className="max-w-full overflow-x-auto">
-            <table className="mt-2 w-full text-table" aria-label="Checks whose status changed">
+            <table className="mt-2 w-full text-table" aria-label="Rules whose status changed">
               <thead>
                 <tr>
-                  <th className={th}>Check</th>
+                  <th className={th}>Rule</th>
                   <th className={th}>Before</th>
                   <th className={th}>After</th>
                 </tr>
               </thead>
               <tbody>
-                {comparison.checkChanges.map((c) => (
-                  <tr key={c.checkId}>
+                {changedRules.map((c) => (
+                  <tr key={c.key}>
                     <td className={td}>
-                      {c.title} <span className="text-micro text-ink-400">{c.checkId}</span>
+                      {c.title}
+                      {c.count > 1 && <span className="text-micro text-ink-500"> ({c.count} checks)</span>}
                     </td>
                     <td className={td}>{c.before ? CHECK_STATUS_LABELS[c.before] : "absent"}</td>
                     <td className={td}>{c.after ? CHECK_STATUS_LABELS[c.after] : "absent"}</td>

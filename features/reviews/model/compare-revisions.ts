@@ -1,5 +1,6 @@
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getBoltPoints } from "@/features/analysis/core/geometry";
+import { groupByRule } from "@/features/analysis/rule-groups";
 import { readChecks, type CheckStatus } from "./review-checks";
 
 // Side-by-side comparison of two revisions: inputs that changed (a deep diff by field path),
@@ -114,4 +115,40 @@ export function listCheckChanges(beforeResult: unknown, afterResult: unknown): C
       changes.push({ checkId: id, title: (b.get(id) ?? a.get(id))!.title, before, after });
   }
   return changes;
+}
+
+/** The results a reviewer weighs first, read from a stored result (null where it has none). */
+export interface KeyResults {
+  minSeatStressMpa: number | null;
+  seatingMpa: number | null;
+  /** ASME VIII-1 Appendix 2: required bolt area Am against the bolts' root area Ab, mm². */
+  requiredAreaMm2: number | null;
+  actualRootAreaMm2: number | null;
+  worstPitchMm: number | null;
+  failingRules: number | null;
+}
+
+const finite = (v: unknown): number | null => (typeof v === "number" && Number.isFinite(v) ? v : null);
+
+export function readKeyResults(result: unknown): KeyResults {
+  const r = (result ?? {}) as {
+    gasketStress?: { minMpa?: unknown; seatingMpa?: unknown };
+    asmeAppendix2?: { requiredAreaMm2?: unknown; actualRootAreaMm2?: unknown };
+    bolts?: { pitchToNextMm?: unknown }[];
+    checks?: unknown;
+  };
+  const pitches = Array.isArray(r.bolts)
+    ? r.bolts.map((b) => finite(b?.pitchToNextMm)).filter((p): p is number => p !== null)
+    : [];
+  const checks = readChecks(result);
+  return {
+    minSeatStressMpa: finite(r.gasketStress?.minMpa),
+    seatingMpa: finite(r.gasketStress?.seatingMpa),
+    requiredAreaMm2: finite(r.asmeAppendix2?.requiredAreaMm2),
+    actualRootAreaMm2: finite(r.asmeAppendix2?.actualRootAreaMm2),
+    worstPitchMm: pitches.length > 0 ? Math.max(...pitches) : null,
+    failingRules: Array.isArray(r.checks)
+      ? groupByRule(checks).filter((row) => row.status === "fail").length
+      : null,
+  };
 }

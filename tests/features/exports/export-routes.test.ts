@@ -116,7 +116,7 @@ describe("export routes", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
     expect(res.headers.get("content-disposition")).toBe(
-      'attachment; filename="e-2107-inlet-nozzle-n1-nps-6-class-150-rf-rev1-spacing-sheet.pdf"',
+      `attachment; filename="e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-spacing-sheet.pdf"`,
     );
     const pdf = Buffer.from(await res.arrayBuffer());
     const text = pdfToText(pdf);
@@ -138,7 +138,7 @@ describe("export routes", () => {
     const csv = await csvGet(appRequest(url(smallId, "holes.csv"), { cookie }), ctx(smallId));
     expect(csv.status).toBe(200);
     expect(csv.headers.get("content-disposition")).toContain(
-      "e-2107-inlet-nozzle-n1-nps-6-class-150-rf-rev1-hole-list.csv",
+      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-hole-list.csv`,
     );
     const rows = parse(await csv.text(), { columns: true }) as Record<string, string>[];
     expect(rows).toHaveLength(8);
@@ -146,7 +146,7 @@ describe("export routes", () => {
     const dxf = await dxfGet(appRequest(url(smallId, "drilling.dxf"), { cookie }), ctx(smallId));
     expect(dxf.status).toBe(200);
     expect(dxf.headers.get("content-disposition")).toContain(
-      "e-2107-inlet-nozzle-n1-nps-6-class-150-rf-rev1-drilling-template.dxf",
+      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-drilling-template.dxf`,
     );
     const parsed = new DxfParser().parseSync(await dxf.text());
     expect((parsed!.header as Record<string, unknown>).$INSUNITS).toBe(1);
@@ -225,7 +225,7 @@ describe("export routes", () => {
     const file = await jobGet(appRequest(status.downloadUrl!, { cookie }), jobCtx);
     expect(file.status).toBe(200);
     expect(file.headers.get("content-disposition")).toBe(
-      'attachment; filename="e-3301-girth-flange-96-bolts-rev1-spacing-sheet.pdf"',
+      `attachment; filename="e-3301-girth-flange-96-bolts-${bigId.slice(0, 8)}-rev1-spacing-sheet.pdf"`,
     );
     const text = pdfToText(Buffer.from(await file.arrayBuffer()));
     expect(text).toContain("NOT APPROVED");

@@ -89,27 +89,37 @@ describe.each(cases)("shop files of the %s", (_label, design) => {
 });
 
 describe("export file names", () => {
-  it("use the equipment tag and the design name, with the revision and the kind", () => {
-    expect(exportFileName({ equipmentTag: "E-2107", designName: "Channel cover" }, 3, "spacing-sheet")).toBe(
-      "e-2107-channel-cover-rev3-spacing-sheet.pdf",
-    );
-    // Two designs of one tag get two names; a name that starts with the tag does not repeat it.
+  const ID = "3f2a9c1e-5b7d-4c11-9e0a-2b6f8d4c7a10";
+  const OTHER = "8c01d2e3-0000-4000-8000-000000000001";
+  it("use the equipment tag, the design name and the start of the design id, with the revision and the kind", () => {
     expect(
-      exportFileName({ equipmentTag: "E-2107", designName: "E-2107 inlet nozzle N1" }, 1, "hole-list"),
-    ).toBe("e-2107-inlet-nozzle-n1-rev1-hole-list.csv");
+      exportFileName(
+        { equipmentTag: "E-2107", designName: "Channel cover", designId: ID },
+        3,
+        "spacing-sheet",
+      ),
+    ).toBe("e-2107-channel-cover-3f2a9c1e-rev3-spacing-sheet.pdf");
+    // A name that starts with the tag does not repeat it.
     expect(
-      exportFileName({ equipmentTag: "E-2107", designName: "E-2107 channel cover" }, 1, "hole-list"),
-    ).not.toBe(
-      exportFileName({ equipmentTag: "E-2107", designName: "E-2107 inlet nozzle N1" }, 1, "hole-list"),
+      exportFileName(
+        { equipmentTag: "E-2107", designName: "E-2107 inlet nozzle N1", designId: ID },
+        1,
+        "hole-list",
+      ),
+    ).toBe("e-2107-inlet-nozzle-n1-3f2a9c1e-rev1-hole-list.csv");
+    // Two designs of one tag and even of one name get two names.
+    const same = { equipmentTag: "E-2107", designName: "E-2107 channel cover" };
+    expect(exportFileName({ ...same, designId: ID }, 1, "hole-list")).not.toBe(
+      exportFileName({ ...same, designId: OTHER }, 1, "hole-list"),
     );
-    expect(exportFileName({ equipmentTag: " ", designName: "Manway M1 / north" }, 12, "hole-list")).toBe(
-      "manway-m1-north-rev12-hole-list.csv",
-    );
-    expect(exportFileName({ equipmentTag: "", designName: "Flänge ½" }, 1, "drilling-template")).toBe(
-      "flange-1-2-rev1-drilling-template.dxf",
-    );
-    expect(exportFileName({ equipmentTag: "", designName: "Ø" }, 2, "hole-list")).toBe(
-      "design-rev2-hole-list.csv",
+    expect(
+      exportFileName({ equipmentTag: " ", designName: "Manway M1 / north", designId: ID }, 12, "hole-list"),
+    ).toBe("manway-m1-north-3f2a9c1e-rev12-hole-list.csv");
+    expect(
+      exportFileName({ equipmentTag: "", designName: "Flänge ½", designId: ID }, 1, "drilling-template"),
+    ).toBe("flange-1-2-3f2a9c1e-rev1-drilling-template.dxf");
+    expect(exportFileName({ equipmentTag: "", designName: "Ø", designId: ID }, 2, "hole-list")).toBe(
+      "design-3f2a9c1e-rev2-hole-list.csv",
     );
   });
 });

@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { getDb } from "@/db/index";
+import { RevisionInputChanges } from "@/features/editor/components/revision-input-changes";
+import { RevisionOverlay } from "@/features/editor/components/revision-overlay";
 import { RevisionComparison } from "@/features/reviews/components/revision-comparison";
 import { compareRevisions, listRevisionSummaries } from "@/features/reviews/queries";
 import { CautionPanel } from "@/features/ui/caution-panel";
@@ -33,7 +35,20 @@ export default async function CompareRevisionsPage(props: {
         <p className="text-table uppercase tracking-wider text-brass-600">Revision comparison</p>
         <h1 className="mt-1 text-display font-semibold">{comparison.designName}</h1>
       </header>
-      <RevisionComparison comparison={comparison} />
+      <RevisionComparison
+        comparison={comparison}
+        drawing={
+          <RevisionOverlay
+            before={comparison.from.document}
+            after={comparison.to.document}
+            labels={{
+              before: `Revision ${comparison.from.number}`,
+              after: `Revision ${comparison.to.number}`,
+            }}
+          />
+        }
+        inputs={<RevisionInputChanges before={comparison.from.document} after={comparison.to.document} />}
+      />
       <CautionPanel compact />
     </div>
   );
