@@ -1,12 +1,11 @@
 import type { JointDesign } from "@/features/analysis/core/design";
+import { BeforeAfterTable } from "@/features/ui/before-after-table";
 import { describeInputChanges, summarisePattern } from "../model/revision-delta";
 
 /** What happened to the pattern, in sentences, and the changed inputs under the form's labels. */
 export function RevisionInputChanges({ before, after }: { before: JointDesign; after: JointDesign }) {
   const pattern = summarisePattern(before, after);
   const inputs = describeInputChanges(before, after);
-  const th = "py-1 pr-3 text-left text-micro font-semibold text-ink-500";
-  const td = "border-t border-ink-100 py-1 pr-3 align-top";
   return (
     <div className="flex flex-col gap-4">
       <section aria-labelledby="pattern-heading">
@@ -30,26 +29,11 @@ export function RevisionInputChanges({ before, after }: { before: JointDesign; a
         {inputs.length === 0 ? (
           <p className="text-body text-ink-500">No other input changed.</p>
         ) : (
-          <div className="max-w-full overflow-x-auto">
-            <table className="mt-2 w-full text-table" aria-label="Inputs that changed">
-              <thead>
-                <tr>
-                  <th className={th}>Input</th>
-                  <th className={th}>Before</th>
-                  <th className={th}>After</th>
-                </tr>
-              </thead>
-              <tbody>
-                {inputs.map((c) => (
-                  <tr key={c.key}>
-                    <td className={td}>{c.label}</td>
-                    <td className={`${td} num break-words`}>{c.before}</td>
-                    <td className={`${td} num break-words`}>{c.after}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <BeforeAfterTable
+            label="Inputs that changed"
+            headers={["Input", "Before", "After"]}
+            rows={inputs.map((c) => ({ key: c.key, label: c.label, before: c.before, after: c.after }))}
+          />
         )}
       </section>
     </div>

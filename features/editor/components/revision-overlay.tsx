@@ -144,18 +144,8 @@ export function RevisionOverlay({
         </g>
       </svg>
       <figcaption className="flex flex-wrap gap-4 text-micro text-ink-600">
-        <span>
-          <svg width="28" height="8" aria-hidden className="mr-1 inline">
-            <line x1="0" y1="4" x2="28" y2="4" stroke={ghost} strokeWidth="2" strokeDasharray="6 4" />
-          </svg>
-          {labels.before}
-        </span>
-        <span>
-          <svg width="28" height="8" aria-hidden className="mr-1 inline">
-            <line x1="0" y1="4" x2="28" y2="4" stroke={solid} strokeWidth="2" />
-          </svg>
-          {labels.after}
-        </span>
+        <Swatch stroke={ghost} dashed label={labels.before} />
+        <Swatch stroke={solid} label={labels.after} />
         <span>
           <svg width="28" height="8" aria-hidden className="mr-1 inline">
             <line x1="0" y1="4" x2="24" y2="4" stroke={accent} strokeWidth="2" />
@@ -167,5 +157,24 @@ export function RevisionOverlay({
         <span className="text-verdict-fail">✕ bolt removed</span>
       </figcaption>
     </figure>
+  );
+}
+
+function Swatch({ stroke, dashed, label }: { stroke: string; dashed?: boolean; label: string }) {
+  return (
+    <span>
+      <svg width="28" height="8" aria-hidden className="mr-1 inline">
+        <line
+          x1="0"
+          y1="4"
+          x2="28"
+          y2="4"
+          stroke={stroke}
+          strokeWidth="2"
+          strokeDasharray={dashed ? "6 4" : undefined}
+        />
+      </svg>
+      {label}
+    </span>
   );
 }

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { ruleOf } from "@/features/analysis/rule-groups";
+import { BeforeAfterTable } from "@/features/ui/before-after-table";
 import type { CheckChange, KeyResults } from "../model/compare-revisions";
 import { CHECK_STATUS_LABELS, type CheckStatus } from "../model/review-checks";
 import { STATUS_LABELS } from "../model/review-states";
@@ -46,31 +47,16 @@ function KeyResultsTable({ comparison }: { comparison: RevisionComparisonDto }) 
       after: b.failingRules === null ? "—" : String(b.failingRules),
     },
   ];
-  const th = "py-1 pr-3 text-left text-micro font-semibold text-ink-500";
-  const td = "border-t border-ink-100 py-1 pr-3 align-top";
   return (
     <section aria-labelledby="key-results-heading">
       <h2 id="key-results-heading" className="text-lead font-semibold">
         Key results
       </h2>
-      <table className="mt-2 w-full text-table" aria-label="Key results">
-        <thead>
-          <tr>
-            <th className={th}>Result</th>
-            <th className={th}>Revision {comparison.from.number}</th>
-            <th className={th}>Revision {comparison.to.number}</th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((r) => (
-            <tr key={r.label}>
-              <td className={td}>{r.label}</td>
-              <td className={`${td} num`}>{r.before}</td>
-              <td className={`${td} num ${r.before !== r.after ? "font-semibold" : ""}`}>{r.after}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <BeforeAfterTable
+        label="Key results"
+        headers={["Result", `Revision ${comparison.from.number}`, `Revision ${comparison.to.number}`]}
+        rows={rows.map((r) => ({ key: r.label, ...r }))}
+      />
     </section>
   );
 }
@@ -175,29 +161,21 @@ export function RevisionComparison({
         {changedRules.length === 0 ? (
           <p className="text-body text-ink-500">Every check kept its status.</p>
         ) : (
-          <div className="max-w-full overflow-x-auto">
-            <table className="mt-2 w-full text-table" aria-label="Rules whose status changed">
-              <thead>
-                <tr>
-                  <th className={th}>Rule</th>
-                  <th className={th}>Before</th>
-                  <th className={th}>After</th>
-                </tr>
-              </thead>
-              <tbody>
-                {changedRules.map((c) => (
-                  <tr key={c.key}>
-                    <td className={td}>
-                      {c.title}
-                      {c.count > 1 && <span className="text-micro text-ink-500"> ({c.count} checks)</span>}
-                    </td>
-                    <td className={td}>{c.before ? CHECK_STATUS_LABELS[c.before] : "absent"}</td>
-                    <td className={td}>{c.after ? CHECK_STATUS_LABELS[c.after] : "absent"}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <BeforeAfterTable
+            label="Rules whose status changed"
+            headers={["Rule", "Before", "After"]}
+            rows={changedRules.map((c) => ({
+              key: c.key,
+              label: (
+                <>
+                  {c.title}
+                  {c.count > 1 && <span className="text-micro text-ink-500"> ({c.count} checks)</span>}
+                </>
+              ),
+              before: c.before ? CHECK_STATUS_LABELS[c.before] : "absent",
+              after: c.after ? CHECK_STATUS_LABELS[c.after] : "absent",
+            }))}
+          />
         )}
       </section>
     </div>
