@@ -33,14 +33,19 @@ ensure_node() {
     || die "Node.js 20.9 or newer is required (found $(node -v))"
 }
 
-# Installs npm dependencies from the lock file when node_modules is missing or older than it.
+# Installs npm dependencies from the lock file when node_modules is missing or was installed from another one.
 ensure_node_modules() {
   cd "$PROJECT_ROOT"
-  local stamp="node_modules/.package-lock.json"
-  if [ ! -f "$stamp" ] || [ package-lock.json -nt "$stamp" ]; then
+  # The stamp holds the digest of the lock file the tree was installed from: a content check, so
+  # a fresh checkout or worktree (whose lock file is newer than a copied node_modules) is not
+  # reinstalled for nothing, and an edited lock file always is.
+  local stamp="node_modules/.sealpitch-lock.sha256" want
+  want=$(sha256sum package-lock.json | cut -d' ' -f1)
+  if [ ! -f "$stamp" ] || [ "$(cat "$stamp")" != "$want" ]; then
     say "installing dependencies (npm ci)"
     npm ci --no-audit --no-fund --loglevel=error >/tmp/sealpitch-npm-ci.log 2>&1 \
       || { tail -20 /tmp/sealpitch-npm-ci.log >&2; die "npm ci failed (log: /tmp/sealpitch-npm-ci.log)"; }
+    echo "$want" >"$stamp"
   fi
 }
 
