@@ -175,8 +175,29 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await expect(pitchBox).toHaveAccessibleName(/Covers 1[0-2] pairs that (warn|fail|warn or fail)/);
   for (let i = 0; i < count; i++)
     await justifications.nth(i).fill("Accepted: pitch checked against the gasket maker's data sheet.");
+  // The M20 nut comes from a catalogue row taken from memory: the form lists every such value beside
+  // an acknowledgement, and approving without ticking it is refused with the server's message.
+  const unverified = approveForm.getByRole("list", { name: "Unverified table values" });
+  await expect(unverified).toBeVisible();
+  await expect(unverified).toContainText("Nut across flats (M20)");
+  await expect(unverified).toContainText("from memory; verify");
+  const acknowledge = approveForm.getByRole("checkbox", { name: /I have read these \d+ unverified values/ });
+  await expect(acknowledge).toBeVisible();
+  await expect(acknowledge).not.toBeChecked();
+  await approveForm.getByRole("button", { name: "Approve revision" }).click();
+  await expect(approveForm.getByRole("status")).toContainText(/This result uses \d+ unverified table values/);
+  await expect(approveForm).toContainText("Tick this to acknowledge the unverified values listed.");
+  await expect(arlo.getByTestId("revision-status")).toHaveText("In review");
+  // A refused form keeps what was typed (the action's refusal does not reset it): tick and approve.
+  for (let i = 0; i < count; i++)
+    if ((await justifications.nth(i).inputValue()) === "")
+      await justifications.nth(i).fill("Accepted: pitch checked against the gasket maker's data sheet.");
+  await acknowledge.check();
   await approveForm.getByRole("button", { name: "Approve revision" }).click();
   await expect(arlo.getByTestId("revision-status")).toHaveText("Approved");
+  await expect(arlo.getByRole("list", { name: "Decisions" })).toContainText(
+    /acknowledging \d+ unverified table values/,
+  );
   if (count > 0)
     await expect(arlo.getByTestId("justification").first()).toContainText("Accepted: pitch checked");
   await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name, { timeout: 15_000 });
@@ -231,6 +252,7 @@ test("an approved revision starts the next one, and the comparison shows what ch
   const justifications = approveForm.getByRole("textbox", { name: /^Justification for/ });
   for (let i = 0; i < (await justifications.count()); i++)
     await justifications.nth(i).fill("Accepted for the hydrotest only.");
+  await approveForm.getByRole("checkbox", { name: /unverified values/ }).check();
   await approveForm.getByRole("button", { name: "Approve revision" }).click();
   await expect(arlo.getByTestId("revision-status")).toHaveText("Approved");
 

@@ -130,6 +130,7 @@ export async function generateOrganisation(
         ]),
       );
       const approved = await approveRevision(db, approver, {
+        acknowledgeUnverifiedValues: true,
         designId,
         number: 1,
         comment: "",

@@ -32,6 +32,11 @@ export interface RevisionDecisionsTable {
   comment: Generated<string>;
   /** The snapshot hash the decision was made on. */
   content_hash: string;
+  /**
+   * The unverified values (features/analysis/unverified-values.ts) the approver acknowledged, as a
+   * JSON array (migrations/2026_12_03_071500_decision_unverified_values.ts); [] for a return.
+   */
+  acknowledged_unverified: ColumnType<unknown, string | undefined, never>;
   created_at: CreatedAt;
 }
 

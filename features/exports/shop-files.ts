@@ -2,6 +2,7 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { buildBoltRows } from "./model/bolt-rows";
 import { buildDrillingTemplateDxf } from "./model/drilling-template";
 import { buildHoleListCsv } from "./model/hole-list";
+import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 
 type StoredBolts = {
   bolts?: { id: string; xMm: number; yMm: number }[];
@@ -16,10 +17,14 @@ function rowsFor(document: JointDesign, result: unknown) {
 
 /** The hole list of a stored revision (positions as stored in its result, order from its plan). */
 export function holeListFor(document: JointDesign, result: unknown): string {
-  return buildHoleListCsv(document, rowsFor(document, result));
+  return buildHoleListCsv(document, rowsFor(document, result), {
+    unverified: listUnverifiedValues(document, result).length > 0,
+  });
 }
 
 /** The drilling template of a stored revision. */
 export function drillingTemplateFor(document: JointDesign, result: unknown): string {
-  return buildDrillingTemplateDxf(document, rowsFor(document, result));
+  return buildDrillingTemplateDxf(document, rowsFor(document, result), {
+    unverified: listUnverifiedValues(document, result).length > 0,
+  });
 }

@@ -1,4 +1,5 @@
 import "server-only";
+import { listUnverifiedValues, type UnverifiedValue } from "@/features/analysis/unverified-values";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
 import type { JointDesign } from "@/features/analysis/core/design";
@@ -112,7 +113,7 @@ export async function listDecisions(
   const rows = await db
     .selectFrom("revision_decisions as d")
     .innerJoin("users as u", "u.id", "d.actor_id")
-    .select(["d.kind", "d.comment", "d.created_at", "u.display_name"])
+    .select(["d.kind", "d.comment", "d.acknowledged_unverified", "d.created_at", "u.display_name"])
     .where("d.organization_id", "=", organizationId)
     .where("d.revision_id", "=", revisionId)
     .orderBy("d.created_at")
@@ -121,6 +122,9 @@ export async function listDecisions(
     kind: r.kind,
     actorName: r.display_name,
     comment: r.comment,
+    acknowledgedUnverified: Array.isArray(r.acknowledged_unverified)
+      ? (r.acknowledged_unverified as UnverifiedValue[])
+      : [],
     at: isoString(r.created_at),
   }));
 }
@@ -225,6 +229,7 @@ export async function getRevisionReview(
     coreVersion: row.core_version,
     integrity: integrityOf(row),
     checks: readChecks(row.result),
+    unverifiedValues: listUnverifiedValues(row.document as JointDesign, row.result),
     createdByName: row.creator_name,
     lastEditedByName: row.editor_name,
     submittedByName: row.submitter_name ?? null,

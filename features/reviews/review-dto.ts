@@ -1,6 +1,7 @@
 // DTOs of the review feature (types only: safe to import from client components).
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { SnapshotIntegrity } from "@/features/analysis/content-hash";
+import type { UnverifiedValue } from "@/features/analysis/unverified-values";
 import type { ReviewStatus } from "./model/review-states";
 import type { ReviewCheck } from "./model/review-checks";
 import type { BoltMove, CheckChange, FieldChange, KeyResults } from "./model/compare-revisions";
@@ -27,6 +28,8 @@ export interface DecisionDto {
   kind: "approved" | "returned";
   actorName: string;
   comment: string;
+  /** The unverified values the approver acknowledged (empty for a return and for older approvals). */
+  acknowledgedUnverified: UnverifiedValue[];
   at: string;
 }
 
@@ -53,6 +56,8 @@ export interface RevisionReviewDto {
   coreVersion: string | null;
   integrity: SnapshotIntegrity;
   checks: ReviewCheck[];
+  /** Table values from memory the stored result depends on (features/analysis/unverified-values.ts). */
+  unverifiedValues: UnverifiedValue[];
   createdByName: string;
   lastEditedByName: string;
   submittedByName: string | null;

@@ -33,6 +33,14 @@ export const approveRevisionSchema = z.object({
       multilineText().trim().max(5000, "Keep each justification under 5000 characters."),
     )
     .default({}),
+  /**
+   * The approver has read the result's unverified values (table values from memory) and accepts them;
+   * required when there are any. The form's checkbox sends "on", the API `true`.
+   */
+  acknowledgeUnverifiedValues: z
+    .union([z.boolean(), z.literal("on"), z.literal("true"), z.literal("")])
+    .default(false)
+    .transform((v) => v === true || v === "on" || v === "true"),
 });
 export type ApproveRevisionInput = z.infer<typeof approveRevisionSchema>;
 

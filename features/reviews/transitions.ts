@@ -27,6 +27,7 @@ import type {
   SubmitRevisionInput,
 } from "./schema";
 import { isoString } from "@/db/dates";
+import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 
 // Every review transition runs in ONE transaction that first takes the revision's row lock
 // (select … for update). A second approver acting at the same moment waits for the lock, then
@@ -239,6 +240,21 @@ export async function approveRevision(
         fieldErrors,
       );
     }
+    // Table values taken from memory: the approver must have seen the list and said so. The list is
+    // recomputed here from the frozen snapshot (the one the hash above vouches for), never taken
+    // from the form, and stored with the decision.
+    const unverified = listUnverifiedValues(revision.document as JointDesign, revision.result);
+    if (unverified.length > 0 && !input.acknowledgeUnverifiedValues) {
+      return refused(
+        `This result uses ${unverified.length} unverified table value${unverified.length === 1 ? "" : "s"} (taken from memory, not checked against their tables): ${unverified
+          .slice(0, 4)
+          .map((v) => v.what)
+          .join(
+            "; ",
+          )}${unverified.length > 4 ? "; …" : ""}. Read the list and tick the acknowledgement before approving.`,
+        { acknowledgeUnverifiedValues: ["Tick this to acknowledge the unverified values listed."] },
+      );
+    }
     // One justification per rule, stored under the rule id (older approvals stored one per check).
     const needing = rulesNeedingJustification(checks);
     if (needing.length > 0) {
@@ -265,6 +281,7 @@ export async function approveRevision(
         actor_id: actor.userId,
         comment: input.comment,
         content_hash: integrity.storedHash,
+        acknowledged_unverified: JSON.stringify(unverified),
       })
       .execute();
     await trx
@@ -285,8 +302,14 @@ export async function approveRevision(
       revisionId: revision.id,
       actorId: actor.userId,
       kind: "approved",
-      detail:
+      detail: [
         needing.length > 0 ? `with ${needing.length} justified rule${needing.length === 1 ? "" : "s"}` : "",
+        unverified.length > 0
+          ? `${unverified.length} unverified table value${unverified.length === 1 ? "" : "s"} acknowledged`
+          : "",
+      ]
+        .filter(Boolean)
+        .join("; "),
     });
     return { ok: true, data: outcomeOf(revision, "approved", actor, input.comment) };
   });

@@ -4,6 +4,23 @@ import { getBoltPath, outlineToPolyline } from "@/features/analysis/core/geometr
 import { pathToPolyline } from "@/features/analysis/core/path";
 import type { BoltRow } from "./bolt-rows";
 import { lengthUnitFor } from "./length-unit";
+import { UNVERIFIED_MARK } from "@/features/analysis/unverified-values";
+
+/** Bounding box of an outline, mm. */
+export function outlineExtentMm(outline: Outline): {
+  minX: number;
+  minY: number;
+  maxX: number;
+  maxY: number;
+} {
+  const pts = outlineToPolyline(outline, 1);
+  return {
+    minX: Math.min(...pts.map((p) => p.x)),
+    minY: Math.min(...pts.map((p) => p.y)),
+    maxX: Math.max(...pts.map((p) => p.x)),
+    maxY: Math.max(...pts.map((p) => p.y)),
+  };
+}
 
 /** Layer names of the drilling template (our own; documented in DEVELOPERS.md). */
 export const DXF_LAYERS = {
@@ -14,6 +31,7 @@ export const DXF_LAYERS = {
   holes: "HOLES",
   centreMarks: "CENTRE-MARKS",
   labels: "LABELS",
+  title: "TITLE",
 } as const;
 
 // Circles stay true circles (exact for the CAD user); other outlines go out as fine polylines.
@@ -31,7 +49,11 @@ function drawOutline(d: Drawing, outline: Outline, k: (mm: number) => number): v
  * bolt path, one circle per hole at the hole diameter, a centre cross per hole, bolt numbers.
  * Coordinates in the design's length unit with $INSUNITS set to match (4 = mm, 1 = in).
  */
-export function buildDrillingTemplateDxf(design: JointDesign, rows: readonly BoltRow[]): string {
+export function buildDrillingTemplateDxf(
+  design: JointDesign,
+  rows: readonly BoltRow[],
+  options: { unverified?: boolean } = {},
+): string {
   const u = lengthUnitFor(design.units);
   const k = u.fromMm;
   const d = new Drawing();
@@ -43,6 +65,7 @@ export function buildDrillingTemplateDxf(design: JointDesign, rows: readonly Bol
   d.addLayer(DXF_LAYERS.holes, Drawing.ACI.RED, "CONTINUOUS");
   d.addLayer(DXF_LAYERS.centreMarks, Drawing.ACI.YELLOW, "CONTINUOUS");
   d.addLayer(DXF_LAYERS.labels, Drawing.ACI.WHITE, "CONTINUOUS");
+  d.addLayer(DXF_LAYERS.title, Drawing.ACI.WHITE, "CONTINUOUS");
 
   d.setActiveLayer(DXF_LAYERS.outline);
   drawOutline(d, design.outline, k);
@@ -91,5 +114,12 @@ export function buildDrillingTemplateDxf(design: JointDesign, rows: readonly Bol
   d.setActiveLayer(DXF_LAYERS.labels);
   for (const row of rows)
     d.drawText(k(row.xMm) + r * 1.1, k(row.yMm) + r * 1.1, r * 0.9, 0, String(row.number));
+  if (options.unverified) {
+    // Below the outline, on the TITLE layer: the template's title line names what remains to check.
+    const ext = outlineExtentMm(design.outline);
+    const h = k(Math.max(2.5, Math.min(6, (ext.maxX - ext.minX) / 60)));
+    d.setActiveLayer(DXF_LAYERS.title);
+    d.drawText(k(ext.minX), k(ext.minY) - 3 * h, h, 0, UNVERIFIED_MARK.toUpperCase());
+  }
   return d.toDxfString();
 }

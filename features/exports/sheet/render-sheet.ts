@@ -375,6 +375,7 @@ function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
       view.editions.map((e) => [e.what, e.source, e.edition, e.confidence]),
     );
   }
+  unverifiedValues(ctx);
   const integrity = ctx.input.revision.integrityNote;
   if (integrity) {
     doc
@@ -395,6 +396,25 @@ function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
       ctx.y += hh + 2;
     }
   }
+}
+
+/** The stored result's table values taken from memory (the list the approver acknowledged). */
+function unverifiedValues(ctx: SheetContext): void {
+  if (ctx.unverified.length === 0) return;
+  heading(
+    ctx,
+    "Unverified table values",
+    `${ctx.unverified.length}: taken from memory, check against the edition in hand`,
+  );
+  drawTable(
+    ctx,
+    [
+      { header: "Value", width: 2.4, wrap: true },
+      { header: "As used", width: 2.4, wrap: true },
+      { header: "From", width: 3, wrap: true },
+    ],
+    ctx.unverified.map((v) => [v.what, v.value, v.source]),
+  );
 }
 
 /**

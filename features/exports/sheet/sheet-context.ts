@@ -2,6 +2,7 @@ import "server-only";
 import type PDFDocument from "pdfkit";
 import type { SheetUnits } from "./format";
 import type { SheetInput } from "./sheet-input";
+import { listUnverifiedValues, type UnverifiedValue } from "@/features/analysis/unverified-values";
 
 // Colours of the product's tokens (tailwind.config.ts), so the sheet reads as Sealpitch's own.
 export const C = {
@@ -44,6 +45,8 @@ export interface SheetContext {
   doc: PDFKit.PDFDocument;
   input: SheetInput;
   u: SheetUnits;
+  /** The stored result's unverified values (table values from memory), read once per sheet. */
+  unverified: UnverifiedValue[];
   pageW: number;
   pageH: number;
   /** Where content may go on every page (inside the frame, above the title block). */
@@ -67,6 +70,7 @@ export function createContext(doc: PDFKit.PDFDocument, input: SheetInput, u: She
     doc,
     input,
     u,
+    unverified: listUnverifiedValues(input.document, input.result),
     pageW,
     pageH,
     content,

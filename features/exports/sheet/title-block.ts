@@ -1,4 +1,5 @@
 import "server-only";
+import { UNVERIFIED_MARK } from "@/features/analysis/unverified-values";
 import { plainText } from "./plain-text";
 import { C, MARGIN, TITLE_BLOCK_H, type SheetContext } from "./sheet-context";
 
@@ -83,19 +84,28 @@ export function drawTitleBlock(ctx: SheetContext, pageIndex: number, pageCount: 
     );
 
   const rest = w - brandW;
-  const cols1 = [0.34, 0.2, 0.12, 0.34];
+  const cols1 = [0.3, 0.16, 0.1, 0.44];
   const cols2 = [0.2, 0.2, 0.12, 0.34, 0.14];
   const row1: [string, string, object?][] = [
     ["Design", design.name],
     ["Equipment tag", design.equipmentTag || "—"],
     ["Revision", String(revision.number)],
-    // Also printed in words in the strip: text extractors drop the diagonal mark.
+    // Also printed in words in the strip: text extractors drop the diagonal mark. Table values
+    // taken from memory are named here too, on every page, while any remain in the result.
     [
       "Status",
-      revision.status === "approved"
-        ? STATUS_TEXT.approved
-        : `${STATUS_TEXT[revision.status]} · NOT APPROVED`,
-      { color: revision.status === "approved" ? C.pass : C.fail },
+      [
+        revision.status === "approved"
+          ? STATUS_TEXT.approved
+          : `${STATUS_TEXT[revision.status]} · NOT APPROVED`,
+        ctx.unverified.length > 0 ? UNVERIFIED_MARK : null,
+      ]
+        .filter(Boolean)
+        .join(" · "),
+      {
+        color: ctx.unverified.length > 0 ? C.warn : revision.status === "approved" ? C.pass : C.fail,
+        size: ctx.unverified.length > 0 ? 6.8 : undefined,
+      },
     ],
   ];
   const row2: [string, string, object?][] = [

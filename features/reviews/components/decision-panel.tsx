@@ -6,7 +6,9 @@ import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { coverageText, rulesNeedingJustification } from "@/features/analysis/rule-groups";
+import type { UnverifiedValue } from "@/features/analysis/unverified-values";
 import type { ReviewCheck } from "../model/review-checks";
+import { UnverifiedValueList } from "./unverified-value-list";
 import type { RevisionPermissions } from "../review-dto";
 import type { ReviewStatus } from "../model/review-states";
 
@@ -46,6 +48,7 @@ export function DecisionPanel(props: {
   version: number;
   status: ReviewStatus;
   checks: ReviewCheck[];
+  unverifiedValues: UnverifiedValue[];
   permissions: RevisionPermissions;
   independenceNote: string | null;
   actions: DecisionActions;
@@ -125,6 +128,31 @@ export function DecisionPanel(props: {
           ) : (
             <p className="text-table text-ink-700">Every check passes or does not apply.</p>
           )}
+          {props.unverifiedValues.length > 0 ? (
+            <fieldset className="flex flex-col gap-2" aria-describedby="unverified-note">
+              <legend className="text-table font-semibold text-ink-800">
+                {props.unverifiedValues.length} unverified table value
+                {props.unverifiedValues.length === 1 ? "" : "s"} in this result
+              </legend>
+              <p id="unverified-note" className="text-micro text-ink-500">
+                Taken from memory and not checked against their tables. Check each against the edition in hand
+                (or enter the maker&apos;s or the code&apos;s value and resubmit) before you approve.
+              </p>
+              <UnverifiedValueList values={props.unverifiedValues} label="Unverified table values" />
+              <label className="flex items-start gap-2 text-table text-ink-800">
+                <input type="checkbox" name="acknowledgeUnverifiedValues" value="on" className="mt-0.5" />
+                <span>
+                  I have read these {props.unverifiedValues.length} unverified values and accept them for this
+                  approval
+                </span>
+              </label>
+              {fieldError(approveState, "acknowledgeUnverifiedValues") ? (
+                <span className="text-table text-verdict-fail">
+                  {fieldError(approveState, "acknowledgeUnverifiedValues")}
+                </span>
+              ) : null}
+            </fieldset>
+          ) : null}
           <label className="text-table text-ink-700">
             Approval note (optional)
             <textarea name="comment" rows={2} maxLength={5000} className={fieldClass} />

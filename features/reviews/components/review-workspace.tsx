@@ -103,6 +103,7 @@ export function ReviewWorkspace(props: {
             version={review.version}
             status={review.status}
             checks={review.checks}
+            unverifiedValues={review.unverifiedValues}
             permissions={review.permissions}
             independenceNote={props.independenceNote}
             actions={props.actions}

@@ -4,6 +4,7 @@ import type { RevisionReviewDto } from "../review-dto";
 import { ExportLinks } from "./export-links";
 import { IntegrityNotice } from "./integrity-notice";
 import { StatusBadge } from "./status-badge";
+import { UnverifiedValueList } from "./unverified-value-list";
 import { formatUtcMinute } from "@/features/ui/format-when";
 
 const when = (iso: string | null) => (iso ? formatUtcMinute(iso) : "");
@@ -74,6 +75,18 @@ export function RevisionHeader({ review }: { review: RevisionReviewDto }) {
               <span className="font-medium">{d.actorName}</span>{" "}
               {d.kind === "approved" ? "approved" : "returned"} it {when(d.at)}
               {d.comment ? <>: “{d.comment}”</> : null}
+              {d.acknowledgedUnverified.length > 0 ? (
+                <details className="mt-1">
+                  <summary className="cursor-pointer text-ink-600">
+                    acknowledging {d.acknowledgedUnverified.length} unverified table value
+                    {d.acknowledgedUnverified.length === 1 ? "" : "s"}
+                  </summary>
+                  <UnverifiedValueList
+                    values={d.acknowledgedUnverified}
+                    label="Acknowledged unverified table values"
+                  />
+                </details>
+              ) : null}
             </li>
           ))}
         </ol>

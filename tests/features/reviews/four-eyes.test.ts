@@ -89,6 +89,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     const review = await getRevisionReview(db, org.lead, designId, 1);
     expect(review?.permissions).toMatchObject({ canApprove: false, canReturn: false });
     const approved = await approveRevision(db, org.lead, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
@@ -143,6 +144,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
 
     // An independent approver still can.
     const ok = await approveRevision(db, org.approver, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
@@ -156,6 +158,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     await submitRevision(db, org.designer, { designId, number: 1 });
     const first = await revisionRow(designId);
     await approveRevision(db, org.approver, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
@@ -225,6 +228,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     await submitRevision(db, org.designer, { designId, number: 1 });
     expect(
       await approveRevision(db, org.lead, {
+        acknowledgeUnverifiedValues: true,
         designId,
         number: 1,
         comment: "",

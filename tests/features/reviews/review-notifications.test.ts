@@ -67,6 +67,7 @@ describe("review notifications (fake SMTP)", () => {
       rulesNeedingJustification(readChecks(row.result)).map((r) => [r.rule, "accepted"]),
     );
     const approved = await approveRevision(db, org.approver2, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",

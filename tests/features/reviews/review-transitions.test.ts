@@ -96,6 +96,7 @@ describe("review transitions (real PostgreSQL)", () => {
     // One rule with many warning pairs needs one justification, not one per pair.
     expect(needing.some((r) => r.open.length > 1)).toBe(true);
     const bare = await approveRevision(db, org.approver, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
@@ -103,6 +104,7 @@ describe("review transitions (real PostgreSQL)", () => {
     });
     expect(bare).toMatchObject({ ok: false, message: expect.stringContaining("justification") });
     const partial = await approveRevision(db, org.approver, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
@@ -112,6 +114,7 @@ describe("review transitions (real PostgreSQL)", () => {
     expect(partial).toMatchObject({ ok: false });
     expect((await revisionRow(designId)).status).toBe("in_review");
     const approved = await approveRevision(db, org.approver, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "Seating margin fine.",
@@ -151,7 +154,13 @@ describe("review transitions (real PostgreSQL)", () => {
   it("refuses approving a draft, approving your own, the wrong role, and returning without being independent", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.lead.userId, "Own work");
     expect(
-      await approveRevision(db, org.approver, { designId, number: 1, comment: "", justifications: {} }),
+      await approveRevision(db, org.approver, {
+        acknowledgeUnverifiedValues: true,
+        designId,
+        number: 1,
+        comment: "",
+        justifications: {},
+      }),
     ).toMatchObject({ ok: false, message: expect.stringContaining("Draft") });
     expect(await submitRevision(db, org.approver, { designId, number: 1 })).toMatchObject({
       ok: false,
@@ -160,6 +169,7 @@ describe("review transitions (real PostgreSQL)", () => {
     expect(await submitRevision(db, org.lead, { designId, number: 1 })).toMatchObject({ ok: true });
     const row = await revisionRow(designId);
     const own = await approveRevision(db, org.lead, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
@@ -171,6 +181,7 @@ describe("review transitions (real PostgreSQL)", () => {
     });
     expect(
       await approveRevision(db, org.designer, {
+        acknowledgeUnverifiedValues: true,
         designId,
         number: 1,
         comment: "",
@@ -190,6 +201,7 @@ describe("review transitions (real PostgreSQL)", () => {
     try {
       expect(
         await approveRevision(db, other.approver, {
+          acknowledgeUnverifiedValues: true,
           designId,
           number: 1,
           comment: "",
@@ -216,8 +228,20 @@ describe("review transitions (real PostgreSQL)", () => {
     try {
       const justifications = justifyAll(row.result);
       const outcomes = await Promise.all([
-        approveRevision(a, org.approver, { designId, number: 1, comment: "first", justifications }),
-        approveRevision(b, org.approver2, { designId, number: 1, comment: "second", justifications }),
+        approveRevision(a, org.approver, {
+          acknowledgeUnverifiedValues: true,
+          designId,
+          number: 1,
+          comment: "first",
+          justifications,
+        }),
+        approveRevision(b, org.approver2, {
+          acknowledgeUnverifiedValues: true,
+          designId,
+          number: 1,
+          comment: "second",
+          justifications,
+        }),
       ]);
       expect(outcomes.filter((o) => o.ok)).toHaveLength(1);
       expect(outcomes.filter((o) => !o.ok)).toHaveLength(1);
@@ -241,6 +265,7 @@ describe("review transitions (real PostgreSQL)", () => {
     const before = await revisionRow(designId);
     expect(
       await approveRevision(db, org.approver, {
+        acknowledgeUnverifiedValues: true,
         designId,
         number: 1,
         comment: "",
@@ -297,6 +322,7 @@ describe("review transitions (real PostgreSQL)", () => {
       row.content_hash,
     );
     const refused = await approveRevision(db, org.approver, {
+      acknowledgeUnverifiedValues: true,
       designId,
       number: 1,
       comment: "",
