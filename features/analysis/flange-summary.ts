@@ -84,5 +84,30 @@ export function flangeSummaryLines(
     label: "Hydrostatic test pressure",
     value: `${h.enteredMpa === null ? "not entered" : `${formatStress(h.enteredMpa, units)} entered`}; suggestion ${h.suggestedMpa === null ? "—" : formatStress(h.suggestedMpa, units)} (${h.source})`,
   });
+  const tc = h.testCase;
+  if (tc) {
+    out.push({
+      label: "Test case: Wm1 at Pt / bolts at min preload",
+      value: `${formatForce(tc.wm1N, units)} / ${formatForce(tc.minPreloadTotalN, units)} (Ht ${formatForce(tc.hN, units)}, Hpt ${formatForce(tc.hpN, units)})`,
+    });
+    out.push({
+      label: "Test case: bolt stress at max preload (limit)",
+      value: `${s(tc.boltStressMpa)} (${s(tc.boltLimitMpa)})`,
+    });
+    if (tc.flange)
+      out.push({
+        label: "Test case: flange SH, SR, ST (0.9·Sy)",
+        value: `${s(tc.flange.shMpa)}, ${s(tc.flange.srMpa)}, ${s(tc.flange.stMpa)} (${s(tc.flange.limitMpa)}); Sy ${tc.flange.yieldSource}`,
+      });
+    else if (tc.flangeReason && f.appendix2)
+      out.push({ label: "Test case: flange stresses", value: tc.flangeReason });
+    if (tc.cover)
+      out.push({
+        label: "Test case: cover t required / actual",
+        value: `${L(tc.cover.requiredThicknessMm)} / ${L(tc.cover.actualThicknessMm)} (S ${s(tc.cover.allowableMpa)}; Sy ${tc.cover.yieldSource})`,
+      });
+    else if (tc.coverReason && f.cover) out.push({ label: "Test case: cover", value: tc.coverReason });
+  } else if (h.testCase === undefined && h.enteredMpa !== null)
+    out.push({ label: "Test case", value: "not in this result (computed by core 2.2.0 and later)" });
   return out;
 }

@@ -3,4 +3,4 @@
  * reproduced with the code that produced it. Bump the minor version when a result can change
  * for the same design; bump the major version when `JointDesign` or `JointAnalysis` change shape.
  */
-export const CORE_VERSION = "2.1.0";
+export const CORE_VERSION = "2.2.0";

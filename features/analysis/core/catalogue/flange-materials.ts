@@ -20,6 +20,9 @@ export interface FlangeMaterialRow extends Provenance {
   modulus: readonly (readonly [number, number])[];
   /** Mean coefficient of thermal expansion from 20 °C, 1/K [mem]. */
   expansionPerK: number;
+  /** Specified minimum yield strength at room temperature, MPa, and its source [mem]. */
+  yieldMpa: number;
+  yieldSource: string;
 }
 
 const fToC = (f: number) => ((f - 32) * 5) / 9;
@@ -100,6 +103,8 @@ export const FLANGE_MATERIALS: readonly FlangeMaterialRow[] = [
     allowable: S_CARBON_70,
     modulus: E_CARBON,
     expansionPerK: 11.7e-6,
+    yieldMpa: 250,
+    yieldSource: "ASTM A105 (SA-105) minimum yield 36 ksi = 250 MPa [mem]",
     ...IID,
   },
   {
@@ -109,6 +114,8 @@ export const FLANGE_MATERIALS: readonly FlangeMaterialRow[] = [
     allowable: S_316_LOWER,
     modulus: E_AUSTENITIC,
     expansionPerK: 16.0e-6,
+    yieldMpa: 205,
+    yieldSource: "ASTM A182 (SA-182) F316 minimum yield 30 ksi = 205 MPa [mem]",
     ...IID,
   },
   {
@@ -118,6 +125,8 @@ export const FLANGE_MATERIALS: readonly FlangeMaterialRow[] = [
     allowable: S_304_LOWER,
     modulus: E_AUSTENITIC,
     expansionPerK: 16.6e-6,
+    yieldMpa: 205,
+    yieldSource: "ASTM A182 (SA-182) F304 minimum yield 30 ksi = 205 MPa [mem]",
     ...IID,
   },
   {
@@ -127,6 +136,8 @@ export const FLANGE_MATERIALS: readonly FlangeMaterialRow[] = [
     allowable: S_CARBON_70,
     modulus: E_CARBON,
     expansionPerK: 11.7e-6,
+    yieldMpa: 260,
+    yieldSource: "ASTM A516 (SA-516) Grade 70 minimum yield 38 ksi = 260 MPa [mem]",
     ...IID,
   },
   {
@@ -136,6 +147,8 @@ export const FLANGE_MATERIALS: readonly FlangeMaterialRow[] = [
     allowable: S_316_LOWER,
     modulus: E_AUSTENITIC,
     expansionPerK: 16.0e-6,
+    yieldMpa: 205,
+    yieldSource: "ASTM A240 (SA-240) Type 316 minimum yield 30 ksi = 205 MPa [mem]",
     ...IID,
   },
   {
@@ -145,6 +158,8 @@ export const FLANGE_MATERIALS: readonly FlangeMaterialRow[] = [
     allowable: S_304_LOWER,
     modulus: E_AUSTENITIC,
     expansionPerK: 16.6e-6,
+    yieldMpa: 205,
+    yieldSource: "ASTM A240 (SA-240) Type 304 minimum yield 30 ksi = 205 MPa [mem]",
     ...IID,
   },
 ];

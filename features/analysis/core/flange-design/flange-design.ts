@@ -19,12 +19,14 @@ import {
 import {
   computeAppendix2Flange,
   stressLimits,
+  type Appendix2FlangeInput,
   type Appendix2FlangeKind,
   type Appendix2FlangeResult,
 } from "./appendix2-flange";
 import { ratingChecks, standardFlangeRating, type StandardRating } from "./rating";
 import { computeThermalCase, type ThermalCase } from "./thermal";
 import { coverThicknessMm, getCoverSketch, nonCircularZ, type CoverGeometry } from "./flat-cover";
+import { computeHydrotestCase, type HydrotestCase, type HydrotestContext } from "./hydrotest";
 
 export interface ResolvedAllowable {
   designMpa: number | null;
@@ -52,7 +54,14 @@ export interface FlangeDesignResult {
     actualThicknessMm: number;
   } | null;
   coverReason: string | null;
-  hydrotest: { suggestedMpa: number | null; enteredMpa: number | null; source: string };
+  hydrotest: {
+    suggestedMpa: number | null;
+    enteredMpa: number | null;
+    source: string;
+    /** The test case at the entered pressure; absent from results stored before core 2.2.0. */
+    testCase?: HydrotestCase | null;
+    testCaseReason?: string | null;
+  };
   /** Rating of a standard flange (template row), null for a custom flange. */
   rating: StandardRating | null;
   /** Operating case at design temperature (differential expansion, moduli by temperature). */
@@ -106,7 +115,12 @@ function appendix2Checks(
   model: JointModel,
   asme: AsmeAppendix2Result,
   inputs: FlangeDesignInputs | undefined,
-): { result: FlangeDesignResult["appendix2"]; reason: string | null; checks: CheckRecord[] } {
+): {
+  result: FlangeDesignResult["appendix2"];
+  reason: string | null;
+  checks: CheckRecord[];
+  context?: HydrotestContext["appendix2"];
+} {
   const d = model.design;
   const t = flangeLayerThickness(d, "flange");
   const scopeCheck = (status: CheckRecord["status"], note: string): CheckRecord =>
@@ -151,7 +165,7 @@ function appendix2Checks(
       ? `${allowable.row.name}: ASME II-D Table TM-1 [${allowable.row.confidence}]`
       : "flange layer modulus (no temperature dependence)";
   const hub = inputs!.hub ?? null;
-  const r = computeAppendix2Flange({
+  const a2Input: Appendix2FlangeInput = {
     kind,
     aMm: d.outline.kind === "circle" ? d.outline.diameterMm : 0,
     bMm: d.bore?.kind === "circle" ? d.bore.diameterMm : 0,
@@ -170,7 +184,8 @@ function appendix2Checks(
     sfAmbientMpa: allowable.ambientMpa,
     eDesignMpa: eDesign ?? layerE,
     eAmbientMpa: eAmbient ?? layerE,
-  });
+  };
+  const r = computeAppendix2Flange(a2Input);
   const kindLabel =
     kind === "integral-hub"
       ? "integral flange with hub"
@@ -234,14 +249,24 @@ function appendix2Checks(
       }),
     );
   }
-  return { result: { ...r, allowable, modulusSource }, reason: null, checks };
+  return {
+    result: { ...r, allowable, modulusSource },
+    reason: null,
+    checks,
+    context: { input: a2Input, material: allowable.row },
+  };
 }
 
 function coverChecks(
   model: JointModel,
   asme: AsmeAppendix2Result,
   inputs: FlangeDesignInputs | undefined,
-): { result: FlangeDesignResult["cover"]; reason: string | null; checks: CheckRecord[] } {
+): {
+  result: FlangeDesignResult["cover"];
+  reason: string | null;
+  checks: CheckRecord[];
+  context?: HydrotestContext["cover"];
+} {
   const d = model.design;
   const t = flangeLayerThickness(d, "cover");
   const na = (reason: string) => ({
@@ -376,7 +401,12 @@ function coverChecks(
       note: `${geom.shape === "circular" ? `d = G = ${geom.dMm.toFixed(1)} mm` : `d = ${geom.dMm.toFixed(1)} mm, D = ${geom.longSpanMm!.toFixed(1)} mm, Z = ${z!.toFixed(3)}, L = ${geom.perimeterMm!.toFixed(0)} mm`}, hG = ${geom.hGMm.toFixed(1)} mm, C = ${geom.c}, E = 1 (one-piece cover [practice]); operating t = ${op.toFixed(1)} mm, gasket seating t = ${fmt(seat)} mm${seat === null ? " (no bolt allowable: seating not computed)" : ""}.`,
     }),
   ];
-  return { result, reason: null, checks };
+  return {
+    result,
+    reason: null,
+    checks,
+    context: { geometry: geom, material: allowable.row, actualThicknessMm: t },
+  };
 }
 
 export function computeFlangeDesign(
@@ -399,6 +429,10 @@ export function computeFlangeDesign(
   const suggested = ratio === null ? null : 1.3 * d.loads.designPressureMpa * ratio;
   const rating = standardFlangeRating(d);
   const thermal = computeThermalCase(model, asme);
+  const test = computeHydrotestCase(model, asme, inputs?.testPressureMpa ?? null, {
+    appendix2: a2.context ?? null,
+    cover: cover.context ?? null,
+  });
   return {
     result: {
       inputsEntered: !!inputs && inputs.kind !== "not-entered",
@@ -413,6 +447,8 @@ export function computeFlangeDesign(
           suggested === null
             ? `${UG99}; needs the flange material's allowables (design pressure taken as MAWP)`
             : `${UG99}; design pressure taken as MAWP, stress ratio ${ratio!.toFixed(3)} from ${flangeAllow.source} — a suggestion, the test pressure is the designer's to enter`,
+        testCase: test.result,
+        testCaseReason: test.reason,
       },
       rating,
       thermal: thermal.result,
@@ -423,6 +459,7 @@ export function computeFlangeDesign(
       ...a2.checks,
       ...cover.checks,
       ...thermal.checks,
+      ...test.checks,
     ],
   };
 }

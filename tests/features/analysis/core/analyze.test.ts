@@ -46,7 +46,7 @@ describe("analyzeJoint on the three example designs", () => {
       expect(r.assumptions.some((a) => a.includes("Cone half-angle"))).toBe(true);
     });
   }
-  it("core version is 2.1.0", () => expect(CORE_VERSION).toBe("2.1.0"));
+  it("core version is 2.2.0", () => expect(CORE_VERSION).toBe("2.2.0"));
 });
 
 describe("check records", () => {
