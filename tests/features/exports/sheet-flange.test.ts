@@ -24,6 +24,24 @@ describe("bolt-spacing sheet: Flange section", () => {
     const st = result.flangeDesign.appendix2!.conditions[1].stMpa!;
     expect(text).toContain(`${Number(st.toPrecision(4))} MPa`);
   });
+  it("prints the hydrostatic test case at the entered test pressure", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    design.flangeDesign = {
+      kind: "integral-hub",
+      hub: { g0Mm: 7.1, g1Mm: 14.2, hMm: 44 },
+      flangeMaterialId: "sa-105",
+      testPressureMpa: 3,
+    };
+    const result = analyse(design);
+    const text = pdfToText(await renderSpacingSheet(sheetInputFor(design, { result, units: "SI" }))).replace(
+      /\s+/g,
+      " ",
+    );
+    expect(text).toContain("Test case: Wm1 at Pt / bolts at min preload");
+    expect(text).toContain("Test case: flange SH, SR, ST");
+    const st = result.flangeDesign.hydrotest.testCase!.flange!.stMpa;
+    expect(text).toContain(`${Number(st.toPrecision(4))} MPa`);
+  });
   it("a result stored by an older core (no flange design) says so instead of inventing numbers", async () => {
     const design = loadExample("pipe-flange-nps6-spiral-wound");
     const result = analyse(design) as unknown as Record<string, unknown>;
