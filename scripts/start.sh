@@ -16,6 +16,7 @@ require_port "$SMTP_PORT" "the local fake SMTP server"
 require_port "$OUTBOX_PORT" "the local outbox page"
 ensure_node_modules
 ensure_postgres
+ensure_fe_tools
 
 PG_DATA="$(pg_reachable_dir "$PROJECT_ROOT/.data/pg" "/tmp/sealpitch-$(echo "$PROJECT_ROOT" | md5sum | cut -c1-8)/pg")"
 echo "$PG_DATA" >"$RUN_DIR/pg-data-dir"

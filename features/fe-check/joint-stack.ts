@@ -125,11 +125,11 @@ export function estimateFootprintMpa(model: JointModel, forceN: number, rMm: num
   return (forceN * footprintShapeValue(xi, a, b)) / footprintIntegralMm2(ri, rc, a, b);
 }
 
-export function runStackCheck(
+export async function runStackCheck(
   model: JointModel,
-  solve: (spec: StackSpec, forceN: number, hooks?: StackRunHooks) => StackStudy,
+  solve: (spec: StackSpec, forceN: number, hooks?: StackRunHooks) => Promise<StackStudy>,
   opts: { refine?: number; hooks?: StackRunHooks; elementCap?: number } = {},
-): StackCheckResult {
+): Promise<StackCheckResult> {
   const map = mapBoltStack(model, opts.refine ?? 1);
   const cap = opts.elementCap ?? STACK_ELEMENT_CAP;
   const count = buildStackMesh(map.spec).elementCount;
@@ -137,7 +137,7 @@ export function runStackCheck(
     throw new FeInputError(
       `The bolt stack mesh would have ${count} elements, over the cap of ${cap}; use a coarser refinement.`,
     );
-  const study = solve(map.spec, map.forceN, opts.hooks);
+  const study = await solve(map.spec, map.forceN, opts.hooks);
   const plane = study.interfaces[map.gasketPlaneInterface];
   const pressure = plane.cells.map((c) => ({
     rMm: c.rMid,

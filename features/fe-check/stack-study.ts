@@ -6,7 +6,7 @@
  * Server-side (runs ccx).
  */
 import { buildStackMesh, writeStackDeck, type StackMesh, type StackSpec } from "./stack-model";
-import { runCcx } from "./ccx-runner";
+import { CcxCancelled, runCcxAsync } from "./ccx-runner";
 import { findBlock, nodeVectors, parseDat } from "./dat-parser";
 import {
   bearingApproachMm,
@@ -42,8 +42,11 @@ export interface StackStudy {
 
 export interface StackRunHooks {
   /** Called after each linear run (for progress reports); throwing aborts the study. */
-  onRun?: (run: number, elements: number) => void;
+  onRun?: (run: number, elements: number, solverSeconds: number) => void | Promise<void>;
+  /** Time limit of each linear run. */
   timeoutMs?: number;
+  /** Aborting kills the running solver and ends the study with CcxCancelled. */
+  signal?: AbortSignal;
 }
 
 function readStackRun(
@@ -85,12 +88,12 @@ function readStackRun(
   return { interfaces, forceN: F, approachMm: delta, reactionN: reaction };
 }
 
-export function solveStack(
+export async function solveStack(
   spec: StackSpec,
   forceN: number,
   hooks: StackRunHooks = {},
   maxRuns = 40,
-): StackStudy {
+): Promise<StackStudy> {
   if (spec.layers.length < 2) throw new Error("the bolt stack model needs at least two clamped layers");
   const mesh = buildStackMesh(spec);
   const nCells = mesh.rs.length - 1;
@@ -104,10 +107,13 @@ export function solveStack(
   });
   const pScale = (4 * forceN) / (Math.PI * (spec.bearingDiameterMm ** 2 - spec.holeDiameterMm ** 2));
   for (let run = 1; run <= maxRuns; run++) {
-    const dat = runCcx(writeStackDeck(spec, mesh, { closed, forceN, approachMm: approach }), {
+    const t0 = performance.now();
+    const dat = await runCcxAsync(writeStackDeck(spec, mesh, { closed, forceN, approachMm: approach }), {
       timeoutMs: hooks.timeoutMs,
+      signal: hooks.signal,
     });
-    hooks.onRun?.(run, mesh.elementCount);
+    await hooks.onRun?.(run, mesh.elementCount, (performance.now() - t0) / 1000);
+    if (hooks.signal?.aborted) throw new CcxCancelled();
     const res = readStackRun(spec, mesh, closed, dat, forceN, approach);
     let changed = 0;
     const next = res.interfaces.map((it) => {

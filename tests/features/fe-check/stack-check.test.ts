@@ -1,17 +1,18 @@
 import { readFileSync } from "node:fs";
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { buildJointModel } from "@/features/analysis/core/joint-model";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { solveInterface } from "@/features/fe-check/interface-study";
 import { solveStack } from "@/features/fe-check/stack-study";
 import { FeInputError, mapBoltStack, runStackCheck } from "@/features/fe-check/joint-stack";
+import { CcxCancelled } from "@/features/fe-check/ccx-runner";
 
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
 const example = (name: string): JointDesign =>
   JSON.parse(readFileSync(`examples/${name}.json`, "utf8")) as JointDesign;
 
 describe("bolt stack model (FE cross-check, model 1)", () => {
-  it("two layers give the two-plate engine's answer (the same problem meshed by both writers; internal)", () => {
+  it("two layers give the two-plate engine's answer (the same problem meshed by both writers; internal)", async () => {
     const plate = { thicknessMm: 12, modulusMpa: 207_000, poisson: 0.3 };
     const common = {
       holeDiameterMm: 13,
@@ -21,7 +22,7 @@ describe("bolt stack model (FE cross-check, model 1)", () => {
       elementSizeMm: 1.5,
     };
     const two = solveInterface({ ...common, upper: plate, lower: plate }, 10_000);
-    const stack = solveStack(
+    const stack = await solveStack(
       {
         ...common,
         layers: [
@@ -37,7 +38,10 @@ describe("bolt stack model (FE cross-check, model 1)", () => {
   });
 
   const model = buildJointModel(example("pipe-flange-nps6-spiral-wound"));
-  const res = runStackCheck(model, solveStack);
+  let res: Awaited<ReturnType<typeof runStackCheck>>;
+  beforeAll(async () => {
+    res = await runStackCheck(model, solveStack);
+  });
   it("NPS 6 example: the bearing faces' reactions equal the bolt force within 0.1 %; the contact pressure integrates to it within 0.5 % (equilibrium)", () => {
     expect(Math.abs(res.fe.reactionRatio - 1)).toBeLessThan(1e-3);
     expect(Math.abs(res.fe.contactForceRatio - 1)).toBeLessThan(5e-3);
@@ -55,8 +59,10 @@ describe("bolt stack model (FE cross-check, model 1)", () => {
     expect(m.spec.layers[1]).toMatchObject({ thicknessMm: 3, modulusMpa: 50, poisson: 0 });
     expect(m.gasketPlaneInterface).toBe(0);
   });
-  it("a mesh over the cap and a tapped-hole stud are refused with a clear message, before any solver run", () => {
-    expect(() => runStackCheck(model, solveStack, { elementCap: 100 })).toThrow(/over the cap of 100/);
+  it("a mesh over the cap and a tapped-hole stud are refused with a clear message, before any solver run", async () => {
+    await expect(runStackCheck(model, solveStack, { elementCap: 100 })).rejects.toThrow(
+      /over the cap of 100/,
+    );
     const d = example("pipe-flange-nps6-spiral-wound");
     d.fastener.termination = {
       kind: "tapped-hole",
@@ -65,5 +71,34 @@ describe("bolt stack model (FE cross-check, model 1)", () => {
       memberModulusMpa: 200_000,
     };
     expect(() => mapBoltStack({ ...model, design: d })).toThrow(FeInputError);
+  });
+});
+
+describe("solver runs off the event loop, with a time limit and cancellation", () => {
+  const spec = {
+    holeDiameterMm: 13,
+    bearingDiameterMm: 18,
+    outerRadiusMm: 100,
+    bearing: "flexible" as const,
+    elementSizeMm: 1.5,
+    layers: [
+      { name: "a", thicknessMm: 12, modulusMpa: 207_000, poisson: 0.3 },
+      { name: "b", thicknessMm: 12, modulusMpa: 207_000, poisson: 0.3 },
+    ],
+  };
+  it("a run past its time limit ends with a clear message, not a hang", async () => {
+    await expect(solveStack(spec, 10_000, { timeoutMs: 1 })).rejects.toThrow(/past its time limit/);
+  });
+  it("aborting kills the solver and ends the study as cancelled", async () => {
+    const abort = new AbortController();
+    setTimeout(() => abort.abort(), 5);
+    await expect(solveStack(spec, 10_000, { signal: abort.signal })).rejects.toBeInstanceOf(CcxCancelled);
+  });
+  it("the event loop keeps turning while the solver runs", async () => {
+    let ticks = 0;
+    const timer = setInterval(() => ticks++, 5);
+    await solveStack(spec, 10_000);
+    clearInterval(timer);
+    expect(ticks).toBeGreaterThan(0);
   });
 });
