@@ -14,4 +14,6 @@ export const holeListUrl = (designId: string, number: number): string =>
   `${base(designId, number)}/holes.csv`;
 export const drillingTemplateUrl = (designId: string, number: number): string =>
   `${base(designId, number)}/drilling.dxf`;
+export const boltingKitUrl = (designId: string, number: number): string =>
+  `${base(designId, number)}/bolting-kit.csv`;
 export const jobStatusKey = (jobId: string): string => `/api/v1/jobs/${jobId}`;

@@ -1,17 +1,20 @@
 // Download names of the shop files (our own pattern, listed in the DEVELOPERS.md glossary):
-// <tag>-<name>-<design id, 8 hex>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf.
-export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template";
+// <tag>-<name>-<design id, 8 hex>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf,
+// …-bolting-kit.csv.
+export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template" | "bolting-kit";
 
 const SUFFIX: Record<ExportKind, string> = {
   "spacing-sheet": "spacing-sheet.pdf",
   "hole-list": "hole-list.csv",
   "drilling-template": "drilling-template.dxf",
+  "bolting-kit": "bolting-kit.csv",
 };
 
 export const CONTENT_TYPES: Record<ExportKind, string> = {
   "spacing-sheet": "application/pdf",
   "hole-list": "text/csv; charset=utf-8",
   "drilling-template": "application/dxf",
+  "bolting-kit": "text/csv; charset=utf-8",
 };
 
 function slug(text: string, max: number): string {

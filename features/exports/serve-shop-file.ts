@@ -4,15 +4,19 @@ import { recordActivity } from "@/features/activity/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { CONTENT_TYPES, exportFileName } from "./file-names";
 import { fileResponse, parseExportPath } from "./http";
-import { findExportRevision } from "./queries";
-import { drillingTemplateFor, holeListFor } from "./shop-files";
+import { findExportRevision, type ExportRevisionDto } from "./queries";
+import { boltingKitFor, drillingTemplateFor, holeListFor } from "./shop-files";
 import { errorText, getLogger } from "@/server/log/logger";
 
-const BUILDERS = { "hole-list": holeListFor, "drilling-template": drillingTemplateFor } as const;
+const BUILDERS = {
+  "hole-list": (r: ExportRevisionDto) => holeListFor(r.document, r.result),
+  "drilling-template": (r: ExportRevisionDto) => drillingTemplateFor(r.document, r.result),
+  "bolting-kit": (r: ExportRevisionDto) => boltingKitFor(r.document, r.result),
+} as const;
 
 /**
- * One stored revision's shop file (hole list CSV or drilling template DXF), for any member of the
- * organisation; another organisation's design is a 404. Each download is written to the activity log.
+ * One stored revision's shop file (hole list CSV, drilling template DXF, Bolting kit CSV), for any
+ * member of the organisation; another organisation's design is a 404. Each download is written to the activity log.
  */
 export async function serveShopFile(
   request: Request,
@@ -28,7 +32,7 @@ export async function serveShopFile(
     : undefined;
   if (!revision) return jsonError(404, "This revision does not exist.");
   const fileName = exportFileName(revision, revision.number, kind);
-  const body = BUILDERS[kind](revision.document, revision.result);
+  const body = BUILDERS[kind](revision);
   try {
     await recordActivity(db, {
       organizationId: auth.viewer.organizationId,

@@ -1,8 +1,9 @@
 import type { JointDesign } from "@/features/analysis/core/design";
+import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 import { buildBoltRows } from "./model/bolt-rows";
+import { buildBoltingKit, buildBoltingKitCsv } from "./model/bolting-kit";
 import { buildDrillingTemplateDxf } from "./model/drilling-template";
 import { buildHoleListCsv } from "./model/hole-list";
-import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 
 type StoredBolts = {
   bolts?: { id: string; xMm: number; yMm: number }[];
@@ -25,6 +26,13 @@ export function holeListFor(document: JointDesign, result: unknown): string {
 /** The drilling template of a stored revision. */
 export function drillingTemplateFor(document: JointDesign, result: unknown): string {
   return buildDrillingTemplateDxf(document, rowsFor(document, result), {
+    unverified: listUnverifiedValues(document, result).length > 0,
+  });
+}
+
+/** The Bolting kit of a stored revision as CSV (the sheet prints the same lines). */
+export function boltingKitFor(document: JointDesign, result: unknown): string {
+  return buildBoltingKitCsv(document, buildBoltingKit(document), {
     unverified: listUnverifiedValues(document, result).length > 0,
   });
 }

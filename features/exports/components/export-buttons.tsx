@@ -7,6 +7,7 @@ import { fetchJson } from "@/features/ui/fetch-json";
 import {
   BACKGROUND_SHEET_MIN_BOLTS,
   JOB_POLL_MS,
+  boltingKitUrl,
   drillingTemplateUrl,
   holeListUrl,
   jobStatusKey,
@@ -35,7 +36,7 @@ interface JobStatus {
 
 const fetchJob = (url: string) => fetchJson<JobStatus>(url, (status) => `HTTP ${status}`);
 
-/** Sheet (PDF), hole list (CSV) and drilling template (DXF) of one stored revision. */
+/** Sheet (PDF), hole list (CSV), drilling template (DXF) and Bolting kit (CSV) of one stored revision. */
 export function ExportButtons({
   designId,
   revisionNumber,
@@ -121,22 +122,23 @@ export function ExportButtons({
             Spacing sheet (PDF)
           </a>
         )}
-        <a
-          className={linkClass(buttonStyles.secondary)}
-          href={holeListUrl(designId, revisionNumber)}
-          aria-disabled={disabled}
-          download
-        >
-          Hole list (CSV)
-        </a>
-        <a
-          className={linkClass(buttonStyles.secondary)}
-          href={drillingTemplateUrl(designId, revisionNumber)}
-          aria-disabled={disabled}
-          download
-        >
-          Drilling template (DXF)
-        </a>
+        {(
+          [
+            [holeListUrl, "Hole list (CSV)"],
+            [drillingTemplateUrl, "Drilling template (DXF)"],
+            [boltingKitUrl, "Bolting kit (CSV)"],
+          ] as const
+        ).map(([href, label]) => (
+          <a
+            key={label}
+            className={linkClass(buttonStyles.secondary)}
+            href={href(designId, revisionNumber)}
+            aria-disabled={disabled}
+            download
+          >
+            {label}
+          </a>
+        ))}
       </div>
       <div aria-live="polite" className="text-table text-ink-700">
         {queued && !jobId && !message ? (

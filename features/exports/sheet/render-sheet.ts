@@ -20,6 +20,8 @@ import {
   type RuleRow,
 } from "@/features/analysis/rule-groups";
 import { jointDataItems } from "./joint-data";
+import { buildBoltingKit } from "@/features/exports/model/bolting-kit";
+import { drawBoltingKit } from "./draw-bolting-kit";
 import { flangeSummaryLines } from "@/features/analysis/flange-summary";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import {
@@ -470,6 +472,7 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
   profileChart(ctx, view, rows);
   await progress(0.7);
   assemblyPlan(ctx, view, rows);
+  drawBoltingKit(ctx, buildBoltingKit(input.document, input.units));
   cautionsAndEditions(ctx, view);
   await progress(0.9);
 

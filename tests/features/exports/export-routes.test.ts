@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as jobGet } from "@/app/api/v1/jobs/[jobId]/route";
 import { GET as dxfGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/drilling.dxf/route";
 import { GET as csvGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/holes.csv/route";
+import { GET as kitGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/bolting-kit.csv/route";
 import {
   GET as pdfGet,
   POST as pdfPost,
@@ -150,6 +151,24 @@ describe("export routes", () => {
     );
     const parsed = new DxfParser().parseSync(await dxf.text());
     expect((parsed!.header as Record<string, unknown>).$INSUNITS).toBe(1);
+    const kit = await kitGet(appRequest(url(smallId, "bolting-kit.csv"), { cookie }), ctx(smallId));
+    expect(kit.status).toBe(200);
+    expect(kit.headers.get("content-type")).toBe("text/csv; charset=utf-8");
+    expect(kit.headers.get("content-disposition")).toContain(
+      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-bolting-kit.csv`,
+    );
+    const kitRows = parse(await kit.text(), { columns: true }) as Record<string, string>[];
+    expect(kitRows.map((r) => [r.part, r.quantity, r.length_in])).toEqual([
+      ["stud", "8", "4.000"],
+      ["nut", "16", ""],
+    ]);
+    const log = await db
+      .selectFrom("design_activity")
+      .select("detail")
+      .where("design_id", "=", smallId)
+      .where("kind", "=", "exported")
+      .execute();
+    expect(log.some((l) => l.detail.endsWith("-bolting-kit.csv"))).toBe(true);
   });
 
   it("is a 404 for another organisation's design, a 401 signed out, a 400 for bad options", async () => {
@@ -158,6 +177,7 @@ describe("export routes", () => {
       [pdfGet, "sheet.pdf"],
       [csvGet, "holes.csv"],
       [dxfGet, "drilling.dxf"],
+      [kitGet, "bolting-kit.csv"],
     ] as const) {
       const res = await handler(appRequest(url(smallId, file), { cookie: outsider }), ctx(smallId));
       expect(res.status).toBe(404);
