@@ -18,18 +18,17 @@ export const FlangeShapes = memo(function FlangeShapes(props: {
       <Shape
         id="flange-plate"
         listening={false}
-        sceneFunc={(context, shape) => {
-          const ctx = (context as unknown as { _context: CanvasRenderingContext2D })._context;
-          ctx.beginPath();
+        sceneFunc={(context) => {
+          // Konva's public context; the even-odd rule leaves the bore open.
+          context.beginPath();
           for (const ring of [outline, bore]) {
             if (!ring) continue;
-            ctx.moveTo(ring[0].x, ring[0].y);
-            for (const p of ring) ctx.lineTo(p.x, p.y);
-            ctx.closePath();
+            context.moveTo(ring[0].x, ring[0].y);
+            for (const p of ring) context.lineTo(p.x, p.y);
+            context.closePath();
           }
-          ctx.fillStyle = "#eeeeea";
-          ctx.fill("evenodd");
-          void shape;
+          context.fillStyle = "#eeeeea";
+          context.fill("evenodd");
         }}
       />
       <Line

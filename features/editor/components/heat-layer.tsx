@@ -21,15 +21,14 @@ export const HeatLayerShape = memo(function HeatLayerShape({
       listening={false}
       perfectDrawEnabled={false}
       sceneFunc={(context) => {
-        // The native context: Konva's wrappers add nothing for plain filled paths.
-        const ctx = (context as unknown as { _context: CanvasRenderingContext2D })._context;
+        // Konva's public context (its path calls and fillStyle pass straight to the canvas).
         for (const q of quads) {
-          ctx.beginPath();
-          ctx.moveTo(q.x[0], q.y[0]);
-          for (let i = 1; i < 4; i++) ctx.lineTo(q.x[i], q.y[i]);
-          ctx.closePath();
-          ctx.fillStyle = colour(q.stressMpa);
-          ctx.fill();
+          context.beginPath();
+          context.moveTo(q.x[0], q.y[0]);
+          for (let i = 1; i < 4; i++) context.lineTo(q.x[i], q.y[i]);
+          context.closePath();
+          context.fillStyle = colour(q.stressMpa);
+          context.fill();
         }
       }}
     />

@@ -1,5 +1,5 @@
 import "server-only";
-import { plainText } from "./plain-text";
+import { fontFor, printable } from "./fonts";
 import { C, type SheetContext } from "./sheet-context";
 
 export interface Column {
@@ -68,8 +68,8 @@ export function drawTable(
       cols.forEach((c, i) => {
         if (!c.wrap) return;
         const cell = row[i];
-        const text = plainText(typeof cell === "string" ? cell : cell.text);
-        doc.font(c.mono ? "mono" : "sans").fontSize(FONT);
+        const text = printable(typeof cell === "string" ? cell : cell.text);
+        doc.font(fontFor(c.mono ? "mono" : "sans", text)).fontSize(FONT);
         h = Math.max(h, doc.heightOfString(text, { width: widths[i] - 2 * PAD }) + 4);
       });
     }
@@ -81,11 +81,11 @@ export function drawTable(
     let x = x0;
     cols.forEach((c, i) => {
       const cell = row[i];
-      const text = plainText(typeof cell === "string" ? cell : cell.text);
+      const text = printable(typeof cell === "string" ? cell : cell.text);
       const style = typeof cell === "string" ? {} : cell.style;
       if (style.fill) doc.rect(x + 1, ctx.y + 1, widths[i] - 2, h - 2).fill(style.fill);
       doc
-        .font(style.bold ? (c.mono ? "monoBold" : "sansBold") : c.mono ? "mono" : "sans")
+        .font(fontFor(style.bold ? (c.mono ? "monoBold" : "sansBold") : c.mono ? "mono" : "sans", text))
         .fontSize(FONT)
         .fillColor(style.color ?? C.ink900)
         .text(text, x + PAD, ctx.y + 2.4, {
@@ -116,13 +116,13 @@ export function drawKeyValues(
   const { doc } = ctx;
   let y = ctx.y;
   for (const raw of items) {
-    const it = { label: plainText(raw.label), value: plainText(raw.value) };
+    const it = { label: printable(raw.label), value: printable(raw.value) };
     doc
-      .font("sans")
+      .font(fontFor("sans", it.label))
       .fontSize(6.6)
       .fillColor(C.ink500)
       .text(it.label, x, y, { width: width * 0.45, lineBreak: false });
-    doc.font("mono").fontSize(6.8).fillColor(C.ink900);
+    doc.font(fontFor("mono", it.value)).fontSize(6.8).fillColor(C.ink900);
     const h = doc.heightOfString(it.value, { width: width * 0.55 });
     doc.text(it.value, x + width * 0.45, y, { width: width * 0.55 });
     y += Math.max(9.5, h + 2.5);

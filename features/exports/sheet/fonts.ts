@@ -1,43 +1,77 @@
 import "server-only";
 import { readFileSync } from "node:fs";
 import path from "node:path";
-import PDFDocument from "pdfkit";
-import { woffToSfnt } from "./woff";
+import * as fontkit from "fontkit";
 
-// The sheet embeds the app's own IBM Plex files (the same the screens use). WOFF, not WOFF2:
-// pdfkit's font loader (fontkit) crashes on WOFF2 files, and misreads the mono .woff, so each
-// file is unpacked to a plain sfnt first (./woff.ts).
+// Complete TrueType files shipped in ./fonts (see its README for where they come from): IBM Plex
+// Sans for text, DejaVu Sans Mono for figures. Both cover the Greek letters and maths signs the
+// core writes (π, Σ, λ, ≥, ≤, ≈, √, ², µ, ±, Ø), so the sheet prints them as themselves.
 const FILES = {
-  sans: "@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-400-normal.woff",
-  sansBold: "@fontsource/ibm-plex-sans/files/ibm-plex-sans-latin-600-normal.woff",
-  mono: "@fontsource/ibm-plex-mono/files/ibm-plex-mono-latin-400-normal.woff",
-  monoBold: "@fontsource/ibm-plex-mono/files/ibm-plex-mono-latin-600-normal.woff",
+  sans: "IBMPlexSans-Regular.ttf",
+  sansBold: "IBMPlexSans-SemiBold.ttf",
+  mono: "DejaVuSansMono.ttf",
+  monoBold: "DejaVuSansMono-Bold.ttf",
 } as const;
 
 export type SheetFont = keyof typeof FILES;
 
-/** A parsed font as pdfkit accepts it in `registerFont` (fontkit's Font: anything with layout()). */
-export type ParsedFont = { layout: (...args: unknown[]) => unknown };
+/** When a string has a character its face lacks, the next face of the same weight that has them all. */
+const FALLBACK: Record<SheetFont, SheetFont> = {
+  sans: "mono",
+  sansBold: "monoBold",
+  mono: "sans",
+  monoBold: "sansBold",
+};
 
-let cache: Record<SheetFont, ParsedFont> | undefined;
+const FONT_DIR = path.join(process.cwd(), "features", "exports", "sheet", "fonts");
+
+let cache: Record<SheetFont, fontkit.Font> | undefined;
 
 /**
- * The parsed fonts, read and parsed once per process. Parsing the OpenType tables is most of the
- * cost of a small sheet, and pdfkit takes an already parsed font as a font source, so every
- * document shares these (each document still makes its own subset). The parsed object is taken
- * from a throw-away pdfkit document so that we need no direct dependency on fontkit.
+ * The parsed fonts, read and parsed once per process. Parsing is most of the cost of a small
+ * sheet (about 160 ms a document), and pdfkit's `registerFont` takes a parsed fontkit font as its
+ * source, so every document shares these (each document still embeds its own subset).
  */
-export function getSheetFonts(): Record<SheetFont, ParsedFont> {
+export function getSheetFonts(): Record<SheetFont, fontkit.Font> {
   if (cache) return cache;
-  const root = path.join(process.cwd(), "node_modules");
-  const parse = (file: string): ParsedFont => {
-    const sfnt = woffToSfnt(readFileSync(path.join(root, file)));
-    const probe = new PDFDocument({ autoFirstPage: false, font: sfnt as unknown as string });
-    return (probe as unknown as { _font: { font: ParsedFont } })._font.font;
+  const parse = (file: string): fontkit.Font => {
+    const font = fontkit.create(readFileSync(path.join(FONT_DIR, file)));
+    if (!("glyphForCodePoint" in font)) throw new Error(`${file}: a font collection, not one font`);
+    return font;
   };
   cache = Object.fromEntries(Object.entries(FILES).map(([k, f]) => [k, parse(f)])) as Record<
     SheetFont,
-    ParsedFont
+    fontkit.Font
   >;
   return cache;
+}
+
+const covers = (font: fontkit.Font, s: string): boolean => {
+  for (const ch of s) {
+    const cp = ch.codePointAt(0)!;
+    if (cp >= 0x20 && !font.hasGlyphForCodePoint(cp)) return false;
+  }
+  return true;
+};
+
+/**
+ * The face to draw `text` in: `wanted` when it has every character, else its fallback when that
+ * has them all, else `wanted` again. Example: `fontFor("sans", "|r| ≲ π/4")` → "mono" (Plex Sans
+ * has no ≲); `fontFor("sans", "Ab ≥ Am")` → "sans".
+ */
+export function fontFor(wanted: SheetFont, text: string): SheetFont {
+  const fonts = getSheetFonts();
+  if (covers(fonts[wanted], text)) return wanted;
+  return covers(fonts[FALLBACK[wanted]], text) ? FALLBACK[wanted] : wanted;
+}
+
+/**
+ * `text` with each character that no sheet face can draw (for example CJK in a design name)
+ * written as "?", so nothing vanishes silently; every other character is kept as it is.
+ */
+export function printable(text: string): string {
+  const fonts = Object.values(getSheetFonts());
+  let out = "";
+  for (const ch of text) out += fonts.some((f) => covers(f, ch)) ? ch : "?";
+  return out;
 }

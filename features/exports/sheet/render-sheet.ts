@@ -54,7 +54,7 @@ const STATUS_STYLE: Record<SheetStatus, { text: string; color: string; fill: str
 /**
  * The file identifier in the trailer. pdfkit derives it from the info dictionary (so from the
  * creation date); we derive it from the content hash instead so that two renders of one revision
- * differ only in the date strings.
+ * differ only in the date strings (see `withFileId`).
  */
 function fileId(input: SheetInput): Buffer {
   const basis =
@@ -63,6 +63,22 @@ function fileId(input: SheetInput): Buffer {
     .update(`sealpitch-sheet|${basis}|${input.paper}|${input.units}`)
     .digest()
     .subarray(0, 16);
+}
+
+/**
+ * `pdf` with both strings of its trailer's /ID (PDF 32000-1 §14.4) set to `id` (16 bytes). The two
+ * hex strings keep their length, so no offset in the cross-reference table moves. Throws when the
+ * trailer has no 16-byte /ID pair (a pdfkit that writes it otherwise must be looked at).
+ */
+export function withFileId(pdf: Buffer, id: Buffer): Buffer {
+  const tail = pdf.lastIndexOf("trailer");
+  const text = pdf.subarray(tail).toString("latin1");
+  const m = /\/ID \[<([0-9a-f]{32})> <([0-9a-f]{32})>\]/i.exec(text);
+  if (tail < 0 || !m) throw new Error("sheet: the PDF trailer has no 16-byte /ID pair");
+  const hex = id.toString("hex");
+  const out = Buffer.from(pdf);
+  out.write(`/ID [<${hex}> <${hex}>]`, tail + m.index, "latin1");
+  return out;
 }
 
 /** The drawing's frame on page 1 (pure, so tests can find the flange on the rendered page). */
@@ -447,12 +463,13 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
       ModDate: input.createdAt,
     },
   });
-  (doc as unknown as { _id: Buffer })._id = fileId(input);
-  for (const [name, font] of Object.entries(fonts)) doc.registerFont(name, font as unknown as string);
+  // pdfkit's registerFont also takes an already parsed fontkit font (its font factory accepts any
+  // source with layout()); @types/pdfkit lists only paths and buffers.
+  for (const [name, font] of Object.entries(fonts)) doc.registerFont(name, font as unknown as Buffer);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on("end", () => resolve(Buffer.concat(chunks)));
+    doc.on("end", () => resolve(withFileId(Buffer.concat(chunks), fileId(input))));
     doc.on("error", reject);
   });
 

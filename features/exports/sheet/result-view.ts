@@ -1,6 +1,7 @@
 import "server-only";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import { mm2ToIn2 } from "@/features/analysis/core/units";
+import { printable } from "./fonts";
 import type { SheetUnits } from "./format";
 
 /**
@@ -68,13 +69,10 @@ export interface SheetResultView {
   boltPoints: Map<string, { xMm: number; yMm: number }>;
 }
 
-export { plainText } from "./plain-text";
-import { plainText } from "./plain-text";
-
 type Obj = Record<string, unknown>;
 const isObj = (v: unknown): v is Obj => typeof v === "object" && v !== null && !Array.isArray(v);
 const text = (v: unknown): string =>
-  typeof v === "string" ? plainText(v) : typeof v === "number" ? String(v) : "";
+  typeof v === "string" ? printable(v) : typeof v === "number" ? String(v) : "";
 
 export function normaliseStatus(v: unknown): SheetStatus {
   if (v === "accepted-by-rating" || v === "rated") return "rated";
@@ -99,7 +97,7 @@ export function formatCheckValue(v: number | null, unit: string, u: SheetUnits):
     case "mm²":
       return u.system === "US" ? `${mm2ToIn2(v).toFixed(4)} in²` : `${v.toFixed(0)} mm²`;
     default:
-      return `${plainNumber(v)}${unit ? ` ${plainText(unit)}` : ""}`;
+      return `${plainNumber(v)}${unit ? ` ${printable(unit)}` : ""}`;
   }
 }
 

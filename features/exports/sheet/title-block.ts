@@ -1,6 +1,6 @@
 import "server-only";
 import { UNVERIFIED_MARK } from "@/features/analysis/unverified-values";
-import { plainText } from "./plain-text";
+import { fontFor, printable } from "./fonts";
 import { C, MARGIN, TITLE_BLOCK_H, type SheetContext } from "./sheet-context";
 
 const STATUS_TEXT = {
@@ -21,6 +21,7 @@ function cell(
   opts: { mono?: boolean; size?: number; color?: string } = {},
 ): void {
   const { doc } = ctx;
+  const shown = printable(value);
   doc.lineWidth(0.5).strokeColor(C.ink700).rect(x, y, w, h).stroke();
   doc
     .font("sans")
@@ -28,10 +29,10 @@ function cell(
     .fillColor(C.ink500)
     .text(label.toUpperCase(), x + 3.5, y + 3, { lineBreak: false, characterSpacing: 0.4 });
   doc
-    .font(opts.mono ? "mono" : "sansBold")
+    .font(fontFor(opts.mono ? "mono" : "sansBold", shown))
     .fontSize(opts.size ?? 8.2)
     .fillColor(opts.color ?? C.ink900)
-    .text(plainText(value), x + 3.5, y + 11.5, {
+    .text(shown, x + 3.5, y + 11.5, {
       width: w - 7,
       height: h - 12,
       lineBreak: true,

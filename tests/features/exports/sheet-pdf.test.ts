@@ -8,6 +8,7 @@ import {
   pointAtArcLength,
 } from "@/features/analysis/core/geometry";
 import { flangeTransform } from "@/features/exports/sheet/draw-flange";
+import { fontFor, printable } from "@/features/exports/sheet/fonts";
 import { drawingBox, renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import type { SheetInput } from "@/features/exports/sheet/sheet-input";
 import {
@@ -180,6 +181,27 @@ describe("bolt-spacing sheet (pdfkit, read back with poppler)", () => {
     expect(labels).toEqual(Array.from({ length: 96 }, (_, i) => i + 1));
     const text = pdfToText(pdf);
     for (let i = 1; i <= 96; i++) expect(text).toMatch(new RegExp(`^${i}\\s+b${i}\\b`, "m"));
+  });
+
+  it("prints Greek letters and maths signs as themselves (complete fonts, no ASCII stand-ins)", async () => {
+    const design = loadExample("pipe-flange-nps6-spiral-wound");
+    const base = sheetInputFor(design);
+    // Check titles as the core writes them (features/analysis/core), plus a design name of our own.
+    const input = { ...base, design: { ...base.design, name: "Σ F test π·d² ± 5 µm Ø10 漢" } };
+    const text = pdfToText(await renderSpacingSheet(input));
+    expect(text).toContain("Ab ≥ required Am");
+    expect(text).toContain("2b·π·G·m·P");
+    expect(text).toMatch(/tanφ = 0\.362/);
+    expect(text).toContain("≤");
+    expect(text).toContain("mm²");
+    // The design name in the title strip: every sign kept; the one character no face has is "?".
+    expect(text).toContain("Σ F test π·d² ± 5 µm Ø10 ?");
+    expect(text).not.toMatch(/>=|<=|\bpi\b|\bsum\b|\bsqrt\b/);
+    // A sign the text face lacks (≲, U+2272) sets that string in the figures face, which has it.
+    expect(fontFor("sans", "|r| ≲ π/4")).toBe("mono");
+    expect(fontFor("sans", "|r| ≤ π/4")).toBe("sans");
+    expect(fontFor("mono", "λ = 0.012 1/mm")).toBe("mono");
+    expect(printable("a漢b")).toBe("a?b");
   });
 
   it("is byte-stable for an approved revision apart from the two date strings", async () => {
