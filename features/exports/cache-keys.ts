@@ -16,4 +16,6 @@ export const drillingTemplateUrl = (designId: string, number: number): string =>
   `${base(designId, number)}/drilling.dxf`;
 export const boltingKitUrl = (designId: string, number: number): string =>
   `${base(designId, number)}/bolting-kit.csv`;
+export const passLogUrl = (designId: string, number: number): string =>
+  `${base(designId, number)}/pass-log.csv`;
 export const jobStatusKey = (jobId: string): string => `/api/v1/jobs/${jobId}`;

@@ -1,13 +1,14 @@
 // Download names of the shop files (our own pattern, listed in the DEVELOPERS.md glossary):
 // <tag>-<name>-<design id, 8 hex>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf,
-// …-bolting-kit.csv.
-export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template" | "bolting-kit";
+// …-bolting-kit.csv, …-pass-log.csv.
+export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template" | "bolting-kit" | "pass-log";
 
 const SUFFIX: Record<ExportKind, string> = {
   "spacing-sheet": "spacing-sheet.pdf",
   "hole-list": "hole-list.csv",
   "drilling-template": "drilling-template.dxf",
   "bolting-kit": "bolting-kit.csv",
+  "pass-log": "pass-log.csv",
 };
 
 export const CONTENT_TYPES: Record<ExportKind, string> = {
@@ -15,6 +16,7 @@ export const CONTENT_TYPES: Record<ExportKind, string> = {
   "hole-list": "text/csv; charset=utf-8",
   "drilling-template": "application/dxf",
   "bolting-kit": "text/csv; charset=utf-8",
+  "pass-log": "text/csv; charset=utf-8",
 };
 
 function slug(text: string, max: number): string {

@@ -5,17 +5,18 @@ import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { CONTENT_TYPES, exportFileName } from "./file-names";
 import { fileResponse, parseExportPath } from "./http";
 import { findExportRevision, type ExportRevisionDto } from "./queries";
-import { boltingKitFor, drillingTemplateFor, holeListFor } from "./shop-files";
+import { boltingKitFor, drillingTemplateFor, holeListFor, passLogFor } from "./shop-files";
 import { errorText, getLogger } from "@/server/log/logger";
 
 const BUILDERS = {
   "hole-list": (r: ExportRevisionDto) => holeListFor(r.document, r.result),
   "drilling-template": (r: ExportRevisionDto) => drillingTemplateFor(r.document, r.result),
   "bolting-kit": (r: ExportRevisionDto) => boltingKitFor(r.document, r.result),
+  "pass-log": (r: ExportRevisionDto) => passLogFor(r.document, r.result),
 } as const;
 
 /**
- * One stored revision's shop file (hole list CSV, drilling template DXF, Bolting kit CSV), for any
+ * One stored revision's shop file (hole list CSV, drilling template DXF, Bolting kit or Pass log CSV), for any
  * member of the organisation; another organisation's design is a 404. Each download is written to the activity log.
  */
 export async function serveShopFile(

@@ -4,6 +4,7 @@ import { buildBoltRows } from "./model/bolt-rows";
 import { buildBoltingKit, buildBoltingKitCsv } from "./model/bolting-kit";
 import { buildDrillingTemplateDxf } from "./model/drilling-template";
 import { buildHoleListCsv } from "./model/hole-list";
+import { buildPassLog, buildPassLogCsv } from "./model/pass-log";
 
 type StoredBolts = {
   bolts?: { id: string; xMm: number; yMm: number }[];
@@ -33,6 +34,13 @@ export function drillingTemplateFor(document: JointDesign, result: unknown): str
 /** The Bolting kit of a stored revision as CSV (the sheet prints the same lines). */
 export function boltingKitFor(document: JointDesign, result: unknown): string {
   return buildBoltingKitCsv(document, buildBoltingKit(document), {
+    unverified: listUnverifiedValues(document, result).length > 0,
+  });
+}
+
+/** The Pass log of a stored revision as CSV (the sheet's Pass log pages hold the same targets). */
+export function passLogFor(document: JointDesign, result: unknown): string {
+  return buildPassLogCsv(document, buildPassLog(document, result, rowsFor(document, result)), {
     unverified: listUnverifiedValues(document, result).length > 0,
   });
 }

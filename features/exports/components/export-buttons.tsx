@@ -11,6 +11,7 @@ import {
   drillingTemplateUrl,
   holeListUrl,
   jobStatusKey,
+  passLogUrl,
   sheetPdfUrl,
 } from "../cache-keys";
 
@@ -36,7 +37,7 @@ interface JobStatus {
 
 const fetchJob = (url: string) => fetchJson<JobStatus>(url, (status) => `HTTP ${status}`);
 
-/** Sheet (PDF), hole list (CSV), drilling template (DXF) and Bolting kit (CSV) of one stored revision. */
+/** Sheet (PDF), hole list (CSV), drilling template (DXF), Bolting kit and Pass log (CSV) of one stored revision. */
 export function ExportButtons({
   designId,
   revisionNumber,
@@ -127,6 +128,7 @@ export function ExportButtons({
             [holeListUrl, "Hole list (CSV)"],
             [drillingTemplateUrl, "Drilling template (DXF)"],
             [boltingKitUrl, "Bolting kit (CSV)"],
+            [passLogUrl, "Pass log (CSV)"],
           ] as const
         ).map(([href, label]) => (
           <a

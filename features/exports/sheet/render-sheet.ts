@@ -22,6 +22,8 @@ import {
 import { jointDataItems } from "./joint-data";
 import { buildBoltingKit } from "@/features/exports/model/bolting-kit";
 import { drawBoltingKit } from "./draw-bolting-kit";
+import { buildPassLog } from "@/features/exports/model/pass-log";
+import { drawPassLog } from "./draw-pass-log";
 import { flangeSummaryLines } from "@/features/analysis/flange-summary";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import {
@@ -491,6 +493,8 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
   assemblyPlan(ctx, view, rows);
   drawBoltingKit(ctx, buildBoltingKit(input.document, input.units));
   cautionsAndEditions(ctx, view);
+  await progress(0.85);
+  drawPassLog(ctx, buildPassLog(input.document, input.result, rows));
   await progress(0.9);
 
   const range = doc.bufferedPageRange();

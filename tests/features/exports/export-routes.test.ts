@@ -5,6 +5,7 @@ import { GET as jobGet } from "@/app/api/v1/jobs/[jobId]/route";
 import { GET as dxfGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/drilling.dxf/route";
 import { GET as csvGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/holes.csv/route";
 import { GET as kitGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/bolting-kit.csv/route";
+import { GET as logGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/pass-log.csv/route";
 import {
   GET as pdfGet,
   POST as pdfPost,
@@ -169,6 +170,14 @@ describe("export routes", () => {
       .where("kind", "=", "exported")
       .execute();
     expect(log.some((l) => l.detail.endsWith("-bolting-kit.csv"))).toBe(true);
+    const passLog = await logGet(appRequest(url(smallId, "pass-log.csv"), { cookie }), ctx(smallId));
+    expect(passLog.status).toBe(200);
+    expect(passLog.headers.get("content-disposition")).toContain(
+      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-pass-log.csv`,
+    );
+    const logRows = parse(await passLog.text(), { columns: true }) as Record<string, string>[];
+    expect(logRows).toHaveLength(5 * 8);
+    expect(Object.keys(logRows[0])).toContain("target_torque_ft_lb");
   });
 
   it("is a 404 for another organisation's design, a 401 signed out, a 400 for bad options", async () => {
@@ -178,6 +187,7 @@ describe("export routes", () => {
       [csvGet, "holes.csv"],
       [dxfGet, "drilling.dxf"],
       [kitGet, "bolting-kit.csv"],
+      [logGet, "pass-log.csv"],
     ] as const) {
       const res = await handler(appRequest(url(smallId, file), { cookie: outsider }), ctx(smallId));
       expect(res.status).toBe(404);
