@@ -95,6 +95,7 @@ export default [
       ".next/**",
       ".next-test-*/**",
       ".data/**",
+      ".build/**",
       "out/**",
       "test-results/**",
       "playwright-report/**",

@@ -6,6 +6,8 @@ const nextConfig = {
   poweredByHeader: false,
   // Nothing is fetched at build or run time: fonts come from node_modules through next/font/local.
   images: { unoptimized: true },
+  // piscina starts its worker threads from files of its own package: it must stay outside the bundle.
+  serverExternalPackages: ["piscina"],
   experimental: {
     serverActions: { bodySizeLimit: "2mb" },
     authInterrupts: true,

@@ -1,9 +1,10 @@
-import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { execFileSync, type ChildProcess } from "node:child_process";
 import { randomUUID } from "node:crypto";
-import { closeSync, openSync, readFileSync, rmSync } from "node:fs";
+import { readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import pg from "pg";
+import { startInstance, stopInstances, waitReady } from "./helpers/app-instance";
 import { expect, test, type Page } from "./helpers/test";
 
 // Two app instances on one machine against one database of their own (a scratch database in the
@@ -34,19 +35,6 @@ async function admin(query: string): Promise<void> {
   }
 }
 
-async function waitReady(origin: string, child: ChildProcess, path = "/api/health"): Promise<void> {
-  for (let i = 0; i < 240; i++) {
-    if (child.exitCode !== null) throw new Error(`instance ${origin} stopped during start`);
-    const ok = await fetch(`${origin}${path}`).then(
-      (r) => r.ok,
-      () => false,
-    );
-    if (ok) return;
-    await new Promise((resolve) => setTimeout(resolve, 500));
-  }
-  throw new Error(`instance ${origin} did not become ready`);
-}
-
 const waitLive = (origin: string, child: ChildProcess) => waitReady(origin, child, "/api/health/live");
 
 test.beforeAll(async () => {
@@ -74,29 +62,13 @@ test.beforeAll(async () => {
     ["c", C, { DATABASE_URL: nowhere.toString() }],
   ] as const) {
     logOf[key] = path.join(tmpdir(), `${databaseName}-${key}.log`);
-    const out = openSync(logOf[key], "w");
-    const child = spawn("npx", ["next", "start", "-H", "127.0.0.1", "-p", new URL(origin).port], {
-      env: { ...env, ...extra },
-      stdio: ["ignore", out, out],
-      detached: true,
-    });
-    closeSync(out);
-    instances.push(child);
+    instances.push(startInstance(origin, { ...env, ...extra }, logOf[key]));
   }
   await Promise.all([waitReady(A, instances[0]!), waitReady(B, instances[1]!), waitLive(C, instances[2]!)]);
 });
 
 test.afterAll(async () => {
-  for (const child of instances) {
-    if (child.pid && child.exitCode === null) {
-      try {
-        process.kill(-child.pid, "SIGTERM");
-      } catch {
-        // already gone
-      }
-    }
-  }
-  await new Promise((resolve) => setTimeout(resolve, 1500));
+  await stopInstances(instances);
   if (databaseName) await admin(`drop database if exists "${databaseName}" with (force)`);
   for (const file of Object.values(logOf)) if (file) rmSync(file, { force: true });
 });

@@ -43,6 +43,8 @@ stop_all() {
 trap stop_all INT TERM EXIT
 
 npx tsx --conditions=react-server db/migrate.ts
+# The analysis pool's worker (the core bundled on its own, server/analysis/): the seed's results use it.
+node scripts/build-workers.mjs || die "bundling the analysis worker failed"
 npx tsx --conditions=react-server scripts/seed.ts >"$RUN_DIR/seed.txt"
 
 setsid npx tsx scripts/fake-smtp.ts --smtp "$SMTP_PORT" --http "$OUTBOX_PORT" --store "$PROJECT_ROOT/.data/outbox.json" &

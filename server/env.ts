@@ -35,6 +35,13 @@ const envSchema = z.object({
   TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
   /** Sheet-queue workers this process runs (0: it only queues, another instance works the jobs). */
   JOB_WORKERS: z.coerce.number().int().min(0).max(8).default(1),
+  /**
+   * Worker threads that run analyses off the request thread (server/analysis/pool.ts). Unset: one
+   * fewer than the machine's cores, at least 1.
+   */
+  ANALYSIS_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
+  /** Longest one analysis may run in its worker before it is stopped and the worker replaced. */
+  ANALYSIS_TIME_LIMIT_MS: z.coerce.number().int().min(10).max(600_000).default(20_000),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   /** Bearer token for GET /api/metrics; unset (the default) turns the endpoint off (404). */
   METRICS_TOKEN: z.string().min(24, "must be at least 24 characters").optional(),

@@ -6,7 +6,7 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { recordActivity } from "@/features/activity/queries";
 import { sha256OfJson } from "@/features/analysis/content-hash";
 import { isoString } from "@/db/dates";
-import { runAnalysis } from "./run-analysis";
+import { parseAnalysis, runAnalysis } from "./run-analysis";
 import type { JointAnalysis, WorkingRevisionStatus } from "./workspace-contract";
 
 // Writes of the designs feature. Callers have validated the document and checked the policy;
@@ -40,7 +40,7 @@ export async function createDesign(
   input: CreateDesignInput,
 ): Promise<{ designId: string; version: number }> {
   const document: JointDesign = { ...input.document, name: input.name };
-  const { result, coreVersion } = runAnalysis(document);
+  const { json: result, coreVersion } = await runAnalysis(document);
   return db.transaction().execute(async (trx) => {
     const design = await trx
       .insertInto("designs")
@@ -61,7 +61,7 @@ export async function createDesign(
         number: 1,
         status: "draft",
         document: JSON.stringify(document),
-        result: JSON.stringify(result),
+        result,
         core_version: coreVersion,
         content_hash: hashDocument(document),
         created_by: input.ownerId,
@@ -108,14 +108,14 @@ export async function saveWorkingRevision(
 ): Promise<SaveOutcome> {
   const name = command.name ?? undefined;
   const document: JointDesign = name ? { ...command.document, name } : command.document;
-  const { result, coreVersion } = runAnalysis(document);
+  const analysis = await runAnalysis(document);
   return db.transaction().execute(async (trx) => {
     const updated = await trx
       .updateTable("design_revisions")
       .set({
         document: JSON.stringify(document),
-        result: JSON.stringify(result),
-        core_version: coreVersion,
+        result: analysis.json,
+        core_version: analysis.coreVersion,
         content_hash: hashDocument(document),
         version: sql`version + 1`,
         last_edited_by: command.userId,
@@ -140,7 +140,12 @@ export async function saveWorkingRevision(
         .where("id", "=", command.designId)
         .where("organization_id", "=", command.organizationId)
         .execute();
-      return { kind: "saved", version: updated.version, savedAt: isoString(updated.updated_at), result };
+      return {
+        kind: "saved",
+        version: updated.version,
+        savedAt: isoString(updated.updated_at),
+        result: parseAnalysis(analysis),
+      };
     }
     const current = await trx
       .selectFrom("design_revisions")

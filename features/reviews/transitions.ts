@@ -2,8 +2,8 @@ import "server-only";
 import { sql, type Kysely, type Transaction } from "kysely";
 import type { Database } from "@/db/types";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { analyzeJoint } from "@/features/analysis/core/analyze";
 import { CORE_VERSION } from "@/features/analysis/core/version";
+import { analyzeInWorker } from "@/server/analysis/pool";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
 import { recordActivity } from "@/features/activity/queries";
 import type { ActionResult } from "@/features/forms/action-result";
@@ -176,8 +176,9 @@ export async function submitRevision(
       return refused(
         `The design has problems to fix before it can be submitted: ${issues.slice(0, 5).map(formatIssue).join("; ")}.`,
       );
-    // Round-trip through JSON so the hash covers exactly what jsonb will store and return.
-    const result: unknown = JSON.parse(JSON.stringify(analyzeJoint(document)));
+    // Computed in the analysis pool (server/analysis/pool.ts) as JSON text, parsed back so the
+    // hash covers exactly what jsonb will store and return.
+    const result: unknown = JSON.parse(await analyzeInWorker(document));
     const contentHash = computeContentHash({ document, result, coreVersion: CORE_VERSION });
     await trx
       .updateTable("design_revisions")

@@ -41,6 +41,8 @@ stack_up() {
   # whole scratch databases (backup round trip, upgrade from the previous release, scale-out).
   export PG_SUPERUSER_URL="postgres://postgres@localhost:$PG_PORT/postgres?host=/tmp"
 
+  # The analysis pool's worker (the core bundled on its own), for vitest, the seed and the app.
+  node scripts/build-workers.mjs || die "bundling the analysis worker failed"
   npx tsx --conditions=react-server db/migrate.ts >/dev/null || die "migrating the test database failed"
   setsid npx tsx scripts/fake-smtp.ts --smtp "$SMTP_PORT" --http "$OUTBOX_PORT" >"$WORK/smtp.log" 2>&1 &
   SMTP_PID=$!

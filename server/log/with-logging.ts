@@ -3,6 +3,7 @@ import { headers } from "next/headers";
 import { getLogger, errorText } from "./logger";
 import { currentRequest, REQUEST_ID_HEADER, requestIdFrom, runWithRequest } from "./request-context";
 import { observeRequest } from "@/server/metrics/registry";
+import { AnalysisUnavailableError } from "@/server/analysis/pool";
 
 // One log line per request, written where the outcome is known. Next 16's proxy.ts runs before
 // the route and never sees the final status, so every route handler is wrapped in
@@ -30,6 +31,18 @@ function finishLine(route: string, method: string, status: number, started: numb
   );
 }
 
+/**
+ * An analysis past the pool's time limit, or refused because every worker and the queue are
+ * taken (server/analysis/pool.ts), is answered here for every route: 503 with the reason and
+ * Retry-After. Nothing was stored (the analysis runs before, or inside, the write's transaction).
+ */
+function analysisUnavailableResponse(error: AnalysisUnavailableError): Response {
+  return Response.json(
+    { error: { message: error.message, reason: error.reason } },
+    { status: 503, headers: { "cache-control": "no-store", "retry-after": "5" } },
+  );
+}
+
 /** `export const GET = withRequestLog("/api/v1/designs/[designId]", handler)`. */
 export function withRequestLog<A extends unknown[]>(
   route: string,
@@ -43,8 +56,11 @@ export function withRequestLog<A extends unknown[]>(
       try {
         response = await handler(request, ...rest);
       } catch (error) {
-        finishLine(route, request.method, 500, started, { err: errorText(error) });
-        throw error;
+        if (!(error instanceof AnalysisUnavailableError)) {
+          finishLine(route, request.method, 500, started, { err: errorText(error) });
+          throw error;
+        }
+        response = analysisUnavailableResponse(error);
       }
       finishLine(route, request.method, response.status, started);
       try {
@@ -95,6 +111,11 @@ export function loggedAction<A extends unknown[], R>(
         finishLine(route, "POST", refused ? 422 : 200, started, { outcome: refused ? "refused" : "ok" });
         return result;
       } catch (error) {
+        // The same for actions: an ActionResult refusal with the pool's message.
+        if (error instanceof AnalysisUnavailableError) {
+          finishLine(route, "POST", 503, started, { outcome: "refused", err: error.message });
+          return { ok: false, message: error.message } as R;
+        }
         const status = controlFlowStatus(error);
         if (status !== null)
           finishLine(route, "POST", status, started, { outcome: status === 303 ? "redirect" : "refused" });

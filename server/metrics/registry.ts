@@ -9,6 +9,8 @@ interface Metrics {
   registry: Registry;
   requestSeconds: Histogram<"route" | "method" | "status">;
   analysisSeconds: Histogram<"kind">;
+  analysisPool: Gauge<"state">;
+  analysisRefusals: Counter<"reason">;
   jobSeconds: Histogram<"queue" | "outcome">;
   jobFailures: Counter<"queue">;
   queueDepth: Gauge<"queue" | "state">;
@@ -34,6 +36,18 @@ function createMetrics(): Metrics {
       help: "Time of one engineering-core analysis (analyzeJoint) on the server.",
       labelNames: ["kind"],
       buckets: [0.001, 0.0025, 0.005, 0.01, 0.025, 0.05, 0.1, 0.25, 0.5, 1, 2.5],
+      registers: [registry],
+    }),
+    analysisPool: new Gauge({
+      name: "sealpitch_analysis_pool_tasks",
+      help: "The analysis worker pool of this process: its workers, the analyses running in them and those waiting.",
+      labelNames: ["state"],
+      registers: [registry],
+    }),
+    analysisRefusals: new Counter({
+      name: "sealpitch_analysis_refusals_total",
+      help: "Analyses stopped at the time limit (time-limit) or refused with every worker and the queue taken (busy).",
+      labelNames: ["reason"],
       registers: [registry],
     }),
     jobSeconds: new Histogram({
@@ -74,13 +88,18 @@ export function observeRequest(route: string, method: string, status: number, se
 }
 
 /** Times `work` as one analysis of the given kind ("stored", "stateless"). */
-export function timeAnalysis<T>(kind: string, work: () => T): T {
+/** Times one analysis; `work` may return a promise (the analysis pool), timed until it settles. */
+export async function timeAnalysis<T>(kind: string, work: () => Promise<T>): Promise<T> {
   const end = getMetrics().analysisSeconds.startTimer({ kind });
   try {
-    return work();
+    return await work();
   } finally {
     end();
   }
+}
+
+export function countAnalysisRefusal(reason: "time-limit" | "busy"): void {
+  getMetrics().analysisRefusals.inc({ reason });
 }
 
 export function observeJob(queue: string, outcome: "done" | "failed", seconds: number): void {

@@ -2,6 +2,7 @@ import "server-only";
 import { sql } from "kysely";
 import { getDb, getPoolStats } from "@/db/index";
 import { getEnv } from "@/server/env";
+import { peekAnalysisPool } from "@/server/analysis/pool";
 import { SHEET_QUEUE } from "@/server/jobs/queue";
 import { getMetrics } from "./registry";
 
@@ -13,6 +14,11 @@ export async function renderMetrics(): Promise<{ body: string; contentType: stri
   metrics.poolConnections.set({ state: "idle" }, pool.idle);
   metrics.poolConnections.set({ state: "waiting" }, pool.waiting);
   metrics.poolConnections.set({ state: "max" }, getEnv().DATABASE_POOL_MAX);
+  const analysisPool = peekAnalysisPool();
+  const tasks = analysisPool?.stats() ?? { running: 0, queued: 0 };
+  metrics.analysisPool.set({ state: "workers" }, analysisPool?.options.workers ?? 0);
+  metrics.analysisPool.set({ state: "running" }, tasks.running);
+  metrics.analysisPool.set({ state: "queued" }, tasks.queued);
   try {
     const { rows } = await sql<{ state: string; jobs: number }>`
       select state::text as state, count(*)::int as jobs from pgboss.job

@@ -2,6 +2,7 @@ import { fieldErrorsOf } from "@/features/forms/form-data";
 import { NO_STORE } from "@/features/designs/http";
 import { runAnalysis } from "@/features/designs/run-analysis";
 import { analysisRequestSchema } from "@/features/designs/schema";
+import { DesignRefusedError } from "@/features/analysis/core/validate";
 import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
@@ -21,7 +22,16 @@ async function handlePOST(request: Request): Promise<Response> {
   const parsed = analysisRequestSchema.safeParse(wrapped);
   if (!parsed.success)
     return jsonError(422, "The design document is not valid.", fieldErrorsOf(parsed.error, { nested: true }));
-  return Response.json(runAnalysis(parsed.data.document, "stateless").result, { headers: NO_STORE });
+  // The worker's JSON text goes out as it is: the request thread neither builds nor serialises it.
+  let json: string;
+  try {
+    ({ json } = await runAnalysis(parsed.data.document, "stateless"));
+  } catch (error) {
+    // A design the core itself refuses (its force balance): a 422 with the core's reason.
+    if (error instanceof DesignRefusedError) return jsonError(422, error.message);
+    throw error;
+  }
+  return new Response(json, { headers: { ...NO_STORE, "content-type": "application/json" } });
 }
 
 export const POST = withRequestLog("/api/v1/analyses", handlePOST);

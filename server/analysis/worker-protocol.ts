@@ -1,0 +1,19 @@
+import type { MessagePort } from "node:worker_threads";
+import type { JointDesign } from "@/features/analysis/core/design";
+import type { DesignIssue } from "@/features/analysis/core/validate";
+
+// What the request thread sends to an analysis worker and what comes back (structured clone).
+// Shared by the pool (server/analysis/pool.ts) and the worker (analysis-worker.ts), which is
+// bundled on its own by scripts/build-workers.mjs and so imports nothing but the core and this.
+
+export interface AnalysisTask {
+  document: JointDesign;
+  /** The worker posts one message here when it starts on the task: the time limit runs from then. */
+  started: MessagePort;
+}
+
+export type AnalysisTaskResult =
+  /** The result as JSON text, exactly `JSON.stringify(analyzeJoint(document))`. */
+  | { ok: true; json: string }
+  /** The core refused the design (its DesignRefusedError, rebuilt on the request thread). */
+  | { ok: false; prefix: string; issues: DesignIssue[] };
