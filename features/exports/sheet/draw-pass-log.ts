@@ -6,7 +6,6 @@ import {
   type PassLog,
   type PassLogPass,
 } from "@/features/exports/model/pass-log";
-import { plainText } from "./plain-text";
 import { C, heading, type SheetContext } from "./sheet-context";
 
 // The Pass log pages of the bolt-spacing sheet: the tightening record filled in at the joint. One
@@ -33,7 +32,7 @@ export function drawPassLog(ctx: SheetContext, log: PassLog): void {
   if (log.passes.length === 0) return;
   const { doc, content } = ctx;
   const w = content.x1 - content.x0;
-  const cautions = CAUTIONS.map((c) => `•  ${plainText(c)}`).join("\n");
+  const cautions = CAUTIONS.map((c) => `•  ${c}`).join("\n");
   doc.font("sans").fontSize(6.3);
   const cautionsH = doc.heightOfString(cautions, { width: w - 16 }) + 20;
   const passW = (w - BOLT_W - STEP_W) / log.passes.length;
@@ -97,8 +96,8 @@ export function drawPassLog(ctx: SheetContext, log: PassLog): void {
     if (first) {
       const intro = `${KIND_WORDS[log.kind]} per pass, in ${unit} (${log.basis}). Tighten the cross passes in the order of the Step column and the circular pass bolt after bolt by number. Write the value you read in the box beside each target; when a pass is done on this page, add your initials and the date at its foot.`;
       doc.font("sans").fontSize(7.2).fillColor(C.ink700);
-      const h = doc.heightOfString(plainText(intro), { width: w });
-      doc.text(plainText(intro), content.x0, ctx.y, { width: w });
+      const h = doc.heightOfString(intro, { width: w });
+      doc.text(intro, content.x0, ctx.y, { width: w });
       ctx.y += h + 6;
     }
     columnHeader();
