@@ -9,7 +9,10 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number.parseInt(value,
 
 // One pool per process. In development, hot reloads re-evaluate modules, so the instance is kept
 // on globalThis instead of opening a new pool every time.
-const globalForDb = globalThis as unknown as { sealpitchDb?: Kysely<Database>; sealpitchPool?: pg.Pool };
+declare global {
+  var sealpitchDb: Kysely<Database> | undefined;
+  var sealpitchPool: pg.Pool | undefined;
+}
 
 function createDb(): Kysely<Database> {
   const env = getEnv();
@@ -23,7 +26,7 @@ function createDb(): Kysely<Database> {
     connectionTimeoutMillis: 5000,
   });
   pool.on("error", (error) => console.error(`[db] idle connection lost: ${error.message}`));
-  globalForDb.sealpitchPool = pool;
+  globalThis.sealpitchPool = pool;
   // A connection lost while a client is checked out errors on the client as well as failing its
   // query (which the route answers with a 503): without a listener that event would end the process.
   pool.on("connect", (client) =>
@@ -34,13 +37,13 @@ function createDb(): Kysely<Database> {
 
 /** Clients of this process's pool (for the metrics endpoint); zeros before the first query. */
 export function getPoolStats(): { total: number; idle: number; waiting: number } {
-  const pool = globalForDb.sealpitchPool;
+  const pool = globalThis.sealpitchPool;
   return { total: pool?.totalCount ?? 0, idle: pool?.idleCount ?? 0, waiting: pool?.waitingCount ?? 0 };
 }
 
 export function getDb(): Kysely<Database> {
-  globalForDb.sealpitchDb ??= createDb();
-  return globalForDb.sealpitchDb;
+  globalThis.sealpitchDb ??= createDb();
+  return globalThis.sealpitchDb;
 }
 
 export type Db = Kysely<Database>;

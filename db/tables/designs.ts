@@ -1,4 +1,6 @@
-import type { ColumnType, Generated } from "kysely";
+import type { Generated, JSONColumnType } from "kysely";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
+import type { JointDesign } from "@/features/analysis/core/design";
 import type { Timestamp } from "./columns";
 
 export type RevisionStatus = "draft" | "in_review" | "returned" | "approved";
@@ -22,10 +24,13 @@ export interface DesignRevisionsTable {
   organization_id: string;
   number: number;
   status: Generated<RevisionStatus>;
-  /** The JointDesign document (features/analysis/core/design.ts), validated before it is written. */
-  document: ColumnType<unknown, string, string>;
-  /** The JointAnalysis computed by the core from `document` (authoritative, stored on save). */
-  result: ColumnType<unknown | null, string | null | undefined, string | null>;
+  /** The JointDesign document (features/analysis/core/design.ts), validated before it is written (JSON text). */
+  document: JSONColumnType<JointDesign>;
+  /**
+   * The JointAnalysis computed by the core from `document` (authoritative, stored on save) by
+   * `core_version`; a result of an older core is read as stored (its readers check what they use).
+   */
+  result: JSONColumnType<JointAnalysis | null, string | null | undefined, string | null>;
   core_version: string | null;
   content_hash: string | null;
   /** Optimistic-lock counter: every save sends the version it was based on. */

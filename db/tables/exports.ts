@@ -1,9 +1,16 @@
-import type { ColumnType, Generated } from "kysely";
+import type { Generated, JSONColumnType } from "kysely";
 import type { Timestamp } from "./columns";
 
 // Tables of migrations/2026_12_01_000800_create_export_files.ts.
 
 export type ExportFileStatus = "queued" | "running" | "done" | "failed";
+
+/** What a queued spacing sheet is rendered with (`export_files.options`). */
+export interface SheetJobOptions {
+  revisionNumber: number;
+  paper: "a4" | "letter";
+  units: "SI" | "US";
+}
 
 export interface ExportFilesTable {
   /** Also the pg-boss job id and the id in /api/v1/jobs/[jobId]. */
@@ -13,8 +20,8 @@ export interface ExportFilesTable {
   revision_id: string;
   /** "spacing-sheet" (the only background export so far). */
   kind: string;
-  /** Render options, e.g. { paper: "a4", units: "SI" }. */
-  options: ColumnType<unknown, string | undefined, string>;
+  /** Render options (JSON text on insert). */
+  options: JSONColumnType<SheetJobOptions, string | undefined, string>;
   status: Generated<ExportFileStatus>;
   /** 0…100. */
   progress: Generated<number>;

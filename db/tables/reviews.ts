@@ -1,9 +1,24 @@
-import type { ColumnType, Generated } from "kysely";
+import type { ColumnType, Generated, JSONColumnType } from "kysely";
 
 // Tables of review and approval (migrations/2026_12_01_000600_create_reviews.ts). All four are
 // append-only: the database refuses UPDATE and direct DELETE, so there are no Updateable types.
 // Not Generated<…>: Kysely 0.28 does not unwrap a ColumnType inside Generated.
 type CreatedAt = ColumnType<Date, Date | string | undefined, never>;
+
+/**
+ * A value a stored result depends on whose source is tagged as remembered, as listed by
+ * features/analysis/unverified-values.ts and stored with an approval.
+ */
+export interface UnverifiedValue {
+  /** Stable key ("catalogue:nuts:iso-4032-M24", "check:flange.rating"): never shown. */
+  key: string;
+  /** What the value is, in words. */
+  what: string;
+  /** The value with its unit (SI, as stored). */
+  value: string;
+  /** Where it came from: table or clause, and its edition note. */
+  source: string;
+}
 
 export type CommentTargetKind = "bolt" | "check";
 export type DecisionKind = "approved" | "returned";
@@ -34,9 +49,9 @@ export interface RevisionDecisionsTable {
   content_hash: string;
   /**
    * The unverified values (features/analysis/unverified-values.ts) the approver acknowledged, as a
-   * JSON array (migrations/2026_12_03_071500_decision_unverified_values.ts); [] for a return.
+   * JSON array (migrations/2026_12_03_071500_decision_unverified_values.ts, which checks it is one); [] for a return.
    */
-  acknowledged_unverified: ColumnType<unknown, string | undefined, never>;
+  acknowledged_unverified: JSONColumnType<UnverifiedValue[], string | undefined, never>;
   created_at: CreatedAt;
 }
 

@@ -24,7 +24,7 @@ function fromChange(change: MemberChange): CommandResult {
 
 function badInput(error: z.ZodError): CommandResult<never> {
   const fieldErrors = fieldErrorsOf(error);
-  // A malformed id is as unknown as a foreign one.
+  // A malformed id is treated like a foreign one: not found.
   if (fieldErrors.userId || fieldErrors.invitationId)
     return { ok: false, status: 404, message: "Not found in this organisation." };
   return { ok: false, status: 400, message: INVALID_FORM_MESSAGE, fieldErrors };

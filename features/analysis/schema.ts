@@ -1,12 +1,14 @@
 /**
  * zod schema of the joint design document (features/analysis/core/design.ts). Types and ranges
- * are checked here; geometric validity (bolts inside the outline, overlapping holes, a ring gasket
+ * are checked here, and each schema `satisfies z.ZodType<…>` of the core's type, so what it
+ * parses is a document of that type (a required field the core adds or retypes and the schema
+ * misses is a compile error; a new optional field the schema lacks is not caught, zod strips it); geometric validity (bolts inside the outline, overlapping holes, a ring gasket
  * over a bolt hole, …) comes from the core's `validateJointDesign`, called from a refinement so
  * every message names its field path, e.g. `bolts[3].position: bolt hole lies outside the flange outline`.
  */
 import { z } from "zod";
 import { multilineText, plainText } from "@/features/forms/plain-text";
-import type { JointDesign } from "./core/design";
+import type { FlangeDesignInputs, GasketMaterial, JointDesign, Outline } from "./core/design";
 import { MAX_BOLT_COUNT } from "./core/design";
 import { INPUT_BOUNDS, boundMessage, describeBound, type BoundName, type InputBound } from "./core/bounds";
 import { validateJointDesign } from "./core/validate";
@@ -40,7 +42,7 @@ export const outlineSchema = z.discriminatedUnion("kind", [
     widthMm: bounded("planDimensionMm"),
   }),
   z.object({ kind: z.literal("polygon"), points: z.array(point).min(3).max(4096) }),
-]);
+]) satisfies z.ZodType<Outline>;
 
 export const gasketMaterialSchema = z.object({
   name: plainText().min(1).max(200),
@@ -53,7 +55,7 @@ export const gasketMaterialSchema = z.object({
   modulusMpa: bounded("gasketModulusMpa"),
   thicknessMm: bounded("gasketThicknessMm"),
   source: plainText().max(500),
-});
+}) satisfies z.ZodType<GasketMaterial>;
 
 const ringGeometrySchema = z.discriminatedUnion("kind", [
   z.object({
@@ -126,8 +128,8 @@ export const flangeDesignSchema = z.object({
   kind: z.enum(["integral-hub", "integral-no-hub", "ring-loose", "not-entered"]),
   hub: z
     .object({
-      g0Mm: bounded("hubDimensionMm"),
-      g1Mm: bounded("hubDimensionMm"),
+      g0Mm: bounded("hubThicknessMm"),
+      g1Mm: bounded("hubThicknessMm"),
       hMm: bounded("hubDimensionMm"),
     })
     .nullable()
@@ -148,7 +150,7 @@ export const flangeDesignSchema = z.object({
     .nullable()
     .optional(),
   testPressureMpa: bounded("designPressureMpa").nullable().optional(),
-});
+}) satisfies z.ZodType<FlangeDesignInputs>;
 
 const layerSchema = z.discriminatedUnion("role", [
   z.object({ role: z.literal("gasket") }),
@@ -215,7 +217,7 @@ export const jointDesignBaseSchema = z.object({
     grid: z.object({ nx: bounded("gridCells"), ny: bounded("gridCells") }),
   }),
   flangeDesign: flangeDesignSchema.optional(),
-});
+}) satisfies z.ZodType<JointDesign>;
 
 /** Splits "bolts[3].position" into ["bolts", 3, "position"] for zod issue paths. */
 function toPath(path: string): (string | number)[] {
@@ -229,7 +231,7 @@ export const jointDesignSchema = jointDesignBaseSchema.superRefine((design, ctx)
   // A field the schema above already refused (a negative length, say) is not reported again by
   // the core's own range check: one message per field.
   const refused = new Set(ctx.issues.map((i) => (i.path ?? []).map(String).join(".")));
-  for (const issue of validateJointDesign(design as JointDesign)) {
+  for (const issue of validateJointDesign(design)) {
     const path = toPath(issue.path);
     if (refused.has(path.map(String).join("."))) continue;
     ctx.addIssue({ code: "custom", path, message: `${issue.path}: ${issue.message}` });

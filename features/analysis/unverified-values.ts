@@ -12,6 +12,7 @@
  * - applicable checks whose source or note carries the tag (one entry per rule);
  * - the result's assumptions that carry the tag (formula constants such as the cone fit).
  */
+import type { UnverifiedValue } from "@/db/tables/reviews";
 import type { JointDesign } from "./core/design";
 import { getBoltMaterialById, getStrengthForDiameter } from "./core/catalogue/bolt-materials";
 import { getFlangeTemplateById } from "./core/catalogue/flange-templates";
@@ -21,16 +22,8 @@ import { getThreadById } from "./core/catalogue/threads";
 import { getTighteningMethodById } from "./core/catalogue/tightening-methods";
 import { getWrenchClearanceById } from "./core/catalogue/wrench-clearance";
 
-export interface UnverifiedValue {
-  /** Stable key ("catalogue:nuts:iso-4032-M24", "check:flange.rating"): never shown. */
-  key: string;
-  /** What the value is, in words. */
-  what: string;
-  /** The value with its unit (SI, as stored). */
-  value: string;
-  /** Where it came from: table or clause, and its edition note. */
-  source: string;
-}
+// Its home is the table that stores the acknowledged list (revision_decisions.acknowledged_unverified).
+export type { UnverifiedValue } from "@/db/tables/reviews";
 
 /** The words every shop file prints while a result holds unverified values. */
 export const UNVERIFIED_MARK = "contains unverified table values";

@@ -1,11 +1,12 @@
 import { z } from "zod";
 import { jointDesignSchema } from "@/features/analysis/schema";
-import type { JointDesign } from "@/features/analysis/core/design";
+import { INPUT_BOUNDS } from "@/features/analysis/core/bounds";
 
 // The design document as accepted by saves, creates and the stateless analysis endpoint: the
-// core's schema (types, ranges and its geometric validator) plus an upper bound on lengths,
-// which the core leaves open: lengths are named …Mm, and anything beyond 100 m is a typo.
-const MAX_LENGTH_MM = 100_000;
+// core's schema (types, ranges and its geometric validator) plus the plan limit of the bounds
+// table on every length (named …Mm), including those the schema leaves open (a bolt's arc
+// position and its offset from the path): anything beyond 100 m is a typo.
+const MAX_LENGTH_MM = INPUT_BOUNDS.planCoordinateMm.max;
 
 function findAbsurdLengths(value: unknown, path: (string | number)[], out: (string | number)[][]): void {
   if (Array.isArray(value)) value.forEach((v, i) => findAbsurdLengths(v, [...path, i], out));
@@ -26,5 +27,4 @@ export const designDocumentSchema = z
     for (const path of absurd)
       ctx.addIssue({ code: "custom", message: `must be at most ${MAX_LENGTH_MM} mm`, path });
   })
-  .pipe(jointDesignSchema)
-  .transform((doc) => doc as JointDesign);
+  .pipe(jointDesignSchema);

@@ -229,7 +229,7 @@ export async function duplicateDesign(
     ownerId: input.ownerId,
     name,
     equipmentTag: source.equipment_tag,
-    document: source.document as JointDesign,
+    document: source.document,
   });
   return { designId };
 }

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { plainText } from "@/features/forms/plain-text";
-import type { PointMm } from "@/features/analysis/core/design";
+import { INPUT_BOUNDS } from "@/features/analysis/core/bounds";
+import { MAX_BOLT_COUNT, type PointMm } from "@/features/analysis/core/design";
 import { validateJointDesign } from "@/features/analysis/core/validate";
 import {
   buildDesignFromTemplate,
@@ -14,7 +15,9 @@ import { METRIC_BOLT_SIZES, metricHoleDiameterMm, nominalDiameterMm } from "./mo
 // schema checks the API's `template` body. After the field rules pass, the document is built and
 // run through the core's validator; what it finds is mapped back onto the field that caused it.
 
-const MAX_DIMENSION_MM = 10_000;
+// The plan-size limit of the core's bounds table (core/bounds.ts), so a template can make any
+// joint the document accepts.
+const MAX_DIMENSION_MM = INPUT_BOUNDS.planDimensionMm.max;
 
 /** A number from a form string or JSON; "", letters, NaN and ±∞ each get their own message. */
 export function numberField(
@@ -43,7 +46,12 @@ export function numberField(
 }
 
 const length = (label: string) => numberField(label, { unit: "mm", max: MAX_DIMENSION_MM });
-const boltCount = numberField("Number of bolts", { integer: true, min: 3, exclusiveMin: false, max: 512 });
+const boltCount = numberField("Number of bolts", {
+  integer: true,
+  min: 3,
+  exclusiveMin: false,
+  max: MAX_BOLT_COUNT,
+});
 const boltSize = z.enum(METRIC_BOLT_SIZES, { error: "Bolt size: choose one of the listed sizes" });
 
 export const designNameSchema = plainText({ error: "Name is required" })

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { RevisionStatus } from "@/db/tables/designs";
 import { isoOrNull } from "@/db/dates";
@@ -16,7 +17,7 @@ export interface ExportRevisionDto {
   status: RevisionStatus;
   document: JointDesign;
   /** The stored JointAnalysis (null if none was stored). */
-  result: unknown;
+  result: JointAnalysis | null;
   coreVersion: string | null;
   contentHash: string | null;
   designerName: string;
@@ -60,7 +61,7 @@ export async function findExportRevision(
     .where("r.number", "=", number)
     .executeTakeFirst();
   if (!row) return undefined;
-  const document = row.document as JointDesign;
+  const document = row.document;
   const approved = row.status === "approved";
   return {
     designId: row.design_id,

@@ -10,8 +10,8 @@ import {
   failExportFile,
   finishExportFile,
   setExportProgress,
-  type SheetJobOptions,
 } from "@/server/jobs/export-files";
+import type { SheetJobOptions } from "@/db/tables/exports";
 import { SHEET_QUEUE, ensureWorker, getQueue } from "@/server/jobs/queue";
 import { errorText, getLogger } from "@/server/log/logger";
 import { observeJob } from "@/server/metrics/registry";
@@ -48,7 +48,7 @@ export async function runSheetJob(db: Kysely<Database>, exportFileId: string): P
     );
   };
   try {
-    const options = row.options as SheetJobOptions;
+    const options = row.options;
     const loaded = await loadSheetInput(db, row.organization_id, row.design_id, options.revisionNumber, {
       paper: options.paper,
       units: options.units,

@@ -40,7 +40,13 @@ export class CcxCancelled extends Error {
   }
 }
 
-const CCX_ENV = { OMP_NUM_THREADS: "1", CCX_NPROC_EQUATION_SOLVER: "1" } as unknown as NodeJS.ProcessEnv;
+// A clean environment: one thread. NODE_ENV only because Next's types require it in every
+// environment; CalculiX does not read it.
+const CCX_ENV: NodeJS.ProcessEnv = {
+  OMP_NUM_THREADS: "1",
+  CCX_NPROC_EQUATION_SOLVER: "1",
+  NODE_ENV: "production",
+};
 const DEFAULT_TIMEOUT_MS = 120_000;
 
 /** Checks a finished process's output and folder; returns the `.dat` text. */

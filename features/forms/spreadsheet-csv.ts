@@ -185,7 +185,7 @@ export function readSpreadsheetCsv(input: Uint8Array | string): SpreadsheetCsvRe
       relax_column_count: true,
       from_line: skipFirstLine ? 2 : 1,
       info: true,
-    }) as unknown as { record: string[]; info: { lines: number } }[];
+    }) as unknown as { record: string[]; info: { lines: number } }[]; // csv-parse's types omit `info: true`
     records = out.map((r) => r.record.map(unneutralise));
     info = out.map((r) => r.info);
   } catch (err) {

@@ -18,14 +18,11 @@ export interface ReadinessState {
   checkedAt: number;
 }
 
-const globalForReadiness = globalThis as unknown as {
-  sealpitchReadiness?: {
-    state: ReadinessState | null;
-    timer?: NodeJS.Timeout;
-    pending?: Promise<ReadinessState>;
-  };
-};
-const holder = (globalForReadiness.sealpitchReadiness ??= { state: null });
+declare global {
+  var sealpitchReadiness:
+    { state: ReadinessState | null; timer?: NodeJS.Timeout; pending?: Promise<ReadinessState> } | undefined;
+}
+const holder = (globalThis.sealpitchReadiness ??= { state: null });
 
 async function check(): Promise<ReadinessState> {
   const checkedAt = Date.now();

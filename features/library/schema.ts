@@ -2,6 +2,13 @@
 // Every schema reads flat string fields (FormData and CSV cells) and produces numbers in the
 // core's units (mm, MPa). Field names are the CSV column names, so an error names the column.
 import { z } from "zod";
+import {
+  INPUT_BOUNDS,
+  describeBound,
+  type BoundName,
+  type InputBound,
+} from "@/features/analysis/core/bounds";
+import { MAX_BOLT_COUNT } from "@/features/analysis/core/design";
 import { plainText } from "@/features/forms/plain-text";
 
 const text = (max: number) =>
@@ -29,23 +36,29 @@ const optionalNumber = (check: (n: z.ZodNumber) => z.ZodNumber) =>
   z.preprocess((v) => toNumber(v) ?? null, check(z.number({ error: "must be a number" })).nullable());
 
 const positive = (n: z.ZodNumber) => n.gt(0, "must be greater than 0");
+/** The plausible range of a design input (core/bounds.ts), so a Stockroom row copied into a design passes its schema. */
+const inRange = (name: BoundName) => (n: z.ZodNumber) => {
+  const b: InputBound = INPUT_BOUNDS[name];
+  const message = `must be ${describeBound(b)}`;
+  return (b.minExclusive ? n.gt(b.min, message) : n.min(b.min, message)).max(b.max, message);
+};
 
 export const gasketInputSchema = z.object({
   name: text(120),
   gasket_type: text(60),
-  m: number((n) => n.min(0, "must be 0 or more").max(20, "must be at most 20")),
-  y_mpa: number((n) => n.min(0, "must be 0 or more").max(1000, "must be at most 1000 MPa")),
-  qmin_l1: optionalNumber(positive),
-  qsmin_l1: optionalNumber(positive),
-  qmin_l01: optionalNumber(positive),
-  qsmin_l01: optionalNumber(positive),
-  qmin_l001: optionalNumber(positive),
-  qsmin_l001: optionalNumber(positive),
-  qsmax_mpa: optionalNumber(positive),
+  m: number(inRange("gasketFactorM")),
+  y_mpa: number(inRange("gasketStressMpa")),
+  qmin_l1: optionalNumber((n) => positive(inRange("gasketStressMpa")(n))),
+  qsmin_l1: optionalNumber((n) => positive(inRange("gasketStressMpa")(n))),
+  qmin_l01: optionalNumber((n) => positive(inRange("gasketStressMpa")(n))),
+  qsmin_l01: optionalNumber((n) => positive(inRange("gasketStressMpa")(n))),
+  qmin_l001: optionalNumber((n) => positive(inRange("gasketStressMpa")(n))),
+  qsmin_l001: optionalNumber((n) => positive(inRange("gasketStressMpa")(n))),
+  qsmax_mpa: optionalNumber(inRange("gasketCrushMpa")),
   pqr: optionalNumber((n) => n.gt(0, "must be greater than 0").max(1, "must be at most 1")),
-  eg_mpa: optionalNumber(positive),
-  modulus_mpa: number(positive),
-  thickness_mm: number((n) => positive(n).max(100, "must be at most 100 mm")),
+  eg_mpa: optionalNumber(inRange("gasketModulusMpa")),
+  modulus_mpa: number(inRange("gasketModulusMpa")),
+  thickness_mm: number(inRange("gasketThicknessMm")),
   source: text(300),
   edition: optionalText(200),
 });
@@ -59,7 +72,7 @@ export const boltingInputSchema = z
     proof_mpa: optionalNumber(positive),
     yield_mpa: number(positive),
     tensile_mpa: number(positive),
-    allowable_mpa: optionalNumber(positive),
+    allowable_mpa: optionalNumber(inRange("allowableStressMpa")),
     source: text(300),
     edition: optionalText(200),
   })
@@ -74,15 +87,18 @@ export const flangeInputSchema = z
     standard: text(80),
     pressure_class: text(40),
     size: text(40),
-    outside_diameter_mm: number(positive),
-    bore_diameter_mm: optionalNumber(positive),
-    bolt_circle_diameter_mm: number(positive),
+    outside_diameter_mm: number(inRange("planDimensionMm")),
+    bore_diameter_mm: optionalNumber(inRange("planDimensionMm")),
+    bolt_circle_diameter_mm: number(inRange("planDimensionMm")),
     bolt_count: number((n) =>
-      n.int("must be a whole number").min(2, "must be at least 2").max(512, "must be at most 512"),
+      n
+        .int("must be a whole number")
+        .min(2, "must be at least 2")
+        .max(MAX_BOLT_COUNT, `must be at most ${MAX_BOLT_COUNT}`),
     ),
     bolt_designation: text(20),
     bolt_diameter_mm: number(positive),
-    hole_diameter_mm: number(positive),
+    hole_diameter_mm: number(inRange("holeDiameterMm")),
     source: text(300),
     edition: optionalText(200),
   })

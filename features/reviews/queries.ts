@@ -1,8 +1,7 @@
 import "server-only";
-import { listUnverifiedValues, type UnverifiedValue } from "@/features/analysis/unverified-values";
+import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 import type { Kysely } from "kysely";
 import type { Database } from "@/db/types";
-import type { JointDesign } from "@/features/analysis/core/design";
 import { verifySnapshot, type SnapshotIntegrity } from "@/features/analysis/content-hash";
 import { isFrozenStatus, type ReviewActor, type RevisionFacts } from "./model/review-states";
 import { readChecks } from "./model/review-checks";
@@ -122,9 +121,7 @@ export async function listDecisions(
     kind: r.kind,
     actorName: r.display_name,
     comment: r.comment,
-    acknowledgedUnverified: Array.isArray(r.acknowledged_unverified)
-      ? (r.acknowledged_unverified as UnverifiedValue[])
-      : [],
+    acknowledgedUnverified: r.acknowledged_unverified,
     at: isoString(r.created_at),
   }));
 }
@@ -224,12 +221,12 @@ export async function getRevisionReview(
     number: row.number,
     status: row.status,
     version: row.version,
-    document: row.document as JointDesign,
-    result: (row.result as Record<string, unknown> | null) ?? null,
+    document: row.document,
+    result: row.result,
     coreVersion: row.core_version,
     integrity: integrityOf(row),
     checks: readChecks(row.result),
-    unverifiedValues: listUnverifiedValues(row.document as JointDesign, row.result),
+    unverifiedValues: listUnverifiedValues(row.document, row.result),
     createdByName: row.creator_name,
     lastEditedByName: row.editor_name,
     submittedByName: row.submitter_name ?? null,
@@ -272,17 +269,17 @@ export async function compareRevisions(
     from: {
       number: a.number,
       status: a.status,
-      document: a.document as JointDesign,
+      document: a.document,
       keyResults: readKeyResults(a.result),
     },
     to: {
       number: b.number,
       status: b.status,
-      document: b.document as JointDesign,
+      document: b.document,
       keyResults: readKeyResults(b.result),
     },
     fieldChanges: diffDocuments(a.document, b.document),
-    boltMoves: listBoltMoves(a.document as JointDesign, b.document as JointDesign),
+    boltMoves: listBoltMoves(a.document, b.document),
     checkChanges: listCheckChanges(a.result, b.result),
     revisionNumbers: numbers,
   };

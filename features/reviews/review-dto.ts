@@ -1,4 +1,5 @@
 // DTOs of the review feature (types only: safe to import from client components).
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { SnapshotIntegrity } from "@/features/analysis/content-hash";
 import type { UnverifiedValue } from "@/features/analysis/unverified-values";
@@ -52,7 +53,7 @@ export interface RevisionReviewDto {
   version: number;
   document: JointDesign;
   /** The JointAnalysis (frozen for In review / Approved; the last save's result otherwise). */
-  result: Record<string, unknown> | null;
+  result: JointAnalysis | null;
   coreVersion: string | null;
   integrity: SnapshotIntegrity;
   checks: ReviewCheck[];

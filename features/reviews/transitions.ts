@@ -1,7 +1,6 @@
 import "server-only";
 import { sql, type Kysely, type Transaction } from "kysely";
 import type { Database } from "@/db/types";
-import type { JointDesign } from "@/features/analysis/core/design";
 import { CORE_VERSION } from "@/features/analysis/core/version";
 import { analyzeInWorker } from "@/server/analysis/pool";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
@@ -170,7 +169,7 @@ export async function submitRevision(
         `This revision was saved again since you opened it (version ${revision.version}, you had ${input.baseVersion}). Reload and check the latest version before submitting.`,
       );
     }
-    const document = revision.document as JointDesign;
+    const document = revision.document;
     const issues = validateJointDesign(document);
     if (issues.length > 0)
       return refused(
@@ -244,7 +243,7 @@ export async function approveRevision(
     // Table values taken from memory: the approver must have seen the list and said so. The list is
     // recomputed here from the frozen snapshot (the one the hash above vouches for), never taken
     // from the form, and stored with the decision.
-    const unverified = listUnverifiedValues(revision.document as JointDesign, revision.result);
+    const unverified = listUnverifiedValues(revision.document, revision.result);
     if (unverified.length > 0 && !input.acknowledgeUnverifiedValues) {
       return refused(
         `This result uses ${unverified.length} unverified table value${unverified.length === 1 ? "" : "s"} (taken from memory, not checked against their tables): ${unverified
@@ -425,10 +424,7 @@ export async function addComment(
       .executeTakeFirst();
     if (!revision) return refused("That revision does not exist in this organisation.");
     const targetId = input.targetKind ? (input.targetId ?? "").trim() : null;
-    if (
-      input.targetKind === "bolt" &&
-      !(revision.document as JointDesign).bolts.some((b) => b.id === targetId)
-    ) {
+    if (input.targetKind === "bolt" && !revision.document.bolts.some((b) => b.id === targetId)) {
       return refused("That bolt is not in this revision.", { targetId: ["Choose a bolt of this revision."] });
     }
     const checks = readChecks(revision.result);

@@ -2,17 +2,11 @@ import "server-only";
 import type { Kysely } from "kysely";
 import { sql } from "kysely";
 import type { Database } from "@/db/types";
-import type { ExportFileStatus } from "@/db/tables/exports";
+import type { ExportFileStatus, SheetJobOptions } from "@/db/tables/exports";
 import { isoString, isoOrNull } from "@/db/dates";
 
 // Rows of export_files: one background export (its progress and, when done, its bytes).
 // Reads filter by organisation; another organisation's job is not found.
-export interface SheetJobOptions {
-  revisionNumber: number;
-  paper: "a4" | "letter";
-  units: "SI" | "US";
-}
-
 export interface ExportJobDto {
   jobId: string;
   kind: string;

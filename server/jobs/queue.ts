@@ -9,10 +9,10 @@ import { getLogger } from "@/server/log/logger";
 // current. Started lazily, the first time a route needs the queue, so `next build` and pages that
 // never export touch nothing. Kept on globalThis so that development hot reloads do not start a
 // second instance.
-const globalForBoss = globalThis as unknown as {
-  sealpitchBoss?: Promise<PgBoss>;
-  sealpitchWorkers?: Set<string>;
-};
+declare global {
+  var sealpitchBoss: Promise<PgBoss> | undefined;
+  var sealpitchWorkers: Set<string> | undefined;
+}
 
 export { SHEET_QUEUE } from "@/db/job-queues";
 
@@ -32,13 +32,13 @@ async function startBoss(): Promise<PgBoss> {
 
 /** The started queue (a failed start is forgotten, so the next call tries again). */
 export function getQueue(): Promise<PgBoss> {
-  if (!globalForBoss.sealpitchBoss) {
-    globalForBoss.sealpitchBoss = startBoss().catch((error) => {
-      globalForBoss.sealpitchBoss = undefined;
+  if (!globalThis.sealpitchBoss) {
+    globalThis.sealpitchBoss = startBoss().catch((error) => {
+      globalThis.sealpitchBoss = undefined;
       throw error;
     });
   }
-  return globalForBoss.sealpitchBoss;
+  return globalThis.sealpitchBoss;
 }
 
 /** Registers `count` workers for `name` once per process (none when count is 0). */
@@ -47,7 +47,7 @@ export async function ensureWorker<T extends object>(
   handler: (data: T) => Promise<void>,
   count: number = getEnv().JOB_WORKERS,
 ): Promise<void> {
-  const workers = (globalForBoss.sealpitchWorkers ??= new Set());
+  const workers = (globalThis.sealpitchWorkers ??= new Set());
   if (workers.has(name) || count < 1) return;
   workers.add(name);
   try {
@@ -65,8 +65,8 @@ export async function ensureWorker<T extends object>(
 
 /** Stops the queue of this process (tests and scripts; the server keeps it for its lifetime). */
 export async function stopQueue(): Promise<void> {
-  const pending = globalForBoss.sealpitchBoss;
-  globalForBoss.sealpitchBoss = undefined;
-  globalForBoss.sealpitchWorkers = undefined;
+  const pending = globalThis.sealpitchBoss;
+  globalThis.sealpitchBoss = undefined;
+  globalThis.sealpitchWorkers = undefined;
   if (pending) await (await pending).stop({ graceful: true, wait: true, timeout: 5000 });
 }

@@ -31,7 +31,9 @@ export const REDACTED_PATHS = [
   "req.headers.authorization",
 ];
 
-const globalForLog = globalThis as unknown as { sealpitchLogger?: Logger };
+declare global {
+  var sealpitchLogger: Logger | undefined;
+}
 
 export function createLogger(level: string, destination?: pino.DestinationStream): Logger {
   return pino(
@@ -48,8 +50,8 @@ export function createLogger(level: string, destination?: pino.DestinationStream
 
 /** The process's logger (created on first use, so `next build` reads no settings). */
 export function getLogger(): Logger {
-  globalForLog.sealpitchLogger ??= createLogger(getEnv().LOG_LEVEL);
-  return globalForLog.sealpitchLogger;
+  globalThis.sealpitchLogger ??= createLogger(getEnv().LOG_LEVEL);
+  return globalThis.sealpitchLogger;
 }
 
 /** The message of an unknown thrown value, for the `err` field. */

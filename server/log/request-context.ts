@@ -11,8 +11,10 @@ export interface RequestContext {
   organizationId?: string;
 }
 
-const globalForContext = globalThis as unknown as { sealpitchRequests?: AsyncLocalStorage<RequestContext> };
-const storage = (globalForContext.sealpitchRequests ??= new AsyncLocalStorage<RequestContext>());
+declare global {
+  var sealpitchRequests: AsyncLocalStorage<RequestContext> | undefined;
+}
+const storage = (globalThis.sealpitchRequests ??= new AsyncLocalStorage<RequestContext>());
 
 export const REQUEST_ID_HEADER = "x-request-id";
 

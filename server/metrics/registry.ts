@@ -17,7 +17,9 @@ interface Metrics {
   poolConnections: Gauge<"state">;
 }
 
-const globalForMetrics = globalThis as unknown as { sealpitchMetrics?: Metrics };
+declare global {
+  var sealpitchMetrics: Metrics | undefined;
+}
 
 function createMetrics(): Metrics {
   const registry = new Registry();
@@ -79,8 +81,8 @@ function createMetrics(): Metrics {
 }
 
 export function getMetrics(): Metrics {
-  globalForMetrics.sealpitchMetrics ??= createMetrics();
-  return globalForMetrics.sealpitchMetrics;
+  globalThis.sealpitchMetrics ??= createMetrics();
+  return globalThis.sealpitchMetrics;
 }
 
 export function observeRequest(route: string, method: string, status: number, seconds: number): void {

@@ -266,10 +266,9 @@ describe("work limits of one analysis", () => {
       .select("document")
       .where("design_id", "=", designId)
       .executeTakeFirstOrThrow();
-    const base = document as { estimator: Record<string, unknown> };
     const heavy = {
-      ...base,
-      estimator: { ...base.estimator, samplesPerPitch: 1024, grid: { nx: 2048, ny: 2048 } },
+      ...document,
+      estimator: { ...document.estimator, samplesPerPitch: 1024, grid: { nx: 2048, ny: 2048 } },
     };
     const response = await analysesPost(
       appRequest("/api/v1/analyses", { method: "POST", cookie: dana, body: heavy }),

@@ -127,11 +127,18 @@ export const INPUT_BOUNDS = {
     unit: "MPa",
     why: "an entered allowable stress of bolting, flange or cover; 2000 MPa is beyond the tensile strength of every catalogue material [practice]",
   },
+  hubThicknessMm: {
+    min: 0,
+    minExclusive: true,
+    max: 5000,
+    unit: "mm",
+    why: "a flange hub's wall thickness g0 or g1 is positive (Appendix 2 divides by g0); 5 m bounds the largest forged or fabricated hub [practice]",
+  },
   hubDimensionMm: {
     min: 0,
     max: 5000,
     unit: "mm",
-    why: "a flange hub's thickness or length; 5 m bounds the largest forged or fabricated hub [practice]",
+    why: "a flange hub's length; 5 m bounds the largest forged or fabricated hub [practice]",
   },
   designPressureMpa: {
     min: 0,

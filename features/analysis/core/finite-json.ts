@@ -12,7 +12,8 @@ export function toFiniteJson<T>(value: T): { value: T; replaced: number } {
       return null;
     }
     if (v === null || typeof v !== "object") return v;
-    if (ArrayBuffer.isView(v)) return Array.from(v as unknown as ArrayLike<number>, (x) => walk(x));
+    if (ArrayBuffer.isView(v) && !(v instanceof DataView))
+      return Array.from(v as Float64Array, (x) => walk(x));
     if (Array.isArray(v)) return v.map(walk);
     const out: Record<string, unknown> = {};
     for (const [k, x] of Object.entries(v as Record<string, unknown>)) if (x !== undefined) out[k] = walk(x);

@@ -59,6 +59,7 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
     const out = new Array<number>(a.length);
     for (let i = 0; i < a.length; i++) {
       const v = a[i];
+      // null where JSON would write it: the type stays number[] as in the JSON result.
       out[i] = Number.isFinite(v) ? v : (null as unknown as number);
     }
     return out;

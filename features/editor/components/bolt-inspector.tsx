@@ -1,10 +1,11 @@
 "use client";
+import { INPUT_BOUNDS } from "@/features/analysis/core/bounds";
 import type { NumberFieldSpec } from "../model/field-specs";
 import { getBoltCoordinates } from "../model/set-bolt-coordinates";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 
-const BIG = 1e5;
+const BIG = INPUT_BOUNDS.planCoordinateMm.max;
 const spec = (
   path: string,
   label: string,

@@ -54,7 +54,7 @@ export function DesignWorkspace({
   const [unitMessage, setUnitMessage] = useState<string | null>(null);
   const [unitPending, startUnits] = useTransition();
   const [stored, setStored] = useState<{ document: JointDesign; result: JointAnalysis } | null>(
-    dto.result ? { document: dto.document, result: dto.result as unknown as JointAnalysis } : null,
+    dto.result ? { document: dto.document, result: dto.result } : null,
   );
   const [selected, setSelected] = useState<string | null>(null);
   const [activeCheck, setActiveCheck] = useState<string | null>(null);

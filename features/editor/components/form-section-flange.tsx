@@ -7,7 +7,7 @@ import { FLANGE_MATERIALS } from "@/features/analysis/core/catalogue/flange-mate
 import { findThread } from "@/features/analysis/core/catalogue/threads";
 import type { FlangeDesignInputs } from "@/features/analysis/core/design";
 import { COVER_SKETCHES } from "@/features/analysis/core/flange-design/flat-cover";
-import type { NumberFieldSpec } from "../model/field-specs";
+import { FIELD_SPECS } from "../model/field-specs";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
@@ -20,33 +20,13 @@ const KIND_OPTIONS: { value: FlangeDesignInputs["kind"]; label: string }[] = [
   { value: "ring-loose", label: "Loose ring, no hub" },
 ];
 
-const len = (path: string, label: string, min = 0): NumberFieldSpec => ({
-  path,
-  label,
-  quantity: "length",
-  min,
-  minExclusive: true,
-  max: 1000,
-});
 const SPECS = {
-  g0: len("flangeDesign.hub.g0Mm", "Hub at small end g0 / shell wall"),
-  g1: len("flangeDesign.hub.g1Mm", "Hub at flange back g1"),
-  h: { ...len("flangeDesign.hub.hMm", "Hub length h"), minExclusive: false },
-  test: {
-    path: "flangeDesign.testPressureMpa",
-    label: "Hydrostatic test pressure (0: not entered)",
-    quantity: "stress",
-    min: 0,
-    max: 1000,
-  },
-  boltAllowable: {
-    path: "fastener.enteredAllowable.valueMpa",
-    label: "Allowable bolt stress, entered (0: none)",
-    quantity: "stress",
-    min: 0,
-    max: 2000,
-  },
-} satisfies Record<string, NumberFieldSpec>;
+  g0: FIELD_SPECS.hubSmallEnd,
+  g1: FIELD_SPECS.hubBack,
+  h: FIELD_SPECS.hubLength,
+  test: FIELD_SPECS.testPressure,
+  boltAllowable: FIELD_SPECS.boltAllowable,
+};
 
 /**
  * "Flange and cover" section: the Appendix 2 flange type and hub, flange and cover materials, the

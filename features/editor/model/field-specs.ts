@@ -5,7 +5,7 @@
  * internal units as in core/design.ts.
  */
 import { INPUT_BOUNDS, type BoundName, type InputBound } from "@/features/analysis/core/bounds";
-import type { UnitSystem } from "@/features/analysis/core/design";
+import { MAX_BOLT_COUNT, type UnitSystem } from "@/features/analysis/core/design";
 import { fromDisplay, unitLabel, type Quantity } from "./quantities";
 
 export interface NumberFieldSpec {
@@ -148,7 +148,48 @@ export const FIELD_SPECS = {
     quantity: "angle",
     ...fromBound("coneAngleDeg"),
   },
-  boltCount: { path: "bolts", label: "Bolt count", quantity: "count", min: 1, max: 512, integer: true },
+  hubSmallEnd: {
+    path: "flangeDesign.hub.g0Mm",
+    label: "Hub at small end g0 / shell wall",
+    quantity: "length",
+    ...fromBound("hubThicknessMm"),
+  },
+  hubBack: {
+    path: "flangeDesign.hub.g1Mm",
+    label: "Hub at flange back g1",
+    quantity: "length",
+    ...fromBound("hubThicknessMm"),
+  },
+  hubLength: {
+    path: "flangeDesign.hub.hMm",
+    label: "Hub length h",
+    quantity: "length",
+    ...fromBound("hubDimensionMm"),
+  },
+  /** 0 clears the entry (null), so the field takes 0 although the document's range starts above it. */
+  testPressure: {
+    path: "flangeDesign.testPressureMpa",
+    label: "Hydrostatic test pressure (0: not entered)",
+    quantity: "stress",
+    ...fromBound("designPressureMpa"),
+  },
+  /** 0 clears the entry (null), so the field takes 0 although the document's range starts above it. */
+  boltAllowable: {
+    path: "fastener.enteredAllowable.valueMpa",
+    label: "Allowable bolt stress, entered (0: none)",
+    quantity: "stress",
+    ...fromBound("allowableStressMpa"),
+    min: 0,
+    minExclusive: false,
+  },
+  boltCount: {
+    path: "bolts",
+    label: "Bolt count",
+    quantity: "count",
+    min: 1,
+    max: MAX_BOLT_COUNT,
+    integer: true,
+  },
 } satisfies Record<string, NumberFieldSpec>;
 
 export function layerThicknessSpec(index: number): NumberFieldSpec {

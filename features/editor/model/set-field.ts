@@ -12,8 +12,9 @@ export function setField(design: JointDesign, path: string, value: unknown): Joi
     keys.some((k) => k === "" || k === "__proto__" || k === "constructor" || k === "prototype")
   )
     return design;
-  const out = setIn(design as unknown as Record<string, unknown>, keys, value);
-  return out === null ? design : (out as unknown as JointDesign);
+  const out = setIn(design, keys, value);
+  // The path is dynamic, so the copy's type is asserted: only the value at the path changed.
+  return out === null ? design : (out as JointDesign);
 }
 
 function setIn(obj: unknown, keys: string[], value: unknown): unknown | null {

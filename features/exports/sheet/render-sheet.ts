@@ -25,7 +25,6 @@ import { drawBoltingKit } from "./draw-bolting-kit";
 import { buildPassLog } from "@/features/exports/model/pass-log";
 import { drawPassLog } from "./draw-pass-log";
 import { flangeSummaryLines } from "@/features/analysis/flange-summary";
-import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import {
   normaliseStatus,
   type SheetCheck,
@@ -218,7 +217,7 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
 }
 
 function flangeSection(ctx: SheetContext): void {
-  const result = (ctx.input.result ?? null) as JointAnalysis | null;
+  const result = ctx.input.result;
   heading(
     ctx,
     "Flange",

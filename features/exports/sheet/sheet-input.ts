@@ -1,3 +1,4 @@
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { RevisionStatus } from "@/db/tables/designs";
 
@@ -34,7 +35,8 @@ export interface SheetInput {
     integrityNote?: string;
   };
   document: JointDesign;
-  result: unknown;
+  /** The stored JointAnalysis (null if none was stored); read defensively, it may be an older core's. */
+  result: JointAnalysis | null;
   justifications: SheetJustification[];
   paper: SheetPaper;
   units: UnitSystem;

@@ -244,7 +244,7 @@ export function flattenDxf(parsed: IDxf): FlatDrawing {
 
   const walk = (entities: IEntity[], m: Affine, insertLayer: string | null, depth: number, via: boolean) => {
     for (const e of entities) {
-      const any = e as unknown as EntityFields;
+      const any: EntityFields = e;
       if (any.inPaperSpace) continue;
       const rawLayer = e.layer ?? "0";
       const layer = insertLayer !== null && rawLayer === "0" ? insertLayer : rawLayer;
@@ -527,6 +527,8 @@ class CircleReader {
   }
 }
 
+// dxf-parser types a handler's entity as IEntity with every field required (and the handle a
+// number); its own readers leave fields out and keep the handle as text, as ours do.
 type Handler = Parameters<DxfParser["registerEntityHandler"]>[0];
 
 /** dxf-parser with the SPLINE and CIRCLE readers above. */

@@ -61,11 +61,11 @@ export interface CsvImportPlan {
   summary: string;
 }
 
-const SCHEMAS = {
+const SCHEMAS: { [K in LibraryKind]: z.ZodType<InputOf<K>> } = {
   gasket: gasketInputSchema,
   bolting: boltingInputSchema,
   flange: flangeInputSchema,
-} as const;
+};
 export const MAX_CSV_ROWS = 2000;
 
 export function describeCsvError(e: CsvFieldError): string {
@@ -111,7 +111,7 @@ export function parseLibraryCsv<K extends LibraryKind>(
       errors: [],
     };
 
-  const schema = SCHEMAS[kind] as unknown as z.ZodType<InputOf<K>>;
+  const schema: z.ZodType<InputOf<K>> = SCHEMAS[kind];
   const rows: CsvPreviewRow[] = [];
   const inputs: { line: number; input: InputOf<K> }[] = [];
   const seen = new Map<string, number>();

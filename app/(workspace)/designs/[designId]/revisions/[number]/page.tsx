@@ -16,7 +16,6 @@ import { independenceNote } from "@/features/reviews/independence-note";
 import { getRevisionReview } from "@/features/reviews/queries";
 import { CautionPanel } from "@/features/ui/caution-panel";
 import { FlangeSummary } from "@/features/analysis/components/flange-summary";
-import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import { requireViewer } from "@/server/auth/guard";
 import { ReviewScreen } from "./_components/review-screen";
 
@@ -56,7 +55,7 @@ export default async function RevisionReviewPage({
           <h2 id="flange-heading" className="text-lead font-semibold text-ink-900">
             Flange
           </h2>
-          <FlangeSummary analysis={review.result as unknown as JointAnalysis} units={viewer.unitSystem} />
+          <FlangeSummary analysis={review.result} units={viewer.unitSystem} />
         </section>
       ) : null}
       <CautionPanel />

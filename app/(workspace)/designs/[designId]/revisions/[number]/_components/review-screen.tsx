@@ -1,6 +1,5 @@
 "use client";
 
-import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { ReadOnlyJointView } from "@/features/editor/components/read-only-joint-view";
 import type { AddCommentAction } from "@/features/reviews/components/comment-thread";
@@ -23,7 +22,7 @@ export function ReviewScreen(props: {
       renderDrawing={(highlight) => (
         <ReadOnlyJointView
           document={review.document}
-          result={review.result as unknown as JointAnalysis | null}
+          result={review.result}
           unitSystem={props.unitSystem}
           highlight={highlight}
         />
