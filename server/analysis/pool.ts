@@ -147,30 +147,32 @@ export function createAnalysisPool(options: AnalysisPoolOptions): AnalysisPool {
   };
 }
 
-const globalForPool = globalThis as unknown as { sealpitchAnalysisPool?: AnalysisPool };
+declare global {
+  var sealpitchAnalysisPool: AnalysisPool | undefined;
+}
 
 /** The process's pool, made on first use from ANALYSIS_WORKERS and ANALYSIS_TIME_LIMIT_MS. */
 export function getAnalysisPool(): AnalysisPool {
-  if (!globalForPool.sealpitchAnalysisPool) {
+  if (!globalThis.sealpitchAnalysisPool) {
     const env = parseEnvKeys(["NODE_ENV", "ANALYSIS_WORKERS", "ANALYSIS_TIME_LIMIT_MS"]);
     ensureWorkerFile(env.NODE_ENV === "production");
-    globalForPool.sealpitchAnalysisPool = createAnalysisPool({
+    globalThis.sealpitchAnalysisPool = createAnalysisPool({
       workers: env.ANALYSIS_WORKERS ?? defaultAnalysisWorkers(),
       timeLimitMs: env.ANALYSIS_TIME_LIMIT_MS,
     });
   }
-  return globalForPool.sealpitchAnalysisPool;
+  return globalThis.sealpitchAnalysisPool;
 }
 
 /** The process's pool if one was made (the metrics scrape does not start one). */
 export function peekAnalysisPool(): AnalysisPool | undefined {
-  return globalForPool.sealpitchAnalysisPool;
+  return globalThis.sealpitchAnalysisPool;
 }
 
 /** Stops the process's pool (scripts and tests; the server keeps it for its lifetime). */
 export async function closeAnalysisPool(): Promise<void> {
-  const pool = globalForPool.sealpitchAnalysisPool;
-  globalForPool.sealpitchAnalysisPool = undefined;
+  const pool = globalThis.sealpitchAnalysisPool;
+  globalThis.sealpitchAnalysisPool = undefined;
   await pool?.close();
 }
 
