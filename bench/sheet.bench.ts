@@ -52,7 +52,18 @@ export async function run(): Promise<void> {
   printMedian(
     "sheet",
     "96-bolt drilling template DXF",
-    medianMs(() => drillingTemplateFor(design, approved.result), 50),
+    medianMs(
+      () =>
+        drillingTemplateFor(design, approved.result, {
+          designName: design.name,
+          equipmentTag: "E-3301",
+          number: 1,
+          status: "approved",
+          approvedAt: "2026-11-30T09:15:00.000Z",
+          approverName: "Arlo Approver",
+        }),
+      50,
+    ),
     50,
   );
 }

@@ -10,7 +10,7 @@ import { errorText, getLogger } from "@/server/log/logger";
 
 const BUILDERS = {
   "hole-list": (r: ExportRevisionDto) => holeListFor(r.document, r.result),
-  "drilling-template": (r: ExportRevisionDto) => drillingTemplateFor(r.document, r.result),
+  "drilling-template": (r: ExportRevisionDto) => drillingTemplateFor(r.document, r.result, r),
   "bolting-kit": (r: ExportRevisionDto) => boltingKitFor(r.document, r.result),
   "pass-log": (r: ExportRevisionDto) => passLogFor(r.document, r.result),
 } as const;

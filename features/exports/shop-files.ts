@@ -3,6 +3,7 @@ import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 import { buildBoltRows } from "./model/bolt-rows";
 import { buildBoltingKit, buildBoltingKitCsv } from "./model/bolting-kit";
 import { buildDrillingTemplateDxf } from "./model/drilling-template";
+import type { DrillingTitle } from "./model/drilling-notes";
 import { buildHoleListCsv } from "./model/hole-list";
 import { buildPassLog, buildPassLogCsv } from "./model/pass-log";
 
@@ -24,9 +25,31 @@ export function holeListFor(document: JointDesign, result: unknown): string {
   });
 }
 
-/** The drilling template of a stored revision. */
-export function drillingTemplateFor(document: JointDesign, result: unknown): string {
+/** The facts of a stored revision the drilling template's title block names (ExportRevisionDto has them). */
+export interface ShopRevisionFacts {
+  designName: string;
+  equipmentTag: string;
+  number: number;
+  status: DrillingTitle["status"];
+  approvedAt: string | null;
+  approverName: string | null;
+}
+
+/** The drilling template of a stored revision, with hole callouts and a title block. */
+export function drillingTemplateFor(
+  document: JointDesign,
+  result: unknown,
+  revision: ShopRevisionFacts,
+  exportedAt: Date = new Date(),
+): string {
   return buildDrillingTemplateDxf(document, rowsFor(document, result), {
+    designName: revision.designName,
+    equipmentTag: revision.equipmentTag,
+    revisionNumber: revision.number,
+    status: revision.status,
+    approvedAt: revision.status === "approved" ? revision.approvedAt : null,
+    approver: revision.status === "approved" ? revision.approverName : null,
+    exportedAt: exportedAt.toISOString(),
     unverified: listUnverifiedValues(document, result).length > 0,
   });
 }

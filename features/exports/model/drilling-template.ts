@@ -4,7 +4,7 @@ import { getBoltPath, outlineToPolyline } from "@/features/analysis/core/geometr
 import { pathToPolyline } from "@/features/analysis/core/path";
 import type { BoltRow } from "./bolt-rows";
 import { lengthUnitFor } from "./length-unit";
-import { UNVERIFIED_MARK } from "@/features/analysis/unverified-values";
+import { drawHoleCallouts, drawTitleBlock, type DrillingTitle } from "./drilling-notes";
 
 /** Bounding box of an outline, mm. */
 export function outlineExtentMm(outline: Outline): {
@@ -31,6 +31,7 @@ export const DXF_LAYERS = {
   holes: "HOLES",
   centreMarks: "CENTRE-MARKS",
   labels: "LABELS",
+  holeNotes: "HOLE-NOTES",
   title: "TITLE",
 } as const;
 
@@ -46,13 +47,15 @@ function drawOutline(d: Drawing, outline: Outline, k: (mm: number) => number): v
 
 /**
  * The drilling template as DXF (R12-style entities written by dxf-writer): outline, bore, gasket,
- * bolt path, one circle per hole at the hole diameter, a centre cross per hole, bolt numbers.
+ * bolt path, one circle per hole at the hole diameter, a centre cross per hole, bolt numbers, hole
+ * callouts with a table of positions (HOLE-NOTES) and a title block (TITLE), both on layers a CAD
+ * user (and our Drawing intake) can switch off.
  * Coordinates in the design's length unit with $INSUNITS set to match (4 = mm, 1 = in).
  */
 export function buildDrillingTemplateDxf(
   design: JointDesign,
   rows: readonly BoltRow[],
-  options: { unverified?: boolean } = {},
+  title: DrillingTitle,
 ): string {
   const u = lengthUnitFor(design.units);
   const k = u.fromMm;
@@ -65,6 +68,7 @@ export function buildDrillingTemplateDxf(
   d.addLayer(DXF_LAYERS.holes, Drawing.ACI.RED, "CONTINUOUS");
   d.addLayer(DXF_LAYERS.centreMarks, Drawing.ACI.YELLOW, "CONTINUOUS");
   d.addLayer(DXF_LAYERS.labels, Drawing.ACI.WHITE, "CONTINUOUS");
+  d.addLayer(DXF_LAYERS.holeNotes, Drawing.ACI.WHITE, "CONTINUOUS");
   d.addLayer(DXF_LAYERS.title, Drawing.ACI.WHITE, "CONTINUOUS");
 
   d.setActiveLayer(DXF_LAYERS.outline);
@@ -114,12 +118,11 @@ export function buildDrillingTemplateDxf(
   d.setActiveLayer(DXF_LAYERS.labels);
   for (const row of rows)
     d.drawText(k(row.xMm) + r * 1.1, k(row.yMm) + r * 1.1, r * 0.9, 0, String(row.number));
-  if (options.unverified) {
-    // Below the outline, on the TITLE layer: the template's title line names what remains to check.
-    const ext = outlineExtentMm(design.outline);
-    const h = k(Math.max(2.5, Math.min(6, (ext.maxX - ext.minX) / 60)));
-    d.setActiveLayer(DXF_LAYERS.title);
-    d.drawText(k(ext.minX), k(ext.minY) - 3 * h, h, 0, UNVERIFIED_MARK.toUpperCase());
-  }
+  // Text sized to the part (2.5–6 mm), callouts above it, the hole table right, the title block below.
+  const ext = outlineExtentMm(design.outline);
+  const h = k(Math.max(2.5, Math.min(6, (ext.maxX - ext.minX) / 60)));
+  const frame = { d, u, ext, h };
+  drawHoleCallouts(frame, design, rows, DXF_LAYERS.holeNotes);
+  drawTitleBlock(frame, title, DXF_LAYERS.title);
   return d.toDxfString();
 }

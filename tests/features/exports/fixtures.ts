@@ -7,6 +7,7 @@ import { analyzeJoint, type JointAnalysis } from "@/features/analysis/core/analy
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getBoltPathLengthMm, placeBoltsEqually } from "@/features/analysis/core/geometry";
 import type { SheetInput } from "@/features/exports/sheet/sheet-input";
+import type { ShopRevisionFacts } from "@/features/exports/shop-files";
 
 // Shared helpers of the export suites: the example documents, a 96-bolt flange built from one by
 // re-placing its bolts with the core's geometry helper, and poppler (pdftotext/pdftoppm) wrappers.
@@ -65,6 +66,24 @@ export function sheetInputFor(
     ...rest,
   };
 }
+
+/** The stored revision's facts the drilling template names, as `sheetInputFor` has them. */
+export function revisionFactsFor(
+  design: JointDesign,
+  status: SheetInput["revision"]["status"] = "approved",
+): ShopRevisionFacts {
+  return {
+    designName: design.name,
+    equipmentTag: "E-2107",
+    number: 7,
+    status,
+    approvedAt: status === "approved" ? "2026-11-30T09:15:00.000Z" : null,
+    approverName: status === "approved" ? "Arlo Approver" : null,
+  };
+}
+
+/** The export date the shop-file tests use. */
+export const EXPORTED_AT = new Date("2026-12-01T08:00:00.000Z");
 
 /** Runs fn with a fresh temporary folder, removed afterwards. */
 export function withTempDir<T>(fn: (dir: string) => T): T {

@@ -8,7 +8,15 @@ import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { drillingTemplateFor, holeListFor } from "@/features/exports/shop-files";
 import { parseDxfText } from "@/features/imports/model/dxf-entities";
 import { parseBoltCsv } from "@/features/imports/model/parse-bolt-csv";
-import { analyse, loadExample, pdfPageCount, pdfToText, sheetInputFor } from "./fixtures";
+import {
+  analyse,
+  EXPORTED_AT,
+  loadExample,
+  pdfPageCount,
+  pdfToText,
+  revisionFactsFor,
+  sheetInputFor,
+} from "./fixtures";
 
 // "contains unverified table values" on the shop files while the stored result holds table values
 // taken from memory: the sheet's title strip on every page (read back with pdftotext), the hole
@@ -72,7 +80,7 @@ describe("the unverified-values mark on the shop files", () => {
     expect(text).not.toContain("UNVERIFIED TABLE VALUES");
     expect(text).toContain("APPROVED");
     expect(holeListFor(design, result).split("\r\n")[0]).not.toContain(UNVERIFIED_COLUMN);
-    const dxf = parseDxfText(drillingTemplateFor(design, result))!;
+    const dxf = parseDxfText(drillingTemplateFor(design, result, revisionFactsFor(design), EXPORTED_AT))!;
     expect(
       dxf.entities.some(
         (e) => e.layer === "TITLE" && /UNVERIFIED/.test(String((e as { text?: string }).text)),
@@ -93,7 +101,9 @@ describe("the unverified-values mark on the shop files", () => {
 
   it("drilling template: the TITLE layer says so (read with the project's DXF reader)", () => {
     const design = loadExample("obround-manway");
-    const dxf = parseDxfText(drillingTemplateFor(design, analyse(design)))!;
+    const dxf = parseDxfText(
+      drillingTemplateFor(design, analyse(design), revisionFactsFor(design), EXPORTED_AT),
+    )!;
     const titles = dxf.entities.filter((e) => e.layer === "TITLE").map((e) => (e as { text?: string }).text);
     expect(titles).toContain(MARK.toUpperCase());
   });
