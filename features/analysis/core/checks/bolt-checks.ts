@@ -11,6 +11,20 @@ import { percent } from "../units";
 export const ASSEMBLY_STRESS_MIN_FRACTION_OF_YIELD = 0.3;
 export const ASSEMBLY_STRESS_MAX_FRACTION_OF_YIELD = 0.55;
 
+/** Length that covers the grip and full nut engagement (the bolt-length rule's limit), mm. */
+export function requiredBoltLengthMm(model: JointModel): number {
+  const f = model.design.fastener;
+  const d = model.nominalDiameterMm;
+  const nutH = d; // heavy hex nut height ≈ D [mem]; metric ISO 4032 ≈ 0.8–0.9·d, so this is conservative.
+  const tapped = f.termination.kind === "tapped-hole" ? f.termination : null;
+  return tapped
+    ? model.gripMm -
+        Math.min(tapped.memberThicknessMm, d) / 2 +
+        tapped.engagementMm +
+        (f.form === "stud" ? nutH : 0)
+    : model.gripMm + (f.form === "stud" ? 2 : 1) * nutH;
+}
+
 export function checkBolts(model: JointModel): CheckRecord[] {
   const As = model.thread.tensileStressAreaMm2;
   const sy = model.strength.yieldMpa;
@@ -77,14 +91,8 @@ export function checkBolts(model: JointModel): CheckRecord[] {
   );
   const f = model.design.fastener;
   const d = model.nominalDiameterMm;
-  const nutH = d; // heavy hex nut height ≈ D [mem]; metric ISO 4032 ≈ 0.8–0.9·d, so this is conservative.
   const tapped = f.termination.kind === "tapped-hole" ? f.termination : null;
-  const needed = tapped
-    ? model.gripMm -
-      Math.min(tapped.memberThicknessMm, d) / 2 +
-      tapped.engagementMm +
-      (f.form === "stud" ? nutH : 0)
-    : model.gripMm + (f.form === "stud" ? 2 : 1) * nutH;
+  const needed = requiredBoltLengthMm(model);
   out.push(
     makeCheck({
       id: "bolt.length",

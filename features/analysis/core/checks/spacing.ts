@@ -35,19 +35,52 @@ export function maxBoltPitchMm(boltDiameterMm: number, flangeThicknessMm: number
   return 2 * boltDiameterMm + (6 * flangeThicknessMm) / (m + 0.5);
 }
 
+/** The limits the spacing rules apply to one joint model (mm); the pattern search prunes with them. */
+export interface SpacingLimits {
+  /** Bs,max = 2a + 6t/(m + 0.5): above it the pitch fails. */
+  maxPitchMm: number;
+  /** 2a + t: above it the pitch warns (flange moment multiplied). */
+  momentPitchMm: number;
+  /** Smallest chord the tool needs: half the nut across corners plus half the tool OD. */
+  minChordMm: number;
+  acrossCornersMm: number;
+  toolOutsideDiameterMm: number;
+  tool: "socket" | "tensioner";
+  thinnestPlateMm: number;
+}
+
+export function spacingLimits(model: JointModel): SpacingLimits {
+  const design = model.design;
+  const d = model.nominalDiameterMm;
+  const plates = design.layers.filter((l) => l.role !== "gasket") as { thicknessMm: number }[];
+  const t = Math.min(...plates.map((l) => l.thicknessMm));
+  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / fm.cos(Math.PI / 6);
+  const tool = getTighteningMethodById(design.assembly.method)?.tool ?? "socket";
+  const toolOd = toolOutsideDiameterMm(tool, ac, d);
+  return {
+    maxPitchMm: maxBoltPitchMm(d, t, design.gasket.material.m),
+    momentPitchMm: 2 * d + t,
+    minChordMm: ac / 2 + toolOd / 2,
+    acrossCornersMm: ac,
+    toolOutsideDiameterMm: toolOd,
+    tool,
+    thinnestPlateMm: t,
+  };
+}
+
 export function checkSpacing(model: JointModel, coneGoverns: boolean): CheckRecord[] {
   const design = model.design;
   const spacings = getNeighbourSpacings(design);
   const d = model.nominalDiameterMm;
-  const plates = design.layers.filter((l) => l.role !== "gasket") as { thicknessMm: number }[];
-  const t = Math.min(...plates.map((l) => l.thicknessMm));
   const m = design.gasket.material.m;
-  const bsMax = maxBoltPitchMm(d, t, m);
-  const bsMoment = 2 * d + t;
-  const ac = model.nut?.acrossCornersMm ?? (1.5 * d) / fm.cos(Math.PI / 6);
-  const tool = getTighteningMethodById(design.assembly.method)?.tool ?? "socket";
-  const toolOd = toolOutsideDiameterMm(tool, ac, d);
-  const minChord = ac / 2 + toolOd / 2;
+  const limits = spacingLimits(model);
+  const t = limits.thinnestPlateMm;
+  const bsMax = limits.maxPitchMm;
+  const bsMoment = limits.momentPitchMm;
+  const ac = limits.acrossCornersMm;
+  const tool = limits.tool;
+  const toolOd = limits.toolOutsideDiameterMm;
+  const minChord = limits.minChordMm;
   const tema = findWrenchClearance(model.thread.designation);
   const overlapApplies = design.gasket.kind === "full-face" || coneGoverns;
   const coneDiameter = 2 * model.coneRadiusMm;
