@@ -2,8 +2,8 @@ import { expect, test } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
 // The shop files through the running production build: a signed-in member downloads the sheet,
-// hole list and drilling template of a seeded design, and a queued sheet finishes in the
-// server's own pg-boss worker.
+// hole list, drilling template, Bolting kit and Pass log of a seeded design (the Pass log PDF from
+// the Shop files panel), and a queued sheet finishes in the server's own pg-boss worker.
 test("a member downloads the shop files of a seeded design and a queued sheet finishes", async ({
   page,
   baseURL,
@@ -37,6 +37,27 @@ test("a member downloads the shop files of a seeded design and a queued sheet fi
   const dxf = await page.request.get(`${base}/drilling.dxf`);
   expect(dxf.status()).toBe(200);
   expect(await dxf.text()).toContain("HOLES");
+  expect(await dxf.text()).toContain("HOLE-NOTES");
+  const kit = await page.request.get(`${base}/bolting-kit.csv`);
+  expect(kit.status()).toBe(200);
+  expect((await kit.text()).split("\r\n")[0]).toMatch(/^item,part,description,size,length_(mm|in),/);
+  const log = await page.request.get(`${base}/pass-log.csv`);
+  expect(log.status()).toBe(200);
+  expect((await log.text()).split("\r\n")[0]).toMatch(/^pass,pass_name,pattern,/);
+
+  // The Shop files panel offers the new downloads; the Pass log PDF follows the paper and units.
+  await page.goto(`/designs/${design.designId}`);
+  const panel = page.getByRole("region", { name: "Shop files" }).last();
+  for (const [label, path] of [
+    ["Bolting kit (CSV)", "bolting-kit.csv"],
+    ["Pass log (CSV)", "pass-log.csv"],
+  ])
+    await expect(panel.getByRole("link", { name: label })).toHaveAttribute("href", `${base}/${path}`);
+  await panel.getByLabel("Paper").selectOption("letter");
+  const logPdf = panel.getByRole("link", { name: "Pass log (PDF)" });
+  await expect(logPdf).toHaveAttribute("href", new RegExp(`^${base}/pass-log\\.pdf\\?paper=letter&units=`));
+  const [download] = await Promise.all([page.waitForEvent("download"), logPdf.click()]);
+  expect(download.suggestedFilename()).toMatch(new RegExp(`-rev${design.revisionNumber}-pass-log\\.pdf$`));
 
   const queued = await page.request.post(`${base}/sheet.pdf?paper=a4&units=SI`, {
     headers: { origin: new URL(baseURL!).origin },

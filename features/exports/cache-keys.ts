@@ -10,6 +10,12 @@ export const sheetPdfUrl = (
   paper: "a4" | "letter",
   units: "SI" | "US",
 ): string => `${base(designId, number)}/sheet.pdf?paper=${paper}&units=${units}`;
+export const passLogPdfUrl = (
+  designId: string,
+  number: number,
+  paper: "a4" | "letter",
+  units: "SI" | "US",
+): string => `${base(designId, number)}/pass-log.pdf?paper=${paper}&units=${units}`;
 export const holeListUrl = (designId: string, number: number): string =>
   `${base(designId, number)}/holes.csv`;
 export const drillingTemplateUrl = (designId: string, number: number): string =>

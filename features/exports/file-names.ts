@@ -1,7 +1,8 @@
 // Download names of the shop files (our own pattern, listed in the DEVELOPERS.md glossary):
 // <tag>-<name>-<design id, 8 hex>-rev<N>-spacing-sheet.pdf, …-hole-list.csv, …-drilling-template.dxf,
-// …-bolting-kit.csv, …-pass-log.csv.
-export type ExportKind = "spacing-sheet" | "hole-list" | "drilling-template" | "bolting-kit" | "pass-log";
+// …-bolting-kit.csv, …-pass-log.csv, …-pass-log.pdf.
+export type ExportKind =
+  "spacing-sheet" | "hole-list" | "drilling-template" | "bolting-kit" | "pass-log" | "pass-log-sheet";
 
 const SUFFIX: Record<ExportKind, string> = {
   "spacing-sheet": "spacing-sheet.pdf",
@@ -9,6 +10,7 @@ const SUFFIX: Record<ExportKind, string> = {
   "drilling-template": "drilling-template.dxf",
   "bolting-kit": "bolting-kit.csv",
   "pass-log": "pass-log.csv",
+  "pass-log-sheet": "pass-log.pdf",
 };
 
 export const CONTENT_TYPES: Record<ExportKind, string> = {
@@ -17,6 +19,7 @@ export const CONTENT_TYPES: Record<ExportKind, string> = {
   "drilling-template": "application/dxf",
   "bolting-kit": "text/csv; charset=utf-8",
   "pass-log": "text/csv; charset=utf-8",
+  "pass-log-sheet": "application/pdf",
 };
 
 function slug(text: string, max: number): string {

@@ -11,6 +11,7 @@ import {
   drillingTemplateUrl,
   holeListUrl,
   jobStatusKey,
+  passLogPdfUrl,
   passLogUrl,
   sheetPdfUrl,
 } from "../cache-keys";
@@ -37,7 +38,7 @@ interface JobStatus {
 
 const fetchJob = (url: string) => fetchJson<JobStatus>(url, (status) => `HTTP ${status}`);
 
-/** Sheet (PDF), hole list (CSV), drilling template (DXF), Bolting kit and Pass log (CSV) of one stored revision. */
+/** Sheet and Pass log (PDF), hole list (CSV), drilling template (DXF), Bolting kit and Pass log (CSV) of one stored revision. */
 export function ExportButtons({
   designId,
   revisionNumber,
@@ -125,6 +126,7 @@ export function ExportButtons({
         )}
         {(
           [
+            [(id: string, n: number) => passLogPdfUrl(id, n, paper, units), "Pass log (PDF)"],
             [holeListUrl, "Hole list (CSV)"],
             [drillingTemplateUrl, "Drilling template (DXF)"],
             [boltingKitUrl, "Bolting kit (CSV)"],

@@ -57,11 +57,13 @@ const STATUS_STYLE: Record<SheetStatus, { text: string; color: string; fill: str
  * creation date); we derive it from the content hash instead so that two renders of one revision
  * differ only in the date strings (see `withFileId`).
  */
-function fileId(input: SheetInput): Buffer {
+function fileId(input: SheetInput, kind: SheetKind): Buffer {
   const basis =
     input.revision.contentHash ?? `${input.design.name}|${input.revision.number}|${input.revision.status}`;
+  // The bolt-spacing sheet keeps the identifier it always had; the Pass log names its kind.
+  const prefix = kind === "spacing-sheet" ? "sealpitch-sheet" : `sealpitch-${kind}`;
   return createHash("sha256")
-    .update(`sealpitch-sheet|${basis}|${input.paper}|${input.units}`)
+    .update(`${prefix}|${basis}|${input.paper}|${input.units}`)
     .digest()
     .subarray(0, 16);
 }
@@ -184,12 +186,7 @@ function checkTable(ctx: SheetContext, view: SheetResultView): void {
     "as stored with the revision; one row per rule, with its worst value; use = share of the limit taken up",
   );
   if (view.checks.length === 0) {
-    ctx.doc
-      .font("sans")
-      .fontSize(7.5)
-      .fillColor(C.ink700)
-      .text("The stored result has no checks.", ctx.content.x0, ctx.y);
-    ctx.y += 16;
+    emptyNote(ctx, "The stored result has no checks.", 16);
     return;
   }
   drawTable(
@@ -321,12 +318,7 @@ function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[])
       ]),
     );
   } else {
-    doc
-      .font("sans")
-      .fontSize(7.5)
-      .fillColor(C.ink700)
-      .text("The stored result has no pass plan.", content.x0, ctx.y);
-    ctx.y += 14;
+    emptyNote(ctx, "The stored result has no pass plan.", 14);
   }
   if (view.sequenceIds.length > 0) {
     const numberOf = new Map(rows.map((r) => [r.id, r.number]));
@@ -351,7 +343,14 @@ function assemblyPlan(ctx: SheetContext, view: SheetResultView, rows: BoltRow[])
   }
 }
 
-function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
+/** A line of plain text where a section has nothing to show ("The stored result has no checks."). */
+function emptyNote(ctx: SheetContext, text: string, gap = 14): void {
+  ctx.doc.font("sans").fontSize(7.5).fillColor(C.ink700).text(text, ctx.content.x0, ctx.y);
+  ctx.y += gap;
+}
+
+/** The brass box of the trade's cautions at the cursor. */
+function drawCautionsBox(ctx: SheetContext): void {
   const { doc, content } = ctx;
   const w = content.x1 - content.x0;
   doc.font("sans").fontSize(7.2);
@@ -370,18 +369,19 @@ function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
     .fillColor(C.ink900)
     .text(text, content.x0 + 8, ctx.y + 19, { width: w - 16 });
   ctx.y += h + 10;
+}
+
+function cautionsAndEditions(ctx: SheetContext, view: SheetResultView): void {
+  const { doc, content } = ctx;
+  const w = content.x1 - content.x0;
+  drawCautionsBox(ctx);
   heading(
     ctx,
     "Tables and editions used",
     view.coreVersion ? `calculation core ${view.coreVersion}` : undefined,
   );
   if (view.editions.length === 0) {
-    doc
-      .font("sans")
-      .fontSize(7.5)
-      .fillColor(C.ink700)
-      .text("The stored result lists no tables.", content.x0, ctx.y);
-    ctx.y += 14;
+    emptyNote(ctx, "The stored result lists no tables.", 14);
   } else {
     drawTable(
       ctx,
@@ -436,15 +436,30 @@ function unverifiedValues(ctx: SheetContext): void {
   );
 }
 
-/**
- * Renders the bolt-spacing sheet of one stored revision. Deterministic: the same input (with the
- * same `createdAt`) gives the same bytes; another `createdAt` changes only the two date strings.
- * Example: `await renderSpacingSheet({ ...input, paper: "a4", units: "SI" })` → a PDF Buffer.
- */
-export async function renderSpacingSheet(input: SheetInput, options: RenderOptions = {}): Promise<Buffer> {
+type SheetKind = "spacing-sheet" | "pass-log";
+
+const KIND_TITLES: Record<SheetKind, { strip: string; file: string }> = {
+  "spacing-sheet": { strip: "BOLT-SPACING SHEET", file: "bolt-spacing sheet" },
+  "pass-log": { strip: "PASS LOG", file: "pass log" },
+};
+
+type SheetBody = (
+  ctx: SheetContext,
+  view: SheetResultView,
+  rows: BoltRow[],
+  progress: (f: number) => Promise<void>,
+) => Promise<void>;
+
+/** A PDF of one stored revision: pages drawn by `body`, then the title strip and mark on every page. */
+async function renderSheetPdf(
+  input: SheetInput,
+  options: RenderOptions,
+  kind: SheetKind,
+  body: SheetBody,
+): Promise<Buffer> {
   const fonts = getSheetFonts();
   const [w, h] = PAPER_SIZES[input.paper];
-  const title = `${input.design.equipmentTag ? `${input.design.equipmentTag} ` : ""}${input.design.name} rev ${input.revision.number} bolt-spacing sheet`;
+  const title = `${input.design.equipmentTag ? `${input.design.equipmentTag} ` : ""}${input.design.name} rev ${input.revision.number} ${KIND_TITLES[kind].file}`;
   const doc = new PDFDocument({
     size: [w, h],
     margin: 0,
@@ -470,31 +485,16 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on("end", () => resolve(withFileId(Buffer.concat(chunks), fileId(input))));
+    doc.on("end", () => resolve(withFileId(Buffer.concat(chunks), fileId(input, kind))));
     doc.on("error", reject);
   });
 
   const u = sheetUnits(input.units);
   const view = readResultView(input.result, u);
   const rows = buildBoltRows(input.document, view.sequenceIds, view.boltPoints);
-  const ctx = createContext(doc, input, u);
+  const ctx = createContext(doc, input, u, KIND_TITLES[kind].strip);
   const progress = async (f: number) => options.onProgress?.(f);
-  ctx.newPage();
-  pageOne(ctx, rows, view);
-  await progress(0.2);
-  boltTable(ctx, rows);
-  await progress(0.5);
-  checkTable(ctx, view);
-  flangeSection(ctx);
-  justifications(ctx, view);
-  profileChart(ctx, view, rows);
-  await progress(0.7);
-  assemblyPlan(ctx, view, rows);
-  drawBoltingKit(ctx, buildBoltingKit(input.document, input.units));
-  cautionsAndEditions(ctx, view);
-  await progress(0.85);
-  drawPassLog(ctx, buildPassLog(input.document, input.result, rows));
-  await progress(0.9);
+  await body(ctx, view, rows, progress);
 
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
@@ -506,4 +506,48 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
   const buf = await done;
   await progress(1);
   return buf;
+}
+
+/**
+ * Renders the bolt-spacing sheet of one stored revision. Deterministic: the same input (with the
+ * same `createdAt`) gives the same bytes; another `createdAt` changes only the two date strings.
+ * Example: `await renderSpacingSheet({ ...input, paper: "a4", units: "SI" })` → a PDF Buffer.
+ */
+export async function renderSpacingSheet(input: SheetInput, options: RenderOptions = {}): Promise<Buffer> {
+  return renderSheetPdf(input, options, "spacing-sheet", async (ctx, view, rows, progress) => {
+    ctx.newPage();
+    pageOne(ctx, rows, view);
+    await progress(0.2);
+    boltTable(ctx, rows);
+    await progress(0.5);
+    checkTable(ctx, view);
+    flangeSection(ctx);
+    justifications(ctx, view);
+    profileChart(ctx, view, rows);
+    await progress(0.7);
+    assemblyPlan(ctx, view, rows);
+    drawBoltingKit(ctx, buildBoltingKit(input.document, input.units));
+    cautionsAndEditions(ctx, view);
+    await progress(0.85);
+    drawPassLog(ctx, buildPassLog(input.document, input.result, rows));
+    await progress(0.9);
+  });
+}
+
+/**
+ * The Pass log alone, as a PDF of its own to take to the joint (the same pages as at the end of
+ * the bolt-spacing sheet, with the same title strip, NOT APPROVED mark and cautions). A stored
+ * result without a pass plan gets one page that says so.
+ */
+export async function renderPassLogSheet(input: SheetInput, options: RenderOptions = {}): Promise<Buffer> {
+  return renderSheetPdf(input, options, "pass-log", async (ctx, _view, rows) => {
+    const log = buildPassLog(input.document, input.result, rows);
+    if (log.passes.length > 0) {
+      drawPassLog(ctx, log);
+      return;
+    }
+    ctx.newPage();
+    emptyNote(ctx, "The stored result has no pass plan: there is nothing to record.", 20);
+    drawCautionsBox(ctx);
+  });
 }

@@ -45,6 +45,8 @@ export interface SheetContext {
   doc: PDFKit.PDFDocument;
   input: SheetInput;
   u: SheetUnits;
+  /** The document's name in the title strip's brand cell ("BOLT-SPACING SHEET", "PASS LOG"). */
+  label: string;
   /** The stored result's unverified values (table values from memory), read once per sheet. */
   unverified: UnverifiedValue[];
   pageW: number;
@@ -58,7 +60,12 @@ export interface SheetContext {
   ensure(h: number): void;
 }
 
-export function createContext(doc: PDFKit.PDFDocument, input: SheetInput, u: SheetUnits): SheetContext {
+export function createContext(
+  doc: PDFKit.PDFDocument,
+  input: SheetInput,
+  u: SheetUnits,
+  label = "BOLT-SPACING SHEET",
+): SheetContext {
   const [pageW, pageH] = PAPER_SIZES[input.paper];
   const content = {
     x0: MARGIN + 10,
@@ -70,6 +77,7 @@ export function createContext(doc: PDFKit.PDFDocument, input: SheetInput, u: She
     doc,
     input,
     u,
+    label,
     unverified: listUnverifiedValues(input.document, input.result),
     pageW,
     pageH,

@@ -72,7 +72,7 @@ export function drawTitleBlock(ctx: SheetContext, pageIndex: number, pageCount: 
     .font("sans")
     .fontSize(6.5)
     .fillColor(C.brass300)
-    .text("BOLT-SPACING SHEET", x0 + 8, y0 + 26, { lineBreak: false, characterSpacing: 0.5 });
+    .text(ctx.label, x0 + 8, y0 + 26, { lineBreak: false, characterSpacing: 0.5 });
   doc
     .font("sans")
     .fontSize(6)

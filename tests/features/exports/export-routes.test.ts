@@ -6,6 +6,7 @@ import { GET as dxfGet } from "@/app/api/v1/designs/[designId]/revisions/[number
 import { GET as csvGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/holes.csv/route";
 import { GET as kitGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/bolting-kit.csv/route";
 import { GET as logGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/pass-log.csv/route";
+import { GET as logPdfGet } from "@/app/api/v1/designs/[designId]/revisions/[number]/pass-log.pdf/route";
 import {
   GET as pdfGet,
   POST as pdfPost,
@@ -178,6 +179,18 @@ describe("export routes", () => {
     const logRows = parse(await passLog.text(), { columns: true }) as Record<string, string>[];
     expect(logRows).toHaveLength(5 * 8);
     expect(Object.keys(logRows[0])).toContain("target_torque_ft_lb");
+    const logPdf = await logPdfGet(
+      appRequest(url(smallId, "pass-log.pdf", "?paper=letter&units=US"), { cookie }),
+      ctx(smallId),
+    );
+    expect(logPdf.status).toBe(200);
+    expect(logPdf.headers.get("content-type")).toBe("application/pdf");
+    expect(logPdf.headers.get("content-disposition")).toContain(
+      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-pass-log.pdf`,
+    );
+    const logText = pdfToText(Buffer.from(await logPdf.arrayBuffer()));
+    expect(logText).toContain("PASS LOG");
+    expect(logText).toContain("ft·lb");
   });
 
   it("is a 404 for another organisation's design, a 401 signed out, a 400 for bad options", async () => {
@@ -188,6 +201,7 @@ describe("export routes", () => {
       [dxfGet, "drilling.dxf"],
       [kitGet, "bolting-kit.csv"],
       [logGet, "pass-log.csv"],
+      [logPdfGet, "pass-log.pdf"],
     ] as const) {
       const res = await handler(appRequest(url(smallId, file), { cookie: outsider }), ctx(smallId));
       expect(res.status).toBe(404);

@@ -1,10 +1,11 @@
 import { parse } from "csv-parse/sync";
 import { describe, expect, it } from "vitest";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { nmmToFtLb } from "@/features/analysis/core/units";
 import { buildBoltRows } from "@/features/exports/model/bolt-rows";
 import { buildPassLog, buildPassLogCsv, type PassLog } from "@/features/exports/model/pass-log";
-import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
+import { renderPassLogSheet, renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { passLogFor } from "@/features/exports/shop-files";
 import { CAUTIONS } from "@/features/ui/cautions";
 import { analyse, loadExample, manyBoltFlange, pdfPageCount, pdfToText, sheetInputFor } from "./fixtures";
@@ -165,5 +166,34 @@ describe("Pass log pages of the bolt-spacing sheet (read back with pdftotext)", 
     // Every bolt has its row: 96 rows over the log pages, each starting "<bolt> <step>".
     const all = logPages.join(" ");
     for (let step = 1; step <= 96; step++) expect(all).toMatch(new RegExp(`\\b\\d{1,3} ${step} `));
+  });
+});
+
+describe("Pass log as a PDF of its own (read back with pdftotext)", () => {
+  it("holds only the log's pages, with the title strip naming it, the mark of a draft and the cautions", async () => {
+    const design = loadExample("obround-manway");
+    const pdf = await renderPassLogSheet(sheetInputFor(design, { status: "draft" }));
+    expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
+    expect(pdfPageCount(pdf)).toBe(1);
+    const text = flat(pdfToText(pdf, { layout: true }));
+    expect(text).toContain("PASS LOG");
+    expect(text).not.toContain("BOLT TABLE");
+    expect(text).not.toContain("BOLT-SPACING SHEET");
+    expect(text).toContain("DRAFT · NOT APPROVED");
+    expect(text).toContain("1 of 1");
+    // The tensioner's targets: the residual bolt load per pass, kN.
+    expect(text).toContain("Residual bolt load per pass, in kN");
+    expect(text).toContain("Initials");
+    for (const c of CAUTIONS) expect(text).toContain(c.slice(0, 40));
+  });
+
+  it("a stored result without a plan says there is nothing to record, beside the cautions", async () => {
+    const design = loadExample("obround-manway");
+    const input = sheetInputFor(design);
+    // An older stored result without the plan (read as stored, never recomputed).
+    const result = { ...input.result!, assemblyPlan: undefined } as unknown as JointAnalysis;
+    const text = flat(pdfToText(await renderPassLogSheet({ ...input, result })));
+    expect(text).toContain("The stored result has no pass plan: there is nothing to record.");
+    expect(text).toContain("Cautions");
   });
 });
