@@ -52,6 +52,9 @@ export interface RevisionDecisionsTable {
    * JSON array (migrations/2026_12_03_071500_decision_unverified_values.ts, which checks it is one); [] for a return.
    */
   acknowledged_unverified: JSONColumnType<UnverifiedValue[], string | undefined, never>;
+  /** The FE cross-check run the approval saw (migrations/2026_12_03_093000_create_fe_checks.ts), and its result's hash. */
+  fe_check_id: ColumnType<string | null, string | null | undefined, never>;
+  fe_result_hash: ColumnType<string | null, string | null | undefined, never>;
   created_at: CreatedAt;
 }
 

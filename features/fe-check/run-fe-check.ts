@@ -1,0 +1,112 @@
+/**
+ * One FE cross-check of a design: validates it, runs the models in turn on CalculiX and sets
+ * their results beside the estimate. Used by the job worker (fe-job.ts) and the command line
+ * (`npm run fe-check`). Server-side (the models spawn the solver). A model that cannot run says
+ * why in its error and the others still run; cancellation and the time limit end the whole run.
+ */
+import { analyzeJoint } from "@/features/analysis/core/analyze";
+import type { JointDesign } from "@/features/analysis/core/design";
+import { buildJointModel } from "@/features/analysis/core/joint-model";
+import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
+import { sha256OfJson } from "@/features/analysis/content-hash";
+import { CcxCancelled, CcxError } from "./ccx-runner";
+import { FeInputError, runStackCheck } from "./joint-stack";
+import { solveStack } from "./stack-study";
+import {
+  compareWithEstimate,
+  FE_CAUTIONS,
+  type FeCheckResult,
+  type FeModelKey,
+  type FeProgress,
+  type GasketPathSummary,
+} from "./fe-check-result";
+
+export interface FeRunHooks {
+  /** Called when a model starts and after every solver run; may be async (progress writes). */
+  onProgress?: (stage: string, progress: FeProgress) => void | Promise<void>;
+  signal?: AbortSignal;
+  /** Wall-time limit of the whole run, ms (default 10 minutes). */
+  timeLimitMs?: number;
+}
+
+export class FeRunError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "FeRunError";
+  }
+}
+
+export const FE_DEFAULT_TIME_LIMIT_MS = 10 * 60_000;
+
+/** Runs every model; throws FeRunError (bad input, time limit) or CcxCancelled (cancelled). */
+export async function runFeCheck(document: JointDesign, hooks: FeRunHooks = {}): Promise<FeCheckResult> {
+  const issues = validateJointDesign(document);
+  if (issues.length > 0)
+    throw new FeRunError(
+      `The design has problems to fix before it can be solved: ${issues.slice(0, 5).map(formatIssue).join("; ")}.`,
+    );
+  const limitMs = hooks.timeLimitMs ?? FE_DEFAULT_TIME_LIMIT_MS;
+  const deadline = Date.now() + limitMs;
+  const timeLimit = new AbortController();
+  const timer = setTimeout(() => timeLimit.abort(), limitMs);
+  const signal = hooks.signal ? AbortSignal.any([hooks.signal, timeLimit.signal]) : timeLimit.signal;
+  const progress: FeProgress = { model: null, runs: 0, elements: 0, solverSeconds: 0 };
+  const report = async (stage: string) => hooks.onProgress?.(stage, { ...progress });
+  try {
+    const analysis = analyzeJoint(document);
+    const model = buildJointModel(document);
+
+    progress.model = "stack" satisfies FeModelKey;
+    await report("Bolt stack: meshing");
+    let stack: FeCheckResult["stack"] = null;
+    let stackError: string | null = null;
+    try {
+      stack = await runStackCheck(model, solveStack, {
+        hooks: {
+          signal,
+          timeoutMs: Math.max(1000, deadline - Date.now()),
+          onRun: async (run, elements, seconds) => {
+            progress.runs += 1;
+            progress.elements = elements;
+            progress.solverSeconds += seconds;
+            await report(`Bolt stack: linear run ${run}`);
+          },
+        },
+      });
+    } catch (error) {
+      if (error instanceof CcxCancelled || signal.aborted) throw error;
+      if (error instanceof FeInputError || error instanceof CcxError) stackError = error.message;
+      else throw error;
+    }
+
+    const gasketPath: GasketPathSummary | null = null;
+    const gasketPathError =
+      "The gasket-path model (whole joint between bolts) is not part of this version; only the bolt stack was solved.";
+
+    await report("Comparing with the estimate");
+    return {
+      documentHash: sha256OfJson(document),
+      stack,
+      stackError,
+      gasketPath,
+      gasketPathError,
+      comparison: compareWithEstimate(
+        {
+          minGasketStressMpa: analysis.gasketStress.minMpa,
+          maxGasketStressMpa: analysis.gasketStress.maxMpa,
+          liftedLengthMm: analysis.gasketStress.beam.liftedLengthMm,
+        },
+        stack,
+        gasketPath,
+      ),
+      cautions: [...FE_CAUTIONS, ...(stack?.assumptions ?? [])],
+      solverSeconds: progress.solverSeconds,
+    };
+  } catch (error) {
+    if (timeLimit.signal.aborted && !(hooks.signal?.aborted ?? false))
+      throw new FeRunError(`The FE cross-check ran past its time limit of ${Math.round(limitMs / 1000)} s.`);
+    throw error;
+  } finally {
+    clearTimeout(timer);
+  }
+}
