@@ -2,19 +2,23 @@ import type { Instrumentation } from "next";
 
 // Next.js calls register() once when a server process starts (not during `next build`), and
 // onRequestError() for any error that escapes a page, action or route. The Node.js side starts
-// this process's background services: the sheet-queue workers (so queued jobs resume after a
+// this process's background services: the sheet-queue and FE cross-check workers (so queued jobs resume after a
 // restart without waiting for a request) and the readiness refresh behind /api/health; escaped
 // errors become JSON log lines. NEXT_RUNTIME is set by Next itself and read here (not in
 // server/env.ts) because the bundler must see it literally to leave the Node-only imports out
 // of the edge bundle.
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const [{ getDb }, { startSheetWorkers }, { startReadinessRefresh }] = await Promise.all([
-    import("./db/index"),
-    import("./features/exports/sheet-job"),
-    import("./features/health/readiness"),
-  ]);
+  const [{ getDb }, { startSheetWorkers }, { startFeWorkers }, { startReadinessRefresh }] = await Promise.all(
+    [
+      import("./db/index"),
+      import("./features/exports/sheet-job"),
+      import("./features/fe-check/fe-job"),
+      import("./features/health/readiness"),
+    ],
+  );
   startSheetWorkers(getDb());
+  startFeWorkers(getDb());
   startReadinessRefresh();
 }
 

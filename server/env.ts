@@ -42,6 +42,10 @@ const envSchema = z.object({
   ANALYSIS_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
   /** Longest one analysis may run in its worker before it is stopped and the worker replaced. */
   ANALYSIS_TIME_LIMIT_MS: z.coerce.number().int().min(10).max(600_000).default(20_000),
+  /** FE cross-check workers this process runs (each keeps one core busy while it solves; 0: none here). */
+  FE_WORKERS: z.coerce.number().int().min(0).max(8).default(1),
+  /** Wall-time limit of one FE cross-check run, s. */
+  FE_TIME_LIMIT_SECONDS: z.coerce.number().int().min(10).max(3600).default(600),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   /** Bearer token for GET /api/metrics; unset (the default) turns the endpoint off (404). */
   METRICS_TOKEN: z.string().min(24, "must be at least 24 characters").optional(),

@@ -5,6 +5,7 @@ import { CORE_VERSION } from "@/features/analysis/core/version";
 import { analyzeInWorker } from "@/server/analysis/pool";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
 import { recordActivity } from "@/features/activity/queries";
+import { feCheckForApproval } from "@/features/fe-check/store";
 import type { ActionResult } from "@/features/forms/action-result";
 import { computeContentHash, verifySnapshot } from "@/features/analysis/content-hash";
 import {
@@ -272,6 +273,9 @@ export async function approveRevision(
         )
         .execute();
     }
+    // The FE cross-check the approver saw (the latest finished run of this very document, its
+    // result hash re-verified) is cited by the decision, which freezes it with the approval.
+    const fe = await feCheckForApproval(trx, actor.organizationId, revision.id, revision.document);
     await trx
       .insertInto("revision_decisions")
       .values({
@@ -282,6 +286,8 @@ export async function approveRevision(
         comment: input.comment,
         content_hash: integrity.storedHash,
         acknowledged_unverified: JSON.stringify(unverified),
+        fe_check_id: fe?.id ?? null,
+        fe_result_hash: fe?.resultHash ?? null,
       })
       .execute();
     await trx
