@@ -6,6 +6,7 @@ import type { Viewer } from "@/server/auth/guard";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { enqueueFeCheck } from "./fe-job";
+import { canRunFeCheck } from "./policies";
 import {
   activeFeCheckId,
   findFeCheck,
@@ -28,10 +29,6 @@ const target = z.object({
 const feCheckIdSchema = z.uuid();
 
 const NOT_FOUND = "This design or revision does not exist in your organisation.";
-
-export function canRunFeCheck(viewer: Pick<Viewer, "roles">): boolean {
-  return viewer.roles.includes("designer") || viewer.roles.includes("approver");
-}
 
 export async function readLatestFeCheck(
   db: Kysely<Database>,

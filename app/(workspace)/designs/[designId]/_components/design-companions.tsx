@@ -5,12 +5,14 @@ import { AttachmentPanel } from "@/features/attachments/components/attachment-pa
 import { canUploadAttachment } from "@/features/attachments/policies";
 import type { WorkspaceDesignDto } from "@/features/designs/workspace-contract";
 import { ExportButtons } from "@/features/exports/components/export-buttons";
+import { FeCheckPanel } from "@/features/fe-check/components/fe-check-panel";
+import { canRunFeCheck } from "@/features/fe-check/policies";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { REVISION_STATUS_LABELS } from "@/features/ui/revision-status";
 import type { Viewer } from "@/server/auth/guard";
 
 // Where the editor meets the other features on the design page: the sign-off sheet (submit and
-// review), the shop files, the attachments and the activity log of the design.
+// review), the shop files, the FE cross-check, the attachments and the activity log of the design.
 export function DesignCompanions({
   design,
   viewer,
@@ -53,6 +55,15 @@ export function DesignCompanions({
           />
         </div>
       </section>
+      <div className="lg:col-span-2">
+        <FeCheckPanel
+          designId={design.designId}
+          revisionNumber={design.revisionNumber}
+          units={viewer.unitSystem}
+          canRun={canRunFeCheck(viewer)}
+          frozen={design.status === "approved"}
+        />
+      </div>
       <AttachmentPanel
         designId={design.designId}
         canUpload={canUploadAttachment(viewer)}

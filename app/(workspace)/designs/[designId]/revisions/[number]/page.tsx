@@ -16,6 +16,8 @@ import { independenceNote } from "@/features/reviews/independence-note";
 import { getRevisionReview } from "@/features/reviews/queries";
 import { CautionPanel } from "@/features/ui/caution-panel";
 import { FlangeSummary } from "@/features/analysis/components/flange-summary";
+import { FeCheckPanel } from "@/features/fe-check/components/fe-check-panel";
+import { canRunFeCheck } from "@/features/fe-check/policies";
 import { requireViewer } from "@/server/auth/guard";
 import { ReviewScreen } from "./_components/review-screen";
 
@@ -58,6 +60,13 @@ export default async function RevisionReviewPage({
           <FlangeSummary analysis={review.result} units={viewer.unitSystem} />
         </section>
       ) : null}
+      <FeCheckPanel
+        designId={review.designId}
+        revisionNumber={parsed.data.number}
+        units={viewer.unitSystem}
+        canRun={canRunFeCheck(viewer)}
+        frozen={review.status === "approved"}
+      />
       <CautionPanel />
       <ActivityList entries={activity} title="Design activity" />
     </div>
