@@ -5,6 +5,7 @@ import type { UnitSystem } from "@/features/analysis/core/design";
 import { findExportRevision, type ExportRevisionDto } from "@/features/exports/queries";
 import { listJustifications } from "@/features/reviews/queries";
 import { describeIntegrity, verifySnapshot } from "@/features/analysis/content-hash";
+import { feCheckForSheet } from "@/features/fe-check/store";
 import type { SheetInput, SheetPaper } from "./sheet-input";
 
 /**
@@ -22,6 +23,7 @@ export async function loadSheetInput(
   const revision = await findExportRevision(db, organizationId, designId, number);
   if (!revision) return undefined;
   const justifications = await listJustifications(db, organizationId, revision.revisionId);
+  const fe = await feCheckForSheet(db, organizationId, revision.revisionId);
   const frozen = revision.status === "in_review" || revision.status === "approved";
   const integrity = frozen
     ? verifySnapshot({
@@ -53,6 +55,15 @@ export async function loadSheetInput(
         by: j.authorName,
         at: j.at,
       })),
+      feCheck:
+        fe && fe.dto.result && fe.dto.resultHash && fe.dto.finishedAt
+          ? {
+              result: fe.dto.result,
+              resultHash: fe.dto.resultHash,
+              finishedAt: fe.dto.finishedAt,
+              cited: fe.cited,
+            }
+          : null,
       paper: options.paper,
       units: options.units,
       createdAt: options.createdAt,

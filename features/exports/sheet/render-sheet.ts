@@ -24,6 +24,7 @@ import { buildBoltingKit } from "@/features/exports/model/bolting-kit";
 import { drawBoltingKit } from "./draw-bolting-kit";
 import { buildPassLog } from "@/features/exports/model/pass-log";
 import { drawPassLog } from "./draw-pass-log";
+import { drawFeSection } from "./draw-fe-section";
 import { flangeSummaryLines } from "@/features/analysis/flange-summary";
 import {
   normaliseStatus,
@@ -522,6 +523,7 @@ export async function renderSpacingSheet(input: SheetInput, options: RenderOptio
     await progress(0.5);
     checkTable(ctx, view);
     flangeSection(ctx);
+    drawFeSection(ctx, ctx.input.feCheck);
     justifications(ctx, view);
     profileChart(ctx, view, rows);
     await progress(0.7);

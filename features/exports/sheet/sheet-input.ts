@@ -1,6 +1,7 @@
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { RevisionStatus } from "@/db/tables/designs";
+import type { FeCheckResult } from "@/features/fe-check/fe-check-result";
 
 export type SheetPaper = "a4" | "letter";
 
@@ -15,6 +16,16 @@ export interface SheetJustification {
   by: string;
   /** ISO 8601. */
   at: string;
+}
+
+/** The FE cross-check printed on the sheet (absent: none, and the section is left out). */
+export interface SheetFeCheck {
+  result: FeCheckResult;
+  resultHash: string;
+  /** ISO 8601. */
+  finishedAt: string;
+  /** True when the revision's approval cites this run. */
+  cited: boolean;
 }
 
 /**
@@ -38,6 +49,7 @@ export interface SheetInput {
   /** The stored JointAnalysis (null if none was stored); read defensively, it may be an older core's. */
   result: JointAnalysis | null;
   justifications: SheetJustification[];
+  feCheck?: SheetFeCheck | null;
   paper: SheetPaper;
   units: UnitSystem;
   /** Written as the PDF creation and modification date: the only bytes that differ between downloads. */

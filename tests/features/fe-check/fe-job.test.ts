@@ -6,6 +6,7 @@ import {
 } from "@/app/api/v1/designs/[designId]/revisions/[number]/fe-check/route";
 import { POST as cancelPost } from "@/app/api/v1/fe-checks/[feCheckId]/cancel/route";
 import { sha256OfJson } from "@/features/analysis/content-hash";
+import { loadSheetInput } from "@/features/exports/sheet/load-sheet-input";
 import { cancelFeCheck, readLatestFeCheck, startFeCheck } from "@/features/fe-check/commands";
 import { runFeJob } from "@/features/fe-check/fe-job";
 import { feCheckForSheet, findFeCheck, type FeCheckDto } from "@/features/fe-check/store";
@@ -109,6 +110,12 @@ describe("FE cross-check job", () => {
     expect(decision).toEqual({ fe_check_id: done.id, fe_result_hash: done.resultHash });
     const sheet = await feCheckForSheet(db, org.organizationId, row.id);
     expect(sheet).toMatchObject({ cited: true, dto: { id: done.id } });
+    const loaded = await loadSheetInput(db, org.organizationId, designId, 1, {
+      paper: "a4",
+      units: "SI",
+      createdAt: new Date(),
+    });
+    expect(loaded?.input.feCheck).toMatchObject({ cited: true, resultHash: done.resultHash });
 
     // Nothing new runs on the approved revision: refused by the command and by the database.
     expect(await startFeCheck(db, designer, { designId, number: 1 })).toMatchObject({
