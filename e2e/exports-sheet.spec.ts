@@ -1,3 +1,4 @@
+import pg from "pg";
 import { expect, test } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
 
@@ -79,4 +80,60 @@ test("a member downloads the shop files of a seeded design and a queued sheet fi
   const file = await page.request.get(job.downloadUrl!);
   expect(file.status()).toBe(200);
   expect((await file.body()).subarray(0, 5).toString()).toBe("%PDF-");
+});
+
+// A sheet whose queue job died (as the dead-letter worker or the sweep leave it): the Shop files
+// panel shows it failed, with its reason, and Retry sheet queues it again until it is done.
+test("the Shop files panel shows a failed sheet with Retry sheet, which queues it again", async ({
+  page,
+}) => {
+  test.setTimeout(90_000);
+  await signIn(page, "dana.designer@kestrel-ridge.example");
+  const { items } = (await (await page.request.get("/api/v1/designs")).json()) as {
+    items: { designId: string; revisionNumber: number; equipmentTag: string }[];
+  };
+  const design = items[0];
+  const client = new pg.Client({ connectionString: process.env.DATABASE_URL });
+  await client.connect();
+  let exportId = "";
+  try {
+    const { rows } = await client.query<{ id: string; organization_id: string; requested_by: string }>(
+      `select r.id, r.organization_id, d.owner_id as requested_by from design_revisions r
+         join designs d on d.id = r.design_id where r.design_id = $1 and r.number = $2`,
+      [design.designId, design.revisionNumber],
+    );
+    const revision = rows[0]!;
+    const inserted = await client.query<{ id: string }>(
+      `insert into export_files (organization_id, design_id, revision_id, kind, options, status, file_name,
+         content_type, error, requested_by, finished_at)
+       values ($1, $2, $3, 'spacing-sheet', $4, 'failed', $5, 'application/pdf', $6, $7, now()) returning id`,
+      [
+        revision.organization_id,
+        design.designId,
+        revision.id,
+        JSON.stringify({ revisionNumber: design.revisionNumber, paper: "a4", units: "SI" }),
+        "retried-spacing-sheet.pdf",
+        "The sheet was not finished: the worker preparing it stopped or ran out of time, on each of 3 attempts. Use Retry sheet to queue it again.",
+        revision.requested_by,
+      ],
+    );
+    exportId = inserted.rows[0]!.id;
+
+    await page.goto(`/designs/${design.designId}`);
+    const panel = page.getByRole("region", { name: "Shop files" });
+    await expect(panel.getByText(/the worker preparing it stopped or ran out of time/)).toBeVisible();
+    await panel.getByRole("button", { name: "Retry sheet" }).click();
+    await expect(panel.getByRole("link", { name: "Download retried-spacing-sheet.pdf" })).toBeVisible({
+      timeout: 30_000,
+    });
+    await expect(panel.getByRole("button", { name: "Retry sheet" })).toHaveCount(0);
+    const { rows: after } = await client.query<{ status: string; byte_size: number }>(
+      "select status, byte_size from export_files where id = $1",
+      [exportId],
+    );
+    expect(after[0]).toMatchObject({ status: "done" });
+    expect(after[0]!.byte_size).toBeGreaterThan(10_000);
+  } finally {
+    await client.end();
+  }
 });

@@ -4,17 +4,24 @@ import type { Database } from "@/db/types";
 import { exportFileName, CONTENT_TYPES } from "@/features/exports/file-names";
 import { loadSheetInput } from "@/features/exports/sheet/load-sheet-input";
 import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
+import type PgBoss from "pg-boss";
+import { recordActivity } from "@/features/activity/queries";
+import type { ActionResult } from "@/features/forms/action-result";
 import {
   claimExportFile,
   createExportFile,
   failExportFile,
+  failUnfinishedExportFile,
   finishExportFile,
+  requeueFailedExportFile,
   setExportProgress,
+  sweepStaleExports,
 } from "@/server/jobs/export-files";
 import type { SheetJobOptions } from "@/db/tables/exports";
-import { SHEET_QUEUE, ensureWorker, getQueue } from "@/server/jobs/queue";
+import { SHEET_DEAD_LETTER_QUEUE, SHEET_QUEUE, ensureWorker, getQueue } from "@/server/jobs/queue";
 import { errorText, getLogger } from "@/server/log/logger";
 import { observeJob } from "@/server/metrics/registry";
+import { getEnv } from "@/server/env";
 
 /** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
 export { BACKGROUND_SHEET_MIN_BOLTS } from "@/features/exports/cache-keys";
@@ -74,12 +81,72 @@ export async function runSheetJob(db: Kysely<Database>, exportFileId: string): P
   }
 }
 
+/** What a dead-letter job says about why its sheet job failed for good, in words for the panel. */
+export function deadSheetMessage(job: Pick<PgBoss.JobWithMetadata, "output" | "retryLimit">): string {
+  const output = (job.output ?? {}) as { message?: unknown; value?: { message?: unknown } };
+  const raw = String(output.value?.message ?? output.message ?? "");
+  const reason = /timeout in active state/.test(raw)
+    ? "the worker preparing it stopped or ran out of time"
+    : raw || "its job failed";
+  const attempts = job.retryLimit + 1;
+  return `The sheet was not finished: ${reason}, ${attempts === 1 ? "on its one attempt" : `on each of ${attempts} attempts`}. Use Retry sheet to queue it again.`;
+}
+
+/** The dead-letter worker: a sheet job that failed for good marks its export row failed, with why. */
+export async function runDeadSheetJob(
+  db: Kysely<Database>,
+  job: PgBoss.JobWithMetadata<SheetJobData>,
+): Promise<void> {
+  const message = deadSheetMessage(job);
+  if (await failUnfinishedExportFile(db, job.data.exportFileId, message)) {
+    observeJob(SHEET_QUEUE, "failed", 0);
+    getLogger().warn(
+      { queue: SHEET_DEAD_LETTER_QUEUE, jobId: job.data.exportFileId, outcome: "failed", err: message },
+      "job",
+    );
+  }
+}
+
+const SWEEP_EVERY_MS = 5 * 60_000;
+const globalForSweep = globalThis as unknown as { sealpitchSheetSweep?: NodeJS.Timeout };
+
+/** Marks sheets whose job died without reaching the dead-letter queue failed (see sweepStaleExports). */
+export async function sweepStaleSheets(db: Kysely<Database>): Promise<string[]> {
+  const ids = await sweepStaleExports(db, SHEET_QUEUE);
+  for (const id of ids)
+    getLogger().warn({ queue: SHEET_QUEUE, jobId: id, outcome: "failed", err: "stale" }, "job");
+  return ids;
+}
+
 /**
- * Makes sure this process works the sheet queue with JOB_WORKERS workers (none when 0). Called at
- * server start (instrumentation.ts) and by enqueueSheetJob, so scripts and tests that queue work it too.
+ * Makes sure this process works the sheet queue with JOB_WORKERS workers (none when 0), and with
+ * them the dead-letter queue and the sweep of stale rows (at start, then every 5 minutes). Called
+ * at server start (instrumentation.ts) and by enqueueSheetJob, so scripts and tests that queue work it too.
  */
 export async function ensureSheetWorker(db: Kysely<Database>): Promise<void> {
-  await ensureWorker<SheetJobData>(SHEET_QUEUE, (data) => runSheetJob(db, data.exportFileId));
+  await ensureWorker<SheetJobData>(SHEET_QUEUE, (job) => runSheetJob(db, job.data.exportFileId));
+  if (getEnv().JOB_WORKERS < 1) return;
+  await ensureWorker<SheetJobData>(SHEET_DEAD_LETTER_QUEUE, (job) => runDeadSheetJob(db, job), 1);
+  if (!globalForSweep.sealpitchSheetSweep) {
+    const sweep = () =>
+      sweepStaleSheets(db).catch((error: unknown) =>
+        getLogger().warn({ event: "jobs", err: errorText(error) }, "stale sheet sweep failed"),
+      );
+    globalForSweep.sealpitchSheetSweep = setInterval(sweep, SWEEP_EVERY_MS).unref();
+    void sweep();
+  }
+}
+
+/** Sends the job of an export row (its options come from the queue: retries, expiry, dead letter). */
+async function sendSheetJob(db: Kysely<Database>, exportFileId: string, jobId?: string): Promise<void> {
+  await ensureSheetWorker(db);
+  const boss = await getQueue();
+  const sent = await boss.send(
+    SHEET_QUEUE,
+    { exportFileId } satisfies SheetJobData,
+    jobId ? { id: jobId } : {},
+  );
+  if (!sent) throw new Error("the queue did not take the job");
 }
 
 /** Records the export and queues it; returns the job id (= export_files.id = pg-boss job id). */
@@ -109,9 +176,7 @@ export async function enqueueSheetJob(
     requestedBy: input.requestedBy,
   });
   try {
-    await ensureSheetWorker(db);
-    const boss = await getQueue();
-    await boss.send(SHEET_QUEUE, { exportFileId: id } satisfies SheetJobData, { id, retryLimit: 0 });
+    await sendSheetJob(db, id, id);
   } catch (error) {
     await failExportFile(
       db,
@@ -120,6 +185,49 @@ export async function enqueueSheetJob(
     );
   }
   return id;
+}
+
+/**
+ * The Retry sheet command: a failed sheet of this organisation is queued again as it was (same
+ * row, so its status URL and file name stay), as a new queue job. Any member may, as for the
+ * first export; another organisation's sheet is not found, and only a failed one is retried.
+ */
+export async function retrySheetJob(
+  db: Kysely<Database>,
+  viewer: { organizationId: string; userId: string },
+  exportFileId: string,
+): Promise<ActionResult<{ jobId: string }>> {
+  const row = await requeueFailedExportFile(db, viewer.organizationId, exportFileId);
+  if (!row) {
+    const exists = await db
+      .selectFrom("export_files")
+      .select("status")
+      .where("organization_id", "=", viewer.organizationId)
+      .where("id", "=", exportFileId)
+      .executeTakeFirst();
+    return {
+      ok: false,
+      message: exists
+        ? "Only a sheet that failed can be retried; this one is queued, in progress or done."
+        : "This sheet does not exist.",
+    };
+  }
+  try {
+    await sendSheetJob(db, row.id);
+  } catch (error) {
+    await failExportFile(db, row.id, `Could not queue the sheet: ${errorText(error)}`);
+    return { ok: false, message: `The sheet could not be queued again: ${errorText(error)}` };
+  }
+  const options = row.options as SheetJobOptions;
+  await recordActivity(db, {
+    organizationId: viewer.organizationId,
+    designId: row.design_id,
+    revisionId: row.revision_id,
+    actorId: viewer.userId,
+    kind: "exported",
+    detail: `${row.file_name} (${options.paper.toUpperCase()}, ${options.units}, queued again)`,
+  });
+  return { ok: true, data: { jobId: row.id } };
 }
 
 /**

@@ -91,7 +91,7 @@ export async function runFeJob(db: Kysely<Database>, feCheckId: string): Promise
 
 /** This process's FE workers (FE_WORKERS of them; none when 0). */
 export async function ensureFeWorker(db: Kysely<Database>): Promise<void> {
-  await ensureWorker<FeJobData>(FE_QUEUE, (data) => runFeJob(db, data.feCheckId), getEnv().FE_WORKERS);
+  await ensureWorker<FeJobData>(FE_QUEUE, (job) => runFeJob(db, job.data.feCheckId), getEnv().FE_WORKERS);
 }
 
 /** Records a run of the revision's current document and queues it; returns its id. */

@@ -139,3 +139,90 @@ export async function findExportFileBytes(
   if (!row || !row.bytes) return undefined;
   return { fileName: row.file_name, contentType: row.content_type, bytes: row.bytes };
 }
+
+/**
+ * Marks a queued or running export failed (a finished or already failed one is left as it is);
+ * true when it did. The dead-letter worker and the sweep use it for jobs that died.
+ */
+export async function failUnfinishedExportFile(
+  db: Kysely<Database>,
+  id: string,
+  message: string,
+): Promise<boolean> {
+  const result = await db
+    .updateTable("export_files")
+    .set({ status: "failed", error: message.slice(0, 500), updated_at: sql`now()`, finished_at: sql`now()` })
+    .where("id", "=", id)
+    .where("status", "in", ["queued", "running"])
+    .executeTakeFirst();
+  return Number(result.numUpdatedRows) === 1;
+}
+
+/** A failed export of this organisation back to queued (its old error and bytes cleared), or undefined. */
+export async function requeueFailedExportFile(db: Kysely<Database>, organizationId: string, id: string) {
+  return db
+    .updateTable("export_files")
+    .set({
+      status: "queued",
+      progress: 0,
+      error: null,
+      bytes: null,
+      byte_size: null,
+      finished_at: null,
+      updated_at: sql`now()`,
+    })
+    .where("organization_id", "=", organizationId)
+    .where("id", "=", id)
+    .where("status", "=", "failed")
+    .returning(["id", "design_id", "revision_id", "file_name", "options"])
+    .executeTakeFirst();
+}
+
+export const STALE_EXPORT_MESSAGE =
+  "The sheet was not finished: its queue job ended without a result (the worker preparing it stopped). Use Retry sheet to queue it again.";
+
+/**
+ * Queued or running exports of `queue` whose job is no longer waiting, retrying or active in
+ * pg-boss (it failed, expired without a retry left, was archived or deleted), and that nobody
+ * touched for `graceSeconds` (a row is written just before its job is sent), are marked failed
+ * with STALE_EXPORT_MESSAGE. Returns the ids it marked.
+ */
+export async function sweepStaleExports(
+  db: Kysely<Database>,
+  queue: string,
+  graceSeconds = 120,
+): Promise<string[]> {
+  const rows = await db
+    .updateTable("export_files as e")
+    .set({ status: "failed", error: STALE_EXPORT_MESSAGE, updated_at: sql`now()`, finished_at: sql`now()` })
+    .where("e.status", "in", ["queued", "running"])
+    .where(sql<boolean>`e.updated_at < now() - make_interval(secs => ${graceSeconds})`)
+    .where(
+      sql<boolean>`not exists (
+        select 1 from pgboss.job j
+        where j.name = ${queue} and j.data->>'exportFileId' = e.id::text
+          and j.state in ('created', 'retry', 'active'))`,
+    )
+    .returning("e.id")
+    .execute();
+  return rows.map((row) => row.id);
+}
+
+/** The newest background export of `kind` for one revision of this organisation (the Shop files panel). */
+export async function findLatestExportJob(
+  db: Kysely<Database>,
+  organizationId: string,
+  revisionId: string,
+  kind: string,
+): Promise<ExportJobDto | undefined> {
+  const row = await db
+    .selectFrom("export_files")
+    .select("id")
+    .where("organization_id", "=", organizationId)
+    .where("revision_id", "=", revisionId)
+    .where("kind", "=", kind)
+    .orderBy("created_at", "desc")
+    .limit(1)
+    .executeTakeFirst();
+  return row ? findExportJob(db, organizationId, row.id) : undefined;
+}

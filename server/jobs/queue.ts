@@ -14,16 +14,19 @@ declare global {
   var sealpitchWorkers: Set<string> | undefined;
 }
 
-export { SHEET_QUEUE } from "@/db/job-queues";
+export { SHEET_DEAD_LETTER_QUEUE, SHEET_QUEUE } from "@/db/job-queues";
 
 async function startBoss(): Promise<PgBoss> {
   const boss = new PgBoss({
     connectionString: getEnv().DATABASE_URL,
     max: 3,
     application_name: "sealpitch-jobs",
-    // The schema is the migration's job; no cron schedules; maintenance (expiry, archiving) stays on.
+    // The schema is the migration's job; no cron schedules; maintenance (expiry, archiving) stays on,
+    // every 30 s rather than pg-boss's 120 s, so a job whose worker died is retried soon after it
+    // expires (one instance runs it per interval, whichever gets there first).
     migrate: false,
     schedule: false,
+    maintenanceIntervalSeconds: 30,
   });
   boss.on("error", (error: Error) => getLogger().error({ event: "jobs", err: error.message }, "queue error"));
   await boss.start();
@@ -44,7 +47,7 @@ export function getQueue(): Promise<PgBoss> {
 /** Registers `count` workers for `name` once per process (none when count is 0). */
 export async function ensureWorker<T extends object>(
   name: string,
-  handler: (data: T) => Promise<void>,
+  handler: (job: PgBoss.JobWithMetadata<T>) => Promise<void>,
   count: number = getEnv().JOB_WORKERS,
 ): Promise<void> {
   const workers = (globalThis.sealpitchWorkers ??= new Set());
@@ -53,9 +56,13 @@ export async function ensureWorker<T extends object>(
   try {
     const boss = await getQueue();
     for (let i = 0; i < count; i++) {
-      await boss.work<T>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async (jobs) => {
-        for (const job of jobs) await handler(job.data);
-      });
+      await boss.work<T>(
+        name,
+        { pollingIntervalSeconds: 0.5, batchSize: 1, includeMetadata: true },
+        async (jobs) => {
+          for (const job of jobs) await handler(job);
+        },
+      );
     }
   } catch (error) {
     workers.delete(name);

@@ -4,6 +4,7 @@ import { useState } from "react";
 import useSWR from "swr";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { fetchJson } from "@/features/ui/fetch-json";
+import type { ActionResult } from "@/features/forms/action-result";
 import {
   BACKGROUND_SHEET_MIN_BOLTS,
   JOB_POLL_MS,
@@ -25,9 +26,13 @@ export interface ExportButtonsProps {
   unitSystem: "SI" | "US";
   /** False when the revision has no stored result (the buttons are shown disabled). */
   hasResult?: boolean;
+  /** The revision's last background sheet (shown unless it is done: still running, or failed with Retry sheet). */
+  latestSheetJob?: JobStatus | null;
+  /** The Retry sheet command (features/exports/actions.ts): queues a failed sheet again. */
+  retrySheetAction?: (jobId: string) => Promise<ActionResult<{ jobId: string }>>;
 }
 
-interface JobStatus {
+export interface JobStatus {
   jobId: string;
   status: "queued" | "running" | "done" | "failed";
   progress: number;
@@ -45,14 +50,23 @@ export function ExportButtons({
   boltCount,
   unitSystem,
   hasResult = true,
+  latestSheetJob = null,
+  retrySheetAction,
 }: ExportButtonsProps) {
   const [paper, setPaper] = useState<"a4" | "letter">("a4");
   const [units, setUnits] = useState<"SI" | "US">(unitSystem);
-  const [jobId, setJobId] = useState<string | null>(null);
+  const resumed = latestSheetJob && latestSheetJob.status !== "done" ? latestSheetJob : null;
+  const [jobId, setJobId] = useState<string | null>(resumed?.jobId ?? null);
+  const [retrying, setRetrying] = useState(false);
   const [queueError, setQueueError] = useState<string | null>(null);
   const [queueing, setQueueing] = useState(false);
   const queued = boltCount >= BACKGROUND_SHEET_MIN_BOLTS;
-  const { data: job, error: pollError } = useSWR<JobStatus>(jobId ? jobStatusKey(jobId) : null, fetchJob, {
+  const {
+    data: job,
+    error: pollError,
+    mutate: refreshJob,
+  } = useSWR<JobStatus>(jobId ? jobStatusKey(jobId) : null, fetchJob, {
+    fallbackData: resumed && jobId === resumed.jobId ? resumed : undefined,
     refreshInterval: (latest) =>
       latest && (latest.status === "done" || latest.status === "failed") ? 0 : JOB_POLL_MS,
   });
@@ -72,6 +86,21 @@ export function ExportButtons({
       setQueueError(e instanceof Error ? e.message : String(e));
     } finally {
       setQueueing(false);
+    }
+  }
+
+  async function retrySheet() {
+    if (!jobId || !retrySheetAction) return;
+    setRetrying(true);
+    setQueueError(null);
+    try {
+      const res = await retrySheetAction(jobId);
+      if (!res.ok) setQueueError(res.message);
+      else await refreshJob();
+    } catch (e) {
+      setQueueError(e instanceof Error ? e.message : String(e));
+    } finally {
+      setRetrying(false);
     }
   }
 
@@ -162,6 +191,11 @@ export function ExportButtons({
           </a>
         ) : null}
         {message ? <p className="text-verdict-fail">{message}</p> : null}
+        {job?.status === "failed" && retrySheetAction ? (
+          <button type="button" className={buttonStyles.secondary} disabled={retrying} onClick={retrySheet}>
+            {retrying ? "Queuing again…" : "Retry sheet"}
+          </button>
+        ) : null}
       </div>
     </section>
   );

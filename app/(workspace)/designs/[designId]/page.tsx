@@ -7,6 +7,7 @@ import { findDesign } from "@/features/designs/queries";
 import { toWorkspaceDesign } from "@/features/designs/workspace-dto";
 import { DesignWorkspace } from "@/features/editor/components/design-workspace";
 import { requireViewer } from "@/server/auth/guard";
+import { findLatestExportJob } from "@/server/jobs/export-files";
 import { DesignCompanions } from "./_components/design-companions";
 
 export const metadata: Metadata = { title: "Joint design" };
@@ -19,6 +20,14 @@ export default async function DesignPage({ params }: { params: Promise<{ designI
   if (!design) notFound();
   const workspace = toWorkspaceDesign(design, viewer);
   const activity = await listActivity(db, viewer.organizationId, workspace.designId, { limit: 30 });
+  // The revision's last background sheet, so a sheet still rendering or one that failed (also
+  // while nobody watched) shows in the Shop files panel after a reload.
+  const latestSheet = await findLatestExportJob(
+    db,
+    viewer.organizationId,
+    design.revisionId,
+    "spacing-sheet",
+  );
   return (
     <>
       <DesignWorkspace
@@ -27,7 +36,12 @@ export default async function DesignPage({ params }: { params: Promise<{ designI
         unitSystem={viewer.unitSystem}
         setUnitSystemAction={setUnitSystemAction}
       />
-      <DesignCompanions design={workspace} viewer={viewer} activity={activity} />
+      <DesignCompanions
+        design={workspace}
+        viewer={viewer}
+        activity={activity}
+        latestSheetJob={latestSheet ?? null}
+      />
     </>
   );
 }

@@ -10,6 +10,8 @@ import { canRunFeCheck } from "@/features/fe-check/policies";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { REVISION_STATUS_LABELS } from "@/features/ui/revision-status";
 import type { Viewer } from "@/server/auth/guard";
+import type { ExportJobDto } from "@/server/jobs/export-files";
+import { retrySheetAction } from "@/features/exports/actions";
 
 // Where the editor meets the other features on the design page: the sign-off sheet (submit and
 // review), the shop files, the FE cross-check, the attachments and the activity log of the design.
@@ -17,10 +19,12 @@ export function DesignCompanions({
   design,
   viewer,
   activity,
+  latestSheetJob,
 }: {
   design: WorkspaceDesignDto;
   viewer: Viewer;
   activity: ActivityEntryDto[];
+  latestSheetJob: ExportJobDto | null;
 }) {
   const signOffHref = `/designs/${design.designId}/revisions/${design.revisionNumber}`;
   return (
@@ -52,6 +56,8 @@ export function DesignCompanions({
             boltCount={design.document.bolts.length}
             unitSystem={viewer.unitSystem}
             hasResult={design.result !== null}
+            latestSheetJob={latestSheetJob}
+            retrySheetAction={retrySheetAction}
           />
         </div>
       </section>
