@@ -17,6 +17,8 @@ say "format check (prettier)"
 npx prettier --check . --log-level=warn || die "files are not formatted: run npm run format"
 say "lint (eslint: Next, react-hooks, typescript-eslint, import boundaries)"
 npm run --silent lint -- --quiet || die "lint errors: see above (npm run lint)"
+say "unused exports (knip)"
+npm run --silent lint:exports || die "unused exports: remove them, or drop the export keyword (npm run lint:exports)"
 
 stack_up
 

@@ -41,12 +41,3 @@ export async function findDefaultOrganizationId(
     .executeTakeFirst();
   return row?.organization_id ?? null;
 }
-
-export async function findUserIdByEmail(db: Kysely<Database>, email: string): Promise<string | null> {
-  const row = await db
-    .selectFrom("users")
-    .select("id")
-    .where("email", "=", email.toLowerCase())
-    .executeTakeFirst();
-  return row?.id ?? null;
-}

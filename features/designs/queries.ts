@@ -65,8 +65,6 @@ function escapeLike(text: string): string {
   return text.replace(/[\\%_]/g, (c) => `\\${c}`);
 }
 
-// db/tables/designs.ts nests ColumnType inside Generated, so Kysely types selected timestamps
-// loosely; pg returns Date objects for timestamptz.
 export async function listDesigns(
   db: Kysely<Database>,
   organizationId: string,

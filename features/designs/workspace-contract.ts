@@ -59,4 +59,6 @@ export interface DesignWorkspaceProps {
   saveAction: SaveWorkingRevisionAction;
   unitSystem: UnitSystem;
   setUnitSystemAction: SetUnitSystemAction;
+  /** Shows the revision without editing (default: editable when `design.canEdit`). */
+  readOnly?: boolean;
 }

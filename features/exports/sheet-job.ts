@@ -23,9 +23,6 @@ import { errorText, getLogger } from "@/server/log/logger";
 import { observeJob } from "@/server/metrics/registry";
 import { getEnv } from "@/server/env";
 
-/** From this many bolts the export buttons queue the sheet instead of rendering it in the request. */
-export { BACKGROUND_SHEET_MIN_BOLTS } from "@/features/exports/cache-keys";
-
 interface SheetJobData {
   exportFileId: string;
 }

@@ -190,12 +190,3 @@ export async function listFlangeTemplateListing(
     true,
   );
 }
-
-/** One choice by its prefixed id ("builtin:…" or "org:…"), or null (another organisation's row is null). */
-export async function findGasketChoice(
-  db: Executor,
-  organizationId: string,
-  id: string,
-): Promise<GasketChoiceDto | null> {
-  return (await listGasketChoices(db, organizationId)).find((g) => g.id === id) ?? null;
-}

@@ -7,5 +7,3 @@ export const revisionPath = (designId: string, number: number): string =>
   `/designs/${designId}/revisions/${number}`;
 export const comparePath = (designId: string, from: number, to: number): string =>
   `/designs/${designId}/compare?from=${from}&to=${to}`;
-export const revisionApiPath = (designId: string, number: number): string =>
-  `/api/v1/designs/${designId}/revisions/${number}`;

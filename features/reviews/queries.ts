@@ -29,7 +29,6 @@ import { isoString, isoOrNull } from "@/db/dates";
 
 // Reads of the review feature. Every query filters by the viewer's organisation: another
 // organisation's revision is simply not found. Frozen snapshots are re-hashed on every read.
-// Typed loosely on purpose: the designs tables declare timestamps as Generated<ColumnType<…>>.
 /** Everyone who created, saved or submitted a revision (revision_editors); read inside the caller's transaction. */
 export async function listRevisionEditorIds(db: Kysely<Database>, revisionId: string): Promise<string[]> {
   const rows = await db

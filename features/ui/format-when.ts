@@ -3,7 +3,3 @@
 export function formatUtcMinute(iso: string): string {
   return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 }
-
-export function formatUtcDay(iso: string): string {
-  return iso.slice(0, 10);
-}

@@ -9,8 +9,8 @@ import { getEnv } from "@/server/env";
 import { getLucia, SESSION_COOKIE_NAME } from "./lucia";
 import { hasRole, resolveViewerContext, type Viewer, type ViewerContext } from "./viewer";
 
-// The one authorisation helper of pages, server actions and route handlers (contract in the
-// team brief). Data of another organisation is a 404 at the query, a missing role a 403 here.
+// The one authorisation helper of pages, server actions and route handlers (DEVELOPERS.md, "How a
+// change flows"). Data of another organisation is a 404 at the query, a missing role a 403 here.
 export type { Role } from "@/db/tables/core";
 export type { Viewer } from "./viewer";
 

@@ -23,7 +23,7 @@ export function createLucia(db: Kysely<Database>, env: ServerEnv) {
       expires: false,
       attributes: {
         sameSite: "lax",
-        // Decision (pinned in tests/features/accounts/session-cookie.test.ts): Secure everywhere
+        // Decision (pinned in tests/features/accounts/sessions.test.ts): Secure everywhere
         // except plain http on a loopback address. Chromium accepts Secure cookies on
         // http://127.0.0.1, but other clients (curl, fetch in scripts, Playwright's request
         // context) do not, and local http is never reachable from another machine.

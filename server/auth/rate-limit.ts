@@ -80,10 +80,6 @@ export async function releaseAttempts(db: Kysely<Database>, attemptIds: number[]
   await db.deleteFrom("auth_attempts").where("id", "in", attemptIds).execute();
 }
 
-export async function clearAttempts(db: Kysely<Database>, limit: RateLimit, key: string): Promise<void> {
-  await db.deleteFrom("auth_attempts").where("kind", "=", limit.kind).where("key", "=", key).execute();
-}
-
 /** Drops rows older than every window (called opportunistically; no job needed). */
 export async function pruneAttempts(db: Kysely<Database>, now = new Date()): Promise<void> {
   const oldest = Math.max(...Object.values(RATE_LIMITS).map((l) => l.windowMinutes));

@@ -4,7 +4,6 @@ import { sendMail } from "./send-mail";
 
 // Account mail: invitations and password resets. Links are absolute on APP_URL; the token is
 // in the path only, never logged.
-export { sendMail, type MailMessage } from "./send-mail";
 
 function escapeHtml(value: string): string {
   return value.replace(

@@ -9,7 +9,7 @@ export interface MailMessage {
   html?: string;
 }
 
-/** The generic sender under every intent-named message (server/mail/*-messages.ts). */
+/** The generic sender under every intent-named message (server/mail/messages.ts, review-messages.ts). */
 export async function sendMail(message: MailMessage): Promise<void> {
   await getMailTransport().sendMail({
     from: getEnv().MAIL_FROM,

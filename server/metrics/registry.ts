@@ -4,7 +4,7 @@ import { Counter, Gauge, Histogram, Registry, collectDefaultMetrics } from "prom
 // The process's Prometheus metrics (prom-client), served by /api/metrics when METRICS_TOKEN is
 // set. Kept on globalThis: a metric registered twice throws, and development reloads re-evaluate
 // modules. Gauges that need a look at the pool or the queue are filled by collectors at scrape
-// time (server/metrics/collectors.ts), so nothing polls in between.
+// time (server/metrics/scrape.ts), so nothing polls in between.
 interface Metrics {
   registry: Registry;
   requestSeconds: Histogram<"route" | "method" | "status">;

@@ -5,14 +5,9 @@
  */
 import type { BoltPath, BoltPlacement, JointDesign, Outline, PointMm } from "./design";
 import { pathToPolyline, pointAtArcLength, projectOntoPath, shapeToPath, type ClosedPath } from "./path";
-import { offsetShape, outlineToShape, shapeAreaMm2, signedDistanceToShape } from "./shape";
+import { offsetShape, outlineToShape, signedDistanceToShape } from "./shape";
 
 export { pointAtArcLength, projectOntoPath, type ClosedPath } from "./path";
-
-/** Closed path of the outline boundary. */
-export function getOutlinePath(outline: Outline): ClosedPath {
-  return shapeToPath(outlineToShape(outline));
-}
 
 /** Polyline of an outline for drawing. Example: `outlineToPolyline({kind:"circle",diameterMm:100}, 1)` → 315 points. */
 export function outlineToPolyline(outline: Outline, maxStepMm = 2): PointMm[] {
@@ -98,11 +93,6 @@ export function getSignedDistanceToOutline(outline: Outline, p: PointMm): number
 /** True when p lies inside (or on) the outline. */
 export function isPointInOutline(outline: Outline, p: PointMm): boolean {
   return getSignedDistanceToOutline(outline, p) <= 0;
-}
-
-/** Area enclosed by an outline, mm². */
-export function getOutlineAreaMm2(outline: Outline): number {
-  return shapeAreaMm2(outlineToShape(outline));
 }
 
 /** Nearest arc position on the bolt path for a dragged point (s and off-path distance). */

@@ -33,7 +33,7 @@ import {
 } from "./catalogue/interface-calibration";
 import { LINEAR_SHAPE, type FootprintShape } from "./cone-superposition";
 import { chooseEstimator } from "./estimator-choice";
-import { periodicBeamCompliancePerN } from "./beam-foundation";
+import { foundationLambdaPerMm, periodicBeamCompliancePerN } from "./beam-foundation";
 import { jointConstant, distributeExternalLoadN } from "./joint-loads";
 import { applyScatterN, computeTargetPreloadN, effectiveProofMpa, resolveScatter } from "./preload";
 import { asmeGasketGeometry, type AsmeGasketGeometry } from "./asme-gasket-width";
@@ -267,7 +267,7 @@ export function buildJointModel(design: JointDesign): JointModel {
   const flexuralRigidityNmm2 =
     eiBottom > 0 && eiTop > 0 ? 1 / (1 / eiTop + 1 / eiBottom) : Math.max(eiTop, eiBottom);
   const foundationModulusMpa = (gm.modulusMpa * region.foundationWidthMm) / gm.thicknessMm;
-  const lambdaPerMm = fm.pow(foundationModulusMpa / (4 * flexuralRigidityNmm2), 0.25);
+  const lambdaPerMm = foundationLambdaPerMm(foundationModulusMpa, flexuralRigidityNmm2);
 
   // A soft full-face gasket under a stiff flange: where the beam on an elastic foundation governs,
   // the flange spreads each bolt's load along the path, so the gasket is not one frustum layer:

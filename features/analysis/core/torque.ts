@@ -3,19 +3,7 @@
  * (about 0.20 dry steel, 0.15–0.18 lubricated or coated [pub2]); it is a design input shown with
  * its source. Units: N, mm, N·mm.
  */
-import { nmmToFtLb, nmmToNm } from "./units";
-
 /** Example: K = 0.2, F = 100 kN, d = 20 mm → 400 000 N·mm = 400 N·m. */
 export function torqueFromPreloadNmm(nutFactor: number, preloadN: number, nominalDiameterMm: number): number {
   return nutFactor * preloadN * nominalDiameterMm;
-}
-
-/** Inverse: F = T/(K·d). */
-export function preloadFromTorqueN(nutFactor: number, torqueNmm: number, nominalDiameterMm: number): number {
-  return torqueNmm / (nutFactor * nominalDiameterMm);
-}
-
-/** The same torque in N·m and ft·lb, for display. */
-export function torqueInDisplayUnits(torqueNmm: number): { nm: number; ftLb: number } {
-  return { nm: nmmToNm(torqueNmm), ftLb: nmmToFtLb(torqueNmm) };
 }

@@ -2,8 +2,7 @@
 import { useCallback, useDeferredValue, useMemo, useRef, useState, useTransition } from "react";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
-import type { SaveWorkingRevisionAction, WorkspaceDesignDto } from "@/features/designs/workspace-contract";
-import type { ActionResult } from "@/features/forms/action-result";
+import type { DesignWorkspaceProps } from "@/features/designs/workspace-contract";
 import { nextBoltId } from "../model/bolt-path";
 import type { DesignAction } from "../model/editor-action";
 import { highlightedBolts, toReadoutView } from "../model/readout-view";
@@ -29,14 +28,6 @@ import { ReadoutPanel } from "./readout-panel";
 import { SaveBar } from "./save-bar";
 import { StressLegend } from "./stress-legend";
 import { UnitSwitch } from "./unit-switch";
-
-export interface DesignWorkspaceProps {
-  design: WorkspaceDesignDto;
-  saveAction: SaveWorkingRevisionAction;
-  unitSystem: UnitSystem;
-  setUnitSystemAction: (u: UnitSystem) => Promise<ActionResult<unknown>>;
-  readOnly?: boolean;
-}
 
 /** The "Layout desk": drawing, pattern bench, joint data, readout and saving for one working revision. */
 export function DesignWorkspace({

@@ -10,10 +10,9 @@ import { projectOntoPath } from "@/features/analysis/core/path";
 import { buildBoltScene, buildStaticScene } from "../model/canvas-scene";
 import type { HeatQuad } from "../model/heat-band";
 import type { CheckView } from "../model/readout-view";
-import { fitView, panBy, toModel, toScreen, zoomAt, type ViewTransform } from "../model/view-transform";
+import { fitView, panBy, toModel, zoomAt, type ViewTransform } from "../model/view-transform";
 import { BoltNodes } from "./bolt-nodes";
 import { CanvasOverlays } from "./canvas-overlays";
-import { boltNodeId } from "./canvas-ids";
 import { FlangeShapes } from "./gasket-shape";
 import { HeatLayerShape } from "./heat-layer";
 import { HeatGridNode, type HeatGridPicture } from "./heat-grid-node";
@@ -289,5 +288,3 @@ function isTyping(e: KeyboardEvent): boolean {
     (t.tagName === "INPUT" || t.tagName === "TEXTAREA" || t.tagName === "SELECT" || t.isContentEditable)
   );
 }
-
-export { boltNodeId, toScreen };

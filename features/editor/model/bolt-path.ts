@@ -5,8 +5,6 @@
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getBoltPath, type ClosedPath } from "@/features/analysis/core/geometry";
 
-export type PathDesign = Pick<JointDesign, "outline" | "boltPath" | "bolts">;
-
 export function getDesignBoltPath(design: Pick<JointDesign, "outline" | "boltPath">): ClosedPath {
   return getBoltPath(design.outline, design.boltPath);
 }

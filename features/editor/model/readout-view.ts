@@ -5,10 +5,8 @@
  * core/gasket-stress.ts), because seating is judged at minimum preload.
  */
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
-import type { CheckRecord, CheckStatus } from "@/features/analysis/core/checks/check-record";
+import type { CheckRecord } from "@/features/analysis/core/checks/check-record";
 import { groupByRule } from "@/features/analysis/rule-groups";
-
-export type { CheckStatus };
 
 /** A core check record with the bolts it concerns: one (a ring on the canvas), two (a bracket) or none (whole joint). */
 export interface CheckView extends Omit<CheckRecord, "subject"> {

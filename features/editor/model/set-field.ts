@@ -38,12 +38,3 @@ function setIn(obj: unknown, keys: string[], value: unknown): unknown | null {
   if (Object.is(next, rec[k]) && k in rec) return obj;
   return { ...rec, [k]: next };
 }
-
-/** Replaces a whole sub-object (gasket material from the catalogue, a new termination). */
-export function replacePart<K extends keyof JointDesign>(
-  design: JointDesign,
-  key: K,
-  value: JointDesign[K],
-): JointDesign {
-  return design[key] === value ? design : { ...design, [key]: value };
-}

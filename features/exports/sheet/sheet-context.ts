@@ -1,5 +1,4 @@
 import "server-only";
-import type PDFDocument from "pdfkit";
 import type { SheetUnits } from "./format";
 import type { SheetInput } from "./sheet-input";
 import { listUnverifiedValues, type UnverifiedValue } from "@/features/analysis/unverified-values";
@@ -93,8 +92,6 @@ export function createContext(
   };
   return ctx;
 }
-
-export type Doc = InstanceType<typeof PDFDocument>;
 
 /** Section heading: a small brass rule and caps label. */
 export function heading(ctx: SheetContext, text: string, note?: string): void {

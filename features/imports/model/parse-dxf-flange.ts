@@ -80,7 +80,6 @@ export interface DxfFlangeImport {
   reading: DxfReading;
 }
 
-export type ParseResult<T> = { ok: true; value: T } | { ok: false; message: string };
 export type DxfParseResult =
   { ok: true; value: DxfFlangeImport } | { ok: false; message: string; reading?: DxfReading };
 

@@ -55,7 +55,3 @@ export interface FlangeTemplateChoiceDto extends RowBase {
   boltDiameterMm: number;
   holeDiameterMm: number;
 }
-
-export function builtinKey(kind: LibraryKind, rowId: string): string {
-  return `${kind}:${rowId}`;
-}

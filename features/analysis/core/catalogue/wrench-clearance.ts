@@ -2,7 +2,7 @@
  * TEMA Table D-5 style bolting data (inch): minimum bolt spacing, radial distance bolt to hub, and
  * bolt to flange edge. The 1/2 in row is [pub2]; the other rows are [mem] and are shown only as
  * plausibility information, never as the pass/fail limit. The pass/fail wrench clearance is
- * derived from the nut's across-corners size and the tool (see checks/spacing-pitch.ts).
+ * derived from the nut's across-corners size and the tool (see checks/spacing.ts).
  */
 import { inToMm } from "../units";
 import type { Provenance } from "./confidence";

@@ -1,14 +1,14 @@
 /**
- * One check result. `id` is stable (e.g. "spacing.max-pitch:b3-b4") so the editor can point at
- * the bolts or the field concerned; pair and bolt checks name their bolts in `subject`. Values
- * are in the core's units (mm, N, MPa, mm²) or dimensionless, as `unit` says.
- */
-/**
  * "accepted-by-rating": a standard flange used within its pressure–temperature rating, on a rule
  * meant for flanges designed by rule (ASME VIII-1 UG-44(a)); neither a pass nor a failure.
  */
 export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable" | "accepted-by-rating";
 
+/**
+ * One check result. `id` is stable (e.g. "spacing.max-pitch:b3-b4") so the editor can point at
+ * the bolts or the field concerned; pair and bolt checks name their bolts in `subject`. Values
+ * are in the core's units (mm, N, MPa, mm²) or dimensionless, as `unit` says.
+ */
 export interface CheckRecord {
   id: string;
   title: string;
@@ -30,7 +30,7 @@ export function makeCheck(c: CheckRecord): CheckRecord {
   return { ...c, value: finiteOrNull(c.value), limit: finiteOrNull(c.limit) };
 }
 
-/** Counts of fail, warn and pass records (not-applicable ones are not counted). */
+/** Counts of fail, warn and pass records (not-applicable and accepted-by-rating ones are not counted). */
 export function countChecks(checks: readonly { status: CheckStatus }[]): {
   failCount: number;
   warnCount: number;
@@ -43,14 +43,4 @@ export function countChecks(checks: readonly { status: CheckStatus }[]): {
     else if (c.status === "pass") counts.passCount++;
   }
   return counts;
-}
-
-/** Pass when value ≥ limit (optionally warn within `warnBand` below it). */
-export function statusAtLeast(value: number, limit: number): CheckStatus {
-  return value >= limit ? "pass" : "fail";
-}
-
-/** Pass when value ≤ limit. */
-export function statusAtMost(value: number, limit: number): CheckStatus {
-  return value <= limit ? "pass" : "fail";
 }
