@@ -1,5 +1,4 @@
 import "server-only";
-import { z } from "zod";
 import { attachmentDisposition } from "./file-names";
 import { exportPathSchema, sheetOptionsSchema, type ExportPathInput, type SheetOptionsInput } from "./schema";
 import { fieldErrorsOf } from "@/features/forms/form-data";

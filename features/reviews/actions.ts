@@ -1,7 +1,6 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
 import { getDb } from "@/db/index";
 import type { ActionResult } from "@/features/forms/action-result";
 import { requireViewer, type Viewer } from "@/server/auth/guard";

@@ -8,7 +8,7 @@ import {
   resetReadiness,
 } from "@/features/health/readiness";
 import { stopQueue } from "@/server/jobs/queue";
-import { getOwnerTestDb, getTestDb } from "../setup/test-db";
+import { getOwnerTestDb } from "../setup/test-db";
 
 // Readiness is a cached state refreshed in the background: the health routes answer from it,
 // and the public answer is { ok } alone (the reason goes to the server log).
@@ -27,7 +27,6 @@ describe("readiness", () => {
   });
 
   it("answers from the cache until the next refresh, then says 503 { ok: false } with no detail", async () => {
-    const db = getTestDb();
     expect((await getReadiness()).ready).toBe(true);
     const newest = (await listMigrationNames()).at(-1)!;
     await sql`delete from kysely_migration where name = ${newest}`.execute(getOwnerTestDb());

@@ -7,7 +7,7 @@
  */
 import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
-import { DesignRefusedError, formatIssue, validateJointDesign } from "./validate";
+import { DesignRefusedError, validateJointDesign } from "./validate";
 import { buildJointModel, type JointModel } from "./joint-model";
 import {
   computeGasketStressProfiles,

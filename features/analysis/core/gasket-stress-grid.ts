@@ -11,7 +11,7 @@ import { conePressureAtMpa } from "./cone-superposition";
 import { isOnGasket } from "./gasket-region";
 import { projectOntoPath } from "./path";
 import type { EstimatorName } from "./estimator-choice";
-import { DesignRefusedError, formatIssue, validateJointDesign } from "./validate";
+import { DesignRefusedError, validateJointDesign } from "./validate";
 import * as fm from "./fixed-math";
 
 /** Value stored in cells that are not gasket material (outside, bore, bolt holes). */

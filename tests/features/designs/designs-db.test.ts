@@ -10,7 +10,6 @@ import {
   setDesignArchivedForViewer,
   setUnitSystemForViewer,
 } from "@/features/designs/commands";
-import { buildDesignFromTemplate } from "@/features/designs/model/templates";
 import { TEMPLATE_CHOICES } from "@/features/designs/model/template-fields";
 import { findDesign, listDesigns } from "@/features/designs/queries";
 import { listActivity } from "@/features/activity/queries";

@@ -9,7 +9,7 @@ import { MAX_BOLT_COUNT } from "../design";
 import { findThread, type ThreadRow, THREADS } from "../catalogue/threads";
 import { getBoltMaterialById } from "../catalogue/bolt-materials";
 import { getBoltPath, projectOntoPath, getBoltPoint } from "../geometry";
-import { formatIssue, validateJointDesign, type DesignIssue } from "../validate";
+import { validateJointDesign, type DesignIssue } from "../validate";
 import { inToMm } from "../units";
 import { intervalLengthMm, inInterval, widenAndMerge, type PathInterval } from "./layout";
 
@@ -268,5 +268,3 @@ export function checkSuggestionRequest(req: SuggestionRequest): DesignIssue[] {
   }
   return issues;
 }
-
-export { formatIssue };
