@@ -93,6 +93,35 @@ const clientBoundary = {
   },
 };
 
+// An effect without a dependency list runs after every render; say which values it follows (or
+// [] for once). react-hooks' exhaustive-deps checks a list that is there, not a missing one.
+const effectDeps = {
+  meta: {
+    type: "problem",
+    docs: { description: "useEffect / useLayoutEffect always take a dependency list" },
+    schema: [],
+  },
+  create(context) {
+    const EFFECTS = new Set(["useEffect", "useLayoutEffect", "useInsertionEffect"]);
+    return {
+      CallExpression(node) {
+        const callee = node.callee;
+        const name =
+          callee.type === "Identifier"
+            ? callee.name
+            : callee.type === "MemberExpression" && callee.property.type === "Identifier"
+              ? callee.property.name
+              : null;
+        if (name && EFFECTS.has(name) && node.arguments.length === 1)
+          context.report({
+            node,
+            message: `${name} without a dependency list runs after every render: pass the values it reads, or [].`,
+          });
+      },
+    };
+  },
+};
+
 export default [
   ...nextVitals,
   ...nextTypescript,
@@ -112,9 +141,12 @@ export default [
   },
   {
     files: ["**/*.{ts,tsx,mjs}"],
-    plugins: { sealpitch: { rules: { "client-boundary": clientBoundary } } },
+    plugins: { sealpitch: { rules: { "client-boundary": clientBoundary, "effect-deps": effectDeps } } },
     rules: {
       "sealpitch/client-boundary": "error",
+      "sealpitch/effect-deps": "error",
+      // Next's preset leaves this a warning, which `npm test` (lint --quiet) would not show.
+      "react-hooks/exhaustive-deps": "error",
       "import/no-restricted-paths": ["error", { zones: boundaryZones }],
       "@typescript-eslint/no-unused-vars": [
         "warn",

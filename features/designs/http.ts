@@ -2,6 +2,7 @@ import "server-only";
 import { jsonError } from "@/server/auth/guard";
 import type { CommandFailureReason, CommandResult } from "./commands";
 import type { DesignDetailDto } from "./queries";
+import { cacheControl } from "@/server/http/cache-control";
 
 // JSON plumbing shared by the /api/v1 designs route handlers.
 const STATUS: Record<CommandFailureReason, number> = {
@@ -12,7 +13,7 @@ const STATUS: Record<CommandFailureReason, number> = {
   frozen: 409,
 };
 
-export const NO_STORE = { "cache-control": "private, no-store" };
+export const NO_STORE = cacheControl("userData");
 
 export function commandResponse<T>(result: CommandResult<T>, successStatus = 200): Response {
   if (result.ok) return Response.json(result.data, { status: successStatus, headers: NO_STORE });

@@ -2,6 +2,7 @@ import "server-only";
 import { attachmentDisposition } from "./file-names";
 import { exportPathSchema, sheetOptionsSchema, type ExportPathInput, type SheetOptionsInput } from "./schema";
 import { fieldErrorsOf } from "@/features/forms/form-data";
+import { cacheControl } from "@/server/http/cache-control";
 
 // Request plumbing shared by the export route handlers (parse, answer with a file).
 export type ParseResult<T> =
@@ -34,7 +35,7 @@ export function fileResponse(body: Uint8Array | string, fileName: string, conten
       "content-length": String(bytes.byteLength),
       "content-disposition": attachmentDisposition(fileName),
       "x-content-type-options": "nosniff",
-      "cache-control": "private, no-store",
+      ...cacheControl("userData"),
     },
   });
 }

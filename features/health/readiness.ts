@@ -3,6 +3,7 @@ import { getDb } from "@/db/index";
 import { getHealth } from "@/features/health/queries";
 import { getQueue } from "@/server/jobs/queue";
 import { errorText, getLogger } from "@/server/log/logger";
+import { cacheControl } from "@/server/http/cache-control";
 
 // Readiness of this process (database reachable, every migration applied, job queue started),
 // kept as a cached state that a background timer refreshes every REFRESH_MS. The health routes
@@ -90,7 +91,7 @@ export async function readinessResponse(): Promise<Response> {
     { ok: state.ready },
     {
       status: state.ready ? 200 : 503,
-      headers: { "cache-control": "no-store", ...(state.ready ? {} : { "retry-after": "5" }) },
+      headers: { ...cacheControl("fresh"), ...(state.ready ? {} : { "retry-after": "5" }) },
     },
   );
 }

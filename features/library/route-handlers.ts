@@ -14,6 +14,7 @@ import {
   listOwnFlangeTemplates,
   listOwnGaskets,
 } from "./queries";
+import { cacheControl } from "@/server/http/cache-control";
 
 // The /api/v1/library/* handlers, shared by the three kinds. GET …/<kind>: the picker list
 // (built-in − hidden + own) for any member; GET …/<kind>/csv: the organisation's own rows as CSV
@@ -32,7 +33,7 @@ export async function getChoices(request: Request, kind: LibraryKind): Promise<R
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
   const rows = await CHOICES[kind](getDb(), auth.viewer.organizationId);
-  return Response.json({ rows }, { headers: { "cache-control": "private, no-store" } });
+  return Response.json({ rows }, { headers: cacheControl("userData") });
 }
 
 export async function exportCsv(request: Request, kind: LibraryKind): Promise<Response> {
@@ -52,7 +53,7 @@ export async function exportCsv(request: Request, kind: LibraryKind): Promise<Re
     headers: {
       "content-type": "text/csv; charset=utf-8",
       "content-disposition": `attachment; filename="${KIND_LABELS[kind].file}"`,
-      "cache-control": "private, no-store",
+      ...cacheControl("userData"),
     },
   });
 }

@@ -8,6 +8,7 @@ import type { Role } from "@/db/tables/core";
 import { getEnv } from "@/server/env";
 import { getLucia, SESSION_COOKIE_NAME } from "./lucia";
 import { hasRole, resolveViewerContext, type Viewer, type ViewerContext } from "./viewer";
+import { cacheControl } from "@/server/http/cache-control";
 
 // The one authorisation helper of pages, server actions and route handlers (DEVELOPERS.md, "How a
 // change flows"). Data of another organisation is a 404 at the query, a missing role a 403 here.
@@ -39,7 +40,7 @@ export async function requireViewer(options?: { role?: Role | Role[] }): Promise
 export function jsonError(status: number, message: string, fieldErrors?: Record<string, string[]>): Response {
   return Response.json(
     { error: fieldErrors ? { message, fieldErrors } : { message } },
-    { status, headers: { "cache-control": "no-store" } },
+    { status, headers: cacheControl("fresh") },
   );
 }
 
@@ -53,7 +54,7 @@ export function databaseUnavailableResponse(): Response {
     },
     {
       status: 503,
-      headers: { "cache-control": "no-store", "retry-after": String(DATABASE_RETRY_AFTER_SECONDS) },
+      headers: { ...cacheControl("fresh"), "retry-after": String(DATABASE_RETRY_AFTER_SECONDS) },
     },
   );
 }

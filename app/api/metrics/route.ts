@@ -1,6 +1,7 @@
 import { timingSafeEqual } from "node:crypto";
 import { getEnv } from "@/server/env";
 import { renderMetrics } from "@/server/metrics/scrape";
+import { cacheControl } from "@/server/http/cache-control";
 
 export const dynamic = "force-dynamic";
 
@@ -20,9 +21,9 @@ export async function GET(request: Request): Promise<Response> {
   if (!tokenMatches(request.headers.get("authorization"), token)) {
     return Response.json(
       { error: { message: "A metrics token is required." } },
-      { status: 401, headers: { "www-authenticate": 'Bearer realm="metrics"', "cache-control": "no-store" } },
+      { status: 401, headers: { "www-authenticate": 'Bearer realm="metrics"', ...cacheControl("fresh") } },
     );
   }
   const { body, contentType } = await renderMetrics();
-  return new Response(body, { headers: { "content-type": contentType, "cache-control": "no-store" } });
+  return new Response(body, { headers: { "content-type": contentType, ...cacheControl("fresh") } });
 }

@@ -179,13 +179,16 @@ export default function JointStage(props: JointStageProps) {
     if (g.kind === "pan" && !g.moved) props.onSelect?.(null);
   }
 
+  // A press released outside the canvas still ends its gesture: one window listener for the
+  // stage's life, calling the newest onPointerUp (it reads this render's props).
+  const pointerUp = useLatest(onPointerUp);
   useEffect(() => {
     const up = () => {
-      if (gesture.current) onPointerUp();
+      if (gesture.current) pointerUp.current();
     };
     window.addEventListener("pointerup", up);
     return () => window.removeEventListener("pointerup", up);
-  });
+  }, [pointerUp]);
 
   function onDblClick(e: Konva.KonvaEventObject<MouseEvent>) {
     if (readOnly || (e.target as Konva.Node).name() !== "bolt-path-hit") return;

@@ -4,13 +4,14 @@ import { inviteMemberCommand } from "@/features/accounts/team-commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
 import { readJsonBody } from "@/server/http/request-body";
+import { cacheControl } from "@/server/http/cache-control";
 
 // The Crew (members and open invitations) of the viewer's organisation. Admin only.
 async function handleGET(request: Request): Promise<Response> {
   const auth = await authorizeApi(request, { role: "admin" });
   if (!auth.ok) return auth.response;
   return Response.json(await getTeam(getDb(), auth.viewer.organizationId), {
-    headers: { "cache-control": "private, no-store" },
+    headers: cacheControl("userData"),
   });
 }
 

@@ -4,6 +4,7 @@ import { fileResponse } from "@/features/exports/http";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { findExportFileBytes, findExportJob } from "@/server/jobs/export-files";
 import { withRequestLog } from "@/server/log/with-logging";
+import { cacheControl } from "@/server/http/cache-control";
 
 type Context = { params: Promise<{ jobId: string }> };
 
@@ -25,7 +26,7 @@ async function handleGET(request: Request, { params }: Context) {
   }
   const job = await findExportJob(db, auth.viewer.organizationId, parsed.data);
   if (!job) return jsonError(404, "This export job does not exist.");
-  return Response.json(job, { headers: { "cache-control": "no-store" } });
+  return Response.json(job, { headers: cacheControl("userData") });
 }
 
 export const GET = withRequestLog("/api/v1/jobs/[jobId]", handleGET);

@@ -6,6 +6,7 @@ import { listAttachments } from "@/features/attachments/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
 import { readBodyWithLimit } from "@/server/http/request-body";
+import { cacheControl } from "@/server/http/cache-control";
 
 type Context = { params: Promise<{ designId: string }> };
 
@@ -17,7 +18,7 @@ async function handleGET(request: Request, { params }: Context) {
   const id = idParamSchema.safeParse((await params).designId);
   const list = id.success ? await listAttachments(getDb(), auth.viewer.organizationId, id.data) : null;
   if (!list) return jsonError(404, "This design does not exist.");
-  return Response.json(list, { headers: { "cache-control": "no-store" } });
+  return Response.json(list, { headers: cacheControl("userData") });
 }
 
 async function handlePOST(request: Request, { params }: Context) {

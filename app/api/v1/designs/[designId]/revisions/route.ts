@@ -3,6 +3,7 @@ import { getDb } from "@/db/index";
 import { listRevisionSummaries } from "@/features/reviews/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
+import { cacheControl } from "@/server/http/cache-control";
 
 // Every revision of a design: number, status, content hash and times (no documents).
 async function handleGET(
@@ -15,7 +16,7 @@ async function handleGET(
   if (!z.uuid().safeParse(designId).success) return jsonError(404, "No such design.");
   const revisions = await listRevisionSummaries(getDb(), auth.viewer.organizationId, designId);
   if (revisions.length === 0) return jsonError(404, "No such design.");
-  return Response.json({ revisions }, { headers: { "cache-control": "no-store" } });
+  return Response.json({ revisions }, { headers: cacheControl("userData") });
 }
 
 export const GET = withRequestLog("/api/v1/designs/[designId]/revisions", handleGET);

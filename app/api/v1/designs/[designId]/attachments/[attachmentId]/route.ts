@@ -5,6 +5,7 @@ import { findAttachment } from "@/features/attachments/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { getBlob } from "@/server/storage/blob-store";
 import { withRequestLog } from "@/server/log/with-logging";
+import { cacheControl } from "@/server/http/cache-control";
 
 type Context = { params: Promise<{ designId: string; attachmentId: string }> };
 
@@ -32,7 +33,7 @@ async function handleGET(request: Request, { params }: Context) {
       "content-length": String(bytes.byteLength),
       "content-disposition": contentDisposition(attachment.fileName),
       "x-content-type-options": "nosniff",
-      "cache-control": "private, no-store",
+      ...cacheControl("userData"),
     },
   });
 }

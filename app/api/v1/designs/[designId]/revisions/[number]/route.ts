@@ -3,6 +3,7 @@ import { getDb } from "@/db/index";
 import { getRevisionReview } from "@/features/reviews/queries";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
+import { cacheControl } from "@/server/http/cache-control";
 
 const paramsSchema = z.object({ designId: z.uuid(), number: z.coerce.number().int().min(1).max(100_000) });
 
@@ -19,7 +20,7 @@ async function handleGET(
   if (!parsed.success) return jsonError(404, "No such revision.");
   const review = await getRevisionReview(getDb(), auth.viewer, parsed.data.designId, parsed.data.number);
   if (!review) return jsonError(404, "No such revision.");
-  return Response.json(review, { headers: { "cache-control": "no-store" } });
+  return Response.json(review, { headers: cacheControl("userData") });
 }
 
 export const GET = withRequestLog("/api/v1/designs/[designId]/revisions/[number]", handleGET);

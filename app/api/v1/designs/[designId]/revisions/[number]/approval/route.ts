@@ -7,6 +7,7 @@ import { approveRevision } from "@/features/reviews/transitions";
 import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
 import { withRequestLog } from "@/server/log/with-logging";
+import { cacheControl } from "@/server/http/cache-control";
 
 // POST: approve an In-review revision, as the sign-off sheet's Approve form does. Body:
 // { comment?, justifications?: { [rule]: text }, acknowledgeUnverifiedValues?: boolean }. A result that
@@ -50,7 +51,7 @@ async function handlePOST(
       status: result.data.status,
       href: revisionPath(result.data.designId, result.data.number),
     },
-    { headers: { "cache-control": "no-store" } },
+    { headers: cacheControl("userData") },
   );
 }
 

@@ -3,6 +3,7 @@ import { enqueueSheetJob } from "@/features/exports/sheet-job";
 import { logExport, prepareSheetExport as prepare, servePdfExport } from "@/features/exports/sheet-request";
 import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { withRequestLog } from "@/server/log/with-logging";
+import { cacheControl } from "@/server/http/cache-control";
 
 type Context = { params: Promise<{ designId: string; number: string }> };
 
@@ -38,7 +39,7 @@ async function handlePOST(request: Request, { params }: Context) {
   );
   return Response.json(
     { jobId, statusUrl: `/api/v1/jobs/${jobId}` },
-    { status: 202, headers: { location: `/api/v1/jobs/${jobId}`, "cache-control": "no-store" } },
+    { status: 202, headers: { location: `/api/v1/jobs/${jobId}`, ...cacheControl("userData") } },
   );
 }
 
