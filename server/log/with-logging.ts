@@ -4,6 +4,7 @@ import { getLogger, errorText } from "./logger";
 import { currentRequest, REQUEST_ID_HEADER, requestIdFrom, runWithRequest } from "./request-context";
 import { observeRequest } from "@/server/metrics/registry";
 import { AnalysisUnavailableError } from "@/server/analysis/pool";
+import { cacheControl } from "@/server/http/cache-control";
 
 // One log line per request, written where the outcome is known. Next 16's proxy.ts runs before
 // the route and never sees the final status, so every route handler is wrapped in
@@ -39,7 +40,7 @@ function finishLine(route: string, method: string, status: number, started: numb
 function analysisUnavailableResponse(error: AnalysisUnavailableError): Response {
   return Response.json(
     { error: { message: error.message, reason: error.reason } },
-    { status: 503, headers: { "cache-control": "no-store", "retry-after": "5" } },
+    { status: 503, headers: { ...cacheControl("fresh"), "retry-after": "5" } },
   );
 }
 

@@ -1,3 +1,4 @@
+import { cacheControl } from "@/server/http/cache-control";
 import { getDb } from "@/db/index";
 import { cancelFeCheck } from "@/features/fe-check/commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
@@ -12,7 +13,7 @@ async function handlePOST(request: Request, { params }: Context) {
   if (!auth.ok) return auth.response;
   const result = await cancelFeCheck(getDb(), auth.viewer, (await params).feCheckId);
   if (!result.ok) return jsonError(result.status, result.message);
-  return Response.json({ feCheck: result.data }, { headers: { "cache-control": "no-store" } });
+  return Response.json({ feCheck: result.data }, { headers: cacheControl("userData") });
 }
 
 export const POST = withRequestLog("/api/v1/fe-checks/[feCheckId]/cancel", handlePOST);

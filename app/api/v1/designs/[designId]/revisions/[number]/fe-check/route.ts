@@ -1,3 +1,4 @@
+import { cacheControl } from "@/server/http/cache-control";
 import { getDb } from "@/db/index";
 import { readLatestFeCheck, startFeCheck } from "@/features/fe-check/commands";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
@@ -13,7 +14,7 @@ async function handleGET(request: Request, { params }: Context) {
   if (!auth.ok) return auth.response;
   const result = await readLatestFeCheck(getDb(), auth.viewer, await params);
   if (!result.ok) return jsonError(result.status, result.message);
-  return Response.json({ feCheck: result.data }, { headers: { "cache-control": "no-store" } });
+  return Response.json({ feCheck: result.data }, { headers: cacheControl("userData") });
 }
 
 async function handlePOST(request: Request, { params }: Context) {
@@ -21,7 +22,7 @@ async function handlePOST(request: Request, { params }: Context) {
   if (!auth.ok) return auth.response;
   const result = await startFeCheck(getDb(), auth.viewer, await params);
   if (!result.ok) return jsonError(result.status, result.message);
-  return Response.json({ feCheck: result.data }, { status: 202, headers: { "cache-control": "no-store" } });
+  return Response.json({ feCheck: result.data }, { status: 202, headers: cacheControl("userData") });
 }
 
 export const GET = withRequestLog("/api/v1/designs/[designId]/revisions/[number]/fe-check", handleGET);
