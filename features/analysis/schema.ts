@@ -12,6 +12,7 @@ import type { FlangeDesignInputs, GasketMaterial, JointDesign, Outline } from ".
 import { MAX_BOLT_COUNT } from "./core/design";
 import { INPUT_BOUNDS, boundMessage, describeBound, type BoundName, type InputBound } from "./core/bounds";
 import { validateJointDesign } from "./core/validate";
+import { SUGGESTION_LIMITS, type SuggestionRequest } from "./core/suggest/request";
 
 /**
  * A number within its plausible range from the core's one bounds table (core/bounds.ts): the
@@ -250,3 +251,92 @@ export function formatDesignErrors(error: z.ZodError): string[] {
     return i.message.startsWith(`${path}:`) ? i.message : `${path || "(design)"}: ${i.message}`;
   });
 }
+
+const suggestionLimitsMm = INPUT_BOUNDS.planCoordinateMm.max;
+const lengthMm = (what: string) =>
+  z
+    .number({ error: `${what} must be a number (mm)` })
+    .finite({ message: `${what} must be a finite number (mm)` })
+    .min(0, { message: `${what} must be at least 0 mm` })
+    .max(suggestionLimitsMm, { message: `${what} must be at most ${suggestionLimitsMm} mm` });
+
+/**
+ * The pattern search's request (core/suggest/request.ts, `SuggestionRequest`): the design plus the
+ * allowed sizes and materials, an optional offset range and the layout constraints. Types and
+ * list lengths are checked here; what depends on the design (a size in the thread catalogue, a
+ * fixed bolt that exists, a keep-out on the path) is `checkSuggestionRequest`'s, which names the
+ * same paths. Unknown keys are refused, so a misspelt constraint is not silently ignored.
+ */
+export const suggestionRequestSchema = z
+  .object({
+    design: jointDesignSchema,
+    sizes: z
+      .array(
+        z.object({
+          designation: plainText().min(1).max(20),
+          threadSeries: z.enum(["metric-coarse", "unified-8un", "unc"]),
+        }),
+      )
+      .min(1, { message: "give at least one bolt size, or leave sizes out for the whole catalogue" })
+      .max(SUGGESTION_LIMITS.sizes, { message: `at most ${SUGGESTION_LIMITS.sizes} bolt sizes` })
+      .optional(),
+    materialIds: z
+      .array(plainText().min(1).max(60))
+      .min(1, { message: "give at least one bolt material, or leave materialIds out for the design's" })
+      .max(SUGGESTION_LIMITS.materials, { message: `at most ${SUGGESTION_LIMITS.materials} bolt materials` })
+      .optional(),
+    offsetRangeMm: z
+      .object({
+        fromMm: lengthMm("fromMm"),
+        toMm: lengthMm("toMm"),
+        stepMm: lengthMm("stepMm"),
+      })
+      .strict()
+      .nullable()
+      .optional(),
+    keepOuts: z
+      .array(
+        z.discriminatedUnion("kind", [
+          z
+            .object({
+              kind: z.literal("arc-length"),
+              fromMm: lengthMm("fromMm"),
+              toMm: lengthMm("toMm"),
+              label: plainText().max(80).optional(),
+            })
+            .strict(),
+          z
+            .object({
+              kind: z.literal("parameter"),
+              from: z.number({ error: "must be a number from 0 to 1" }).min(0).max(1),
+              to: z.number({ error: "must be a number from 0 to 1" }).min(0).max(1),
+              label: plainText().max(80).optional(),
+            })
+            .strict(),
+        ]),
+      )
+      .max(SUGGESTION_LIMITS.keepOuts, { message: `at most ${SUGGESTION_LIMITS.keepOuts} keep-out zones` })
+      .optional(),
+    fixedBoltIds: z
+      .array(plainText().min(1).max(40))
+      .max(MAX_BOLT_COUNT, { message: `at most ${MAX_BOLT_COUNT} fixed bolts` })
+      .optional(),
+    straddleCentreLines: z.boolean({ error: "must be true or false" }).optional(),
+    allowLayoutWarnings: z.boolean({ error: "must be true or false" }).optional(),
+    minToolClearanceMm: z
+      .number({ error: "must be a number (mm)" })
+      .min(0, { message: "must be at least 0 mm" })
+      .max(SUGGESTION_LIMITS.toolClearanceMm, {
+        message: `must be at most ${SUGGESTION_LIMITS.toolClearanceMm} mm`,
+      })
+      .optional(),
+    maxAnalyses: z
+      .number({ error: "must be a whole number" })
+      .int({ message: "must be a whole number" })
+      .min(1, { message: "must be at least 1" })
+      .max(SUGGESTION_LIMITS.maxAnalyses, {
+        message: `must be at most ${SUGGESTION_LIMITS.maxAnalyses} (the work cap of one search)`,
+      })
+      .optional(),
+  })
+  .strict() satisfies z.ZodType<SuggestionRequest>;

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { plainText } from "@/features/forms/plain-text";
+import { suggestionRequestSchema } from "@/features/analysis/schema";
 import { designDocumentSchema } from "./document-schema";
 import { designNameSchema, equipmentTagSchema, templateParamsSchema } from "./template-schema";
 
@@ -83,3 +84,6 @@ export const analysisRequestSchema = z.object({ document: designDocumentSchema }
 export const unitSystemSchema = z.enum(["SI", "US"], { error: "Unit system must be SI or US" });
 
 export const designIdSchema = uuid;
+
+/** POST /api/v1/suggestions: the pattern search's request, its design held to the saved document's limits. */
+export const suggestionApiSchema = suggestionRequestSchema.extend({ design: designDocumentSchema });

@@ -2,7 +2,8 @@ import { analyzeJoint } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { DesignRefusedError } from "@/features/analysis/core/validate";
 import warmUpDesign from "../../examples/pipe-flange-nps6-spiral-wound.json";
-import type { AnalysisTask, AnalysisTaskResult } from "./worker-protocol";
+import { suggestPatterns } from "@/features/analysis/core/suggest/search";
+import type { AnalysisTask, AnalysisTaskResult, SuggestionTask } from "./worker-protocol";
 
 // One analysis worker thread of the pool (server/analysis/pool.ts). This file is not part of the
 // Next bundle: scripts/build-workers.mjs bundles it with the core into .build/analysis-worker.mjs,
@@ -17,11 +18,12 @@ try {
   // the example no longer validates: nothing to warm up
 }
 
-export default function analyze(task: AnalysisTask): AnalysisTaskResult {
+export default function analyze(task: AnalysisTask | SuggestionTask): AnalysisTaskResult {
   task.started.postMessage("started");
   task.started.close();
   try {
-    return { ok: true, json: JSON.stringify(analyzeJoint(task.document)) };
+    const result = "suggestion" in task ? suggestPatterns(task.suggestion) : analyzeJoint(task.document);
+    return { ok: true, json: JSON.stringify(result) };
   } catch (error) {
     if (!(error instanceof DesignRefusedError)) throw error;
     return { ok: false, prefix: error.message.slice(0, error.message.indexOf(":")), issues: error.issues };

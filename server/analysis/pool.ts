@@ -9,7 +9,9 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { DesignRefusedError } from "@/features/analysis/core/validate";
 import { parseEnvKeys } from "@/server/env";
 import { countAnalysisRefusal as countRefusal } from "@/server/metrics/registry";
-import type { AnalysisTask, AnalysisTaskResult } from "./worker-protocol";
+import type { SuggestionRequest } from "@/features/analysis/core/suggest/request";
+import { SuggestionRefusedError } from "@/features/analysis/core/suggest/search";
+import type { AnalysisTask, AnalysisTaskResult, SuggestionTask } from "./worker-protocol";
 
 // Every analysis the server computes (the stateless API, saves and creates, submit for review,
 // the seed) runs here, on a pool of worker threads (piscina), never on the request thread: a
@@ -184,5 +186,32 @@ export async function closeAnalysisPool(): Promise<void> {
 export async function analyzeInWorker(document: JointDesign): Promise<string> {
   const outcome = await getAnalysisPool().run<AnalysisTaskResult>({ document });
   if (!outcome.ok) throw new DesignRefusedError(outcome.issues, outcome.prefix);
+  return outcome.json;
+}
+
+/**
+ * `JSON.stringify(suggestPatterns(request))`, computed in a worker under the same time limit as
+ * an analysis (a search is many analyses). Throws SuggestionRefusedError for a request the core
+ * cannot run, AnalysisUnavailableError past the limit (with a message about narrowing the search)
+ * or when the pool is full.
+ */
+export async function suggestInWorker(request: SuggestionRequest): Promise<string> {
+  let outcome: AnalysisTaskResult;
+  try {
+    outcome = await getAnalysisPool().run<AnalysisTaskResult>({
+      suggestion: request,
+    } satisfies Omit<SuggestionTask, "started">);
+  } catch (error) {
+    if (error instanceof AnalysisUnavailableError && error.reason === "time-limit") {
+      const ms = getAnalysisPool().options.timeLimitMs;
+      const limit = ms >= 1000 ? `${ms / 1000} s` : `${ms} ms`;
+      throw new AnalysisUnavailableError(
+        `The pattern search took longer than the server's limit of ${limit} and was stopped. Allow fewer sizes, materials or offsets, lower maxAnalyses, or try again when the server is less busy.`,
+        "time-limit",
+      );
+    }
+    throw error;
+  }
+  if (!outcome.ok) throw new SuggestionRefusedError(outcome.issues, outcome.prefix);
   return outcome.json;
 }

@@ -1,6 +1,7 @@
 import type { MessagePort } from "node:worker_threads";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { DesignIssue } from "@/features/analysis/core/validate";
+import type { SuggestionRequest } from "@/features/analysis/core/suggest/request";
 
 // What the request thread sends to an analysis worker and what comes back (structured clone).
 // Shared by the pool (server/analysis/pool.ts) and the worker (analysis-worker.ts), which is
@@ -12,6 +13,13 @@ export interface AnalysisTask {
   started: MessagePort;
 }
 
+/** A pattern search ("Suggest pattern"): the same worker runs `suggestPatterns` instead. */
+export interface SuggestionTask {
+  suggestion: SuggestionRequest;
+  started: MessagePort;
+}
+
+/** Both kinds answer alike: the core's result as JSON text, or the core's refusal. */
 export type AnalysisTaskResult =
   /** The result as JSON text, exactly `JSON.stringify(analyzeJoint(document))`. */
   | { ok: true; json: string }

@@ -4,6 +4,7 @@ import { POST as analysesPost } from "@/app/api/v1/analyses/route";
 import { PUT as designPut } from "@/app/api/v1/designs/[designId]/route";
 import { POST as designsPost } from "@/app/api/v1/designs/route";
 import { POST as gasketCsvPost } from "@/app/api/v1/library/gaskets/csv/route";
+import { POST as suggestionsPost } from "@/app/api/v1/suggestions/route";
 import { POST as teamPost } from "@/app/api/v1/team/route";
 import * as accountSchemas from "@/features/accounts/schema";
 import * as analysisSchemas from "@/features/analysis/schema";
@@ -277,6 +278,48 @@ describe("work limits of one analysis", () => {
     const text = JSON.stringify(await response.json());
     expect(text).toContain("2048 × 2048 = 4194304 heat-map cells, over the work limit of 1048576");
   });
+
+  it("a pattern search past its caps is a 422 naming them (POST /api/v1/suggestions)", async () => {
+    const { document } = await db
+      .selectFrom("design_revisions as r")
+      .innerJoin("designs as d", "d.id", "r.design_id")
+      .select("r.document")
+      .where("d.organization_id", "=", org.organizationId)
+      .executeTakeFirstOrThrow();
+    const sizes = ["M12", "M16", "M20", "M24", "M30", "M36"].map((designation) => ({
+      designation,
+      threadSeries: "metric-coarse",
+    }));
+    for (const [body, field, message] of [
+      [{ maxAnalyses: 100_000 }, "maxAnalyses", "must be at most 2000 (the work cap of one search)"],
+      [
+        { keepOuts: Array.from({ length: 33 }, () => ({ kind: "parameter", from: 0.1, to: 0.2 })) },
+        "keepOuts",
+        "at most 32 keep-out zones",
+      ],
+      [{ minToolClearanceMm: 5000 }, "minToolClearanceMm", "must be at most 200 mm"],
+      [
+        {
+          sizes,
+          materialIds: ["iso-898-1-8.8", "astm-a193-b7", "iso-898-1-10.9", "astm-a193-b16"],
+          offsetRangeMm: { fromMm: 20, toMm: 40, stepMm: 1 },
+        },
+        "sizes",
+        "combinations of size, material and offset, over the limit of 400",
+      ],
+    ] as const) {
+      const response = await suggestionsPost(
+        appRequest("/api/v1/suggestions", {
+          method: "POST",
+          cookie: dana,
+          body: { design: document, ...body },
+        }),
+      );
+      expect(response.status, field).toBe(422);
+      const fieldErrors = (await response.json()).error.fieldErrors;
+      expect(fieldErrors[field]?.join(" "), field).toContain(message);
+    }
+  });
 });
 
 describe("JSON bodies: size and nesting limits", () => {
@@ -297,6 +340,7 @@ describe("JSON bodies: size and nesting limits", () => {
         () => designsPost(rawRequest("/api/v1/designs", `{"name":"Deep","document":${deep(5000)}}`)),
       ],
       ["team", () => teamPost(rawRequest("/api/v1/team", `{"email":${deep(5000)}}`, { cookie: ines }))],
+      ["suggestions", () => suggestionsPost(rawRequest("/api/v1/suggestions", `{"keepOuts":${deep(5000)}}`))],
     ] as const) {
       const response = await call();
       expect(response.status, label).toBe(400);

@@ -1,0 +1,96 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { POST as suggestionsPost } from "@/app/api/v1/suggestions/route";
+import { analyzeJoint } from "@/features/analysis/core/analyze";
+import type { PatternCandidate, SuggestionResult } from "@/features/analysis/core/suggest/search";
+import { judge, ruleOf } from "@/features/analysis/core/suggest/verdict";
+import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
+import { getTestDb } from "../../setup/test-db";
+import { rectangularCover } from "../analysis/core/fixtures";
+
+// POST /api/v1/suggestions called with a real session (real PostgreSQL) and the real analysis
+// pool: a valid request gets ranked candidates, each of which passes every check when the core
+// analyses it again here; an impossible one gets the sentence naming the rule that blocks it.
+const db = getTestDb();
+let org: OrganizationFixture<"dana" | "piet">;
+let dana: string;
+const M = (...names: string[]) =>
+  names.map((designation) => ({ designation, threadSeries: "metric-coarse" as const }));
+const post = (body: unknown, cookie: string = dana) =>
+  suggestionsPost(appRequest("/api/v1/suggestions", { method: "POST", cookie, body }));
+
+beforeAll(async () => {
+  org = await createOrganizationWithMembers(db, { dana: ["designer"], piet: ["approver"] });
+  dana = await org.cookieFor("dana");
+});
+afterAll(async () => {
+  await org.cleanup();
+});
+
+describe("POST /api/v1/suggestions", () => {
+  const design = rectangularCover({ widthMm: 500, heightMm: 340, boltCount: 16, coverThicknessMm: 40 });
+
+  it("answers a valid request with ranked candidates that each pass every check", async () => {
+    const response = await post({ design, sizes: M("M12", "M16", "M24") });
+    expect(response.status).toBe(200);
+    expect(response.headers.get("cache-control")).toBe("private, no-store");
+    const result = (await response.json()) as SuggestionResult;
+    expect(result.message).toBeNull();
+    expect(result.candidates.length).toBeGreaterThan(0);
+    expect(result.candidates.map((c) => c.rank)).toEqual(result.candidates.map((_, i) => i + 1));
+    const counts = result.candidates.map((c) => c.boltCount);
+    expect([...counts].sort((a, b) => a - b)).toEqual(counts);
+    for (const c of result.candidates as PatternCandidate[]) {
+      const a = analyzeJoint(c.design);
+      expect(a.checks.filter((x) => x.status === "fail").map((x) => x.id)).toEqual([]);
+      expect(judge(a.checks, { pipePattern: false }).blocking.map((x) => x.id)).toEqual([]);
+      for (const x of a.checks)
+        if (x.status === "warn" || x.status === "accepted-by-rating")
+          expect(c.carried).toContain(ruleOf(x.id));
+      expect(a.bolts.length).toBe(c.boltCount);
+      expect(c.governing).not.toBeNull();
+    }
+  });
+
+  it("any member may ask (an approver too); signed out is a 401", async () => {
+    const response = await post({ design, sizes: M("M16") }, await org.cookieFor("piet"));
+    expect(response.status).toBe(200);
+    expect((await post({ design }, "")).status).toBe(401);
+  });
+
+  it("an impossible request names the rule that blocks it", async () => {
+    const soft = structuredClone(design);
+    soft.gasket.material = { ...soft.gasket.material, qMinMpa: 150 };
+    const response = await post({ design: soft, sizes: M("M20", "M24", "M30", "M36") });
+    expect(response.status).toBe(200);
+    const result = (await response.json()) as SuggestionResult;
+    expect(result.candidates).toEqual([]);
+    expect(result.message).toMatch(/^No size up to M36 seats the gasket at \d+(\.\d)? mm pitch/);
+    expect(result.blocked.every((b) => b.rule === "gasket.seating")).toBe(true);
+  });
+
+  it("bad input is a 422 naming each field, from the schema or from the search's own checks", async () => {
+    const typo = await post({ design, sizez: M("M16") });
+    expect(typo.status).toBe(422);
+    expect(JSON.stringify(await typo.json())).toMatch(/sizez/);
+
+    const response = await post({
+      design,
+      sizes: M("M17"),
+      fixedBoltIds: ["b99"],
+      keepOuts: [{ kind: "parameter", from: 0.1, to: 0.2, label: "nozzle\u0000N1" }],
+    });
+    expect(response.status).toBe(422);
+    const body = await response.json();
+    expect(Object.keys(body.error.fieldErrors)).toEqual(["keepOuts[0].label"]);
+
+    const unknown = await post({ design, sizes: M("M17"), fixedBoltIds: ["b99"] });
+    expect(unknown.status).toBe(422);
+    const fields = (await unknown.json()).error.fieldErrors;
+    expect(fields["sizes[0]"][0]).toMatch(/no metric-coarse thread "M17"/);
+    expect(fields["fixedBoltIds[0]"][0]).toMatch(/no bolt "b99"/);
+
+    const capped = await post({ design, maxAnalyses: 5000 });
+    expect(capped.status).toBe(422);
+    expect((await capped.json()).error.fieldErrors.maxAnalyses[0]).toMatch(/at most 2000/);
+  });
+});
