@@ -1,0 +1,55 @@
+/**
+ * Command line: `npm run suggest -- request.json` runs the pattern search ("Suggest pattern") on a
+ * request (the same body as POST /api/v1/suggestions: `design` and the allowed sizes, materials,
+ * offsets and constraints) and prints the ranked candidates, or the sentence naming the rule that
+ * blocks the request, then the cautions. `--json` prints the whole result as JSON instead.
+ * Progress goes to stderr. Exit codes: 0 candidates found, 3 nothing qualifies, 1 invalid request
+ * or file, 2 usage.
+ */
+import { readFileSync } from "node:fs";
+import { formatDesignErrors, suggestionRequestSchema } from "@/features/analysis/schema";
+import { checkSuggestionRequest } from "@/features/analysis/core/suggest/request";
+import { suggestPatterns } from "@/features/analysis/core/suggest/search";
+import { formatIssue } from "@/features/analysis/core/validate";
+import { formatSuggestionText } from "@/features/analysis/suggestion-text";
+import { CAUTIONS } from "@/features/ui/cautions";
+
+function fail(lines: string[], code = 1): never {
+  for (const l of lines) process.stderr.write(`${l}\n`);
+  process.exit(code);
+}
+
+function main(argv: string[]): void {
+  const args = argv.filter((a) => a !== "--");
+  const json = args.includes("--json");
+  const files = args.filter((a) => a !== "--json");
+  if (files.length !== 1 || files[0].startsWith("--"))
+    fail(["usage: npm run suggest -- <request.json> [--json]"], 2);
+  const file = files[0];
+  let raw: unknown;
+  try {
+    raw = JSON.parse(readFileSync(file, "utf8"));
+  } catch (e) {
+    fail([
+      `${file}: ${(e as NodeJS.ErrnoException).code ? "cannot read file" : `not valid JSON (${(e as Error).message})`}`,
+    ]);
+  }
+  const parsed = suggestionRequestSchema.safeParse(raw);
+  if (!parsed.success)
+    fail([`${file}: invalid request`, ...formatDesignErrors(parsed.error).map((l) => `  ${l}`)]);
+  const issues = checkSuggestionRequest(parsed.data);
+  if (issues.length > 0)
+    fail([`${file}: the search cannot run on this request`, ...issues.map((i) => `  ${formatIssue(i)}`)]);
+  const result = suggestPatterns(parsed.data, {
+    onProgress: (p) =>
+      void process.stderr.write(`searched ${p.done} of ${p.total} combinations (${p.analyses} analyses)\n`),
+  });
+  if (json) process.stdout.write(`${JSON.stringify(result, null, 2)}\n`);
+  else
+    process.stdout.write(
+      `${formatSuggestionText(result)}\n\n${CAUTIONS.map((c) => `Caution: ${c}`).join("\n")}\n`,
+    );
+  process.exitCode = result.candidates.length > 0 ? 0 : 3;
+}
+
+main(process.argv.slice(2));
