@@ -103,35 +103,27 @@ export function solveBeamOnFoundation(input: {
     q[i0] += (l.forceN * (1 - fr)) / h;
     q[(i0 + 1) % N] += (l.forceN * fr) / h;
   }
-  // Zig-zag ordering 0, N−1, 1, N−2, … turns the cyclic pentadiagonal matrix into a band of half-width 4.
-  const order = new Int32Array(N);
-  const pos = new Int32Array(N);
-  for (let j = 0, lo = 0, hi = N - 1; j < N; j++) order[j] = j % 2 === 0 ? lo++ : hi--;
-  for (let j = 0; j < N; j++) pos[order[j]] = j;
-  const P = 4;
-  const W = P + 1;
-  const band = new Float64Array(N * W);
+  const pos = zigZagPositions(N);
   const rhs = new Float64Array(N);
   const w = new Float64Array(N);
   const contact = new Uint8Array(N).fill(1);
-  const stencil = [1, -4, 6, -4, 1];
   let iterations = 0;
   let converged = false;
+  let band: Float64Array | null = null;
   while (iterations < 60) {
     iterations++;
-    band.fill(0);
-    for (let i = 0; i < N; i++) {
-      const pi = pos[i];
-      for (let o = -2; o <= 2; o++) {
-        const j = (i + o + N) % N;
-        const pj = pos[j];
-        if (pj > pi) continue;
-        band[pi * W + (pi - pj)] += a * stencil[o + 2];
-      }
-      if (contact[i]) band[pi * W] += k;
-      rhs[pi] = q[i];
+    // Every node in contact: the matrix depends on N, EI/h⁴ and k only, so its factor is reused
+    // from an earlier call when only the loads changed (a bolt dragged, another preload).
+    let factor: Float64Array;
+    if (iterations === 1) factor = fullContactFactor(N, a, k, pos, contact);
+    else {
+      band ??= new Float64Array(N * BAND_W);
+      assembleBand(band, N, a, k, pos, contact);
+      choleskyBandFactor(band, N, BAND_P);
+      factor = band;
     }
-    choleskyBandSolve(band, rhs, N, P);
+    for (let i = 0; i < N; i++) rhs[pos[i]] = q[i];
+    choleskyBandSubstitute(factor, rhs, N, BAND_P);
     let changed = false;
     for (let i = 0; i < N; i++) {
       w[i] = rhs[pos[i]];
@@ -155,8 +147,74 @@ export function solveBeamOnFoundation(input: {
   return { deflectionMm: w, lineLoadNPerMm, contact, iterations, converged, liftedLengthMm: lifted };
 }
 
-/** In-place Cholesky solve of a symmetric positive-definite band matrix (row i holds A[i][i − j], j = 0…p). */
-function choleskyBandSolve(band: Float64Array, b: Float64Array, n: number, p: number): void {
+const BAND_P = 4;
+const BAND_W = BAND_P + 1;
+const STENCIL = [1, -4, 6, -4, 1];
+const MEMO_LIMIT = 16;
+const positionMemo = new Map<number, Int32Array>();
+const factorMemo = new Map<string, Float64Array>();
+
+/**
+ * Zig-zag ordering 0, N−1, 1, N−2, … turns the cyclic pentadiagonal matrix into a band of
+ * half-width 4; `pos[node]` is the node's row in the band.
+ */
+function zigZagPositions(N: number): Int32Array {
+  let pos = positionMemo.get(N);
+  if (!pos) {
+    const order = new Int32Array(N);
+    pos = new Int32Array(N);
+    for (let j = 0, lo = 0, hi = N - 1; j < N; j++) order[j] = j % 2 === 0 ? lo++ : hi--;
+    for (let j = 0; j < N; j++) pos[order[j]] = j;
+    if (positionMemo.size >= MEMO_LIMIT) positionMemo.clear();
+    positionMemo.set(N, pos);
+  }
+  return pos;
+}
+
+/** The periodic five-point stencil times EI/h⁴, plus k on the contact nodes, as a band (row i holds A[i][i − j]). */
+function assembleBand(
+  band: Float64Array,
+  N: number,
+  a: number,
+  k: number,
+  pos: Int32Array,
+  contact: Uint8Array,
+): void {
+  band.fill(0);
+  for (let i = 0; i < N; i++) {
+    const pi = pos[i];
+    for (let o = -2; o <= 2; o++) {
+      const j = (i + o + N) % N;
+      const pj = pos[j];
+      if (pj > pi) continue;
+      band[pi * BAND_W + (pi - pj)] += a * STENCIL[o + 2];
+    }
+    if (contact[i]) band[pi * BAND_W] += k;
+  }
+}
+
+/** The Cholesky factor of the all-contact matrix, from the memo when N, a and k were seen before (never written to by callers). */
+function fullContactFactor(
+  N: number,
+  a: number,
+  k: number,
+  pos: Int32Array,
+  contact: Uint8Array,
+): Float64Array {
+  const key = `${N}|${a}|${k}`;
+  let f = factorMemo.get(key);
+  if (!f) {
+    f = new Float64Array(N * BAND_W);
+    assembleBand(f, N, a, k, pos, contact);
+    choleskyBandFactor(f, N, BAND_P);
+    if (factorMemo.size >= MEMO_LIMIT) factorMemo.clear();
+    factorMemo.set(key, f);
+  }
+  return f;
+}
+
+/** In-place Cholesky factorisation A = L·Lᵀ of a symmetric positive-definite band matrix (row i holds A[i][i − j], j = 0…p). */
+function choleskyBandFactor(band: Float64Array, n: number, p: number): void {
   const W = p + 1;
   for (let i = 0; i < n; i++) {
     const j0 = Math.max(0, i - p);
@@ -168,6 +226,11 @@ function choleskyBandSolve(band: Float64Array, b: Float64Array, n: number, p: nu
       else band[i * W + (i - j)] = sum / band[j * W];
     }
   }
+}
+
+/** Solves L·Lᵀ·x = b in place with the factor from choleskyBandFactor. */
+function choleskyBandSubstitute(band: Float64Array, b: Float64Array, n: number, p: number): void {
+  const W = p + 1;
   for (let i = 0; i < n; i++) {
     let sum = b[i];
     for (let k = Math.max(0, i - p); k < i; k++) sum -= band[i * W + (i - k)] * b[k];

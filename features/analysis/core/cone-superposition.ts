@@ -41,11 +41,37 @@ export function coneFootprintIntegralMm2(innerRadiusMm: number, outerRadiusMm: n
 
 const SHAPE_STEPS = 256;
 
+/**
+ * The table and the footprint integral depend on the shape (and the radii) only, so they are kept
+ * for the next field of the same joint (every frame of a drag): the same numbers, computed once.
+ * Shared tables are never written to after they are made.
+ */
+const shapeTables = new Map<string, Float64Array>();
+const footprintIntegrals = new Map<string, number>();
+const SHAPE_MEMO_LIMIT = 64;
+
 function shapeTableOf(shape: FootprintShape): Float64Array {
+  const key = `${shape.a}|${shape.b}`;
+  const hit = shapeTables.get(key);
+  if (hit) return hit;
   const t = new Float64Array(SHAPE_STEPS + 2);
   for (let k = 0; k <= SHAPE_STEPS; k++) t[k] = footprintShapeValue(k / SHAPE_STEPS, shape.a, shape.b);
   t[SHAPE_STEPS] = 0;
+  if (shapeTables.size >= SHAPE_MEMO_LIMIT) shapeTables.clear();
+  shapeTables.set(key, t);
   return t;
+}
+
+function footprintIntegralOf(ri: number, rc: number, shape: FootprintShape): number {
+  if (isLinear(shape)) return coneFootprintIntegralMm2(ri, rc);
+  const key = `${ri}|${rc}|${shape.a}|${shape.b}`;
+  let v = footprintIntegrals.get(key);
+  if (v === undefined) {
+    v = footprintIntegralMm2(ri, rc, shape.a, shape.b);
+    if (footprintIntegrals.size >= SHAPE_MEMO_LIMIT) footprintIntegrals.clear();
+    footprintIntegrals.set(key, v);
+  }
+  return v;
 }
 
 function isLinear(shape: FootprintShape): boolean {
@@ -178,9 +204,7 @@ export function buildConeField(
     region.bolts.map((p) => p.y),
     rc + region.holeRadiusMm,
   );
-  const full = isLinear(shape)
-    ? coneFootprintIntegralMm2(innerRadiusMm, rc)
-    : footprintIntegralMm2(innerRadiusMm, rc, shape.a, shape.b);
+  const full = footprintIntegralOf(innerRadiusMm, rc, shape);
   const peak = new Float64Array(n);
   const frac = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -207,33 +231,68 @@ export function buildConeField(
 export function conePressureAtMpa(field: ConeField, x: number, y: number): number {
   const ri = field.innerRadiusMm;
   const rc = field.outerRadiusMm;
-  const span = rc - ri;
-  const steps = SHAPE_STEPS / span;
-  const table = field.shapeTable;
-  const h = field.hash;
+  return conePressureAt(field, x, y, ri, SHAPE_STEPS / (rc - ri), rc * rc, ri * ri);
+}
+
+/**
+ * `out[j] = conePressureAtMpa(field, xs[j], ys[j])` where `on[j]` is 1 (left as it is elsewhere),
+ * with the field's constants worked out once.
+ */
+export function conePressuresInto(
+  field: ConeField,
+  xs: Float64Array,
+  ys: Float64Array,
+  on: Uint8Array,
+  out: Float64Array,
+): void {
+  const ri = field.innerRadiusMm;
+  const rc = field.outerRadiusMm;
+  const steps = SHAPE_STEPS / (rc - ri);
   const rc2 = rc * rc;
   const ri2 = ri * ri;
+  for (let j = 0; j < xs.length; j++)
+    if (on[j]) out[j] = conePressureAt(field, xs[j], ys[j], ri, steps, rc2, ri2);
+}
+
+// The bolts of the 3 × 3 cells around the point, in cell order (the order of the sum).
+function conePressureAt(
+  field: ConeField,
+  x: number,
+  y: number,
+  ri: number,
+  steps: number,
+  rc2: number,
+  ri2: number,
+): number {
+  const table = field.shapeTable;
+  const peak = field.peakMpa;
+  const h = field.hash;
+  const xs = h.xs;
+  const ys = h.ys;
+  const items = h.items;
+  const cellStart = h.cellStart;
+  const nx = h.nx;
   const cx = Math.floor((x - h.x0) / h.cellMm);
   const cy = Math.floor((y - h.y0) / h.cellMm);
   const x0 = cx > 0 ? cx - 1 : 0,
-    x1 = cx + 1 < h.nx ? cx + 1 : h.nx - 1;
+    x1 = cx + 1 < nx ? cx + 1 : nx - 1;
   const y0 = cy > 0 ? cy - 1 : 0,
     y1 = cy + 1 < h.ny ? cy + 1 : h.ny - 1;
   let p = 0;
   for (let iy = y0; iy <= y1; iy++) {
+    const row = iy * nx;
     for (let ix = x0; ix <= x1; ix++) {
-      const c = iy * h.nx + ix;
-      const end = h.cellStart[c + 1];
-      for (let k = h.cellStart[c]; k < end; k++) {
-        const i = h.items[k];
-        const ex = h.xs[i] - x;
-        const ey = h.ys[i] - y;
+      const end = cellStart[row + ix + 1];
+      for (let k = cellStart[row + ix]; k < end; k++) {
+        const i = items[k];
+        const ex = xs[i] - x;
+        const ey = ys[i] - y;
         const d2 = ex * ex + ey * ey;
         if (d2 < rc2 && d2 >= ri2) {
           const u = (Math.sqrt(d2) - ri) * steps;
-          const k = u | 0;
-          const f = u - k;
-          p += field.peakMpa[i] * (table[k] * (1 - f) + table[k + 1] * f);
+          const t = u | 0;
+          const f = u - t;
+          p += peak[i] * (table[t] * (1 - f) + table[t + 1] * f);
         }
       }
     }

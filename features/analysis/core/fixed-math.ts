@@ -47,57 +47,118 @@ const COS_C = [
   1 / 2432902008176640000,
 ];
 
-function horner(c: readonly number[], z: number): number {
-  let acc = 0;
-  for (let i = c.length - 1; i >= 0; i--) acc = c[i]! + z * acc;
-  return acc;
-}
+// The series below are written out (Horner's rule, innermost coefficient first) with the same
+// operations in the same order as a loop over the coefficient lists, so the bits are the same; the
+// unrolled form only saves the loop and the array reads in the inner loops of the path estimate.
+// The innermost `+ z * 0` is the loop's first step (acc = 0), kept so an infinite z still gives NaN.
+const [S1, S2, S3, S4, S5, S6, S7, S8, S9] = SIN_C as [
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+];
+const [C1, C2, C3, C4, C5, C6, C7, C8, C9, C10] = COS_C as [
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+  number,
+];
 
 /** sin r for |r| ≤ π/4: Taylor series to r^19 (truncation below 1e-19 relative). */
 function sinKernel(r: number): number {
   const z = r * r;
-  return r + r * z * horner(SIN_C, z);
+  return (
+    r +
+    r *
+      z *
+      (S1 + z * (S2 + z * (S3 + z * (S4 + z * (S5 + z * (S6 + z * (S7 + z * (S8 + z * (S9 + z * 0)))))))))
+  );
 }
 
 /** cos r for |r| ≤ π/4: Taylor series to r^20. */
 function cosKernel(r: number): number {
   const z = r * r;
-  return 1 + z * horner(COS_C, z);
+  return (
+    1 +
+    z *
+      (C1 +
+        z *
+          (C2 +
+            z * (C3 + z * (C4 + z * (C5 + z * (C6 + z * (C7 + z * (C8 + z * (C9 + z * (C10 + z * 0))))))))))
+  );
 }
 
 /** x = n·π/2 + r with |r| ≲ π/4 (exact enough for |x| below about 1e6, far beyond any angle here). */
-function reduce(x: number): { n: number; r: number } {
+function quadrant(x: number): number {
   const n = Math.floor(x * INV_PIO2 + 0.5);
-  const r = x - n * PIO2_HI - n * PIO2_LO - n * PIO2_LO2;
-  return { n: ((n % 4) + 4) % 4, r };
+  return ((n % 4) + 4) % 4;
+}
+function reduced(x: number): number {
+  const n = Math.floor(x * INV_PIO2 + 0.5);
+  return x - n * PIO2_HI - n * PIO2_LO - n * PIO2_LO2;
 }
 
 export function sin(x: number): number {
   if (!Number.isFinite(x)) return NaN;
   if (Math.abs(x) < 1e-8) return x;
-  const { n, r } = reduce(x);
+  const n = quadrant(x);
+  const r = reduced(x);
   return n === 0 ? sinKernel(r) : n === 1 ? cosKernel(r) : n === 2 ? -sinKernel(r) : -cosKernel(r);
 }
 
 export function cos(x: number): number {
   if (!Number.isFinite(x)) return NaN;
-  const { n, r } = reduce(x);
+  const n = quadrant(x);
+  const r = reduced(x);
   return n === 0 ? cosKernel(r) : n === 1 ? -sinKernel(r) : n === 2 ? -cosKernel(r) : sinKernel(r);
+}
+
+/**
+ * `out[0] = sin(x)`, `out[1] = cos(x)` with one argument reduction: the same bits as the two
+ * calls, for the loops that need both (points on an arc).
+ */
+export function sinCosInto(x: number, out: Float64Array): void {
+  if (!Number.isFinite(x)) {
+    out[0] = NaN;
+    out[1] = NaN;
+    return;
+  }
+  const n = quadrant(x);
+  const r = reduced(x);
+  const sk = sinKernel(r);
+  const ck = cosKernel(r);
+  out[0] = Math.abs(x) < 1e-8 ? x : n === 0 ? sk : n === 1 ? ck : n === 2 ? -sk : -ck;
+  out[1] = n === 0 ? ck : n === 1 ? -sk : n === 2 ? -ck : sk;
 }
 
 export function tan(x: number): number {
   if (!Number.isFinite(x)) return NaN;
-  const { n, r } = reduce(x);
+  const n = quadrant(x);
+  const r = reduced(x);
   const s = sinKernel(r);
   const c = cosKernel(r);
   return n % 2 === 0 ? s / c : -c / s;
 }
 
+/** (−1)^k/(2k+1), k = 0…20 (index k), the atan series' coefficients. */
+const ATAN_C = Float64Array.from({ length: 21 }, (_, k) => (k % 2 === 0 ? 1 : -1) / (2 * k + 1));
+
 /** atan t for |t| ≤ tan(π/12) ≈ 0.268: series to t^41. */
 function atanKernel(t: number): number {
   const z = t * t;
   let acc = 0;
-  for (let k = 20; k >= 1; k--) acc = (k % 2 === 0 ? 1 : -1) / (2 * k + 1) + z * acc;
+  for (let k = 20; k >= 1; k--) acc = ATAN_C[k] + z * acc;
   return t + t * z * acc;
 }
 
@@ -127,7 +188,7 @@ export function atan2(y: number, x: number): number {
 }
 
 /** 2^k for integer k in the normal range, exactly. */
-function pow2(k: number): number {
+function pow2Loop(k: number): number {
   let out = 1;
   let b = k < 0 ? 0.5 : 2;
   let e = Math.abs(k);
@@ -139,11 +200,31 @@ function pow2(k: number): number {
   return out;
 }
 
-/** e^r for |r| ≤ ln2/2: Taylor series to r^16. */
+/** 2^k, k = −1022…1023, made by pow2Loop once (the same exact powers, read from a table). */
+const POW2_MIN = -1022;
+const POW2 = Float64Array.from({ length: 1023 - POW2_MIN + 1 }, (_, i) => pow2Loop(i + POW2_MIN));
+function pow2(k: number): number {
+  return k >= POW2_MIN && k <= 1023 ? POW2[k - POW2_MIN] : pow2Loop(k);
+}
+
+/** e^r for |r| ≤ ln2/2: Taylor series to r^16 (acc = 1 + r·acc/k for k = 16…1, written out). */
 function expKernel(r: number): number {
-  let acc = 1;
-  for (let k = 16; k >= 1; k--) acc = 1 + (r * acc) / k;
-  return acc;
+  let acc = 1 + r / 16;
+  acc = 1 + (r * acc) / 15;
+  acc = 1 + (r * acc) / 14;
+  acc = 1 + (r * acc) / 13;
+  acc = 1 + (r * acc) / 12;
+  acc = 1 + (r * acc) / 11;
+  acc = 1 + (r * acc) / 10;
+  acc = 1 + (r * acc) / 9;
+  acc = 1 + (r * acc) / 8;
+  acc = 1 + (r * acc) / 7;
+  acc = 1 + (r * acc) / 6;
+  acc = 1 + (r * acc) / 5;
+  acc = 1 + (r * acc) / 4;
+  acc = 1 + (r * acc) / 3;
+  acc = 1 + (r * acc) / 2;
+  return 1 + r * acc;
 }
 
 export function exp(x: number): number {
@@ -159,6 +240,8 @@ export function exp(x: number): number {
 }
 
 const SQRT1_2 = 0.7071067811865476;
+/** 1/(2k+1), k = 0…22 (index k), the artanh series' coefficients. */
+const LOG_C = Float64Array.from({ length: 23 }, (_, k) => 1 / (2 * k + 1));
 
 export function log(x: number): number {
   if (Number.isNaN(x) || x < 0) return NaN;
@@ -191,7 +274,7 @@ export function log(x: number): number {
   const s = (m - 1) / (m + 1);
   const z = s * s;
   let acc = 0;
-  for (let k = 22; k >= 1; k--) acc = 1 / (2 * k + 1) + z * acc;
+  for (let k = 22; k >= 1; k--) acc = LOG_C[k] + z * acc;
   const lm = 2 * s + 2 * s * z * acc;
   return e * LN2_HI + (e * LN2_LO + lm);
 }

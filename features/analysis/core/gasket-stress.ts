@@ -10,7 +10,7 @@ import type { JointModel } from "./joint-model";
 import { projectOntoPath, samplePathUniform } from "./path";
 import { isOnGasket } from "./gasket-region";
 import { solveBeamOnFoundation } from "./beam-foundation";
-import { buildConeField, coneMissesGasket, conePressureAtMpa, type ConeField } from "./cone-superposition";
+import { buildConeField, coneMissesGasket, conePressuresInto, type ConeField } from "./cone-superposition";
 import { chooseEstimator, type EstimatorChoice, type EstimatorName } from "./estimator-choice";
 
 export interface ProfileSummary {
@@ -151,11 +151,15 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
   const hs = L / solverNodes;
   const wg = region.foundationWidthMm;
   let beamForce = 0;
+  const lineLoad = sol.lineLoadNPerMm;
   for (let j = 0; j < N; j++) {
     const u = sMm[j] / hs;
-    const i0 = Math.floor(u) % solverNodes;
-    const fr = u - Math.floor(u);
-    const line = sol.lineLoadNPerMm[i0] * (1 - fr) + sol.lineLoadNPerMm[(i0 + 1) % solverNodes] * fr;
+    const fl = Math.floor(u);
+    // fl % solverNodes and (i0 + 1) % solverNodes without the floating-point remainder (fl ≥ 0).
+    const i0 = fl < solverNodes ? fl : fl % solverNodes;
+    const i1 = i0 + 1 < solverNodes ? i0 + 1 : 0;
+    const fr = u - fl;
+    const line = lineLoad[i0] * (1 - fr) + lineLoad[i1] * fr;
     beamMpa[j] = line / wg;
     beamForce += line * step;
   }
@@ -171,8 +175,7 @@ export function computeGasketStressProfiles(model: JointModel, forcesN?: number[
   );
   const misses = coneMissesGasket(field);
   const coneMpa = new Float64Array(N);
-  if (!misses)
-    for (let j = 0; j < N; j++) if (onGasket[j]) coneMpa[j] = conePressureAtMpa(field, xMm[j], yMm[j]);
+  if (!misses) conePressuresInto(field, xMm, yMm, onGasket, coneMpa);
 
   const choice = chooseEstimator({
     requested: design.estimator.estimator,

@@ -203,7 +203,9 @@ export function samplePathUniform(path: ClosedPath, count: number, xs: Float64Ar
   const step = L / count;
   let seg = segmentIndexAt(path, wrap(path.shiftMm, L));
   for (let j = 0; j < count; j++) {
-    const u = wrap(j * step + path.shiftMm, L);
+    const v = j * step + path.shiftMm;
+    // wrap() leaves u in [0, L) unchanged; the remainder is only needed past the end.
+    const u = v >= 0 && v < L ? v : wrap(v, L);
     // advance (with wrap-around) until u lies in the current segment
     let guard = 0;
     while (
@@ -220,8 +222,11 @@ export function samplePathUniform(path: ClosedPath, count: number, xs: Float64Ar
       ys[j] = s.y0 + (s.y1 - s.y0) * t;
     } else {
       const a = s.startRad + Math.sign(s.sweepRad) * (local / s.radiusMm);
-      xs[j] = s.cx + s.radiusMm * fm.cos(a);
-      ys[j] = s.cy + s.radiusMm * fm.sin(a);
+      fm.sinCosInto(a, sinCos);
+      xs[j] = s.cx + s.radiusMm * sinCos[1];
+      ys[j] = s.cy + s.radiusMm * sinCos[0];
     }
   }
 }
+
+const sinCos = new Float64Array(2);
