@@ -231,17 +231,21 @@ export function buildConeField(
 export function conePressureAtMpa(field: ConeField, x: number, y: number): number {
   const ri = field.innerRadiusMm;
   const rc = field.outerRadiusMm;
-  return conePressureAt(field, x, y, ri, SHAPE_STEPS / (rc - ri), rc * rc, ri * ri);
+  const h = field.hash;
+  const cand = candidatesFor(h.items.length);
+  const count = listNeighbours(h, Math.floor((x - h.x0) / h.cellMm), Math.floor((y - h.y0) / h.cellMm), cand);
+  return sumFootprints(field, cand, count, x, y, ri, SHAPE_STEPS / (rc - ri), rc * rc, ri * ri);
 }
 
 /**
- * `out[j] = conePressureAtMpa(field, xs[j], ys[j])` where `on[j]` is 1 (left as it is elsewhere),
- * with the field's constants worked out once.
+ * `out[j] = conePressureAtMpa(field, xs[j], ys[j])` where `on[j]` is 1 (left as it is elsewhere).
+ * Neighbouring path samples mostly fall in the same hash cell, so the bolts of its 3 × 3 cells are
+ * listed once per cell (the same list in the same order: the same sum, the same bits).
  */
 export function conePressuresInto(
   field: ConeField,
-  xs: Float64Array,
-  ys: Float64Array,
+  px: Float64Array,
+  py: Float64Array,
   on: Uint8Array,
   out: Float64Array,
 ): void {
@@ -250,13 +254,56 @@ export function conePressuresInto(
   const steps = SHAPE_STEPS / (rc - ri);
   const rc2 = rc * rc;
   const ri2 = ri * ri;
-  for (let j = 0; j < xs.length; j++)
-    if (on[j]) out[j] = conePressureAt(field, xs[j], ys[j], ri, steps, rc2, ri2);
+  const h = field.hash;
+  const cand = candidatesFor(h.items.length);
+  let count = 0;
+  let lastCx = NaN;
+  let lastCy = NaN;
+  for (let j = 0; j < px.length; j++) {
+    if (!on[j]) continue;
+    const x = px[j];
+    const y = py[j];
+    const cx = Math.floor((x - h.x0) / h.cellMm);
+    const cy = Math.floor((y - h.y0) / h.cellMm);
+    if (cx !== lastCx || cy !== lastCy) {
+      lastCx = cx;
+      lastCy = cy;
+      count = listNeighbours(h, cx, cy, cand);
+    }
+    out[j] = sumFootprints(field, cand, count, x, y, ri, steps, rc2, ri2);
+  }
 }
 
-// The bolts of the 3 × 3 cells around the point, in cell order (the order of the sum).
-function conePressureAt(
+/** Scratch list of candidate bolts (grown, never shrunk): no allocation per point. */
+let candidates = new Int32Array(64);
+function candidatesFor(n: number): Int32Array {
+  if (candidates.length < n) candidates = new Int32Array(n);
+  return candidates;
+}
+
+/** The bolts of the 3 × 3 cells around cell (cx, cy), row by row, into `cand`; returns their count. */
+function listNeighbours(h: PointHash, cx: number, cy: number, cand: Int32Array): number {
+  const nx = h.nx;
+  const x0 = cx > 0 ? cx - 1 : 0,
+    x1 = cx + 1 < nx ? cx + 1 : nx - 1;
+  const y0 = cy > 0 ? cy - 1 : 0,
+    y1 = cy + 1 < h.ny ? cy + 1 : h.ny - 1;
+  let count = 0;
+  for (let iy = y0; iy <= y1; iy++) {
+    const row = iy * nx;
+    for (let ix = x0; ix <= x1; ix++) {
+      const end = h.cellStart[row + ix + 1];
+      for (let k = h.cellStart[row + ix]; k < end; k++) cand[count++] = h.items[k];
+    }
+  }
+  return count;
+}
+
+/** Σ over the listed bolts whose footprint covers (x, y) of peak × shape, in list order. */
+function sumFootprints(
   field: ConeField,
+  cand: Int32Array,
+  count: number,
   x: number,
   y: number,
   ri: number,
@@ -266,35 +313,19 @@ function conePressureAt(
 ): number {
   const table = field.shapeTable;
   const peak = field.peakMpa;
-  const h = field.hash;
-  const xs = h.xs;
-  const ys = h.ys;
-  const items = h.items;
-  const cellStart = h.cellStart;
-  const nx = h.nx;
-  const cx = Math.floor((x - h.x0) / h.cellMm);
-  const cy = Math.floor((y - h.y0) / h.cellMm);
-  const x0 = cx > 0 ? cx - 1 : 0,
-    x1 = cx + 1 < nx ? cx + 1 : nx - 1;
-  const y0 = cy > 0 ? cy - 1 : 0,
-    y1 = cy + 1 < h.ny ? cy + 1 : h.ny - 1;
+  const xs = field.hash.xs;
+  const ys = field.hash.ys;
   let p = 0;
-  for (let iy = y0; iy <= y1; iy++) {
-    const row = iy * nx;
-    for (let ix = x0; ix <= x1; ix++) {
-      const end = cellStart[row + ix + 1];
-      for (let k = cellStart[row + ix]; k < end; k++) {
-        const i = items[k];
-        const ex = xs[i] - x;
-        const ey = ys[i] - y;
-        const d2 = ex * ex + ey * ey;
-        if (d2 < rc2 && d2 >= ri2) {
-          const u = (Math.sqrt(d2) - ri) * steps;
-          const t = u | 0;
-          const f = u - t;
-          p += peak[i] * (table[t] * (1 - f) + table[t + 1] * f);
-        }
-      }
+  for (let k = 0; k < count; k++) {
+    const i = cand[k];
+    const ex = xs[i] - x;
+    const ey = ys[i] - y;
+    const d2 = ex * ex + ey * ey;
+    if (d2 < rc2 && d2 >= ri2) {
+      const u = (Math.sqrt(d2) - ri) * steps;
+      const t = u | 0;
+      const f = u - t;
+      p += peak[i] * (table[t] * (1 - f) + table[t + 1] * f);
     }
   }
   return p;

@@ -38,6 +38,8 @@ export interface PathPoint {
 }
 
 const EPS = 1e-9;
+/** Scratch for fm.sinCosInto (sin, cos of one angle). */
+const sinCos = new Float64Array(2);
 
 function line(x0: number, y0: number, x1: number, y1: number): PathSegment {
   return { kind: "line", x0, y0, x1, y1, lengthMm: Math.hypot(x1 - x0, y1 - y0) };
@@ -127,8 +129,9 @@ export function pointAtArcLength(path: ClosedPath, sMm: number): PathPoint {
     return { x: seg.x0 + (seg.x1 - seg.x0) * t, y: seg.y0 + (seg.y1 - seg.y0) * t, tx, ty };
   }
   const a = seg.startRad + Math.sign(seg.sweepRad) * (local / seg.radiusMm);
-  const c = fm.cos(a);
-  const s = fm.sin(a);
+  fm.sinCosInto(a, sinCos);
+  const c = sinCos[1];
+  const s = sinCos[0];
   const dir = Math.sign(seg.sweepRad);
   return { x: seg.cx + seg.radiusMm * c, y: seg.cy + seg.radiusMm * s, tx: -s * dir, ty: c * dir };
 }
@@ -157,8 +160,9 @@ function projectInternal(path: ClosedPath, p: PointMm): { uMm: number; dist2: nu
       let delta = wrap(dir < 0 ? seg.startRad - phi : phi - seg.startRad, 2 * Math.PI);
       if (delta > sweep) delta = delta - sweep < 2 * Math.PI - delta ? sweep : 0;
       const a = seg.startRad + dir * delta;
-      qx = seg.cx + seg.radiusMm * fm.cos(a);
-      qy = seg.cy + seg.radiusMm * fm.sin(a);
+      fm.sinCosInto(a, sinCos);
+      qx = seg.cx + seg.radiusMm * sinCos[1];
+      qy = seg.cy + seg.radiusMm * sinCos[0];
       local = delta * seg.radiusMm;
     }
     const d2 = (p.x - qx) * (p.x - qx) + (p.y - qy) * (p.y - qy);
@@ -228,5 +232,3 @@ export function samplePathUniform(path: ClosedPath, count: number, xs: Float64Ar
     }
   }
 }
-
-const sinCos = new Float64Array(2);
