@@ -4,7 +4,8 @@
  *   " displacements (vx,vy,vz) for set NALL and time  0.1000000E+01"
  *   " total force (fx,fy,fz) for set NBEARBOT and time  0.1000000E+01"
  *   " stresses (elem, integ.pnt.,sxx,syy,szz,sxy,sxz,syz) for set ELAYER and time  0.1E+01"
- * followed by numeric rows. Pure: takes the file text.
+ * followed by numeric rows (a node with a *TRANSFORM prints its values in the local system and
+ * ends the row with "L"). Pure: takes the file text.
  */
 
 export interface DatBlock {
@@ -29,7 +30,8 @@ export function parseDat(text: string): DatBlock[] {
       continue;
     }
     if (!cur) continue;
-    const t = line.trim();
+    // A node printed in a local system (*TRANSFORM) ends its row with "L".
+    const t = line.trim().replace(/\s+L$/, "");
     if (t === "") continue;
     const nums = t.split(/\s+/).map(Number);
     if (nums.some((v) => !Number.isFinite(v))) {
