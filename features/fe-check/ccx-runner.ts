@@ -86,6 +86,42 @@ export function runCcx(deck: string, opts: { timeoutMs?: number; keepDir?: boole
   }
 }
 
+export type KillableOutcome = {
+  out: string;
+  status: number | null;
+  reason: "exit" | "timeout" | "cancelled" | Error;
+};
+
+/** A child process off the event loop, killed (SIGKILL) past `timeoutMs` or when `signal` aborts; never rejects. */
+export function runKillable(
+  command: string,
+  args: string[],
+  opts: { cwd: string; env: NodeJS.ProcessEnv; timeoutMs: number; signal?: AbortSignal },
+): Promise<KillableOutcome> {
+  return new Promise((resolve) => {
+    const child = spawn(command, args, { cwd: opts.cwd, env: opts.env, stdio: ["ignore", "pipe", "pipe"] });
+    const chunks: string[] = [];
+    let reason: KillableOutcome["reason"] = "exit";
+    child.stdout.setEncoding("utf8").on("data", (c: string) => chunks.push(c));
+    child.stderr.setEncoding("utf8").on("data", (c: string) => chunks.push(c));
+    const stop = (why: "timeout" | "cancelled") => {
+      reason = why;
+      child.kill("SIGKILL");
+    };
+    const timer = setTimeout(() => stop("timeout"), opts.timeoutMs);
+    const onAbort = () => stop("cancelled");
+    opts.signal?.addEventListener("abort", onAbort, { once: true });
+    child.on("error", (error) => {
+      reason = error;
+    });
+    child.on("close", (code) => {
+      clearTimeout(timer);
+      opts.signal?.removeEventListener("abort", onAbort);
+      resolve({ out: chunks.join(""), status: code, reason });
+    });
+  });
+}
+
 /**
  * The same run without blocking the event loop: the solver is a child process, killed when the
  * time limit passes (CcxError) or the signal aborts (CcxCancelled). The folder is always removed.
@@ -97,35 +133,11 @@ export async function runCcxAsync(
   if (opts.signal?.aborted) throw new CcxCancelled();
   const dir = deckFolder(deck);
   try {
-    const { out, status, reason } = await new Promise<{
-      out: string;
-      status: number | null;
-      reason: "exit" | "timeout" | "cancelled" | Error;
-    }>((resolve) => {
-      const child = spawn(CCX_PATH, ["-i", "job"], {
-        cwd: dir,
-        env: CCX_ENV,
-        stdio: ["ignore", "pipe", "pipe"],
-      });
-      const chunks: string[] = [];
-      let reason: "exit" | "timeout" | "cancelled" | Error = "exit";
-      child.stdout.setEncoding("utf8").on("data", (c: string) => chunks.push(c));
-      child.stderr.setEncoding("utf8").on("data", (c: string) => chunks.push(c));
-      const stop = (why: "timeout" | "cancelled") => {
-        reason = why;
-        child.kill("SIGKILL");
-      };
-      const timer = setTimeout(() => stop("timeout"), opts.timeoutMs ?? DEFAULT_TIMEOUT_MS);
-      const onAbort = () => stop("cancelled");
-      opts.signal?.addEventListener("abort", onAbort, { once: true });
-      child.on("error", (error) => {
-        reason = error;
-      });
-      child.on("close", (code) => {
-        clearTimeout(timer);
-        opts.signal?.removeEventListener("abort", onAbort);
-        resolve({ out: chunks.join(""), status: code, reason });
-      });
+    const { out, status, reason } = await runKillable(CCX_PATH, ["-i", "job"], {
+      cwd: dir,
+      env: CCX_ENV,
+      timeoutMs: opts.timeoutMs ?? DEFAULT_TIMEOUT_MS,
+      signal: opts.signal,
     });
     if (reason === "cancelled") throw new CcxCancelled();
     if (reason === "timeout")

@@ -60,10 +60,13 @@ ensure_chromium() {
   command -v pdftoppm >/dev/null || apt_install poppler-utils
 }
 
-# CalculiX (the FE engine of features/fe-check and npm run calibrate): Debian's calculix-ccx.
+# CalculiX (the FE engine of features/fe-check and npm run calibrate): Debian's calculix-ccx;
+# Gmsh (the plate mesher of the gasket path check): Debian's gmsh.
 ensure_fe_tools() {
   [ -x /usr/bin/ccx ] || apt_install calculix-ccx
   [ -x /usr/bin/ccx ] || die "CalculiX (/usr/bin/ccx) not found after installing calculix-ccx"
+  [ -x /usr/bin/gmsh ] || apt_install gmsh
+  [ -x /usr/bin/gmsh ] || die "Gmsh (/usr/bin/gmsh) not found after installing gmsh"
 }
 
 # port_free PORT: exits 0 when nothing listens on 127.0.0.1:PORT.
