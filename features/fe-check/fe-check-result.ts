@@ -51,13 +51,24 @@ export interface FeCheckResult {
 export interface GasketPathSummary {
   modelKind: string;
   elements: number;
-  /** Along the gasket path: arc length (mm) and gasket stress (MPa), same parametrisation as the estimate's profile. */
+  /** CalculiX runs of the contact (active-set) loop. */
+  linearRuns: number;
+  pathKind: "gasket-centre-line" | "bolt-path";
+  /** Along the gasket path: arc length (mm), FE gasket stress and the estimate (MPa), same s as the estimate's profile. */
   sMm: number[];
   stressMpa: number[];
+  estimateMpa: number[];
+  /** False inside a hole or the bore on a full-face gasket's bolt path (stress 0 there, not counted). */
+  onGasket: boolean[];
   minStressMpa: number;
   maxStressMpa: number;
   liftedLengthMm: number;
+  /** The governing estimate at the same minimum preload, the one the FE values are compared with. */
+  estimate: { estimator: "cone" | "beam"; minMpa: number; maxMpa: number; liftedLengthMm: number };
+  /** |gasket reaction / bolt loads − 1| over the modelled part. */
+  forceBalanceError: number;
   assumptions: string[];
+  warnings: string[];
 }
 
 export const FE_CAUTIONS = [

@@ -12,6 +12,7 @@ import { sha256OfJson } from "@/features/analysis/content-hash";
 import { CcxCancelled, CcxError } from "./ccx-runner";
 import { FeInputError, runStackCheck } from "./joint-stack";
 import { solveStack } from "./stack-study";
+import { runGasketPathCheck, type GasketPathFeResult } from "./gasket-path-study";
 import {
   compareWithEstimate,
   FE_CAUTIONS,
@@ -79,9 +80,36 @@ export async function runFeCheck(document: JointDesign, hooks: FeRunHooks = {}):
       else throw error;
     }
 
-    const gasketPath: GasketPathSummary | null = null;
-    const gasketPathError =
-      "The gasket-path model (whole joint between bolts) is not part of this version; only the bolt stack was solved.";
+    progress.model = "gasket-path" satisfies FeModelKey;
+    await report("Gasket path: meshing");
+    let gasketPath: GasketPathSummary | null = null;
+    let gasketPathError: string | null = null;
+    const stackSeconds = progress.solverSeconds;
+    // The model reports synchronously; the progress writes are chained so they land in order.
+    let pending: Promise<void> = Promise.resolve();
+    try {
+      const fe = await runGasketPathCheck(document, {
+        signal,
+        processTimeoutMs: Math.max(1000, deadline - Date.now()),
+        onProgress: (stage, info) => {
+          if (stage === "solving" && (info.solverSeconds ?? 0) > 0) progress.runs += 1;
+          if (info.elements !== undefined) progress.elements = info.elements;
+          if (info.solverSeconds !== undefined) progress.solverSeconds = stackSeconds + info.solverSeconds;
+          const label =
+            stage === "solving" ? `Gasket path: contact run ${progress.runs}` : `Gasket path: ${stage}`;
+          pending = pending.then(() => report(label));
+        },
+      });
+      gasketPath = summariseGasketPath(fe);
+    } catch (error) {
+      if (error instanceof CcxCancelled || signal.aborted) throw error;
+      if (error instanceof FeInputError || error instanceof CcxError) gasketPathError = error.message;
+      else if (error instanceof Error)
+        gasketPathError = `The gasket path model could not be built: ${error.message}`;
+      else throw error;
+    } finally {
+      await pending;
+    }
 
     await report("Comparing with the estimate");
     return {
@@ -90,16 +118,24 @@ export async function runFeCheck(document: JointDesign, hooks: FeRunHooks = {}):
       stackError,
       gasketPath,
       gasketPathError,
+      // Like for like: the gasket path rows compare with the estimate the model computed at the
+      // same minimum preload; without the model, with the analysis's own summary.
       comparison: compareWithEstimate(
-        {
-          minGasketStressMpa: analysis.gasketStress.minMpa,
-          maxGasketStressMpa: analysis.gasketStress.maxMpa,
-          liftedLengthMm: analysis.gasketStress.beam.liftedLengthMm,
-        },
+        gasketPath
+          ? {
+              minGasketStressMpa: gasketPath.estimate.minMpa,
+              maxGasketStressMpa: gasketPath.estimate.maxMpa,
+              liftedLengthMm: gasketPath.estimate.liftedLengthMm,
+            }
+          : {
+              minGasketStressMpa: analysis.gasketStress.minMpa,
+              maxGasketStressMpa: analysis.gasketStress.maxMpa,
+              liftedLengthMm: analysis.gasketStress.beam.liftedLengthMm,
+            },
         stack,
         gasketPath,
       ),
-      cautions: [...FE_CAUTIONS, ...(stack?.assumptions ?? [])],
+      cautions: [...FE_CAUTIONS, ...(stack?.assumptions ?? []), ...(gasketPath?.assumptions ?? [])],
       solverSeconds: progress.solverSeconds,
     };
   } catch (error) {
@@ -109,4 +145,25 @@ export async function runFeCheck(document: JointDesign, hooks: FeRunHooks = {}):
   } finally {
     clearTimeout(timer);
   }
+}
+
+/** What the stored result keeps of the gasket path model: the profile beside the estimate, the extremes and the checks. */
+function summariseGasketPath(fe: GasketPathFeResult): GasketPathSummary {
+  return {
+    modelKind: fe.modelKind,
+    elements: fe.mesh.elements,
+    linearRuns: fe.linearRuns,
+    pathKind: fe.path.kind,
+    sMm: fe.path.sMm,
+    stressMpa: fe.path.stressMpa,
+    estimateMpa: fe.path.estimateMpa,
+    onGasket: fe.path.onGasket,
+    minStressMpa: fe.fe.minMpa,
+    maxStressMpa: fe.fe.maxMpa,
+    liftedLengthMm: fe.fe.liftedLengthMm,
+    estimate: { ...fe.estimate },
+    forceBalanceError: fe.forceBalance.error,
+    assumptions: fe.assumptions,
+    warnings: fe.warnings,
+  };
 }

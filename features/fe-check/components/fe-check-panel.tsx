@@ -7,7 +7,7 @@ import { buttonStyles } from "@/features/ui/button-styles";
 import { fetchJson } from "@/features/ui/fetch-json";
 import { formatComparisonValue, formatDifference } from "../comparison-text";
 import { FE_MODEL_NAMES, type FeCheckResult, type FeProgress } from "../fe-check-result";
-import { InterfacePressureChart } from "./interface-pressure-chart";
+import { GasketPathChart, InterfacePressureChart } from "./fe-estimate-chart";
 
 // The FE cross-check panel of the Layout desk and the sign-off sheet: the "Run FE cross-check"
 // command, the run's live progress with Cancel, and when done the estimate set against FE.
@@ -195,8 +195,14 @@ function FeResult({ fe, result, units }: { fe: FeCheckView; result: FeCheckResul
         <p className="text-table text-verdict-warn">Bolt stack: {result.stackError}</p>
       ) : null}
       {result.gasketPathError ? (
-        <p className="text-table text-ink-600">Gasket path: {result.gasketPathError}</p>
+        <p className="text-table text-verdict-warn">Gasket path: {result.gasketPathError}</p>
       ) : null}
+      {result.gasketPath?.warnings.map((w) => (
+        <p key={w} className="text-table text-verdict-warn">
+          Gasket path: {w}
+        </p>
+      ))}
+      {result.gasketPath ? <GasketPathChart path={result.gasketPath} units={units} /> : null}
       {result.stack ? <InterfacePressureChart points={result.stack.pressure} units={units} /> : null}
       <details className="text-table text-ink-700">
         <summary className="cursor-pointer font-medium">Assumptions and cautions of this run</summary>

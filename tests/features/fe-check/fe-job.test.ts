@@ -85,6 +85,15 @@ describe("FE cross-check job", () => {
       /not a substitute for an FE analysis qualified under the governing code/,
     );
     expect(done.result!.stack!.fe.reactionRatio).toBeGreaterThan(0.999);
+    // The gasket path model ran too: its profile on the estimate's s, compared like for like.
+    const path = done.result!.gasketPath!;
+    expect(done.result!.gasketPathError).toBeNull();
+    expect(path.stressMpa).toHaveLength(path.sMm.length);
+    expect(path.estimateMpa).toHaveLength(path.sMm.length);
+    expect(path.forceBalanceError).toBeLessThan(0.01);
+    const minRow = done.result!.comparison.find((r) => r.key === "min-gasket-stress")!;
+    expect(minRow).toMatchObject({ estimate: path.estimate.minMpa, fe: path.minStressMpa });
+    expect(minRow.fe).toBeGreaterThan(0);
 
     // A finished row never changes, even for the owner role.
     await expect(
