@@ -16,6 +16,7 @@ import { useEditorShortcuts } from "../hooks/use-editor-shortcuts";
 import { useHeldWhile } from "../hooks/use-held-while";
 import { useLatest } from "../hooks/use-latest";
 import { useHeatMap } from "../hooks/use-heat-map";
+import { currentGasketPath, useFeCheck } from "@/features/fe-check/components/use-fe-check";
 import { useLeaveGuard } from "../hooks/use-leave-guard";
 import { useLiveAnalysis } from "../hooks/use-live-analysis";
 import { useResultAgreement } from "../hooks/use-result-agreement";
@@ -66,7 +67,14 @@ export function DesignWorkspace({
   const readoutView = useDeferredValue(useHeldWhile(view, editor.dragging));
   const readoutIssues = useDeferredValue(useHeldWhile(live.issues, editor.dragging));
   // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
-  const heat = useHeatMap(design, editor.dragging ? lastView : view, editor.dragging);
+  // A finished FE cross-check of the saved document: its curve on the Seat trace, and the heat
+  // map may show its field. Never over an edited layout: the run is of the saved one.
+  const feCheck = useFeCheck(dto.designId, dto.revisionNumber);
+  const savedPath = currentGasketPath(feCheck.fe);
+  const fePath = savedPath && live.stored && !editor.dragging ? savedPath : null;
+  const [heatSource, setHeatSource] = useState<"estimate" | "fe">("estimate");
+  const feField = heatSource === "fe" ? fePath : null;
+  const heat = useHeatMap(design, editor.dragging ? lastView : view, editor.dragging, feField);
 
   const setInvalid = useCallback((path: string, bad: boolean) => {
     setInvalidState((cur) => {
@@ -236,7 +244,14 @@ export function DesignWorkspace({
             </div>
             {heat.scale && (
               <div className="border-t border-ink-100 px-1">
-                <StressLegend scale={heat.scale} units={units} basis="minimum preload" />
+                <div className="flex flex-wrap items-end justify-between gap-2">
+                  <StressLegend
+                    scale={heat.scale}
+                    units={units}
+                    basis={feField ? "FE cross-check, minimum preload" : "minimum preload"}
+                  />
+                  {fePath && <HeatSourceSwitch value={heatSource} onChange={setHeatSource} />}
+                </div>
               </div>
             )}
           </div>
@@ -248,6 +263,7 @@ export function DesignWorkspace({
             onPickCheck={setActiveCheck}
             onPickBolt={setSelected}
             basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"}
+            feTrace={fePath}
           />
         </div>
         <aside aria-label="Joint data" className="space-y-4 rounded-plate bg-white p-3 shadow-plate">
@@ -262,5 +278,39 @@ export function DesignWorkspace({
         </aside>
       </div>
     </div>
+  );
+}
+
+/** The "Field" switch under the drawing: the heat map from the estimate or from the FE cross-check. */
+function HeatSourceSwitch({
+  value,
+  onChange,
+}: {
+  value: "estimate" | "fe";
+  onChange: (v: "estimate" | "fe") => void;
+}) {
+  const options = [
+    { v: "estimate", label: "Estimate" },
+    { v: "fe", label: "FE cross-check" },
+  ] as const;
+  return (
+    <fieldset className="flex items-center gap-2 p-2 text-micro text-ink-700">
+      <legend className="sr-only">Heat map field</legend>
+      <span aria-hidden="true" className="font-medium">
+        Field
+      </span>
+      {options.map((o) => (
+        <label key={o.v} className="flex cursor-pointer items-center gap-1">
+          <input
+            type="radio"
+            name="heat-source"
+            value={o.v}
+            checked={value === o.v}
+            onChange={() => onChange(o.v)}
+          />
+          {o.label}
+        </label>
+      ))}
+    </fieldset>
   );
 }

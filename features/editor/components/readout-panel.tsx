@@ -8,10 +8,12 @@ import { BoltTable } from "./bolt-table";
 import { CheckList } from "./check-list";
 import { EstimatorNote } from "./estimator-note";
 import { FlangeSummary } from "@/features/analysis/components/flange-summary";
-import { StressProfileChart } from "./stress-profile-chart";
+import { StressProfileChart, type FeTrace } from "./stress-profile-chart";
 
 interface Props {
   view: ReadoutView | null;
+  /** A finished FE cross-check of the saved document, drawn on the Seat trace (null otherwise). */
+  feTrace?: FeTrace | null;
   issues: DesignIssue[];
   units: UnitSystem;
   activeCheckId: string | null;
@@ -48,6 +50,7 @@ export const ReadoutPanel = memo(function ReadoutPanel({
   onPickCheck,
   onPickBolt,
   basis,
+  feTrace = null,
 }: Props) {
   const s = view?.analysis.summary;
   return (
@@ -93,6 +96,7 @@ export const ReadoutPanel = memo(function ReadoutPanel({
               seatingMpa={view.seatingMpa}
               crushMpa={view.crushMpa}
               units={units}
+              fe={feTrace}
             />
           </Section>
           <Section title="Checks">

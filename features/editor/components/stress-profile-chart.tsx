@@ -4,26 +4,38 @@ import { decimateMinMax } from "../model/decimate";
 import type { ProfileView } from "../model/readout-view";
 import { formatQuantity, toDisplay, unitLabel } from "../model/quantities";
 
+/** An FE cross-check's gasket stress along the same path, at minimum preload. */
+export interface FeTrace {
+  sMm: number[];
+  stressMpa: number[];
+  minStressMpa: number;
+}
+
 const W = 520,
   H = 190,
   M = { l: 52, r: 10, t: 12, b: 26 };
 
 /**
  * The "Seat trace": gasket stress along the gasket path at minimum and target preload, with the
- * required seating stress and the crush limit as lines and the bolt positions as ticks.
+ * required seating stress and the crush limit as lines and the bolt positions as ticks. With a
+ * finished FE cross-check of the saved document, its gasket stress at minimum preload as a third curve.
  */
 export function StressProfileChart({
   profile,
   seatingMpa,
   crushMpa,
   units,
+  fe = null,
 }: {
   profile: ProfileView;
   seatingMpa: number;
   crushMpa: number | null;
   units: UnitSystem;
+  fe?: FeTrace | null;
 }) {
-  const top = Math.max(profile.maxMpa, seatingMpa, crushMpa ?? 0) * 1.08 || 1;
+  let feMax = 0;
+  if (fe) for (const v of fe.stressMpa) feMax = Math.max(feMax, v);
+  const top = Math.max(profile.maxMpa, seatingMpa, crushMpa ?? 0, feMax) * 1.08 || 1;
   const x = scaleLinear()
     .domain([0, profile.pathLengthMm])
     .range([M.l, W - M.r]);
@@ -34,6 +46,7 @@ export function StressProfileChart({
   const trace = decimateMinMax(profile.sMm, profile.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r);
   const line = (f: number) =>
     trace.xs.map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(trace.ys[i] * f).toFixed(1)}`).join("");
+  const feTrace = fe ? decimateMinMax(fe.sMm, fe.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r) : null;
   const yTicks = y.ticks(4);
   const unit = unitLabel("stress", units);
   const minAtMin = profile.minMpa * profile.minFactor;
@@ -95,6 +108,18 @@ export function StressProfileChart({
           strokeWidth="1.5"
           data-series="minimum"
         />
+        {feTrace && (
+          <path
+            d={feTrace.xs
+              .map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(feTrace.ys[i]).toFixed(1)}`)
+              .join("")}
+            fill="none"
+            stroke="#2f7d5b"
+            strokeWidth="1.5"
+            strokeDasharray="4 2"
+            data-series="fe"
+          />
+        )}
         <text x={(M.l + W - M.r) / 2} y={H - 4} textAnchor="middle" fontSize="9" fill="#4c5d7d">
           position along the gasket path ({unitLabel("length", units)}), bolts ticked
         </text>
@@ -110,6 +135,12 @@ export function StressProfileChart({
           {formatQuantity("stress", profile.maxMpa, units)}, mean{" "}
           {formatQuantity("stress", profile.meanMpa, units)}
         </span>
+        {fe && (
+          <span data-testid="seat-trace-fe">
+            <span className="text-[#2f7d5b]">╍</span> FE cross-check, minimum preload: min{" "}
+            {formatQuantity("stress", fe.minStressMpa, units)}
+          </span>
+        )}
       </figcaption>
     </figure>
   );

@@ -11,23 +11,39 @@ import type { HeatGridPicture } from "../components/heat-grid-node";
 /** Settling time before the full-area grid is recomputed after the last change, ms. */
 const GRID_DELAY_MS = 120;
 
+/** An FE cross-check's gasket stress along the path at minimum preload, to colour the strip with. */
+export interface FeField {
+  sMm: number[];
+  stressMpa: number[];
+  maxStressMpa: number;
+}
+
 /**
  * The heat map at minimum preload. Every frame: the strip along the gasket path from the
  * analysis profile (cheap). Once edits settle: the core's full-area grid, painted to an image.
+ * With `fe` (the FE field is switched on) the strip is coloured by the FE cross-check's gasket
+ * stress instead, on a scale that covers both, and the estimate's full-area grid is not drawn.
  */
-export function useHeatMap(design: JointDesign, view: ReadoutView | null, dragging: boolean) {
+export function useHeatMap(
+  design: JointDesign,
+  view: ReadoutView | null,
+  dragging: boolean,
+  fe: FeField | null = null,
+) {
   const scale = useMemo(() => {
     if (!view) return null;
-    return buildHeatScale(view.profile.maxMpa * view.profile.minFactor, view.seatingMpa, view.crushMpa);
-  }, [view]);
-  const quads = useMemo(
-    () =>
-      view ? buildHeatQuads(design, view.profile.sMm, view.profile.stressMpa, view.profile.minFactor) : null,
-    [design, view],
-  );
+    const top = Math.max(view.profile.maxMpa * view.profile.minFactor, fe?.maxStressMpa ?? 0);
+    return buildHeatScale(top, view.seatingMpa, view.crushMpa);
+  }, [view, fe]);
+  const quads = useMemo(() => {
+    if (fe) return buildHeatQuads(design, fe.sMm, fe.stressMpa);
+    return view
+      ? buildHeatQuads(design, view.profile.sMm, view.profile.stressMpa, view.profile.minFactor)
+      : null;
+  }, [design, view, fe]);
   const [grid, setGrid] = useState<{ design: JointDesign; picture: HeatGridPicture } | null>(null);
   useEffect(() => {
-    if (dragging || !view || !scale) return;
+    if (dragging || !view || !scale || fe) return;
     const id = window.setTimeout(() => {
       try {
         const g = computeGasketStressGrid(design, design.estimator.grid.nx, design.estimator.grid.ny);
@@ -48,7 +64,7 @@ export function useHeatMap(design: JointDesign, view: ReadoutView | null, draggi
       }
     }, GRID_DELAY_MS);
     return () => window.clearTimeout(id);
-  }, [design, view, scale, dragging]);
-  const current = grid && grid.design === design && !dragging ? grid.picture : null;
+  }, [design, view, scale, dragging, fe]);
+  const current = grid && grid.design === design && !dragging && !fe ? grid.picture : null;
   return { scale, stage: scale ? { quads, grid: current, colour: scale.colour } : null };
 }

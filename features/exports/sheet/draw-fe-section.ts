@@ -35,6 +35,7 @@ export function drawFeSection(ctx: SheetContext, fe: SheetFeCheck | null | undef
   const notes = [
     ...(fe.result.stackError ? [`Bolt stack: ${fe.result.stackError}`] : []),
     ...(fe.result.gasketPathError ? [`Gasket path: ${fe.result.gasketPathError}`] : []),
+    ...(fe.result.gasketPath?.warnings ?? []).map((w) => `Gasket path: ${w}`),
     ...fe.result.cautions,
   ];
   drawTable(

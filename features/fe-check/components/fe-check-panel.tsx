@@ -1,30 +1,15 @@
 "use client";
 
 import { useState } from "react";
-import useSWR from "swr";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { buttonStyles } from "@/features/ui/button-styles";
-import { fetchJson } from "@/features/ui/fetch-json";
 import { formatComparisonValue, formatDifference } from "../comparison-text";
-import { FE_MODEL_NAMES, type FeCheckResult, type FeProgress } from "../fe-check-result";
+import { FE_MODEL_NAMES, type FeCheckResult } from "../fe-check-result";
 import { GasketPathChart, InterfacePressureChart } from "./fe-estimate-chart";
+import { feCheckActive, useFeCheck, type FeCheckView } from "./use-fe-check";
 
 // The FE cross-check panel of the Layout desk and the sign-off sheet: the "Run FE cross-check"
 // command, the run's live progress with Cancel, and when done the estimate set against FE.
-
-interface FeCheckView {
-  id: string;
-  status: "queued" | "running" | "done" | "failed" | "cancelled";
-  stage: string;
-  progress: FeProgress;
-  current: boolean;
-  result: FeCheckResult | null;
-  error: string | null;
-  cancelRequested: boolean;
-  requestedByName: string | null;
-  createdAt: string;
-  finishedAt: string | null;
-}
 
 export interface FeCheckPanelProps {
   designId: string;
@@ -36,15 +21,6 @@ export interface FeCheckPanelProps {
   frozen: boolean;
 }
 
-const POLL_MS = 1000;
-
-function feUrl(designId: string, revisionNumber: number): string {
-  return `/api/v1/designs/${designId}/revisions/${revisionNumber}/fe-check`;
-}
-
-const active = (f: FeCheckView | null | undefined) =>
-  !!f && (f.status === "queued" || f.status === "running");
-
 async function post(url: string): Promise<void> {
   const res = await fetch(url, { method: "POST" });
   if (!res.ok) {
@@ -54,15 +30,9 @@ async function post(url: string): Promise<void> {
 }
 
 export function FeCheckPanel({ designId, revisionNumber, units, canRun, frozen }: FeCheckPanelProps) {
-  const key = feUrl(designId, revisionNumber);
-  const { data, error, mutate } = useSWR<{ feCheck: FeCheckView | null }>(
-    key,
-    (url: string) => fetchJson(url, (s) => `The FE cross-check could not be read (HTTP ${s}).`),
-    { refreshInterval: (latest) => (active(latest?.feCheck) ? POLL_MS : 0) },
-  );
+  const { key, fe, loaded, error, mutate } = useFeCheck(designId, revisionNumber);
   const [busy, setBusy] = useState(false);
   const [commandError, setCommandError] = useState<string | null>(null);
-  const fe = data?.feCheck ?? null;
 
   async function run(url: string) {
     setBusy(true);
@@ -77,7 +47,7 @@ export function FeCheckPanel({ designId, revisionNumber, units, canRun, frozen }
     }
   }
 
-  const running = active(fe);
+  const running = feCheckActive(fe);
   return (
     <section
       aria-labelledby="fe-check-heading"
@@ -124,7 +94,7 @@ export function FeCheckPanel({ designId, revisionNumber, units, canRun, frozen }
           </p>
         ) : null}
         {error ? <p className="text-verdict-fail">{error.message}</p> : null}
-        {!fe && data ? <p>No FE cross-check of this revision yet.</p> : null}
+        {!fe && loaded ? <p>No FE cross-check of this revision yet.</p> : null}
         {fe && running ? <RunProgress fe={fe} /> : null}
         {fe && (fe.status === "failed" || fe.status === "cancelled") ? (
           <p className={fe.status === "failed" ? "text-verdict-fail" : "text-ink-700"}>
