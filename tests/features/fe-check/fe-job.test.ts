@@ -93,7 +93,8 @@ describe("FE cross-check job", () => {
     expect(path.forceBalanceError).toBeLessThan(0.01);
     const minRow = done.result!.comparison.find((r) => r.key === "min-gasket-stress")!;
     expect(minRow).toMatchObject({ estimate: path.estimate.minMpa, fe: path.minStressMpa });
-    expect(minRow.fe).toBeGreaterThan(0);
+    expect(path.maxStressMpa).toBeGreaterThan(0);
+    expect(minRow.fe!).toBeLessThanOrEqual(path.maxStressMpa);
 
     // A finished row never changes, even for the owner role.
     await expect(
