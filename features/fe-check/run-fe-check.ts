@@ -81,10 +81,12 @@ export async function runFeCheck(document: JointDesign, hooks: FeRunHooks = {}):
     }
 
     progress.model = "gasket-path" satisfies FeModelKey;
+    progress.elements = 0;
     await report("Gasket path: meshing");
     let gasketPath: GasketPathSummary | null = null;
     let gasketPathError: string | null = null;
     const stackSeconds = progress.solverSeconds;
+    let pathRuns = 0;
     // The model reports synchronously; the progress writes are chained so they land in order.
     let pending: Promise<void> = Promise.resolve();
     try {
@@ -92,11 +94,15 @@ export async function runFeCheck(document: JointDesign, hooks: FeRunHooks = {}):
         signal,
         processTimeoutMs: Math.max(1000, deadline - Date.now()),
         onProgress: (stage, info) => {
-          if (stage === "solving" && (info.solverSeconds ?? 0) > 0) progress.runs += 1;
+          if (stage === "meshing") return; // reported above, before the model starts
           if (info.elements !== undefined) progress.elements = info.elements;
           if (info.solverSeconds !== undefined) progress.solverSeconds = stackSeconds + info.solverSeconds;
-          const label =
-            stage === "solving" ? `Gasket path: contact run ${progress.runs}` : `Gasket path: ${stage}`;
+          let label = `Gasket path: ${stage}`;
+          if (stage === "solving" && (info.solverSeconds ?? 0) > 0) {
+            pathRuns += 1;
+            progress.runs += 1;
+            label = `Gasket path: contact run ${pathRuns}`;
+          }
           pending = pending.then(() => report(label));
         },
       });
