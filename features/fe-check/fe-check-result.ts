@@ -63,6 +63,9 @@ export interface GasketPathSummary {
   minStressMpa: number;
   maxStressMpa: number;
   liftedLengthMm: number;
+  /** Over the whole meshed gasket: the share of its area in contact and the highest cell-centre stress, MPa. */
+  closedAreaFraction: number;
+  peakCellMpa: number;
   /** The governing estimate at the same minimum preload, the one the FE values are compared with. */
   estimate: { estimator: "cone" | "beam"; minMpa: number; maxMpa: number; liftedLengthMm: number };
   /** |gasket reaction / bolt loads − 1| over the modelled part. */

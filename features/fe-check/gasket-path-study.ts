@@ -21,6 +21,7 @@ import {
   type GasketPathProblem,
 } from "./gasket-path-model";
 import {
+  approachAt,
   gasketCellLocator,
   gasketForceN,
   pressureAtMpa,
@@ -143,7 +144,16 @@ export interface GasketPathFeResult {
     /** False inside a bolt hole or the bore on a full-face gasket's bolt path (stress 0 there, not counted). */
     onGasket: boolean[];
   };
-  fe: { minMpa: number; maxMpa: number; minAtSMm: number; maxAtSMm: number; liftedLengthMm: number };
+  /** On the path; and over the whole meshed gasket, its closed share of area and highest cell-centre stress. */
+  fe: {
+    minMpa: number;
+    maxMpa: number;
+    minAtSMm: number;
+    maxAtSMm: number;
+    liftedLengthMm: number;
+    closedAreaFraction: number;
+    peakCellMpa: number;
+  };
   estimate: { estimator: "cone" | "beam"; minMpa: number; maxMpa: number; liftedLengthMm: number };
   /** Over the modelled part (half a bolt for a sector): bolt loads, the gasket's reaction, |reaction/loads − 1|. */
   forceBalance: { boltLoadsN: number; gasketReactionN: number; contactForceN: number; error: number };
@@ -188,6 +198,16 @@ export async function runGasketPathCheck(
     warnings.push(
       `${offPlate.toFixed(1)} mm of the gasket path lies off the plate's gasket cells; the FE values there are those of the nearest gasket cell's edge.`,
     );
+  // Over the whole meshed gasket, not only the path: the closed share of its area and the highest
+  // cell-centre stress (a plate that rotates about the gasket seats one edge and opens the other).
+  let closedArea = 0;
+  let peakCellMpa = 0;
+  sol.mesh.gasketCells.forEach((e, g) => {
+    if (!sol.closed[g]) return;
+    closedArea += sol.mesh.areaMm2[e];
+    peakCellMpa = Math.max(peakCellMpa, plan.kPerAreaMpaPerMm * approachAt(sol.mesh, sol.uz, e, 0, 0));
+  });
+  const closedAreaFraction = meshedGasket > 0 ? closedArea / meshedGasket : 0;
   let min = Infinity,
     max = -Infinity,
     iMin = 0,
@@ -200,6 +220,10 @@ export async function runGasketPathCheck(
   const tol = Math.max(max, 0) * 1e-9;
   let lifted = 0;
   for (let j = 0; j < N; j++) if (profiles.onGasket[j] && stress[j] <= tol) lifted += step;
+  if (closedAreaFraction < 0.995)
+    warnings.push(
+      `The FE gasket is in contact over ${(closedAreaFraction * 100).toFixed(0)} % of its area (highest cell stress ${peakCellMpa.toFixed(1)} MPa); the rest opens under the plate's bending${lifted > 0 ? `, and ${lifted.toFixed(0)} mm of the path lies in the open part` : ""}. The estimate along the path does not model the plate turning about the gasket: where they differ, seat the gasket by the FE result or stiffen the joint.`,
+    );
   const m = plan.model;
   const p = plan.plate;
   const layers = m.design.layers
@@ -232,6 +256,8 @@ export async function runGasketPathCheck(
       minAtSMm: profiles.sMm[iMin],
       maxAtSMm: profiles.sMm[iMax],
       liftedLengthMm: lifted,
+      closedAreaFraction,
+      peakCellMpa,
     },
     estimate: {
       estimator: governing.estimator,

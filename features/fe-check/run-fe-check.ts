@@ -167,6 +167,8 @@ function summariseGasketPath(fe: GasketPathFeResult): GasketPathSummary {
     minStressMpa: fe.fe.minMpa,
     maxStressMpa: fe.fe.maxMpa,
     liftedLengthMm: fe.fe.liftedLengthMm,
+    closedAreaFraction: fe.fe.closedAreaFraction,
+    peakCellMpa: fe.fe.peakCellMpa,
     estimate: { ...fe.estimate },
     forceBalanceError: fe.forceBalance.error,
     assumptions: fe.assumptions,
