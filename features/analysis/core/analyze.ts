@@ -27,7 +27,7 @@ import { checkSpacing } from "./checks/spacing";
 import { checkEdgesAndPattern } from "./checks/edge-and-pattern";
 import { countChecks, type CheckRecord } from "./checks/check-record";
 import { collectCatalogueEditions, type CatalogueEdition } from "./catalogue-editions";
-import { toFiniteJson } from "./finite-json";
+import { onGasketFlags, toFiniteJson } from "./finite-json";
 
 export interface BoltResult {
   id: string;
@@ -255,7 +255,11 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
     "Results are engineering estimates: design to the governing code; gasket factors are design values, not assembly targets, and the gasket manufacturer's data supersede them; torque controls preload only indirectly; pressure-boundary joints need review by a competent engineer.",
   ];
   const counts = countChecks(checks);
-  const arr = (a: ArrayLike<number>) => Array.from(a);
+  const arr = (a: ArrayLike<number>): number[] => {
+    const out = new Array<number>(a.length);
+    for (let i = 0; i < a.length; i++) out[i] = a[i];
+    return out;
+  };
   const L = model.boltPath.lengthMm;
   const byLabel = design.bolts
     .map((b, i) => ({ id: b.id, s: ((b.sMm % L) + L) % L, p: model.boltPoints[i] }))
@@ -361,7 +365,7 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
         stressMpa: arr(gov.values),
         coneMpa: arr(profiles.coneMpa),
         beamMpa: arr(profiles.beamMpa),
-        onGasket: Array.from(profiles.onGasket, (v) => v === 1),
+        onGasket: onGasketFlags(profiles.onGasket),
       },
     },
     asmeAppendix2: asme.result,

@@ -18,7 +18,7 @@ import { checkGasketStress } from "./checks/gasket-stress-checks";
 import { checkSpacing } from "./checks/spacing";
 import type { CheckRecord } from "./checks/check-record";
 import type { JointAnalysis } from "./analyze";
-import { toFiniteJson, toFiniteRecords } from "./finite-json";
+import { onGasketFlags, toFiniteJson, toFiniteRecords } from "./finite-json";
 
 export type PreviewCheck = CheckRecord & { boltIds: string[] };
 
@@ -74,7 +74,7 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
       stressMpa: arr(gov.values),
       coneMpa: arr(profiles.coneMpa),
       beamMpa: arr(profiles.beamMpa),
-      onGasket: Array.from(profiles.onGasket, (v) => v === 1),
+      onGasket: onGasketFlags(profiles.onGasket),
     },
     boltSOnPathMm: arr(profiles.boltSOnPathMm),
     // The records and the summary get the conversion analyzeJoint applies (flat records: the short form).
