@@ -5,7 +5,7 @@ import type { Database } from "@/db/types";
 import type { Viewer } from "@/server/auth/guard";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { INVALID_FORM_MESSAGE, fieldErrorsOf } from "@/features/forms/form-data";
-import { findDesign } from "./queries";
+import { findDesignState } from "./queries";
 import {
   createDesign,
   deleteDesign,
@@ -118,7 +118,7 @@ export async function saveWorkingRevisionForViewer(
   const parsed = saveWorkingRevisionSchema.safeParse(raw);
   if (!parsed.success) return invalid(parsed.error);
   const input = parsed.data;
-  const design = await findDesign(db, viewer.organizationId, input.designId);
+  const design = await findDesignState(db, viewer.organizationId, input.designId);
   if (!design) return refuse("not-found", NOT_FOUND);
   if (!isEditableStatus(design.status)) return refuse("frozen", frozenMessage(design.status));
   if (!canEditDesign(viewer, design)) return refuse("forbidden", "Only designers can edit designs.");
@@ -170,7 +170,7 @@ export async function setDesignArchivedForViewer(
   archived: boolean,
 ): Promise<CommandResult<{ archived: boolean }>> {
   const id = designIdSchema.safeParse(rawId);
-  const design = id.success ? await findDesign(db, viewer.organizationId, id.data) : null;
+  const design = id.success ? await findDesignState(db, viewer.organizationId, id.data) : null;
   if (!design) return refuse("not-found", NOT_FOUND);
   if (!canArchiveDesign(viewer, design))
     return refuse("forbidden", "Only the owner or an admin can archive a design.");
@@ -184,7 +184,7 @@ export async function deleteDesignForViewer(
   rawId: unknown,
 ): Promise<CommandResult<{ deleted: true }>> {
   const id = designIdSchema.safeParse(rawId);
-  const design = id.success ? await findDesign(db, viewer.organizationId, id.data) : null;
+  const design = id.success ? await findDesignState(db, viewer.organizationId, id.data) : null;
   if (!design) return refuse("not-found", NOT_FOUND);
   if (!canArchiveDesign(viewer, design))
     return refuse("forbidden", "Only the owner or an admin can delete a design.");

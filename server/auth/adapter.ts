@@ -1,8 +1,9 @@
 import "server-only";
 import type { Adapter, DatabaseSession, DatabaseUser } from "lucia";
 import type { Kysely } from "kysely";
+import { jsonArrayFrom } from "kysely/helpers/postgres";
 import type { Database } from "@/db/types";
-import type { UnitSystem } from "@/db/tables/core";
+import type { Role, UnitSystem } from "@/db/tables/core";
 import { hashSessionId } from "./session-id";
 
 // Lucia's storage contract over our own `sessions` and `users` tables (migration 000200).
@@ -19,6 +20,15 @@ export interface UserRowAttributes {
   email: string;
   display_name: string;
   unit_system: UnitSystem;
+  /** The user's organisations, oldest membership first: read in the session's own query. */
+  memberships: SessionMembership[];
+}
+
+export interface SessionMembership {
+  id: string;
+  name: string;
+  slug: string;
+  roles: Role[];
 }
 
 const sessionColumns = [
@@ -47,16 +57,27 @@ function toDatabaseSession(
 
 export function createKyselyAdapter(db: Kysely<Database>): Adapter {
   return {
+    // One round trip per request: the session, its user and the user's memberships (which
+    // resolveViewerContext needs for the active organisation) in a single statement.
     async getSessionAndUser(sessionId) {
       const row = await db
         .selectFrom("sessions")
         .innerJoin("users", "users.id", "sessions.user_id")
-        .select([
+        .select((eb) => [
           ...sessionColumns,
           "users.email",
           "users.display_name",
           "users.unit_system",
           "users.disabled_at",
+          jsonArrayFrom(
+            eb
+              .selectFrom("memberships")
+              .innerJoin("organizations", "organizations.id", "memberships.organization_id")
+              .select(["organizations.id", "organizations.name", "organizations.slug", "memberships.roles"])
+              .whereRef("memberships.user_id", "=", "users.id")
+              .orderBy("memberships.created_at")
+              .orderBy("organizations.name"),
+          ).as("memberships"),
         ])
         .where("sessions.id", "=", hashSessionId(sessionId))
         .executeTakeFirst();
@@ -66,7 +87,12 @@ export function createKyselyAdapter(db: Kysely<Database>): Adapter {
       if (row.disabled_at) return [session, null];
       const user: DatabaseUser = {
         id: row.user_id,
-        attributes: { email: row.email, display_name: row.display_name, unit_system: row.unit_system },
+        attributes: {
+          email: row.email,
+          display_name: row.display_name,
+          unit_system: row.unit_system,
+          memberships: row.memberships,
+        },
       };
       return [session, user];
     },

@@ -2,7 +2,6 @@ import "server-only";
 import { cookies, headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { cache } from "react";
-import { getDb } from "@/db/index";
 import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from "@/db/connection-errors";
 import type { Role } from "@/db/tables/core";
 import { getEnv } from "@/server/env";
@@ -18,7 +17,7 @@ export type { Viewer } from "./viewer";
 /** The viewer and session of this request (pages, layouts, actions); cached per request. */
 export const getViewerContext = cache(async (): Promise<ViewerContext | null> => {
   const store = await cookies();
-  return resolveViewerContext(getDb(), store.get(SESSION_COOKIE_NAME)?.value);
+  return resolveViewerContext(store.get(SESSION_COOKIE_NAME)?.value);
 });
 
 export async function getViewer(): Promise<Viewer | null> {
@@ -84,7 +83,7 @@ export async function authorizeApi(
   // reconnects by itself once the database is back). The cause goes to the server log only.
   let context: ViewerContext | null;
   try {
-    context = await resolveViewerContext(getDb(), sessionId);
+    context = await resolveViewerContext(sessionId);
   } catch (error) {
     if (!isDatabaseUnavailable(error)) throw error;
     console.error(`[api] database unavailable: ${error instanceof Error ? error.message : String(error)}`);

@@ -35,6 +35,7 @@ export function createLucia(db: Kysely<Database>, env: ServerEnv) {
       email: attributes.email,
       displayName: attributes.display_name,
       unitSystem: attributes.unit_system,
+      memberships: attributes.memberships,
     }),
   });
 }
@@ -49,10 +50,15 @@ declare module "lucia" {
   }
 }
 
-let instance: SealpitchLucia | undefined;
+let instance: { lucia: SealpitchLucia; db: Kysely<Database> } | undefined;
 
-/** The process-wide lucia instance (created on first use so `next build` needs no settings). */
+/**
+ * The process-wide lucia instance (created on first use so `next build` needs no settings), over
+ * the process's one database instance: should that instance be replaced (a test standing in an
+ * unreachable database), lucia follows it, since the session lookup is every API request's query.
+ */
 export function getLucia(): SealpitchLucia {
-  instance ??= createLucia(getDb(), getEnv());
-  return instance;
+  const db = getDb();
+  if (instance?.db !== db) instance = { lucia: createLucia(db, getEnv()), db };
+  return instance.lucia;
 }

@@ -1,6 +1,4 @@
 import "server-only";
-import type { Kysely } from "kysely";
-import type { Database } from "@/db/types";
 import type { Role, UnitSystem } from "@/db/tables/core";
 import { getLucia } from "./lucia";
 import { noteViewer } from "@/server/log/request-context";
@@ -35,20 +33,13 @@ export function sortRoles(roles: readonly Role[]): Role[] {
  * membership has no viewer (they cannot see any data).
  */
 export async function resolveViewerContext(
-  db: Kysely<Database>,
   sessionId: string | null | undefined,
 ): Promise<ViewerContext | null> {
   if (!sessionId) return null;
+  // One query: lucia's session lookup also brings the user's memberships (adapter.ts).
   const { session, user } = await getLucia().validateSession(sessionId);
   if (!session || !user) return null;
-  const memberships = await db
-    .selectFrom("memberships")
-    .innerJoin("organizations", "organizations.id", "memberships.organization_id")
-    .select(["organizations.id", "organizations.name", "organizations.slug", "memberships.roles"])
-    .where("memberships.user_id", "=", user.id)
-    .orderBy("memberships.created_at")
-    .orderBy("organizations.name")
-    .execute();
+  const memberships = user.memberships;
   const active = memberships.find((m) => m.id === session.activeOrganizationId) ?? memberships[0];
   if (!active) return null;
   noteViewer(user.id, active.id);

@@ -10,6 +10,8 @@ export const CACHE_POLICIES = {
   userData: "private, no-store",
   /** No user data, but only a fresh answer is worth anything (health, metrics, auth refusals). */
   fresh: "no-store",
+  /** An organisation's data that a browser may keep but must revalidate (ETag) before each use: the design reads. */
+  revalidate: "private, no-cache",
   /** The same for every signed-in user of one release (the design JSON Schema): 5 minutes, browser only. */
   releaseStatic: "private, max-age=300",
 } as const;

@@ -63,6 +63,10 @@ describe("the Kysely adapter over sessions/users", () => {
         email: org.users.dana.email,
         display_name: org.users.dana.displayName,
         unit_system: "SI",
+        // The memberships come in the same query (one session lookup per request).
+        memberships: [
+          { id: org.organizationId, name: expect.any(String), slug: expect.any(String), roles: ["designer"] },
+        ],
       },
     });
     expect(JSON.stringify([session, user])).not.toContain("$argon2");
@@ -278,7 +282,7 @@ describe("active organisation", () => {
       const session = await getLucia().createSession(org.users.dana.userId, {
         active_organization_id: second.organizationId,
       });
-      const context = await resolveViewerContext(db, session.id);
+      const context = await resolveViewerContext(session.id);
       expect(context?.viewer.organizationId).toBe(org.organizationId);
       expect(context?.viewer.roles).toEqual(["designer"]);
     } finally {

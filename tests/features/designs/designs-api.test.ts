@@ -5,7 +5,9 @@ import {
   GET as designGet,
   PUT as designPut,
 } from "@/app/api/v1/designs/[designId]/route";
+import { GET as designResultGet } from "@/app/api/v1/designs/[designId]/result/route";
 import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/route";
+import { findDesign } from "@/features/designs/queries";
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
 import {
   COVER_TEMPLATE,
@@ -32,6 +34,14 @@ async function createViaApi(name: string, cookie = cookies.dana): Promise<string
   );
   expect(response.status).toBe(201);
   return (await response.json()).designId;
+}
+
+async function readResult(id: string, cookie = cookies.dana, headers: Record<string, string> = {}) {
+  const response = await designResultGet(
+    appRequest(`/api/v1/designs/${id}/result`, { cookie, headers }),
+    params(id),
+  );
+  return { status: response.status, etag: response.headers.get("etag"), text: await response.text() };
 }
 
 async function readDesign(id: string, cookie = cookies.dana) {
@@ -304,6 +314,72 @@ describe("designs API", () => {
     expect((await frozenPut.json()).error.message).toBe("This revision is in review and cannot be edited.");
   });
 
+  it("the design read leaves the profiles out, and GET …/result answers the whole stored result the design read used to carry", async () => {
+    const id = await createViaApi("API result split");
+    // What GET /api/v1/designs/[id] answered before the split: the stored column through JSON.
+    const stored = JSON.stringify((await findDesign(db, home.organizationId, id))!.result);
+    const whole = await readResult(id, cookies.arlo);
+    expect(whole.status).toBe(200);
+    const body = JSON.parse(whole.text);
+    expect(body).toMatchObject({ designId: id, revisionNumber: 1, version: 1 });
+    // Bit for bit: the same numbers and keys in the same order as the stored result.
+    expect(JSON.stringify(body.result)).toBe(stored);
+    expect(body.result.gasketStress.profile.stressMpa.length).toBeGreaterThan(100);
+
+    const read = await readDesign(id);
+    const { profile, ...gasketStress } = JSON.parse(stored).gasketStress;
+    expect(profile).toBeDefined();
+    expect(read.body.workingRevision.result).toEqual({ ...JSON.parse(stored), gasketStress });
+    expect(read.body.workingRevision.result.gasketStress).not.toHaveProperty("profile");
+    expect(read.body.workingRevision.resultUrl).toBe(`/api/v1/designs/${id}/result`);
+    expect((await readResult(id, cookies.other)).status).toBe(404);
+    expect((await readResult("not-a-uuid")).status).toBe(404);
+  });
+
+  it("answers 304 without a body when If-None-Match names the current ETag, and 200 once the design changed", async () => {
+    const id = await createViaApi("API etag");
+    const get = (headers: Record<string, string> = {}) =>
+      designGet(appRequest(`/api/v1/designs/${id}`, { cookie: cookies.dana, headers }), params(id));
+    const first = await get();
+    const etag = first.headers.get("etag")!;
+    expect(etag).toMatch(/^W\/"[A-Za-z0-9_-]{43}"$/);
+    expect(first.headers.get("cache-control")).toBe("private, no-cache");
+    const body = await first.json();
+
+    const again = await get({ "if-none-match": etag });
+    expect(again.status).toBe(304);
+    expect(await again.text()).toBe("");
+    expect(again.headers.get("etag")).toBe(etag);
+    // A list of tags, the strong form of the same tag, and "*" match; another tag does not.
+    expect((await get({ "if-none-match": `W/"other", ${etag.slice(2)}` })).status).toBe(304);
+    expect((await get({ "if-none-match": "*" })).status).toBe(304);
+    expect((await get({ "if-none-match": 'W/"other"' })).status).toBe(200);
+    // The same tag signed out is still a 401: the tag never stands in for the session.
+    const signedOut = await designGet(
+      appRequest(`/api/v1/designs/${id}`, { headers: { "if-none-match": etag } }),
+      params(id),
+    );
+    expect(signedOut.status).toBe(401);
+
+    const document = { ...body.workingRevision.document, name: "API etag, renamed" };
+    const saved = await designPut(
+      appRequest(`/api/v1/designs/${id}`, {
+        method: "PUT",
+        cookie: cookies.dana,
+        body: { baseVersion: body.workingRevision.version, document },
+      }),
+      params(id),
+    );
+    expect(saved.status).toBe(200);
+    const changed = await get({ "if-none-match": etag });
+    expect(changed.status).toBe(200);
+    expect(changed.headers.get("etag")).not.toBe(etag);
+
+    const result = await readResult(id);
+    expect(result.etag).toMatch(/^W\//);
+    expect((await readResult(id, cookies.dana, { "if-none-match": result.etag! })).status).toBe(304);
+  });
+
   it("POST /api/v1/analyses returns the core's result for a document and 422 with field paths for a bad one", async () => {
     const id = await createViaApi("API analysis source");
     const document = (await readDesign(id)).body.workingRevision.document;
@@ -312,7 +388,7 @@ describe("designs API", () => {
     );
     expect(ok.status).toBe(200);
     const result = await ok.json();
-    expect(result).toEqual((await readDesign(id)).body.workingRevision.result);
+    expect(result).toEqual(JSON.parse((await readResult(id)).text).result);
     const wrapped = await analysesPost(
       appRequest("/api/v1/analyses", { method: "POST", cookie: cookies.arlo, body: { document } }),
     );

@@ -5,6 +5,7 @@ import {
   GET as designGet,
   PUT as designPut,
 } from "@/app/api/v1/designs/[designId]/route";
+import { GET as designResultGet } from "@/app/api/v1/designs/[designId]/result/route";
 import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/route";
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
 import { buildRectangularCover } from "@/features/designs/model/templates";
@@ -87,6 +88,22 @@ const DESIGN_ROWS: MatrixRow[] = [
     call: async (ctx, cookie) => {
       const id = await designIn(ctx, "foreign");
       return designGet(appRequest(`/api/v1/designs/${id}`, { cookie }), params(id));
+    },
+    expect: { signedOut: 401, member: 404 },
+  },
+  {
+    name: "GET /api/v1/designs/[home design]/result",
+    call: async (ctx, cookie) => {
+      const id = await designIn(ctx, "home");
+      return designResultGet(appRequest(`/api/v1/designs/${id}/result`, { cookie }), params(id));
+    },
+    expect: { signedOut: 401, member: 200 },
+  },
+  {
+    name: "GET /api/v1/designs/[foreign design]/result",
+    call: async (ctx, cookie) => {
+      const id = await designIn(ctx, "foreign");
+      return designResultGet(appRequest(`/api/v1/designs/${id}/result`, { cookie }), params(id));
     },
     expect: { signedOut: 401, member: 404 },
   },

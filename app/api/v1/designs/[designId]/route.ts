@@ -1,7 +1,7 @@
 import { getDb } from "@/db/index";
 import { deleteDesignForViewer, saveWorkingRevisionForViewer } from "@/features/designs/commands";
-import { NO_STORE, commandResponse, toApiDesign } from "@/features/designs/http";
-import { findDesign } from "@/features/designs/queries";
+import { commandResponse, jsonWithEntityTag, toApiDesign } from "@/features/designs/http";
+import { findDesignRead } from "@/features/designs/queries";
 import { designIdSchema } from "@/features/designs/schema";
 import { readJsonBody } from "@/server/http/request-body";
 import { authorizeApi, jsonError } from "@/server/auth/guard";
@@ -9,14 +9,15 @@ import { withRequestLog } from "@/server/log/with-logging";
 
 type Context = { params: Promise<{ designId: string }> };
 
-// One design. PUT saves its working revision: the body carries `baseVersion`, and a save based on
+// One design. GET answers the working revision with its result less the sampled profiles (those are
+// GET …/result), with an ETag: If-None-Match with the same tag is a 304 without a body. PUT saves its working revision: the body carries `baseVersion`, and a save based on
 // an older version is refused with 409 (nothing written). DELETE only for never-submitted drafts.
 async function handleGET(request: Request, { params }: Context): Promise<Response> {
   const auth = await authorizeApi(request);
   if (!auth.ok) return auth.response;
-  const design = await findDesign(getDb(), auth.viewer.organizationId, (await params).designId);
+  const design = await findDesignRead(getDb(), auth.viewer.organizationId, (await params).designId);
   if (!design) return jsonError(404, "This design does not exist in your organisation.");
-  return Response.json(toApiDesign(design), { headers: NO_STORE });
+  return jsonWithEntityTag(request, JSON.stringify(toApiDesign(design)));
 }
 
 async function handlePUT(request: Request, { params }: Context): Promise<Response> {
