@@ -51,6 +51,8 @@ export function pageContentSecurityPolicy(nonce: string, development = false): s
     "img-src 'self' data: blob:",
     "font-src 'self'",
     `connect-src 'self'${development ? " ws: wss:" : ""}`,
+    // The Layout desk's pattern search runs in a module worker loaded from the app (Suggest pattern).
+    "worker-src 'self'",
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",

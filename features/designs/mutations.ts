@@ -89,6 +89,7 @@ export interface SaveWorkingRevisionCommand {
   document: JointDesign;
   name?: string;
   equipmentTag?: string;
+  patternOrigin?: { suggestion: number; of: number };
 }
 
 export type SaveOutcome =
@@ -180,6 +181,19 @@ async function recordSave(
   revisionId: string,
   version: number,
 ): Promise<void> {
+  // A pattern applied from the Pattern finder is always its own entry, never folded into a burst.
+  const origin = command.patternOrigin;
+  if (origin) {
+    await recordActivity(trx, {
+      organizationId: command.organizationId,
+      designId: command.designId,
+      revisionId,
+      actorId: command.userId,
+      kind: "saved",
+      detail: `version ${version} · pattern applied from suggestion ${origin.suggestion} of ${origin.of}`,
+    });
+    return;
+  }
   const last = await trx
     .selectFrom("design_activity")
     .select(["kind", "actor_id", "revision_id"])

@@ -59,6 +59,14 @@ export const saveWorkingRevisionSchema = z.object({
     .trim()
     .max(60, { error: "Equipment tag must be at most 60 characters" })
     .optional(),
+  /** "pattern applied from suggestion 2 of 7" in the design activity (the Layout desk's Pattern finder). */
+  patternOrigin: z
+    .object({
+      suggestion: z.number().int().min(1).max(1000),
+      of: z.number().int().min(1).max(1000),
+    })
+    .refine((o) => o.suggestion <= o.of, { error: "suggestion must not exceed the number of suggestions" })
+    .optional(),
 });
 export type SaveWorkingRevisionSchemaInput = z.infer<typeof saveWorkingRevisionSchema>;
 

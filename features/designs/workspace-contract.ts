@@ -34,6 +34,8 @@ export interface SaveWorkingRevisionInput {
   document: JointDesign;
   name?: string;
   equipmentTag?: string;
+  /** The document's bolt pattern was applied from the Pattern finder: recorded in the design activity. */
+  patternOrigin?: { suggestion: number; of: number };
 }
 
 /**

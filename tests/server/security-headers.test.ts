@@ -14,6 +14,7 @@ describe("security headers", () => {
     expect(directives["style-src-attr"]).toBe("'unsafe-inline'");
     expect(directives["frame-ancestors"]).toBe("'none'");
     expect(directives["object-src"]).toBe("'none'");
+    expect(directives["worker-src"]).toBe("'self'");
     expect(policy).not.toMatch(/unsafe-eval|https?:|\*/);
     expect(pageContentSecurityPolicy("n", true)).toContain("'unsafe-eval'");
     expect(API_CONTENT_SECURITY_POLICY).toContain("default-src 'none'");

@@ -24,6 +24,7 @@ import { useSave } from "../hooks/use-save";
 import { DragGauge } from "./drag-gauge";
 import { JointCanvas } from "./joint-canvas";
 import { JointForm } from "./joint-form";
+import { PatternFinder, type AppliedSuggestion } from "./pattern-finder";
 import { PatternToolbar } from "./pattern-toolbar";
 import { ReadoutPanel } from "./readout-panel";
 import { SaveBar } from "./save-bar";
@@ -53,6 +54,15 @@ export function DesignWorkspace({
   const [fitToken, setFitToken] = useState(0);
   const [invalid, setInvalidState] = useState<Record<string, true>>({});
   const discarding = useRef(false);
+  const [finderOpen, setFinderOpen] = useState(false);
+  // The bolt pattern the Pattern finder applied last, until a save records it: the origin goes with
+  // a save only while the document still holds exactly that pattern (undone or edited, it does not).
+  const applied = useRef<{ bolts: JointDesign["bolts"]; origin: AppliedSuggestion } | null>(null);
+  const patternOriginOf = useCallback(
+    (doc: JointDesign) =>
+      applied.current && applied.current.bolts === doc.bolts ? applied.current.origin : null,
+    [],
+  );
 
   const live = useLiveAnalysis(design, stored, editor.dragging);
   useCoreWarmup(design, live.result, !ro);
@@ -86,10 +96,10 @@ export function DesignWorkspace({
     });
   }, []);
 
-  const onSaved = useCallback(
-    (result: JointAnalysis, doc: JointDesign) => setStored({ document: doc, result }),
-    [],
-  );
+  const onSaved = useCallback((result: JointAnalysis, doc: JointDesign) => {
+    setStored({ document: doc, result });
+    if (applied.current?.bolts === doc.bolts) applied.current = null;
+  }, []);
   const invalidCount = Object.keys(invalid).length;
   const docErrors = useDocumentErrors(design, editor.dragging, null);
   const blockedReason =
@@ -108,6 +118,7 @@ export function DesignWorkspace({
     blocked: !!blockedReason || editor.dragging,
     enabled: !ro,
     onSaved,
+    patternOriginOf,
   });
   const serverErrors = useDocumentErrors(design, true, save.fieldErrors);
   const errorFor = useCallback(
@@ -218,7 +229,21 @@ export function DesignWorkspace({
               onUndo={editor.undo}
               onRedo={editor.redo}
               onFit={() => setFitToken((t) => t + 1)}
+              onSuggest={() => setFinderOpen(true)}
             />
+            {finderOpen && (
+              <PatternFinder
+                design={design}
+                onClose={() => setFinderOpen(false)}
+                onApply={(candidate, origin) => {
+                  // One undoable step: the whole document with the candidate's fastener, path and bolts.
+                  applied.current = { bolts: candidate.design.bolts, origin };
+                  act({ type: "replace-design", design: candidate.design });
+                  setSelected(null);
+                  setFinderOpen(false);
+                }}
+              />
+            )}
             <div className="relative h-[560px]">
               <JointCanvas
                 design={design}

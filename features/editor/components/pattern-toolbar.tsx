@@ -15,9 +15,11 @@ interface Props {
   onUndo: () => void;
   onRedo: () => void;
   onFit: () => void;
+  /** Opens the Pattern finder. */
+  onSuggest: () => void;
 }
 
-/** The "Pattern bench" above the drawing: place N equally, rotate, renumber, undo/redo, fit. */
+/** The "Pattern bench" above the drawing: place N equally, rotate, renumber, Suggest pattern, undo/redo, fit. */
 export function PatternToolbar(p: Props) {
   const [count, setCount] = useState(String(p.boltCount));
   const [rotate, setRotate] = useState("5");
@@ -95,6 +97,9 @@ export function PatternToolbar(p: Props) {
           </button>
           <button type="button" className={toolButtonStyles.quiet} onClick={p.onRenumber}>
             Renumber
+          </button>
+          <button type="button" className={toolButtonStyles.secondary} onClick={p.onSuggest}>
+            Suggest pattern
           </button>
           <span className="mx-1 h-6 w-px bg-ink-200" />
           <button type="button" className={toolButtonStyles.quiet} disabled={!p.canUndo} onClick={p.onUndo}>

@@ -19,6 +19,8 @@ interface SaveOptions {
   blocked: boolean;
   enabled: boolean;
   onSaved: (result: JointAnalysis, document: JointDesign) => void;
+  /** Where the document's bolt pattern came from, when the Pattern finder applied it (sent with the save). */
+  patternOriginOf?: (document: JointDesign) => { suggestion: number; of: number } | null;
 }
 
 /**
@@ -50,6 +52,7 @@ export function useSave(o: SaveOptions) {
     setState("saving");
     const doc = cur.document;
     const meta = cur.meta;
+    const patternOrigin = cur.patternOriginOf?.(doc) ?? null;
     try {
       const res = await cur.saveAction({
         designId: cur.designId,
@@ -57,6 +60,7 @@ export function useSave(o: SaveOptions) {
         document: doc,
         name: meta.name,
         equipmentTag: meta.equipmentTag,
+        ...(patternOrigin ? { patternOrigin } : {}),
       });
       if (res.ok) {
         versionRef.current = res.data.version;

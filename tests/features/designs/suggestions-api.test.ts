@@ -1,9 +1,17 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { PUT as designPut } from "@/app/api/v1/designs/[designId]/route";
+import { POST as designsPost } from "@/app/api/v1/designs/route";
 import { POST as suggestionsPost } from "@/app/api/v1/suggestions/route";
+import { listActivity } from "@/features/activity/queries";
 import { analyzeJoint } from "@/features/analysis/core/analyze";
 import type { PatternCandidate, SuggestionResult } from "@/features/analysis/core/suggest/search";
 import { judge, ruleOf } from "@/features/analysis/core/suggest/verdict";
-import { appRequest, createOrganizationWithMembers, type OrganizationFixture } from "../../setup/fixtures";
+import {
+  COVER_TEMPLATE,
+  appRequest,
+  createOrganizationWithMembers,
+  type OrganizationFixture,
+} from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";
 import { rectangularCover } from "../analysis/core/fixtures";
 
@@ -23,6 +31,7 @@ beforeAll(async () => {
   dana = await org.cookieFor("dana");
 });
 afterAll(async () => {
+  await db.deleteFrom("designs").where("organization_id", "=", org.organizationId).execute();
   await org.cleanup();
 });
 
@@ -92,5 +101,46 @@ describe("POST /api/v1/suggestions", () => {
     const capped = await post({ design, maxAnalyses: 5000 });
     expect(capped.status).toBe(422);
     expect((await capped.json()).error.fieldErrors.maxAnalyses[0]).toMatch(/at most 2000/);
+  });
+});
+
+describe("a save of a pattern applied from a suggestion", () => {
+  it("records its origin in the design activity, as its own entry; a bad origin is a 422 and nothing is saved", async () => {
+    const created = await designsPost(
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: dana,
+        body: { name: "Suggested cover", equipmentTag: "HC-E-301", template: COVER_TEMPLATE },
+      }),
+    );
+    expect(created.status).toBe(201);
+    const { designId } = await created.json();
+    const stored = await db
+      .selectFrom("design_revisions")
+      .select("document")
+      .where("design_id", "=", designId)
+      .executeTakeFirstOrThrow();
+    const put = (body: Record<string, unknown>) =>
+      designPut(
+        appRequest(`/api/v1/designs/${designId}`, {
+          method: "PUT",
+          cookie: dana,
+          body: { document: stored.document, ...body },
+        }),
+        { params: Promise.resolve({ designId }) },
+      );
+    const bad = await put({ baseVersion: 1, patternOrigin: { suggestion: 8, of: 7 } });
+    expect(bad.status).toBe(422);
+    expect(JSON.stringify(await bad.json())).toContain(
+      "suggestion must not exceed the number of suggestions",
+    );
+    expect((await put({ baseVersion: 1 })).status).toBe(200);
+    // A plain save right after is folded into the burst; the applied pattern is not.
+    expect((await put({ baseVersion: 2, patternOrigin: { suggestion: 2, of: 7 } })).status).toBe(200);
+    const details = (await listActivity(db, org.organizationId, designId)).map(
+      (e) => `${e.kind}: ${e.detail}`,
+    );
+    expect(details).toContain("saved: version 3 · pattern applied from suggestion 2 of 7");
+    expect(details.filter((d) => d.startsWith("saved"))).toHaveLength(2);
   });
 });
