@@ -31,7 +31,7 @@ export function startInstance(origin: string, env: NodeJS.ProcessEnv, logFile: s
   return child;
 }
 
-/** SIGTERM to each instance's process group, then a moment for them to go. */
+/** SIGTERM to each instance's process group, then waits until each has exited (at most 15 s). */
 export async function stopInstances(children: ChildProcess[]): Promise<void> {
   for (const child of children) {
     if (child.pid && child.exitCode === null) {
@@ -42,5 +42,12 @@ export async function stopInstances(children: ChildProcess[]): Promise<void> {
       }
     }
   }
-  await new Promise((resolve) => setTimeout(resolve, 1500));
+  const exited = (child: ChildProcess) =>
+    child.exitCode !== null || child.signalCode !== null
+      ? Promise.resolve()
+      : new Promise<void>((resolve) => child.once("exit", () => resolve()));
+  await Promise.race([
+    Promise.all(children.map(exited)),
+    new Promise((resolve) => setTimeout(resolve, 15_000).unref()),
+  ]);
 }

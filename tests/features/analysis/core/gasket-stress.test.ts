@@ -18,6 +18,32 @@ const steelToSteel = {
 };
 
 describe("beam on elastic foundation (Hetényi 1946, periodic superposition)", () => {
+  // The oracle below is itself checked against the published closed form for one load on an
+  // infinite beam: w(x) = (Pλ/2k)·e^(−λx)(cos λx + sin λx) (Hetényi, Beams on Elastic Foundation,
+  // 1946, ch. II; Timoshenko, Strength of Materials II, §1). The numbers are the formula's, by hand
+  // [calc]: w(0) = Pλ/2k; w(π/4λ) = √2·e^(−π/4) = 0.64479·w0; w(π/2λ) = e^(−π/2) = 0.20788·w0;
+  // zero at 3π/4λ; the foundation pressure k·w/b under the load is Pλ/2b.
+  it("one load on a long path: the oracle gives Hetényi's infinite-beam values (w0 = Pλ/2k, 0.64479, 0.20788, 0 at 3π/4λ)", () => {
+    const k = 400, // N/mm² per mm of approach over the strip (k = Eg·b/tg)
+      EI = 2e9,
+      P = 30_000;
+    const lambda = Math.pow(k / (4 * EI), 0.25);
+    const L = 200 / lambda; // far longer than the decay length: the images are negligible
+    const loads = [{ sMm: 0, forceN: P }];
+    const w0 = (P * lambda) / (2 * k);
+    const at = (x: number) => hetenyiPeriodicDeflectionMm(loads, L, k, lambda, x);
+    expect(at(0) / w0).toBeCloseTo(1, 9);
+    expect(at(Math.PI / (4 * lambda)) / w0).toBeCloseTo(0.64479, 5);
+    expect(at(Math.PI / (2 * lambda)) / w0).toBeCloseTo(0.20788, 5);
+    expect(at((3 * Math.PI) / (4 * lambda)) / w0).toBeCloseTo(0, 9);
+    // Superposition: a second equal load 0.5/λ away adds w0·e^(−0.5)(cos 0.5 + sin 0.5) under the first.
+    const two = [
+      { sMm: L / 2, forceN: P },
+      { sMm: L / 2 + 0.5 / lambda, forceN: P },
+    ];
+    const exact = hetenyiPeriodicDeflectionMm(two, L, k, lambda, L / 2);
+    expect(exact / w0).toBeCloseTo(1 + Math.exp(-0.5) * (Math.cos(0.5) + Math.sin(0.5)), 6);
+  });
   it("finite-difference solution reproduces the periodic Hetényi superposition within 0.2 %", () => {
     const L = 800,
       n = 8,

@@ -208,8 +208,11 @@ describe("preload targets and torque", () => {
     ["1-1/2", 1.5, 1800],
     ["2", 2, 4500],
   ];
+  // The table's torques are rounded and its nut factor is not restated here, so this block checks our
+  // root areas against the table (the K they imply stays in 0.20–0.23, a 15 % window [mem] for the
+  // table's basis); the tight check of our torque path is the [calc] block below (0.3 %).
   for (const [des, dIn, ftlb] of pcc1) {
-    it(`PCC-1 2013 Table 1 [pub]: ${des} in at 50 ksi on the root area → ${ftlb} ft·lb, implied K within 0.20–0.23`, () => {
+    it(`PCC-1 2013 Table 1 [pub, basis mem]: ${des} in at 50 ksi on the root area → ${ftlb} ft·lb, implied K within 0.20–0.23`, () => {
       const t = findThread(des, dIn <= 1 ? "unc" : "unified-8un")!;
       const F = t.rootAreaMm2 * psiToMpa(50_000);
       const impliedK = ftLbToNmmLocal(ftlb) / (F * inToMm(dIn));
