@@ -1,10 +1,10 @@
 import { execFileSync } from "node:child_process";
+import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { randomUUID } from "node:crypto";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { expect, test, type Browser, type Page } from "./helpers/test";
-import { buildCircularFlange } from "@/features/designs/model/templates";
 import { signIn } from "./helpers/sign-in";
 
 // The FE cross-check as a designer and an approver use it, on the production build with the
@@ -38,17 +38,7 @@ test("a designer runs the FE cross-check, sees it beside the estimate, and the a
   test.setTimeout(240_000);
   const name = `FE check E-3310 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
-  const document = buildCircularFlange(
-    { name, equipmentTag: "E-3310", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  const document = sampleCover(name, "E-3310");
   const created = await dana.request.post("/api/v1/designs", {
     data: { name, equipmentTag: "E-3310", document },
     headers: { origin: APP_URL },

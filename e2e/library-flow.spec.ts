@@ -1,10 +1,10 @@
 import { randomUUID } from "node:crypto";
+import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import Drawing from "dxf-writer";
 import { expect, test, type Browser, type Page } from "./helpers/test";
-import { buildCircularFlange } from "@/features/designs/model/templates";
 import { signIn } from "./helpers/sign-in";
 
 // The Stockroom and attachment flows with the demo crew of Kestrel Ridge: Ines (admin) adds a
@@ -65,17 +65,7 @@ test("an admin adds a gasket to the Stockroom and a designer picks it in a desig
   // In the Layout desk the gasket picker offers the organisation's row; picking it copies its
   // values (with the Qmin of the chosen tightness class) into the design, which saves them.
   const title = `Stockroom gasket pick E-2107 ${suffix}`;
-  const document = buildCircularFlange(
-    { name: title, equipmentTag: "E-2107", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  const document = sampleCover(title, "E-2107");
   const created = await dana.request.post("/api/v1/designs", {
     data: { name: title, equipmentTag: "E-2107", document },
     headers: { origin: APP_URL },
@@ -111,17 +101,7 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
 }) => {
   const dana = await signedInPage(browser, DANA);
   const name = `Datasheet carrier E-2107 ${suffix}`;
-  const document = buildCircularFlange(
-    { name, equipmentTag: "E-2107", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  const document = sampleCover(name, "E-2107");
   const created = await dana.request.post("/api/v1/designs", {
     data: { name, equipmentTag: "E-2107", document },
     headers: { origin: APP_URL },

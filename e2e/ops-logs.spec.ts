@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
+import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { readFileSync } from "node:fs";
 import { expect, test } from "./helpers/test";
-import { buildCircularFlange } from "../features/designs/model/templates";
 import { latestLink, uniqueEmail } from "./helpers/outbox";
 import { signIn, signOut } from "./helpers/sign-in";
 
@@ -75,17 +75,7 @@ test("the log holds one structured line per request and none of the secrets", as
   await signIn(page, email, secondPassword);
 
   // A design created and saved through the API, with a marker inside the document.
-  const document = buildCircularFlange(
-    { name: "Logscan cover", equipmentTag: "LS-1", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  const document = sampleCover("Logscan cover", "LS-1");
   const created = await page.request.post("/api/v1/designs", {
     data: { name: "Logscan cover", equipmentTag: "LS-1", document },
     headers: { origin: APP_URL },

@@ -7,6 +7,7 @@ import {
   buildRectangularCover,
 } from "@/features/designs/model/templates";
 import { signIn } from "./helpers/sign-in";
+import { SAMPLE_COVER_SPEC } from "@/tests/fixtures/sample-cover";
 
 // The browser's core (in Chromium) must reproduce the server's stored result bit for bit, for every
 // example and seeded design and for designs from the templates: the Layout desk compares them once
@@ -62,14 +63,7 @@ test("the browser's analysis equals the stored server result for every example, 
   };
   const documents = [
     ...examples.map((ex) => ({ ...ex, name: `${ex.name} ${stamp}` })),
-    buildCircularFlange(meta("Agreement round flange"), {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    }),
+    buildCircularFlange(meta("Agreement round flange"), { ...SAMPLE_COVER_SPEC }),
     buildRectangularCover(meta("Agreement cover"), {
       ...cover,
       widthMm: 600,

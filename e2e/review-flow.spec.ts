@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
+import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { expect, test, type APIRequestContext, type Browser, type Page } from "./helpers/test";
-import { buildCircularFlange } from "@/features/designs/model/templates";
 import { signIn } from "./helpers/sign-in";
 
 // The whole review loop with two people at two browsers: Dana designs and submits, Arlo gets the
@@ -65,17 +65,7 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await arloDesk.goto("/desk");
   await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name);
 
-  const document = buildCircularFlange(
-    { name, equipmentTag: "E-2107", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  const document = sampleCover(name, "E-2107");
   const created = await dana.request.post("/api/v1/designs", {
     data: { name, equipmentTag: "E-2107", document },
     headers: { origin: APP_URL },
@@ -227,17 +217,7 @@ test("an approved revision starts the next one, and the comparison shows what ch
   const name = `Compare E-2107 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
   const arlo = await signedInPage(browser, ARLO);
-  const document = buildCircularFlange(
-    { name, equipmentTag: "E-2107", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  const document = sampleCover(name, "E-2107");
   const created = await dana.request.post("/api/v1/designs", {
     data: { name, equipmentTag: "E-2107", document },
     headers: { origin: APP_URL },

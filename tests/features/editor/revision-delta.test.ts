@@ -1,22 +1,11 @@
 import { describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { buildCircularFlange } from "@/features/designs/model/templates";
+import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { describeInputChanges, summarisePattern } from "@/features/editor/model/revision-delta";
 import { rotatePattern, degreesToArcMm } from "@/features/editor/model/rotate-pattern";
 
 // Our own fictional E-2107 flange (340 mm OD, 12 × M20 on a 290 mm bolt circle); no published data.
-const base = (): JointDesign =>
-  buildCircularFlange(
-    { name: "E-2107 compare", equipmentTag: "E-2107", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+const base = (): JointDesign => sampleCover("E-2107 compare");
 
 describe("revision delta", () => {
   it("reads a turn of the whole pattern as one sentence, not one row per bolt", () => {

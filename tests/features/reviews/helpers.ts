@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
+import { sampleCover } from "@/tests/fixtures/sample-cover";
 import type { Role } from "@/db/tables/core";
-import { buildCircularFlange } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
 import type { TransitionActor } from "@/features/reviews/transitions";
 import { readChecks } from "@/features/reviews/model/review-checks";
@@ -37,17 +37,7 @@ export async function createReviewOrg(label: string) {
 }
 
 export function sampleDocument(name = "E-2107 channel cover") {
-  return buildCircularFlange(
-    { name, equipmentTag: "E-2107", units: "SI" },
-    {
-      outsideDiameterMm: 340,
-      boreDiameterMm: 170,
-      boltCircleDiameterMm: 290,
-      boltCount: 12,
-      boltSize: "M20",
-      flangeThicknessMm: 30,
-    },
-  );
+  return sampleCover(name, "E-2107");
 }
 
 export async function createSampleDesign(
