@@ -30,11 +30,14 @@ const feCheckIdSchema = z.uuid();
 
 const NOT_FOUND = "This design or revision does not exist in your organisation.";
 
-export async function readLatestFeCheck(
+type FeRevision = NonNullable<Awaited<ReturnType<typeof findRevisionForFe>>>;
+
+/** Parses the address and finds the revision in the viewer's organisation; 404 otherwise. */
+async function targetRevision(
   db: Kysely<Database>,
   viewer: Viewer,
   input: { designId: string; number: string | number },
-): Promise<FeCommandResult<FeCheckDto | null>> {
+): Promise<{ ok: true; revision: FeRevision } | { ok: false; status: 404; message: string }> {
   const parsed = target.safeParse(input);
   if (!parsed.success) return { ok: false, status: 404, message: NOT_FOUND };
   const revision = await findRevisionForFe(
@@ -43,8 +46,17 @@ export async function readLatestFeCheck(
     parsed.data.designId,
     parsed.data.number,
   );
-  if (!revision) return { ok: false, status: 404, message: NOT_FOUND };
-  return { ok: true, data: await latestFeCheck(db, viewer.organizationId, revision.revisionId) };
+  return revision ? { ok: true, revision } : { ok: false, status: 404, message: NOT_FOUND };
+}
+
+export async function readLatestFeCheck(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  input: { designId: string; number: string | number },
+): Promise<FeCommandResult<FeCheckDto | null>> {
+  const found = await targetRevision(db, viewer, input);
+  if (!found.ok) return found;
+  return { ok: true, data: await latestFeCheck(db, viewer.organizationId, found.revision.revisionId) };
 }
 
 export async function startFeCheck(
@@ -54,15 +66,9 @@ export async function startFeCheck(
 ): Promise<FeCommandResult<FeCheckDto>> {
   if (!canRunFeCheck(viewer))
     return { ok: false, status: 403, message: "Designers and approvers run FE cross-checks." };
-  const parsed = target.safeParse(input);
-  if (!parsed.success) return { ok: false, status: 404, message: NOT_FOUND };
-  const revision = await findRevisionForFe(
-    db,
-    viewer.organizationId,
-    parsed.data.designId,
-    parsed.data.number,
-  );
-  if (!revision) return { ok: false, status: 404, message: NOT_FOUND };
+  const found = await targetRevision(db, viewer, input);
+  if (!found.ok) return found;
+  const { revision } = found;
   if (revision.status === "approved")
     return {
       ok: false,
