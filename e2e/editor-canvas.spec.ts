@@ -139,29 +139,6 @@ test("bad input is refused at the field and nothing is saved", async ({ page }) 
   const url = await createRectangularCover(page, `Editor e2e bad input ${Date.now()}`);
   await expectSaved(page);
   const version = await page.getByTestId("design-version").textContent();
-  expect((await boltIds(page)).length).toBe(16);
-
-  // A bolt outside the flange: a typed coordinate far off the plate is refused by the core. The
-  // Readout says why, saving is blocked, Undo puts the bolt back, and the count never changes.
-  await page.getByTestId("joint-canvas").scrollIntoViewIfNeeded();
-  const b3 = (await boltPoint(page, "b3"))!;
-  await page.mouse.click(b3.x, b3.y);
-  const inspector = page.getByRole("region", { name: "Selected bolt" });
-  await expect(inspector.getByTestId("selected-bolt")).toHaveText("b3");
-  const x = inspector.getByLabel("x (mm)", { exact: true });
-  await x.fill("5000");
-  await x.press("Tab");
-  await expect(
-    page.getByRole("alert").filter({ hasText: "The core cannot analyse this layout yet" }),
-  ).toContainText("bolt hole lies outside the flange outline");
-  await expect(page.getByText(/^Not saved: .*bolt hole lies outside the flange outline/)).toBeVisible();
-  await expect(page.getByTestId("save-state")).toHaveText("Unsaved changes");
-  expect((await boltIds(page)).length).toBe(16);
-  await page.getByRole("button", { name: "Undo" }).click();
-  await expect.poll(async () => (await boltPoint(page, "b3"))!.x).toBeCloseTo(b3.x, 0);
-  await expect(page.getByTestId("save-state")).toHaveText("Saved");
-  await expect(page.getByTestId("design-version")).toHaveText(version!);
-
   const length = page.getByLabel("Bolt length (mm)");
   const original = await length.inputValue();
   const cases: [string, RegExp][] = [
