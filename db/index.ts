@@ -20,9 +20,16 @@ function createDb(): Kysely<Database> {
   // request); the route then answers 503 (server/auth/guard.ts). An idle connection the server
   // drops (restart, outage) is an 'error' event on the pool: logged and discarded, never a crash,
   // and the next query opens a new connection.
+  // The pool's size is deliberate: DATABASE_POOL_MAX (default 10) is several connections per
+  // core of the database machine, the concurrency pgbench is measured at in
+  // bench/http-load.bench.ts; its 50-connection case queues in this pool, not in PostgreSQL.
+  // Two connections stay open however long the app idles and the others for a minute, so a
+  // burst after a quiet spell does not pay a new connection (and its SCRAM handshake) per request.
   const pool = new pg.Pool({
     connectionString: env.DATABASE_URL,
     max: env.DATABASE_POOL_MAX,
+    min: Math.min(2, env.DATABASE_POOL_MAX),
+    idleTimeoutMillis: 60_000,
     connectionTimeoutMillis: 5000,
   });
   pool.on("error", (error) => console.error(`[db] idle connection lost: ${error.message}`));
