@@ -5,16 +5,11 @@
  * seconds (default 600). Exit codes: 0 done, 1 invalid design or a run that could not finish,
  * 2 usage.
  */
-import { readFileSync } from "node:fs";
-import { formatDesignErrors, jointDesignSchema } from "@/features/analysis/schema";
+import { jointDesignSchema } from "@/features/analysis/schema";
+import { fail, readJsonInput } from "./lib/cli-input";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { FE_DEFAULT_TIME_LIMIT_MS, runFeCheck } from "@/features/fe-check/run-fe-check";
 import { formatComparisonTable } from "@/features/fe-check/comparison-text";
-
-function fail(lines: string[], code = 1): never {
-  for (const l of lines) process.stderr.write(`${l}\n`);
-  process.exit(code);
-}
 
 async function main(argv: string[]): Promise<void> {
   const args = argv.filter((a) => a !== "--");
@@ -29,21 +24,11 @@ async function main(argv: string[]): Promise<void> {
   }
   const file = args[0];
   if (!file || args.length > 1) fail([usage], 2);
-  let raw: unknown;
-  try {
-    raw = JSON.parse(readFileSync(file, "utf8"));
-  } catch (e) {
-    fail([
-      `${file}: ${(e as NodeJS.ErrnoException).code ? "cannot read file" : `not valid JSON (${(e as Error).message})`}`,
-    ]);
-  }
-  const parsed = jointDesignSchema.safeParse(raw);
-  if (!parsed.success)
-    fail([`${file}: invalid design`, ...formatDesignErrors(parsed.error).map((l) => `  ${l}`)]);
+  const design = readJsonInput(file, jointDesignSchema, "design");
   const abort = new AbortController();
   process.once("SIGINT", () => abort.abort());
   try {
-    const result = await runFeCheck(parsed.data as JointDesign, {
+    const result = await runFeCheck(design as JointDesign, {
       signal: abort.signal,
       timeLimitMs,
       onProgress: (stage, p) =>

@@ -6,18 +6,13 @@
  * Progress goes to stderr. Exit codes: 0 candidates found, 3 nothing qualifies, 1 invalid request
  * or file, 2 usage.
  */
-import { readFileSync } from "node:fs";
-import { formatDesignErrors, suggestionRequestSchema } from "@/features/analysis/schema";
+import { suggestionRequestSchema } from "@/features/analysis/schema";
+import { fail, readJsonInput } from "./lib/cli-input";
 import { checkSuggestionRequest } from "@/features/analysis/core/suggest/request";
 import { suggestPatterns } from "@/features/analysis/core/suggest/search";
 import { formatIssue } from "@/features/analysis/core/validate";
 import { formatSuggestionText } from "@/features/analysis/suggestion-text";
 import { CAUTIONS } from "@/features/ui/cautions";
-
-function fail(lines: string[], code = 1): never {
-  for (const l of lines) process.stderr.write(`${l}\n`);
-  process.exit(code);
-}
 
 function main(argv: string[]): void {
   const args = argv.filter((a) => a !== "--");
@@ -26,21 +21,11 @@ function main(argv: string[]): void {
   if (files.length !== 1 || files[0].startsWith("--"))
     fail(["usage: npm run suggest -- <request.json> [--json]"], 2);
   const file = files[0];
-  let raw: unknown;
-  try {
-    raw = JSON.parse(readFileSync(file, "utf8"));
-  } catch (e) {
-    fail([
-      `${file}: ${(e as NodeJS.ErrnoException).code ? "cannot read file" : `not valid JSON (${(e as Error).message})`}`,
-    ]);
-  }
-  const parsed = suggestionRequestSchema.safeParse(raw);
-  if (!parsed.success)
-    fail([`${file}: invalid request`, ...formatDesignErrors(parsed.error).map((l) => `  ${l}`)]);
-  const issues = checkSuggestionRequest(parsed.data);
+  const request = readJsonInput(file, suggestionRequestSchema, "request");
+  const issues = checkSuggestionRequest(request);
   if (issues.length > 0)
     fail([`${file}: the search cannot run on this request`, ...issues.map((i) => `  ${formatIssue(i)}`)]);
-  const result = suggestPatterns(parsed.data, {
+  const result = suggestPatterns(request, {
     onProgress: (p) =>
       void process.stderr.write(`searched ${p.done} of ${p.total} combinations (${p.analyses} analyses)\n`),
   });

@@ -16,6 +16,7 @@ import {
   finishFeCheck,
   isFeCancelRequested,
   setFeProgress,
+  type NewFeCheck,
 } from "./store";
 
 // The FE cross-check's background job: one pg-boss job per run (job id = fe_checks.id). The worker
@@ -95,16 +96,7 @@ export async function ensureFeWorker(db: Kysely<Database>): Promise<void> {
 }
 
 /** Records a run of the revision's current document and queues it; returns its id. */
-export async function enqueueFeCheck(
-  db: Kysely<Database>,
-  input: {
-    organizationId: string;
-    designId: string;
-    revisionId: string;
-    document: unknown;
-    requestedBy: string;
-  },
-): Promise<string> {
+export async function enqueueFeCheck(db: Kysely<Database>, input: NewFeCheck): Promise<string> {
   const id = await createFeCheck(db, input);
   try {
     await ensureFeWorker(db);

@@ -189,17 +189,17 @@ export async function feCheckForApproval(
   return { id: row.id, resultHash: row.result_hash };
 }
 
+/** What a new run records: the revision, its current document and who asked. */
+export interface NewFeCheck {
+  organizationId: string;
+  designId: string;
+  revisionId: string;
+  document: unknown;
+  requestedBy: string;
+}
+
 /** A queued run of the revision's current document; refused by the database on an approved revision. */
-export async function createFeCheck(
-  db: Executor,
-  input: {
-    organizationId: string;
-    designId: string;
-    revisionId: string;
-    document: unknown;
-    requestedBy: string;
-  },
-): Promise<string> {
+export async function createFeCheck(db: Executor, input: NewFeCheck): Promise<string> {
   const row = await db
     .insertInto("fe_checks")
     .values({

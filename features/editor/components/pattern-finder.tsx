@@ -248,36 +248,24 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
                 />
                 Try bolt-path offsets (now {offset.toFixed(1)} mm)
               </label>
-              <label className="flex flex-col">
-                <span className="text-micro text-ink-600">from, mm</span>
-                <input
-                  aria-label="Offset from"
-                  className={inputClass}
-                  value={offsetFrom}
-                  disabled={!tryOffsets}
-                  onChange={(e) => setOffsetFrom(e.target.value)}
-                />
-              </label>
-              <label className="flex flex-col">
-                <span className="text-micro text-ink-600">to, mm</span>
-                <input
-                  aria-label="Offset to"
-                  className={inputClass}
-                  value={offsetTo}
-                  disabled={!tryOffsets}
-                  onChange={(e) => setOffsetTo(e.target.value)}
-                />
-              </label>
-              <label className="flex flex-col">
-                <span className="text-micro text-ink-600">step, mm</span>
-                <input
-                  aria-label="Offset step"
-                  className={inputClass}
-                  value={offsetStep}
-                  disabled={!tryOffsets}
-                  onChange={(e) => setOffsetStep(e.target.value)}
-                />
-              </label>
+              {(
+                [
+                  ["from", "Offset from", offsetFrom, setOffsetFrom],
+                  ["to", "Offset to", offsetTo, setOffsetTo],
+                  ["step", "Offset step", offsetStep, setOffsetStep],
+                ] as const
+              ).map(([caption, label, value, set]) => (
+                <label key={label} className="flex flex-col">
+                  <span className="text-micro text-ink-600">{caption}, mm</span>
+                  <input
+                    aria-label={label}
+                    className={inputClass}
+                    value={value}
+                    disabled={!tryOffsets}
+                    onChange={(e) => set(e.target.value)}
+                  />
+                </label>
+              ))}
             </div>
           )}
           <div className="space-y-1">
