@@ -10,6 +10,28 @@ import { offsetShape, outlineToShape, signedDistanceToShape } from "./shape";
 export { pointAtArcLength, projectOntoPath, type ClosedPath } from "./path";
 
 /** Polyline of an outline for drawing. Example: `outlineToPolyline({kind:"circle",diameterMm:100}, 1)` → 315 points. */
+/** How far the bore's nearest point lies inside the outline, mm (infinite without a bore). */
+export function boreDepthBelowOutlineMm(outline: Outline, bore: Outline | null): number {
+  if (!bore) return Infinity;
+  const shape = outlineToShape(outline);
+  return Math.min(...outlineToPolyline(bore).map((p) => -signedDistanceToShape(shape, p.x, p.y)));
+}
+
+/**
+ * Width of a new band gasket whose outer edge lies `outerEdgeDepthMm` below the outline: the
+ * preferred width, narrowed to the face left before the bore (less `gapMm`); the preferred width
+ * when not even `minWidthMm` fits, so the validator names the band that reaches over the bore.
+ */
+export function bandWidthOnFaceMm(
+  outline: Outline,
+  bore: Outline | null,
+  outerEdgeDepthMm: number,
+  o: { preferredMm: number; minMm: number; gapMm: number },
+): number {
+  const room = boreDepthBelowOutlineMm(outline, bore) - o.gapMm - outerEdgeDepthMm;
+  return room >= o.minMm ? Math.min(o.preferredMm, room) : o.preferredMm;
+}
+
 export function outlineToPolyline(outline: Outline, maxStepMm = 2): PointMm[] {
   const shape = outlineToShape(outline);
   if (shape.kind === "polygon") return shape.points;

@@ -270,6 +270,21 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
       const { centreOffsetMm: c, widthMm: w } = g.geometry;
       if (!(c - w / 2 >= 0))
         add("gasket.geometry.centreOffsetMm", "ring gasket band extends beyond the flange outline");
+      else if (bore && w > 0) {
+        // The band's inner edge, at depth c + w/2 below the outline, must stay on the face: a band
+        // reaching over the opening has no flange under it to seat on.
+        const inner = getBoltPath(design.outline, { kind: "offset", offsetMm: c + w / 2 });
+        const overBore =
+          inner.lengthMm <= 0 ||
+          pathToPolyline(inner, Math.max(1, inner.lengthMm / 2000)).some(
+            (p) => signedDistanceToShape(bore, p.x, p.y) < -1e-6,
+          );
+        if (overBore)
+          add(
+            "gasket.geometry.centreOffsetMm",
+            "ring gasket band reaches over the bore: its inner edge (centre offset + width/2) lies inside the opening",
+          );
+      }
       pts.forEach((p, i) => {
         const d = -signedDistanceToShape(outline, p.x, p.y);
         if (Math.abs(d - c) < w / 2 + rh)

@@ -1,9 +1,12 @@
 import type { Gasket, JointDesign } from "@/features/analysis/core/design";
+import { bandWidthOnFaceMm } from "@/features/analysis/core/geometry";
 
 /** Radial gap kept between a new ring gasket's edge and a bolt hole or the bore, mm [practice]. */
 const GAP_MM = 3;
 /** Width of a new band gasket along a cover's outline, mm [practice]. */
 const BAND_WIDTH_MM = 20;
+/** The narrowest band a new ring is narrowed to so that it stays on the face, mm. */
+const MIN_BAND_WIDTH_MM = 5;
 
 /**
  * The gasket with the other form (ring ↔ full face), keeping its material. A new ring sits inside
@@ -27,13 +30,15 @@ export function withGasketForm(design: JointDesign, form: "ring" | "full-face"):
       material: g.material,
     };
   }
+  const edge = design.boltPath.offsetMm + hole / 2 + GAP_MM;
+  const width = bandWidthOnFaceMm(design.outline, design.bore, edge, {
+    preferredMm: BAND_WIDTH_MM,
+    minMm: MIN_BAND_WIDTH_MM,
+    gapMm: GAP_MM,
+  });
   return {
     kind: "ring",
-    geometry: {
-      kind: "band",
-      centreOffsetMm: design.boltPath.offsetMm + hole / 2 + GAP_MM + BAND_WIDTH_MM / 2,
-      widthMm: BAND_WIDTH_MM,
-    },
+    geometry: { kind: "band", centreOffsetMm: edge + width / 2, widthMm: width },
     material: g.material,
   };
 }

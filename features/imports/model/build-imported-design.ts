@@ -3,6 +3,7 @@
 // the preview and then edits the rest in the editor as usual.
 import type { Gasket, JointDesign, Outline, UnitSystem } from "@/features/analysis/core/design";
 import { THREADS } from "@/features/analysis/core/catalogue/threads";
+import { bandWidthOnFaceMm } from "@/features/analysis/core/geometry";
 import {
   DEFAULT_GASKET_TYPE_ID,
   STEEL_MODULUS_MPA,
@@ -16,6 +17,9 @@ import type { ImportedHole, ImportedOutline } from "./parse-dxf-flange";
 /** Radial gap between the gasket edge and a hole or the bore, mm [practice] (as the templates). */
 const GAP_MM = 3;
 const DEFAULT_THICKNESS_MM = 25;
+/** Width of the band gasket drawn inboard of the holes, and the narrowest one narrowed to fit the face, mm. */
+const BAND_WIDTH_MM = 20;
+const MIN_BAND_WIDTH_MM = 5;
 
 export interface ImportedGeometry {
   outline: ImportedOutline;
@@ -66,12 +70,19 @@ export function buildImportedDesign(
       material,
     };
   } else {
-    const width = 20;
+    // Narrow the band to the face between the holes and the bore; when even the narrowest does not
+    // fit, keep the default and let the validator say that the band reaches over the bore.
+    const edge = fit.boltPath.offsetMm + holeDiameterMm / 2 + GAP_MM;
+    const width = bandWidthOnFaceMm(outline, bore, edge, {
+      preferredMm: BAND_WIDTH_MM,
+      minMm: MIN_BAND_WIDTH_MM,
+      gapMm: GAP_MM,
+    });
     gasket = {
       kind: "ring",
       geometry: {
         kind: "band",
-        centreOffsetMm: fit.boltPath.offsetMm + holeDiameterMm / 2 + GAP_MM + width / 2,
+        centreOffsetMm: edge + width / 2,
         widthMm: width,
       },
       material,

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
+  bandWidthOnFaceMm,
+  boreDepthBelowOutlineMm,
   getBoltPath,
   getBoltPoint,
   getNeighbourSpacings,
@@ -94,6 +96,22 @@ describe("geometry", () => {
   });
 });
 
+describe("a new band gasket fits the face (internal)", () => {
+  // 600 × 400 r30 cover over a 480 × 280 r20 opening: the face is 60 mm deep along the sides.
+  const { outline, bore } = rectangularCover();
+  const o = { preferredMm: 20, minMm: 5, gapMm: 3 };
+  it("the bore's nearest point lies 60 mm inside the outline", () => {
+    expect(boreDepthBelowOutlineMm(outline, bore)).toBeCloseTo(60, 6);
+    expect(boreDepthBelowOutlineMm(outline, null)).toBe(Infinity);
+  });
+  it("narrows the band to the room left, keeps the preferred width without a bore or without room", () => {
+    expect(bandWidthOnFaceMm(outline, bore, 30, o)).toBe(20); // room 27 mm
+    expect(bandWidthOnFaceMm(outline, bore, 40, o)).toBeCloseTo(17, 6); // room 17 mm
+    expect(bandWidthOnFaceMm(outline, bore, 54, o)).toBe(20); // room 3 mm < 5: left to the validator
+    expect(bandWidthOnFaceMm(outline, null, 54, o)).toBe(20);
+  });
+});
+
 describe("validateJointDesign names the field of every problem", () => {
   it("accepts the fixtures", () => {
     expect(validateJointDesign(circularFlange())).toEqual([]);
@@ -105,6 +123,24 @@ describe("validateJointDesign names the field of every problem", () => {
     expect(validateJointDesign(d)).toContainEqual({
       path: "bolts[3].position",
       message: "bolt hole lies outside the flange outline",
+    });
+  });
+  it("a band gasket reaching over the bore is refused; one inside the face is accepted (internal)", () => {
+    // 600 × 400 cover, opening 480 × 280: a 60 mm face. Bolts at 25 mm with 18 mm holes.
+    const band = (centreOffsetMm: number) => {
+      const d = rectangularCover();
+      d.gasket = {
+        kind: "ring",
+        geometry: { kind: "band", centreOffsetMm, widthMm: 20 },
+        material: d.gasket.material,
+      };
+      return validateJointDesign(d);
+    };
+    expect(band(45)).toEqual([]); // inner edge at 55 mm, inside the 60 mm face
+    expect(band(55)).toContainEqual({
+      path: "gasket.geometry.centreOffsetMm",
+      message:
+        "ring gasket band reaches over the bore: its inner edge (centre offset + width/2) lies inside the opening",
     });
   });
   it("overlapping holes, ring gasket over a hole, bolt count limits, zero/NaN dimensions", () => {
