@@ -5,28 +5,39 @@
 # as "N passed, N failed" and exits non-zero on any failure.
 #   VITEST_ARGS / PW_ARGS narrow a run while working on one area; SEALPITCH_SKIP_E2E=1 skips the
 #   build and the browser tests; SEALPITCH_TEST_OFFSET=N shifts the ports. CI sets none of them.
+# Two lanes keep both cores busy: the static checks (scripts/lib/lint.sh) and then the production
+# build run in the background while the stack starts and vitest runs its files one after another.
+# A failed check still fails the run, before the browser tests start.
 set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
 source "$(dirname "$0")/lib/test-stack.sh"
 cd "$PROJECT_ROOT"
 STARTED_AT=$(date +%s)
+elapsed() { echo "$(($(date +%s) - STARTED_AT)) s"; }
 
 ensure_node_modules
 ensure_fe_tools
-say "format check (prettier)"
-npx prettier --check . --log-level=warn || die "files are not formatted: run npm run format"
-say "lint (eslint: Next, react-hooks, typescript-eslint, import boundaries)"
-npm run --silent lint -- --quiet || die "lint errors: see above (npm run lint)"
-say "unused exports (knip)"
-npm run --silent lint:exports || die "unused exports: remove them, or drop the export keyword (npm run lint:exports)"
+stack_workdir
+say "static checks (prettier, eslint, knip) in the background: $WORK/lint.log"
+setsid bash scripts/lib/lint.sh "$WORK/lint.done" >"$WORK/lint.log" 2>&1 &
+LINT_PID=$!
 
 stack_up
+say "test stack up at $(elapsed)"
+[ "${SEALPITCH_SKIP_E2E:-}" = 1 ] || stack_build_start "$WORK/lint.done"
 
 say "unit and integration tests (vitest)"
 set +e
 NODE_ENV=test LOG_LEVEL="${VITEST_LOG_LEVEL:-warn}" npx vitest run ${VITEST_ARGS:-} --reporter=default --reporter=json --outputFile.json="$REPORTS/vitest.json"
 VITEST_CODE=$?
 set -e
+say "vitest done at $(elapsed)"
+
+LINT_CODE=0
+wait "$LINT_PID" || LINT_CODE=$?
+LINT_PID=""
+cat "$WORK/lint.log"
+[ "$LINT_CODE" = 0 ] || die "the static checks failed (see above)"
 
 if [ "${SEALPITCH_SKIP_E2E:-}" = 1 ]; then
   node scripts/lib/summarize-tests.mjs "$REPORTS/vitest.json" --vitest-only || true
@@ -34,6 +45,7 @@ if [ "${SEALPITCH_SKIP_E2E:-}" = 1 ]; then
 fi
 
 stack_app_up
+say "app up at $(elapsed)"
 
 say "browser tests (playwright, Debian chromium)"
 set +e
@@ -43,5 +55,5 @@ PW_CODE=$?
 node scripts/lib/summarize-tests.mjs "$REPORTS/vitest.json" "$REPORTS/playwright.json"
 SUMMARY_CODE=$?
 set -e
-echo "npm test took $(( $(date +%s) - STARTED_AT )) s"
+echo "npm test took $(elapsed)"
 [ "$VITEST_CODE" = 0 ] && [ "$PW_CODE" = 0 ] && [ "$SUMMARY_CODE" = 0 ]

@@ -7,14 +7,21 @@ OFFSET="${SEALPITCH_TEST_OFFSET:-0}"
 APP_PORT=$((3100 + OFFSET)) PG_PORT=$((54331 + OFFSET)) SMTP_PORT=$((2535 + OFFSET)) OUTBOX_PORT=$((2590 + OFFSET))
 if [ "$OFFSET" != 0 ]; then export SEALPITCH_DIST_DIR=".next-test-$OFFSET"; fi
 
-# stack_up: ports checked, dependencies installed, database created and migrated, fake SMTP running.
-stack_up() {
+# stack_workdir: the run's scratch folder ($WORK, its reports in $REPORTS), removed by stack_down.
+# Idempotent: scripts/test.sh makes it before stack_up so the background checks can log there.
+stack_workdir() {
+  [ -n "${WORK:-}" ] && return 0
   WORK="$(mktemp -d /tmp/sealpitch-test.XXXXXX)"
   chmod 755 "$WORK"
   REPORTS="$WORK/reports"
   mkdir -p "$REPORTS"
   PG_DATA="$WORK/pg"
   trap stack_down EXIT INT TERM
+}
+
+# stack_up: ports checked, dependencies installed, database created and migrated, fake SMTP running.
+stack_up() {
+  stack_workdir
 
   ensure_node
   require_port "$APP_PORT" "the test app"
@@ -48,19 +55,39 @@ stack_up() {
   SMTP_PID=$!
 }
 
-# stack_app_up: production build, demo data, `next start` on APP_URL, waits for /api/health.
-stack_app_up() {
-  say "production build"
+# stack_build_start [AFTER_FILE]: starts the production build in the background (its own process
+# group, output in $WORK/build.log), once AFTER_FILE exists when one is given. scripts/test.sh
+# starts it while vitest runs: vitest files run one after another on one core, the build takes the other.
+stack_build_start() {
+  say "production build (in the background)"
   # next build writes its dist folder into tsconfig.json; a run with its own folder puts it back.
   cp tsconfig.json "$WORK/tsconfig.json.orig"
-  if ! npx next build >"$WORK/build.log" 2>&1; then
-    if [ "$OFFSET" != 0 ]; then cp "$WORK/tsconfig.json.orig" tsconfig.json; fi
+  BUILD_STARTED_AT=$(date +%s)
+  setsid bash -c 'if [ -n "$1" ]; then while [ ! -e "$1" ]; do sleep 1; done; fi; exec npx next build' \
+    bash "${1:-}" >"$WORK/build.log" 2>&1 &
+  BUILD_PID=$!
+}
+
+# stack_build_wait: waits for the build started by stack_build_start; dies with its log on failure.
+stack_build_wait() {
+  local code=0
+  wait "$BUILD_PID" || code=$?
+  BUILD_PID=""
+  if [ "$OFFSET" != 0 ]; then cp "$WORK/tsconfig.json.orig" tsconfig.json; fi
+  if [ "$code" != 0 ]; then
     tail -40 "$WORK/build.log" >&2
     die "next build failed"
   fi
-  if [ "$OFFSET" != 0 ]; then cp "$WORK/tsconfig.json.orig" tsconfig.json; fi
+  say "production build: done $(($(date +%s) - BUILD_STARTED_AT)) s after it was started"
   # Next 16 prints no route sizes; the build's own diagnostics file has them (bench/route-size.bench.ts).
   npx tsx bench/run.ts route-size || true
+}
+
+# stack_app_up: production build (unless stack_build_start began one), demo data, `next start` on
+# APP_URL, waits for /api/health.
+stack_app_up() {
+  [ -n "${BUILD_PID:-}" ] || stack_build_start
+  stack_build_wait
 
   npx tsx --conditions=react-server scripts/seed.ts --e2e >"$WORK/seed.log" 2>&1 || { cat "$WORK/seed.log" >&2; die "seeding the test database failed"; }
   # The app's JSON log lines; e2e/ops-logs.spec.ts reads them back.
@@ -80,9 +107,16 @@ stack_down() {
   local code=$?
   trap - EXIT INT TERM
   stop_group "${APP_PID:-}"
+  stop_group "${BUILD_PID:-}"
+  stop_group "${LINT_PID:-}"
   stop_group "${SMTP_PID:-}"
   wait 2>/dev/null || true
   [ -n "${PG_DATA:-}" ] && pg_stop "$PG_DATA"
+  # The JSON reports outlive the run, for reading the slowest files and specs afterwards.
+  if [ -n "${REPORTS:-}" ] && [ -n "$(ls -A "$REPORTS" 2>/dev/null)" ]; then
+    rm -rf "$PROJECT_ROOT/test-results/reports" && mkdir -p "$PROJECT_ROOT/test-results" \
+      && cp -r "$REPORTS" "$PROJECT_ROOT/test-results/reports" || true
+  fi
   [ -n "${WORK:-}" ] && rm -rf "$WORK"
   exit "$code"
 }
