@@ -9,16 +9,27 @@ import type { Instrumentation } from "next";
 // of the edge bundle.
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const [{ getDb }, { startSheetWorkers }, { startFeWorkers }, { startReadinessRefresh }] = await Promise.all(
-    [
-      import("./db/index"),
-      import("./features/exports/sheet-job"),
-      import("./features/fe-check/fe-job"),
-      import("./features/health/readiness"),
-    ],
-  );
-  startSheetWorkers(getDb());
-  startFeWorkers(getDb());
+  const [
+    { getDb },
+    { SHEET_QUEUE, FE_QUEUE },
+    { startQueueWorkers },
+    { ensureSheetWorker },
+    { ensureFeWorker },
+    { startReadinessRefresh },
+  ] = await Promise.all([
+    import("./db/index"),
+    import("./db/job-queues"),
+    import("./server/jobs/queue"),
+    import("./features/exports/sheet-job"),
+    import("./features/fe-check/fe-job"),
+    import("./features/health/readiness"),
+  ]);
+  const db = getDb();
+  // Every queue of the app, in one list: a new queue's workers are added here.
+  startQueueWorkers([
+    { queue: SHEET_QUEUE, ensure: () => ensureSheetWorker(db) },
+    { queue: FE_QUEUE, ensure: () => ensureFeWorker(db) },
+  ]);
   startReadinessRefresh();
 }
 

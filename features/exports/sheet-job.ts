@@ -226,14 +226,3 @@ export async function retrySheetJob(
   });
   return { ok: true, data: { jobId: row.id } };
 }
-
-/**
- * Server start (instrumentation.ts): this process's sheet workers, without blocking the start;
- * a database that is down is retried every few seconds until it answers.
- */
-export function startSheetWorkers(db: Kysely<Database>, retryMs = 5000): void {
-  ensureSheetWorker(db).catch((error: unknown) => {
-    getLogger().warn({ event: "jobs", err: errorText(error) }, "queue workers not started, retrying");
-    setTimeout(() => startSheetWorkers(db, retryMs), retryMs).unref();
-  });
-}

@@ -107,11 +107,3 @@ export async function enqueueFeCheck(db: Kysely<Database>, input: NewFeCheck): P
   }
   return id;
 }
-
-/** Server start (instrumentation.ts): FE workers, retried every few seconds while the database is down. */
-export function startFeWorkers(db: Kysely<Database>, retryMs = 5000): void {
-  ensureFeWorker(db).catch((error: unknown) => {
-    getLogger().warn({ event: "jobs", err: errorText(error) }, "FE workers not started, retrying");
-    setTimeout(() => startFeWorkers(db, retryMs), retryMs).unref();
-  });
-}

@@ -1,7 +1,7 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { getEnv } from "@/server/env";
-import { getLogger } from "@/server/log/logger";
+import { errorText, getLogger } from "@/server/log/logger";
 
 // The one pg-boss instance of this process, on the app's own PostgreSQL (schema "pgboss"). The
 // runtime role may not create tables, so the schema and the queues are installed by
@@ -67,6 +67,32 @@ export async function ensureWorker<T extends object>(
   } catch (error) {
     workers.delete(name);
     throw error;
+  }
+}
+
+/** One queue's workers as a feature registers them (its `ensure…Worker`), named for the log. */
+export interface QueueWorkers {
+  queue: string;
+  ensure: () => Promise<void>;
+}
+
+/**
+ * Server start (instrumentation.ts): registers every queue's workers without blocking the start.
+ * Each queue is started on its own; one whose database is down is retried every `retryMs` until
+ * it answers, and the others do not wait for it.
+ */
+export function startQueueWorkers(all: readonly QueueWorkers[], retryMs = 5000): void {
+  for (const workers of all) {
+    const attempt = (): void => {
+      workers.ensure().catch((error: unknown) => {
+        getLogger().warn(
+          { event: "jobs", queue: workers.queue, err: errorText(error) },
+          "queue workers not started, retrying",
+        );
+        setTimeout(attempt, retryMs).unref();
+      });
+    };
+    attempt();
   }
 }
 
