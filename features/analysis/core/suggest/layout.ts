@@ -105,24 +105,40 @@ function spansOf(frame: LayoutFrame, anchors: Anchor[]): Span[] {
 /**
  * The counts whose layouts can keep every pitch within [minPitchMm, maxPitchMm] (necessary for
  * the spacing rules: the chord is never longer than the pitch). `lo > hi` when none can; `gapMm`
- * is the widest gap across a keep-out, which no count narrows.
+ * is the widest gap across a keep-out, which no count narrows; `short` is the shortest span
+ * between anchors (fixed bolts, keep-out ends) when it is below `minPitchMm`, which no count
+ * widens (`acrossKeepOut`: the span bridges a keep-out).
  */
 export function countBounds(
   frame: LayoutFrame,
   maxPitchMm: number,
   minPitchMm: number,
-): { lo: number; hi: number; gapMm: number } {
+): {
+  lo: number;
+  hi: number;
+  gapMm: number;
+  short: { lengthMm: number; acrossKeepOut: boolean } | null;
+} {
   const L = frame.pathLengthMm;
   const anchors = anchorsOf(frame);
   if (anchors.length === 0)
-    return { lo: Math.ceil(L / maxPitchMm - 1e-9), hi: Math.floor(L / minPitchMm + 1e-9), gapMm: 0 };
+    return {
+      lo: Math.ceil(L / maxPitchMm - 1e-9),
+      hi: Math.floor(L / minPitchMm + 1e-9),
+      gapMm: 0,
+      short: null,
+    };
   const spans = spansOf(frame, anchors);
   let lo = anchors.length;
   let hi = anchors.length;
   let gapMm = 0;
   let impossible = false;
+  let short: { lengthMm: number; acrossKeepOut: boolean } | null = null;
   for (const s of spans) {
-    if (s.lengthMm < minPitchMm - 1e-9) impossible = true;
+    if (s.lengthMm < minPitchMm - 1e-9) {
+      impossible = true;
+      if (!short || s.lengthMm < short.lengthMm) short = { lengthMm: s.lengthMm, acrossKeepOut: s.blocked };
+    }
     if (s.blocked) {
       gapMm = Math.max(gapMm, s.lengthMm);
       if (s.lengthMm > maxPitchMm + 1e-9) impossible = true;
@@ -131,7 +147,7 @@ export function countBounds(
     lo += Math.max(0, Math.ceil(s.lengthMm / maxPitchMm - 1e-9) - 1);
     hi += Math.max(0, Math.floor(s.lengthMm / minPitchMm + 1e-9) - 1);
   }
-  return impossible ? { lo, hi: Math.min(hi, lo - 1), gapMm } : { lo, hi, gapMm };
+  return impossible ? { lo, hi: Math.min(hi, lo - 1), gapMm, short } : { lo, hi, gapMm, short };
 }
 
 /**

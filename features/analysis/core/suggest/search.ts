@@ -245,6 +245,16 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
         b.gapMm,
         `a keep-out leaves a ${round(b.gapMm)} mm gap, over the ${round(maxPitch)} mm largest pitch for ${c.thread.designation}`,
       );
+    // Two anchors (the bolts at a keep-out's ends, fixed bolts) closer than the smallest pitch: no
+    // count spreads them, so the smallest-pitch rule blocks, not the largest.
+    if (b.short)
+      return block(
+        minRule,
+        b.short.lengthMm,
+        b.short.acrossKeepOut
+          ? `the bolts at the ends of a keep-out stand ${round(b.short.lengthMm)} mm apart, under the ${round(minPitch)} mm smallest pitch for ${c.thread.designation} (${minRule})`
+          : `fixed bolts and keep-out ends leave a ${round(b.short.lengthMm)} mm span, under the ${round(minPitch)} mm smallest pitch for ${c.thread.designation} (${minRule})`,
+      );
     const asme = computeAsmeAppendix2(model).result;
     if (asme.requiredAreaMm2 !== null) {
       const nArea = up(Math.ceil(asme.requiredAreaMm2 / model.thread.rootAreaMm2 - 1e-9));

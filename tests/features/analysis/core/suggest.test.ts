@@ -223,6 +223,25 @@ describe("an impossible request", () => {
     expect(result.message).toMatch(/keep-out leaves a \d+(\.\d)? mm gap/);
   });
 
+  it("a keep-out shorter than the smallest pitch names the smallest-pitch rule, not the largest", () => {
+    // 10 mm keep-out + an 18 mm M16 hole: the bolts at its ends stand 28 mm apart, under 3·d = 48 mm.
+    const design = rectangularCover({ widthMm: 500, heightMm: 340, boltCount: 16, coverThicknessMm: 40 });
+    const keepOuts = [{ kind: "arc-length" as const, fromMm: 100, toMm: 110 }];
+    const strict = suggestPatterns({ design, sizes: M("M16"), keepOuts });
+    expect(strict.candidates).toEqual([]);
+    expect(strict.blocked.map((b) => [b.rule, b.pitchMm])).toEqual([["spacing.pitch-band", 28]]);
+    expect(strict.message).toMatch(
+      /^No size up to M16 keeps the pitch between 3 and 6 bolt diameters at 28 mm pitch/,
+    );
+    expect(strict.message).toMatch(/ends of a keep-out stand 28 mm apart, under the 48 mm smallest pitch/);
+    expect(strict.message).not.toMatch(/2a \+ t|at most 57 mm/);
+    // With layout warnings allowed only the tool's chord bounds the pitch from below.
+    const loose = suggestPatterns({ design, sizes: M("M16"), keepOuts, allowLayoutWarnings: true });
+    expect(loose.candidates).toEqual([]);
+    expect(loose.blocked.map((b) => b.rule)).toEqual(["spacing.min-pitch"]);
+    expect(loose.message).toMatch(/^No size up to M16 leaves room for the tool at 28 mm pitch/);
+  });
+
   it("is refused with every problem named when it cannot run", () => {
     const design = rectangularCover();
     const issues = checkSuggestionRequest({
