@@ -8,6 +8,7 @@ import {
 import { GET as designResultGet } from "@/app/api/v1/designs/[designId]/result/route";
 import { GET as designsGet, POST as designsPost } from "@/app/api/v1/designs/route";
 import { GET as schemaGet } from "@/app/api/v1/schema/design/route";
+import { POST as suggestionsPost } from "@/app/api/v1/suggestions/route";
 import { buildRectangularCover } from "@/features/designs/model/templates";
 import { createDesign } from "@/features/designs/mutations";
 import { COVER_TEMPLATE, appRequest } from "../../setup/fixtures";
@@ -149,6 +150,34 @@ const DESIGN_ROWS: MatrixRow[] = [
     name: "POST /api/v1/analyses (invalid document)",
     call: (_ctx, cookie) =>
       analysesPost(appRequest("/api/v1/analyses", { method: "POST", cookie, body: { schemaVersion: 1 } })),
+    expect: { signedOut: 401, member: 422 },
+  },
+  {
+    // Stateless: the design travels in the body (no design id to look up), so every signed-in
+    // role may search; one size and a small work cap keep the real search short.
+    name: "POST /api/v1/suggestions",
+    call: (_ctx, cookie) =>
+      suggestionsPost(
+        appRequest("/api/v1/suggestions", {
+          method: "POST",
+          cookie,
+          body: {
+            design: document,
+            sizes: [
+              { designation: document.fastener.designation, threadSeries: document.fastener.threadSeries },
+            ],
+            maxAnalyses: 20,
+          },
+        }),
+      ),
+    expect: { signedOut: 401, member: 200 },
+  },
+  {
+    name: "POST /api/v1/suggestions (invalid request)",
+    call: (_ctx, cookie) =>
+      suggestionsPost(
+        appRequest("/api/v1/suggestions", { method: "POST", cookie, body: { design: { schemaVersion: 1 } } }),
+      ),
     expect: { signedOut: 401, member: 422 },
   },
   {
