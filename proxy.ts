@@ -1,8 +1,13 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { API_CONTENT_SECURITY_POLICY, SECURITY_HEADERS } from "@/server/http/security-headers";
 
-// The HTTP edge of every response: pages, route handlers (/api/…) and file downloads.
+export { API_CONTENT_SECURITY_POLICY, SECURITY_HEADERS };
+
+// The HTTP edge of every page (route handlers under /api/ do not pass through here, see below).
 //  - Security headers (a per-request nonce Content-Security-Policy, no framing, no sniffing, a strict
-//    referrer and a Permissions-Policy that turns off every device API), set here and nowhere else.
+//    referrer and a Permissions-Policy that turns off every device API). The header values live in
+//    server/http/security-headers.ts; next.config.ts puts the same ones, with the API policy, on
+//    every /api/ response.
 //  - Tells server components which page was asked for, so requireViewer() can send a signed-out
 //    visitor to /sign-in?next=<that page>. Access itself is checked where the data is read
 //    (server/auth/guard.ts), never in this file.
@@ -19,27 +24,6 @@ import { NextResponse, type NextRequest } from "next/server";
 // stylesheet, hold selectors or run script, so the CSS-injection attacks a CSP guards against
 // (selector-based exfiltration, imported sheets) stay blocked by the nonce on <style>. Konva and
 // React's client updates set styles through the CSSOM, which CSP does not restrict.
-
-const PERMISSIONS_POLICY = [
-  "accelerometer=()",
-  "autoplay=()",
-  "camera=()",
-  "display-capture=()",
-  "encrypted-media=()",
-  "fullscreen=(self)",
-  "geolocation=()",
-  "gyroscope=()",
-  "magnetometer=()",
-  "microphone=()",
-  "midi=()",
-  "payment=()",
-  "picture-in-picture=()",
-  "publickey-credentials-get=()",
-  "screen-wake-lock=()",
-  "serial=()",
-  "usb=()",
-  "xr-spatial-tracking=()",
-].join(", ");
 
 /** The policy of an HTML page; `development` adds what `next dev` needs (eval for React's debug info, HMR socket). */
 export function pageContentSecurityPolicy(nonce: string, development = false): string {
@@ -60,38 +44,21 @@ export function pageContentSecurityPolicy(nonce: string, development = false): s
   ].join("; ");
 }
 
-/** JSON and file downloads are never documents to render: nothing may load, run or frame them. */
-export const API_CONTENT_SECURITY_POLICY =
-  "default-src 'none'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'";
-
-/** The headers every response carries besides the Content-Security-Policy. */
-export const SECURITY_HEADERS: Record<string, string> = {
-  "x-frame-options": "DENY",
-  "x-content-type-options": "nosniff",
-  "referrer-policy": "strict-origin-when-cross-origin",
-  "permissions-policy": PERMISSIONS_POLICY,
-  "cross-origin-opener-policy": "same-origin",
-};
-
 // Each request gets an id: the caller's X-Request-Id when it looks like one, else a new one, passed on
 // to the route (whose log line carries it, server/log/with-logging.ts) and returned in the response.
 // The proxy cannot log the request itself: the final status is known only after the route has run.
 const REQUEST_ID = /^[A-Za-z0-9._:-]{8,80}$/;
 
 export function proxy(request: NextRequest) {
-  const isApi = request.nextUrl.pathname.startsWith("/api/");
   const headers = new Headers(request.headers);
   const incoming = request.headers.get("x-request-id");
   const requestId = incoming && REQUEST_ID.test(incoming) ? incoming : crypto.randomUUID();
   headers.set("x-request-id", requestId);
-  let policy = API_CONTENT_SECURITY_POLICY;
-  if (!isApi) {
-    const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(18))).toString("base64");
-    policy = pageContentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
-    headers.set("x-nonce", nonce);
-    headers.set("content-security-policy", policy);
-    headers.set("x-sealpitch-path", request.nextUrl.pathname + request.nextUrl.search);
-  }
+  const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(18))).toString("base64");
+  const policy = pageContentSecurityPolicy(nonce, process.env.NODE_ENV === "development");
+  headers.set("x-nonce", nonce);
+  headers.set("content-security-policy", policy);
+  headers.set("x-sealpitch-path", request.nextUrl.pathname + request.nextUrl.search);
   const response = NextResponse.next({ request: { headers } });
   response.headers.set("content-security-policy", policy);
   for (const [name, value] of Object.entries(SECURITY_HEADERS)) response.headers.set(name, value);
@@ -101,6 +68,9 @@ export function proxy(request: NextRequest) {
 
 export const config = {
   // Everything except the build's hashed static files (scripts, CSS, fonts), which carry no
-  // document and are served with their exact content types.
-  matcher: ["/((?!_next/static|_next/image).*)"],
+  // document and are served with their exact content types, and the route handlers under /api/.
+  // Those get their (fixed) headers from next.config.ts and their request id from withRequestLog
+  // (server/log/with-logging.ts): running the proxy cost each API request a copy of the request
+  // and its headers, the largest fixed cost the CPU profile showed on /api/health (issue #17).
+  matcher: ["/((?!_next/static|_next/image|api/).*)"],
 };

@@ -59,7 +59,7 @@ setsid npx tsx scripts/fake-smtp.ts --smtp "$SMTP_PORT" --http "$OUTBOX_PORT" --
 echo $! >"$RUN_DIR/smtp.pid"
 
 # Rebuild only when a source file is newer than the last build (next dev compiles on request).
-if [ "$MODE" = production ] && { [ ! -f .next/BUILD_ID ] || [ -n "$(find app features server db public package-lock.json next.config.mjs tailwind.config.ts -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; }; then
+if [ "$MODE" = production ] && { [ ! -f .next/BUILD_ID ] || [ -n "$(find app features server db public package-lock.json next.config.ts tailwind.config.ts -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; }; then
   say "building the app (next build)"
   npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -30 "$RUN_DIR/build.log" >&2; die "the build failed (log: $RUN_DIR/build.log)"; }
 fi

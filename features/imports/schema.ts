@@ -25,5 +25,5 @@ export const importDesignSchema = z.object({
     }),
 });
 
-/** Files are read whole by the server action (Next limits action bodies to 2 MB, see next.config.mjs). */
+/** Files are read whole by the server action (Next limits action bodies to 2 MB, see next.config.ts). */
 export const MAX_IMPORT_FILE_BYTES = 1.9 * 1024 * 1024;
