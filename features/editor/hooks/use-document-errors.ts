@@ -1,7 +1,28 @@
 "use client";
-import { useMemo } from "react";
+import { useEffect, useMemo, useState } from "react";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { jointDesignSchema } from "@/features/analysis/schema";
+
+type Schema = (typeof import("@/features/analysis/schema"))["jointDesignSchema"];
+
+// zod and the schema are a quarter of the Layout desk's first-load JavaScript: they are fetched
+// after the page shows (one request per page load, shared by every caller). Until they arrive the
+// document counts as valid here; the server action validates with the same schema on every save.
+let schemaLoad: Promise<Schema> | null = null;
+const loadSchema = () =>
+  (schemaLoad ??= import("@/features/analysis/schema").then((m) => m.jointDesignSchema));
+
+function useSchema(wanted: boolean): Schema | null {
+  const [schema, setSchema] = useState<Schema | null>(null);
+  useEffect(() => {
+    if (!wanted || schema) return;
+    let live = true;
+    void loadSchema().then((s) => live && setSchema(() => s));
+    return () => {
+      live = false;
+    };
+  }, [wanted, schema]);
+  return schema;
+}
 
 /** "layers[0].thicknessMm" and "document.layers.0.thicknessMm" both become "layers.0.thicknessMm". */
 export function normalisePath(p: string): string {
@@ -20,9 +41,10 @@ export function useDocumentErrors(
   skip: boolean,
   serverErrors: Record<string, string[]> | null,
 ) {
+  const schema = useSchema(!skip);
   const schemaErrors = useMemo(() => {
-    if (skip) return null;
-    const r = jointDesignSchema.safeParse(design);
+    if (skip || !schema) return null;
+    const r = schema.safeParse(design);
     if (r.success) return {};
     const out: Record<string, string> = {};
     for (const i of r.error.issues) {
@@ -30,7 +52,7 @@ export function useDocumentErrors(
       out[path] ??= i.message.replace(/^[^:]+: /, "");
     }
     return out;
-  }, [design, skip]);
+  }, [design, skip, schema]);
   const server = useMemo(() => {
     const out: Record<string, string> = {};
     for (const [k, v] of Object.entries(serverErrors ?? {})) if (v[0]) out[normalisePath(k)] = v[0];
