@@ -183,17 +183,19 @@ async function recordSave(
 ): Promise<void> {
   // A pattern applied from the Pattern finder is always its own entry, never folded into a burst.
   const origin = command.patternOrigin;
-  if (origin) {
-    await recordActivity(trx, {
+  const record = (detail: string) =>
+    recordActivity(trx, {
       organizationId: command.organizationId,
       designId: command.designId,
       revisionId,
       actorId: command.userId,
       kind: "saved",
-      detail: `version ${version} · pattern applied from suggestion ${origin.suggestion} of ${origin.of}`,
+      detail,
     });
-    return;
-  }
+  if (origin)
+    return record(
+      `version ${version} · pattern applied from suggestion ${origin.suggestion} of ${origin.of}`,
+    );
   const last = await trx
     .selectFrom("design_activity")
     .select(["kind", "actor_id", "revision_id"])
@@ -213,14 +215,7 @@ async function recordSave(
     last.recent
   )
     return;
-  await recordActivity(trx, {
-    organizationId: command.organizationId,
-    designId: command.designId,
-    revisionId,
-    actorId: command.userId,
-    kind: "saved",
-    detail: `version ${version}`,
-  });
+  await record(`version ${version}`);
 }
 
 /** A new design (revision 1, draft) holding a copy of the working document of another. */
