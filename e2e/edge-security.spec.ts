@@ -86,6 +86,11 @@ test.describe("security headers", () => {
     expect(anonymous.status()).toBe(401);
     expectCommonHeaders(anonymous.headers(), "API 401");
     expect(anonymous.headers()["content-security-policy"]).toContain("default-src 'none'");
+    // API routes skip proxy.ts: the route handlers answer with the request id themselves.
+    expect(anonymous.headers()["x-request-id"]).toMatch(/^[0-9a-f-]{36}$/);
+    const health = await page.request.get("/api/health", { headers: { "x-request-id": "edge-probe-0001" } });
+    expect(health.headers()["x-request-id"]).toBe("edge-probe-0001");
+    expectCommonHeaders(health.headers(), "health");
 
     await signIn(page, DESIGNER);
     const list = await page.request.get("/api/v1/designs");

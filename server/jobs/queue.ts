@@ -84,12 +84,23 @@ export interface QueueWorkers {
 export function startQueueWorkers(all: readonly QueueWorkers[], retryMs = 5000): void {
   for (const workers of all) {
     const attempt = (): void => {
-      workers.ensure().catch((error: unknown) => {
-        getLogger().warn(
-          { event: "jobs", queue: workers.queue, err: errorText(error) },
-          "queue workers not started, retrying",
-        );
+      // The executor runs ensure() at once, and turns a synchronous throw into a rejection too.
+      new Promise<void>((resolve) => resolve(workers.ensure())).catch((error: unknown) => {
+        // The retry is scheduled first, and a logger that throws (a closed or full log stream)
+        // is caught here: either would otherwise leave this rejection unhandled, which ends a
+        // Node process, and the queue would never be retried.
         setTimeout(attempt, retryMs).unref();
+        try {
+          getLogger().warn(
+            { event: "jobs", queue: workers.queue, err: errorText(error) },
+            "queue workers not started, retrying",
+          );
+        } catch (logError) {
+          // stderr reports its own write errors as events, never by throwing.
+          process.stderr.write(
+            `queue workers of ${workers.queue} not started (${errorText(error)}); logging failed: ${errorText(logError)}\n`,
+          );
+        }
       });
     };
     attempt();

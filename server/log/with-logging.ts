@@ -9,8 +9,9 @@ import { cacheControl } from "@/server/http/cache-control";
 // One log line per request, written where the outcome is known. Next 16's proxy.ts runs before
 // the route and never sees the final status, so every route handler is wrapped in
 // withRequestLog (status, duration, user and organisation, the X-Request-Id it answered with)
-// and every server action in loggedAction (outcome instead of status). proxy.ts gives page
-// requests and actions their request id; instrumentation.ts's onRequestError logs what escapes.
+// and every server action in loggedAction (outcome instead of status); the unlogged routes (health,
+// metrics) in withRequestId. proxy.ts gives page requests and actions their request id;
+// instrumentation.ts's onRequestError logs what escapes.
 
 function finishLine(route: string, method: string, status: number, started: number, extra: object = {}) {
   const context = currentRequest();
@@ -64,14 +65,31 @@ export function withRequestLog<A extends unknown[]>(
         response = analysisUnavailableResponse(error);
       }
       finishLine(route, request.method, response.status, started);
-      try {
-        response.headers.set(REQUEST_ID_HEADER, requestId);
-      } catch {
-        // A response with immutable headers (a fetched one) keeps its own; the log line has the id.
-      }
-      return response;
+      return withIdHeader(response, requestId);
     });
   };
+}
+
+function withIdHeader(response: Response, requestId: string): Response {
+  try {
+    response.headers.set(REQUEST_ID_HEADER, requestId);
+  } catch {
+    // A response with immutable headers (a fetched one) keeps its own; the log line has the id.
+  }
+  return response;
+}
+
+/**
+ * For the routes that are not logged per request (health probes, the metrics scrape): the same
+ * X-Request-Id answer as withRequestLog, without the log line, the metrics or the request scope.
+ * API routes skip proxy.ts, so without one of the two wrappers a route would answer with no id.
+ * Its cost is one header read, a pattern test (or a new UUID) and one header write.
+ */
+export function withRequestId<A extends unknown[]>(
+  handler: (request: Request, ...rest: A) => Promise<Response> | Response,
+): (request: Request, ...rest: A) => Promise<Response> {
+  return async (request, ...rest) =>
+    withIdHeader(await handler(request, ...rest), requestIdFrom(request.headers.get(REQUEST_ID_HEADER)));
 }
 
 /** Next's own control-flow throws (redirect, notFound, forbidden) are outcomes, not failures. */

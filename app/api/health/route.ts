@@ -1,4 +1,5 @@
 import { readinessResponse } from "@/features/health/readiness";
+import { withRequestId } from "@/server/log/with-logging";
 
 export const dynamic = "force-dynamic";
 
@@ -7,6 +8,4 @@ export const dynamic = "force-dynamic";
 // applied and the job queue runs, else 503 { ok: false }. /api/health/ready gives the same
 // answer, /api/health/live only says the process is up. Probes are not logged per request
 // (a balancer polls every few seconds); a change of readiness is, with its reason.
-export function GET(): Promise<Response> {
-  return readinessResponse();
-}
+export const GET = withRequestId(() => readinessResponse());

@@ -2,6 +2,7 @@ import { timingSafeEqual } from "node:crypto";
 import { getEnv } from "@/server/env";
 import { renderMetrics } from "@/server/metrics/scrape";
 import { cacheControl } from "@/server/http/cache-control";
+import { withRequestId } from "@/server/log/with-logging";
 
 export const dynamic = "force-dynamic";
 
@@ -15,7 +16,7 @@ function tokenMatches(header: string | null, token: string): boolean {
   return given.length === wanted.length && timingSafeEqual(given, wanted);
 }
 
-export async function GET(request: Request): Promise<Response> {
+export const GET = withRequestId(async (request: Request): Promise<Response> => {
   const token = getEnv().METRICS_TOKEN;
   if (!token) return new Response("Not found", { status: 404 });
   if (!tokenMatches(request.headers.get("authorization"), token)) {
@@ -26,4 +27,4 @@ export async function GET(request: Request): Promise<Response> {
   }
   const { body, contentType } = await renderMetrics();
   return new Response(body, { headers: { "content-type": contentType, ...cacheControl("fresh") } });
-}
+});

@@ -1,8 +1,7 @@
 import { readinessResponse } from "@/features/health/readiness";
+import { withRequestId } from "@/server/log/with-logging";
 
 export const dynamic = "force-dynamic";
 
 // Readiness for a load balancer or orchestrator (the same answer as /api/health).
-export function GET(): Promise<Response> {
-  return readinessResponse();
-}
+export const GET = withRequestId(() => readinessResponse());
