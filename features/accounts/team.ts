@@ -80,25 +80,42 @@ async function lockMembers(trx: Kysely<Database>, organizationId: string) {
     .execute();
 }
 
-export async function changeMemberRoles(
+/**
+ * One change to a membership, under the lock: "not-found" when the user is no member, "last-admin"
+ * when the change would leave the organisation without an administrator (`staysAdmin`: the member
+ * still is one afterwards), else `write` runs in the same transaction.
+ */
+async function changeMember(
   db: Kysely<Database>,
   organizationId: string,
   userId: string,
-  roles: Role[],
+  staysAdmin: boolean,
+  write: (trx: Kysely<Database>) => Promise<void>,
 ): Promise<MemberChange> {
   return db.transaction().execute(async (trx): Promise<MemberChange> => {
     const members = await lockMembers(trx, organizationId);
     const target = members.find((m) => m.user_id === userId);
     if (!target) return "not-found";
     const otherAdmins = members.filter((m) => m.user_id !== userId && m.roles.includes("admin")).length;
-    if (!roles.includes("admin") && target.roles.includes("admin") && otherAdmins === 0) return "last-admin";
+    if (!staysAdmin && target.roles.includes("admin") && otherAdmins === 0) return "last-admin";
+    await write(trx);
+    return "ok";
+  });
+}
+
+export async function changeMemberRoles(
+  db: Kysely<Database>,
+  organizationId: string,
+  userId: string,
+  roles: Role[],
+): Promise<MemberChange> {
+  return changeMember(db, organizationId, userId, roles.includes("admin"), async (trx) => {
     await trx
       .updateTable("memberships")
       .set({ roles: sortRoles(roles) })
       .where("organization_id", "=", organizationId)
       .where("user_id", "=", userId)
       .execute();
-    return "ok";
   });
 }
 
@@ -107,12 +124,7 @@ export async function removeMember(
   organizationId: string,
   userId: string,
 ): Promise<MemberChange> {
-  return db.transaction().execute(async (trx): Promise<MemberChange> => {
-    const members = await lockMembers(trx, organizationId);
-    const target = members.find((m) => m.user_id === userId);
-    if (!target) return "not-found";
-    const otherAdmins = members.filter((m) => m.user_id !== userId && m.roles.includes("admin")).length;
-    if (target.roles.includes("admin") && otherAdmins === 0) return "last-admin";
+  return changeMember(db, organizationId, userId, false, async (trx) => {
     await trx
       .deleteFrom("memberships")
       .where("organization_id", "=", organizationId)
@@ -125,6 +137,5 @@ export async function removeMember(
       .where("user_id", "=", userId)
       .where("active_organization_id", "=", organizationId)
       .execute();
-    return "ok";
   });
 }

@@ -4,8 +4,8 @@ import { useActionState } from "react";
 import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
-import { TextField } from "@/features/ui/text-field";
 import { useRememberedValues } from "@/features/ui/use-remembered-values";
+import { CurrentPasswordField, DisplayNameField, EmailField, NewPasswordFields } from "./account-fields";
 
 type FormAction<T = void> = (prev: ActionResult<T> | null, data: FormData) => Promise<ActionResult<T>>;
 
@@ -19,15 +19,7 @@ export function ForgotPasswordForm({
   const { values, remember } = useRememberedValues();
   return (
     <form action={remember(formAction)} className="flex flex-col gap-4" noValidate>
-      <TextField
-        label="E-mail"
-        name="email"
-        type="email"
-        autoComplete="email"
-        required
-        errors={errors?.email}
-        defaultValue={values.email}
-      />
+      <EmailField errors={errors} defaultValue={values.email} />
       <FormStatus state={state} success={state?.ok ? state.data : undefined} />
       <button type="submit" className={buttonStyles.primary} disabled={pending}>
         Send the reset link
@@ -48,23 +40,7 @@ export function ResetPasswordForm({
   return (
     <form action={formAction} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="token" value={token} />
-      <TextField
-        label="New password"
-        name="password"
-        type="password"
-        autoComplete="new-password"
-        required
-        errors={errors?.password}
-        hint="At least 10 characters."
-      />
-      <TextField
-        label="Repeat the password"
-        name="confirmPassword"
-        type="password"
-        autoComplete="new-password"
-        required
-        errors={errors?.confirmPassword}
-      />
+      <NewPasswordFields errors={errors} label="New password" />
       <FormStatus state={state} />
       <button type="submit" className={buttonStyles.primary} disabled={pending}>
         Set the new password
@@ -89,41 +65,11 @@ export function AcceptInvitationForm({
     <form action={remember(formAction)} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="token" value={token} />
       {hasAccount ? (
-        <TextField
-          label="Your current password"
-          name="password"
-          type="password"
-          autoComplete="current-password"
-          required
-          errors={errors?.password}
-        />
+        <CurrentPasswordField errors={errors} label="Your current password" />
       ) : (
         <>
-          <TextField
-            label="Your name"
-            name="displayName"
-            autoComplete="name"
-            required
-            errors={errors?.displayName}
-            defaultValue={values.displayName}
-          />
-          <TextField
-            label="Password"
-            name="password"
-            type="password"
-            autoComplete="new-password"
-            required
-            errors={errors?.password}
-            hint="At least 10 characters."
-          />
-          <TextField
-            label="Repeat the password"
-            name="confirmPassword"
-            type="password"
-            autoComplete="new-password"
-            required
-            errors={errors?.confirmPassword}
-          />
+          <DisplayNameField errors={errors} defaultValue={values.displayName} />
+          <NewPasswordFields errors={errors} />
         </>
       )}
       <FormStatus state={state} />

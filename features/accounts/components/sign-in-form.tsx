@@ -5,8 +5,8 @@ import { useActionState } from "react";
 import type { ActionResult } from "@/features/forms/action-result";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
-import { TextField } from "@/features/ui/text-field";
 import { useRememberedValues } from "@/features/ui/use-remembered-values";
+import { CurrentPasswordField, EmailField } from "./account-fields";
 
 export function SignInForm({
   signInAction,
@@ -21,23 +21,8 @@ export function SignInForm({
   return (
     <form action={remember(formAction)} className="flex flex-col gap-4" noValidate>
       {next ? <input type="hidden" name="next" value={next} /> : null}
-      <TextField
-        label="E-mail"
-        name="email"
-        type="email"
-        autoComplete="username"
-        required
-        errors={errors?.email}
-        defaultValue={values.email}
-      />
-      <TextField
-        label="Password"
-        name="password"
-        type="password"
-        autoComplete="current-password"
-        required
-        errors={errors?.password}
-      />
+      <EmailField errors={errors} defaultValue={values.email} autoComplete="username" />
+      <CurrentPasswordField errors={errors} />
       <FormStatus state={state} />
       <button type="submit" className={buttonStyles.primary} disabled={pending}>
         Sign in

@@ -6,6 +6,7 @@ import { buttonStyles } from "@/features/ui/button-styles";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
 import { useRememberedValues } from "@/features/ui/use-remembered-values";
+import { DisplayNameField, EmailField, NewPasswordFields } from "./account-fields";
 
 export function SignUpForm({
   signUpAction,
@@ -17,23 +18,8 @@ export function SignUpForm({
   const { values, remember } = useRememberedValues(["password", "confirmPassword"]);
   return (
     <form action={remember(formAction)} className="flex flex-col gap-4" noValidate>
-      <TextField
-        label="Your name"
-        name="displayName"
-        autoComplete="name"
-        required
-        errors={errors?.displayName}
-        defaultValue={values.displayName}
-      />
-      <TextField
-        label="E-mail"
-        name="email"
-        type="email"
-        autoComplete="email"
-        required
-        errors={errors?.email}
-        defaultValue={values.email}
-      />
+      <DisplayNameField errors={errors} defaultValue={values.displayName} />
+      <EmailField errors={errors} defaultValue={values.email} />
       <TextField
         label="Organisation"
         name="organizationName"
@@ -43,23 +29,7 @@ export function SignUpForm({
         defaultValue={values.organizationName}
         hint="Your company or team; you become its administrator."
       />
-      <TextField
-        label="Password"
-        name="password"
-        type="password"
-        autoComplete="new-password"
-        required
-        errors={errors?.password}
-        hint="At least 10 characters."
-      />
-      <TextField
-        label="Repeat the password"
-        name="confirmPassword"
-        type="password"
-        autoComplete="new-password"
-        required
-        errors={errors?.confirmPassword}
-      />
+      <NewPasswordFields errors={errors} />
       <FormStatus state={state} />
       <button type="submit" className={buttonStyles.primary} disabled={pending}>
         Start the organisation

@@ -122,6 +122,31 @@ export function MemberRoleForm({
   );
 }
 
+/** A row's one-button form (Remove, Resend, Revoke): the button is disabled while its action runs. */
+function RowButtonForm({
+  action,
+  hidden,
+  look,
+  label,
+  children,
+}: {
+  action: TeamAction;
+  hidden: Record<string, string>;
+  look: keyof typeof buttonStyles;
+  label: string;
+  children: ReactNode;
+}) {
+  return (
+    <RowForm action={action} hidden={hidden}>
+      {(pending) => (
+        <button type="submit" className={buttonStyles[look]} disabled={pending} aria-label={label}>
+          {children}
+        </button>
+      )}
+    </RowForm>
+  );
+}
+
 export function RemoveMemberForm({
   userId,
   displayName,
@@ -132,18 +157,14 @@ export function RemoveMemberForm({
   removeMemberAction: TeamAction;
 }) {
   return (
-    <RowForm action={removeMemberAction} hidden={{ userId }}>
-      {(pending) => (
-        <button
-          type="submit"
-          className={buttonStyles.danger}
-          disabled={pending}
-          aria-label={`Remove ${displayName}`}
-        >
-          Remove
-        </button>
-      )}
-    </RowForm>
+    <RowButtonForm
+      action={removeMemberAction}
+      hidden={{ userId }}
+      look="danger"
+      label={`Remove ${displayName}`}
+    >
+      Remove
+    </RowButtonForm>
   );
 }
 
@@ -160,30 +181,22 @@ export function InvitationButtons({
 }) {
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <RowForm action={resendInvitationAction} hidden={{ invitationId }}>
-        {(pending) => (
-          <button
-            type="submit"
-            className={buttonStyles.secondary}
-            disabled={pending}
-            aria-label={`Resend the invitation to ${email}`}
-          >
-            Resend
-          </button>
-        )}
-      </RowForm>
-      <RowForm action={revokeInvitationAction} hidden={{ invitationId }}>
-        {(pending) => (
-          <button
-            type="submit"
-            className={buttonStyles.quiet}
-            disabled={pending}
-            aria-label={`Revoke the invitation to ${email}`}
-          >
-            Revoke
-          </button>
-        )}
-      </RowForm>
+      {(
+        [
+          { verb: "Resend", action: resendInvitationAction, look: "secondary" },
+          { verb: "Revoke", action: revokeInvitationAction, look: "quiet" },
+        ] as const
+      ).map(({ verb, action, look }) => (
+        <RowButtonForm
+          key={verb}
+          action={action}
+          hidden={{ invitationId }}
+          look={look}
+          label={`${verb} the invitation to ${email}`}
+        >
+          {verb}
+        </RowButtonForm>
+      ))}
     </div>
   );
 }
