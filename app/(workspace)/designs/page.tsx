@@ -9,6 +9,7 @@ import { listDesignOwners, listDesigns } from "@/features/designs/queries";
 import { registerHref } from "@/features/designs/register-href";
 import { listDesignsQuerySchema, searchParamsToObject } from "@/features/designs/schema";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { PageTitle } from "@/features/ui/page-title";
 import { requireViewer } from "@/server/auth/guard";
 
 export const metadata: Metadata = { title: "Joint register" };
@@ -29,10 +30,10 @@ export default async function DesignsPage({
     <div className="flex flex-col gap-6">
       <header className="flex flex-wrap items-end justify-between gap-4">
         <div>
-          <p className="text-table uppercase tracking-wider text-brass-600">{viewer.organizationName}</p>
-          <h1 className="mt-1 text-display font-semibold">
-            {query.archived === "only" ? "Joint register: archived" : "Joint register"}
-          </h1>
+          <PageTitle
+            eyebrow={viewer.organizationName}
+            title={query.archived === "only" ? "Joint register: archived" : "Joint register"}
+          />
         </div>
         <div className="flex flex-wrap gap-3">
           <Link

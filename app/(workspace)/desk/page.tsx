@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { DeskLists } from "./_components/desk-lists";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { PageTitle } from "@/features/ui/page-title";
 import { requireViewer } from "@/server/auth/guard";
 
 export const metadata: Metadata = { title: "Desk" };
@@ -13,10 +14,7 @@ export default async function DeskPage() {
   return (
     <div className="flex flex-col gap-6">
       <section>
-        <p className="text-table uppercase tracking-wider text-brass-600">Desk</p>
-        <h1 className="mt-1 text-display font-semibold">
-          Good to see you, {viewer.displayName.split(" ")[0]}.
-        </h1>
+        <PageTitle eyebrow="Desk" title={`Good to see you, ${viewer.displayName.split(" ")[0]}.`} />
         <p className="mt-2 text-lead text-ink-700">
           {viewer.organizationName} ·{" "}
           <span data-testid="desk-roles">{viewer.roles.map((r) => ROLE_NAMES[r]).join(", ")}</span>

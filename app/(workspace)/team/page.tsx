@@ -14,6 +14,7 @@ import {
   resendInvitationAction,
   revokeInvitationAction,
 } from "@/features/accounts/team-actions";
+import { Panel, PanelTable } from "@/features/ui/panel";
 import { requireViewer } from "@/server/auth/guard";
 
 export const metadata: Metadata = { title: "Crew" };
@@ -28,102 +29,83 @@ export default async function TeamPage() {
         <h1 className="mt-1 text-heading font-semibold">Who works in {viewer.organizationName}</h1>
       </header>
 
-      <section aria-labelledby="members" className="rounded-plate bg-white p-5 shadow-plate">
-        <h2 id="members" className="text-lead font-semibold">
-          Members
-        </h2>
-        <div className="max-w-full overflow-x-auto">
-          <table className="mt-3 w-full">
-            <thead className="text-left text-ink-500">
-              <tr>
-                <th className="py-2">Name</th>
-                <th>E-mail</th>
-                <th>Roles</th>
-                <th>
-                  <span className="sr-only">Remove</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {team.members.map((m) => (
-                <tr key={m.userId} className="border-t border-ink-100 align-middle">
-                  <td className="py-2 font-medium">
-                    {m.displayName}
-                    {m.userId === viewer.userId ? " (you)" : ""}
-                  </td>
-                  <td className="num">{m.email}</td>
-                  <td>
-                    <MemberRoleForm
-                      userId={m.userId}
-                      displayName={m.displayName}
-                      roles={m.roles}
-                      changeMemberRolesAction={changeMemberRolesAction}
-                    />
-                  </td>
-                  <td>
-                    <RemoveMemberForm
-                      userId={m.userId}
-                      displayName={m.displayName}
-                      removeMemberAction={removeMemberAction}
-                    />
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-      </section>
+      <Panel id="members" title="Members" className="p-5">
+        <PanelTable
+          headers={[
+            "Name",
+            "E-mail",
+            "Roles",
+            <span key="remove" className="sr-only">
+              Remove
+            </span>,
+          ]}
+        >
+          {team.members.map((m) => (
+            <tr key={m.userId} className="border-t border-ink-100 align-middle">
+              <td className="py-2 font-medium">
+                {m.displayName}
+                {m.userId === viewer.userId ? " (you)" : ""}
+              </td>
+              <td className="num">{m.email}</td>
+              <td>
+                <MemberRoleForm
+                  userId={m.userId}
+                  displayName={m.displayName}
+                  roles={m.roles}
+                  changeMemberRolesAction={changeMemberRolesAction}
+                />
+              </td>
+              <td>
+                <RemoveMemberForm
+                  userId={m.userId}
+                  displayName={m.displayName}
+                  removeMemberAction={removeMemberAction}
+                />
+              </td>
+            </tr>
+          ))}
+        </PanelTable>
+      </Panel>
 
-      <section aria-labelledby="pending" className="rounded-plate bg-white p-5 shadow-plate">
-        <h2 id="pending" className="text-lead font-semibold">
-          Pending invitations
-        </h2>
+      <Panel id="pending" title="Pending invitations" className="p-5">
         {team.invitations.length === 0 ? (
           <p className="mt-2 text-ink-600">No invitations are waiting.</p>
         ) : (
-          <div className="max-w-full overflow-x-auto">
-            <table className="mt-3 w-full">
-              <thead className="text-left text-ink-500">
-                <tr>
-                  <th className="py-2">E-mail</th>
-                  <th>Roles</th>
-                  <th>Link valid until</th>
-                  <th>
-                    <span className="sr-only">Actions</span>
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
-                {team.invitations.map((i) => (
-                  <tr key={i.invitationId} className="border-t border-ink-100">
-                    <td className="num py-2">{i.email}</td>
-                    <td>{i.roles.join(", ")}</td>
-                    <td className="num">{i.expired ? "expired" : i.expiresAt.slice(0, 10)}</td>
-                    <td>
-                      <InvitationButtons
-                        invitationId={i.invitationId}
-                        email={i.email}
-                        resendInvitationAction={resendInvitationAction}
-                        revokeInvitationAction={revokeInvitationAction}
-                      />
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <PanelTable
+            headers={[
+              "E-mail",
+              "Roles",
+              "Link valid until",
+              <span key="actions" className="sr-only">
+                Actions
+              </span>,
+            ]}
+          >
+            {team.invitations.map((i) => (
+              <tr key={i.invitationId} className="border-t border-ink-100">
+                <td className="num py-2">{i.email}</td>
+                <td>{i.roles.join(", ")}</td>
+                <td className="num">{i.expired ? "expired" : i.expiresAt.slice(0, 10)}</td>
+                <td>
+                  <InvitationButtons
+                    invitationId={i.invitationId}
+                    email={i.email}
+                    resendInvitationAction={resendInvitationAction}
+                    revokeInvitationAction={revokeInvitationAction}
+                  />
+                </td>
+              </tr>
+            ))}
+          </PanelTable>
         )}
-      </section>
+      </Panel>
 
-      <section aria-labelledby="invite" className="max-w-lg rounded-plate bg-white p-5 shadow-plate">
-        <h2 id="invite" className="text-lead font-semibold">
-          Invite a member
-        </h2>
+      <Panel id="invite" title="Invite a member" className="max-w-lg p-5">
         <p className="mt-1 text-table text-ink-600">They get an e-mail with a link that works for 7 days.</p>
         <div className="mt-4">
           <InviteMemberForm inviteMemberAction={inviteMemberAction} />
         </div>
-      </section>
+      </Panel>
     </div>
   );
 }

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { createDesignAction } from "@/features/designs/actions";
 import { NewDesignForm } from "@/features/designs/components/new-design-form";
+import { PageTitle } from "@/features/ui/page-title";
 import { requireViewer } from "@/server/auth/guard";
 
 export const metadata: Metadata = { title: "New design" };
@@ -11,8 +12,7 @@ export default async function NewDesignPage() {
   return (
     <div className="flex flex-col gap-6">
       <header>
-        <p className="text-table uppercase tracking-wider text-brass-600">Joint register</p>
-        <h1 className="mt-1 text-display font-semibold">New design</h1>
+        <PageTitle eyebrow="Joint register" title="New design" />
         <p className="mt-2 text-body text-ink-700">
           Pick a starting shape and its main dimensions in millimetres; everything else is set in the editor.
         </p>

@@ -8,6 +8,7 @@ import { ExportButtons } from "@/features/exports/components/export-buttons";
 import { FeCheckPanel } from "@/features/fe-check/components/fe-check-panel";
 import { canRunFeCheck } from "@/features/fe-check/policies";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { Panel } from "@/features/ui/panel";
 import { REVISION_STATUS_LABELS } from "@/features/ui/revision-status";
 import type { Viewer } from "@/server/auth/guard";
 import type { ExportJobDto } from "@/server/jobs/export-files";
@@ -29,10 +30,7 @@ export function DesignCompanions({
   const signOffHref = `/designs/${design.designId}/revisions/${design.revisionNumber}`;
   return (
     <div className="mt-6 grid gap-6 lg:grid-cols-2">
-      <section aria-labelledby="sign-off-heading" className="rounded-plate bg-white p-4 shadow-plate">
-        <h2 id="sign-off-heading" className="text-lead font-semibold">
-          Sign-off
-        </h2>
+      <Panel id="sign-off-heading" title="Sign-off" className="p-4">
         <p className="mt-1 text-table text-ink-700">
           Revision {design.revisionNumber} is <strong>{REVISION_STATUS_LABELS[design.status]}</strong>. Save
           your edits, then open the sign-off sheet to submit it for review, read the comments or start a new
@@ -41,11 +39,8 @@ export function DesignCompanions({
         <Link href={signOffHref} className={`${buttonStyles.secondary} mt-3`}>
           Open the sign-off sheet
         </Link>
-      </section>
-      <section aria-labelledby="shop-files-heading" className="rounded-plate bg-white p-4 shadow-plate">
-        <h2 id="shop-files-heading" className="text-lead font-semibold">
-          Shop files
-        </h2>
+      </Panel>
+      <Panel id="shop-files-heading" title="Shop files" className="p-4">
         <p className="mt-1 text-table text-ink-700">
           From the last saved result of revision {design.revisionNumber}.
         </p>
@@ -60,7 +55,7 @@ export function DesignCompanions({
             retrySheetAction={retrySheetAction}
           />
         </div>
-      </section>
+      </Panel>
       <div className="lg:col-span-2">
         <FeCheckPanel
           designId={design.designId}

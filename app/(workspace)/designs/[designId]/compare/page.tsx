@@ -7,6 +7,7 @@ import { RevisionOverlay } from "@/features/editor/components/revision-overlay";
 import { RevisionComparison } from "@/features/reviews/components/revision-comparison";
 import { compareRevisions, listRevisionSummaries } from "@/features/reviews/queries";
 import { CautionPanel } from "@/features/ui/caution-panel";
+import { PageTitle } from "@/features/ui/page-title";
 import { requireViewer } from "@/server/auth/guard";
 
 export const metadata: Metadata = { title: "Revision comparison" };
@@ -32,8 +33,7 @@ export default async function CompareRevisionsPage(props: {
   return (
     <div className="flex flex-col gap-6">
       <header>
-        <p className="text-table uppercase tracking-wider text-brass-600">Revision comparison</p>
-        <h1 className="mt-1 text-display font-semibold">{comparison.designName}</h1>
+        <PageTitle eyebrow="Revision comparison" title={comparison.designName} />
       </header>
       <RevisionComparison
         comparison={comparison}
