@@ -26,18 +26,34 @@ export function Panel({
   );
 }
 
-/** A table under a Panel's heading that scrolls sideways on a narrow screen. */
-export function PanelTable({ headers, children }: { headers: ReactNode[]; children: ReactNode }) {
+/**
+ * A table under a Panel's heading that scrolls sideways on a narrow screen. `commandsHeader` names
+ * a last column of row commands for screen readers only.
+ */
+export function PanelTable({
+  headers,
+  commandsHeader,
+  children,
+}: {
+  headers: string[];
+  commandsHeader?: string;
+  children: ReactNode;
+}) {
   return (
     <div className="max-w-full overflow-x-auto">
       <table className="mt-3 w-full">
         <thead className="text-left text-ink-500">
           <tr>
-            {headers.map((header, i) => (
-              <th key={i} className="py-2">
+            {headers.map((header) => (
+              <th key={header} className="py-2">
                 {header}
               </th>
             ))}
+            {commandsHeader ? (
+              <th className="py-2">
+                <span className="sr-only">{commandsHeader}</span>
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody>{children}</tbody>

@@ -30,16 +30,7 @@ export default async function TeamPage() {
       </header>
 
       <Panel id="members" title="Members" className="p-5">
-        <PanelTable
-          headers={[
-            "Name",
-            "E-mail",
-            "Roles",
-            <span key="remove" className="sr-only">
-              Remove
-            </span>,
-          ]}
-        >
+        <PanelTable headers={["Name", "E-mail", "Roles"]} commandsHeader="Remove">
           {team.members.map((m) => (
             <tr key={m.userId} className="border-t border-ink-100 align-middle">
               <td className="py-2 font-medium">
@@ -71,16 +62,7 @@ export default async function TeamPage() {
         {team.invitations.length === 0 ? (
           <p className="mt-2 text-ink-600">No invitations are waiting.</p>
         ) : (
-          <PanelTable
-            headers={[
-              "E-mail",
-              "Roles",
-              "Link valid until",
-              <span key="actions" className="sr-only">
-                Actions
-              </span>,
-            ]}
-          >
+          <PanelTable headers={["E-mail", "Roles", "Link valid until"]} commandsHeader="Actions">
             {team.invitations.map((i) => (
               <tr key={i.invitationId} className="border-t border-ink-100">
                 <td className="num py-2">{i.email}</td>
