@@ -1,4 +1,5 @@
 import type { InputHTMLAttributes } from "react";
+import { FieldFrame } from "./field-frame";
 
 /** A labelled input with its field message (first error only) tied to it for screen readers. */
 export function TextField({
@@ -16,10 +17,7 @@ export function TextField({
   const id = `field-${name}`;
   const message = errors?.[0];
   return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-table font-medium text-ink-800">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} message={message} hint={hint}>
       <input
         id={id}
         name={name}
@@ -28,16 +26,6 @@ export function TextField({
         className="rounded-plate border border-ink-200 bg-white px-3 py-2 text-body text-ink-900 aria-[invalid=true]:border-verdict-fail"
         {...input}
       />
-      {hint && !message ? (
-        <p id={`${id}-hint`} className="text-micro text-ink-500">
-          {hint}
-        </p>
-      ) : null}
-      {message ? (
-        <p id={`${id}-error`} className="text-table text-verdict-fail">
-          {message}
-        </p>
-      ) : null}
-    </div>
+    </FieldFrame>
   );
 }

@@ -2,6 +2,7 @@
 import { useActionState, useState } from "react";
 import { FLANGE_TEMPLATES } from "@/features/analysis/core/catalogue/flange-templates";
 import { buttonStyles } from "@/features/ui/button-styles";
+import { FieldFrame } from "@/features/ui/field-frame";
 import { FormStatus } from "@/features/ui/form-status";
 import { TextField } from "@/features/ui/text-field";
 import type { ActionResult } from "@/features/forms/action-result";
@@ -76,17 +77,9 @@ function FieldInput({
       </select>
     );
   return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-table font-medium text-ink-800">
-        {label}
-      </label>
+    <FieldFrame id={id} label={label} message={message}>
       {control}
-      {message ? (
-        <p id={`${id}-error`} className="text-table text-verdict-fail">
-          {message}
-        </p>
-      ) : null}
-    </div>
+    </FieldFrame>
   );
 }
 

@@ -48,7 +48,14 @@ export function CanvasOverlays({
         const n = seen.get(c.id) ?? 0;
         seen.set(c.id, n + 1);
         const id = violationNodeId(c.id, n);
-        const colour = COLOUR[c.status as "fail" | "warn"];
+        // The Konva attributes every violation mark carries (its id and check, for the probes and the highlight).
+        const mark = {
+          id,
+          name: "violation",
+          checkId: c.id,
+          stroke: COLOUR[c.status as "fail" | "warn"],
+          strokeWidth: 2.5,
+        };
         if (c.boltIds.length >= 2) {
           const a = at.get(c.boltIds[0]);
           const b = at.get(c.boltIds[1]);
@@ -63,12 +70,8 @@ export function CanvasOverlays({
           return (
             <Line
               key={id}
-              id={id}
-              name="violation"
-              checkId={c.id}
+              {...mark}
               points={[a.x, a.y, a.x + nx, a.y + ny, b.x + nx, b.y + ny, b.x, b.y]}
-              stroke={colour}
-              strokeWidth={2.5}
               lineCap="round"
               lineJoin="round"
               dash={c.status === "warn" ? [6, 4] : undefined}
@@ -80,14 +83,10 @@ export function CanvasOverlays({
         return (
           <Circle
             key={id}
-            id={id}
-            name="violation"
-            checkId={c.id}
+            {...mark}
             x={p.x}
             y={p.y}
             radius={rPx + 6}
-            stroke={colour}
-            strokeWidth={2.5}
             dash={c.status === "warn" ? [5, 3] : undefined}
           />
         );

@@ -6,6 +6,7 @@ import {
 import type { ConeAngleSetting, PreloadRule, TighteningMethod } from "@/features/analysis/core/design";
 import { DEFAULT_FIXED_CONE_ANGLE_DEG } from "@/features/analysis/core/design";
 import { FIELD_SPECS, fromBound } from "../model/field-specs";
+import { FormSection } from "./form-parts";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
@@ -31,8 +32,7 @@ export function FormSectionAssembly({ ctx }: { ctx: FormContext }) {
           label: a.preload.kind === "fraction-of-proof" ? "Fraction of proof load" : "Fraction of yield",
         };
   return (
-    <fieldset className="grid grid-cols-2 gap-2">
-      <legend className="mb-1 text-table font-semibold text-ink-800">Tightening</legend>
+    <FormSection title="Tightening">
       <div className="col-span-2">
         <SelectField
           path="assembly.method"
@@ -116,6 +116,6 @@ export function FormSectionAssembly({ ctx }: { ctx: FormContext }) {
           { value: "beam", label: "Beam on elastic foundation" },
         ]}
       />
-    </fieldset>
+    </FormSection>
   );
 }

@@ -4,6 +4,7 @@ import { THREADS, findThread } from "@/features/analysis/core/catalogue/threads"
 import type { Fastener } from "@/features/analysis/core/design";
 import { inToMm } from "@/features/analysis/core/units";
 import { FIELD_SPECS } from "../model/field-specs";
+import { FormSection } from "./form-parts";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
@@ -32,8 +33,7 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
   };
   const nominal = findThread(f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
   return (
-    <fieldset className="grid grid-cols-2 gap-2">
-      <legend className="mb-1 text-table font-semibold text-ink-800">Bolting</legend>
+    <FormSection title="Bolting">
       <SelectField
         path="fastener.designation"
         label="Bolt size"
@@ -139,6 +139,6 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
           <NumberField ctx={ctx} spec={FIELD_SPECS.memberModulus} value={f.termination.memberModulusMpa} />
         </>
       )}
-    </fieldset>
+    </FormSection>
   );
 }

@@ -8,6 +8,7 @@ import { findThread } from "@/features/analysis/core/catalogue/threads";
 import type { FlangeDesignInputs } from "@/features/analysis/core/design";
 import { COVER_SKETCHES } from "@/features/analysis/core/flange-design/flat-cover";
 import { FIELD_SPECS } from "../model/field-specs";
+import { FormSection } from "./form-parts";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
@@ -48,8 +49,7 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
   const setBoltAllowable = (next: { valueMpa: number; source: string } | null) =>
     ctx.dispatch({ type: "set-field", path: "fastener", value: { ...f, enteredAllowable: next } });
   return (
-    <fieldset className="grid grid-cols-2 gap-2" aria-label="Flange and cover">
-      <legend className="mb-1 text-table font-semibold text-ink-800">Flange and cover</legend>
+    <FormSection title="Flange and cover">
       <SelectField
         path="flangeDesign.kind"
         label="Flange type (Appendix 2)"
@@ -156,6 +156,6 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
           </p>
         </>
       )}
-    </fieldset>
+    </FormSection>
   );
 }

@@ -6,6 +6,7 @@ import { toGasketMaterial } from "@/features/library/model/gasket-material";
 import { FIELD_SPECS } from "../model/field-specs";
 import { withGasketForm } from "../model/gasket-form";
 import { formatQuantity } from "../model/quantities";
+import { FormSection } from "./form-parts";
 import { fieldDomId, type FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
@@ -41,8 +42,7 @@ export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
   const builtin = choices.rows.filter((r) => r.origin === "builtin");
   const id = fieldDomId("gasket.material.catalogueId");
   return (
-    <fieldset className="grid grid-cols-2 gap-2">
-      <legend className="mb-1 text-table font-semibold text-ink-800">Gasket</legend>
+    <FormSection title="Gasket">
       <div className="col-span-2 flex flex-col gap-0.5">
         <label htmlFor={id} className="text-micro text-ink-600">
           Gasket material
@@ -146,6 +146,6 @@ export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
       )}
       <NumberField ctx={ctx} spec={FIELD_SPECS.gasketThickness} value={mat.thicknessMm} />
       <NumberField ctx={ctx} spec={FIELD_SPECS.gasketModulus} value={mat.modulusMpa} />
-    </fieldset>
+    </FormSection>
   );
 }

@@ -1,5 +1,6 @@
 "use client";
 import { FIELD_SPECS, layerModulusSpec, layerThicknessSpec } from "../model/field-specs";
+import { FormSection } from "./form-parts";
 import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { TextField } from "./text-field";
@@ -14,8 +15,7 @@ interface Props {
 export function FormSectionService({ ctx, meta, onMeta }: Props) {
   const d = ctx.design;
   return (
-    <fieldset className="grid grid-cols-2 gap-2">
-      <legend className="mb-1 text-table font-semibold text-ink-800">Service</legend>
+    <FormSection title="Service">
       <div className="col-span-2">
         <TextField
           path="name"
@@ -87,6 +87,6 @@ export function FormSectionService({ ctx, meta, onMeta }: Props) {
           </div>
         ),
       )}
-    </fieldset>
+    </FormSection>
   );
 }

@@ -5,6 +5,36 @@ import type { PointMm } from "@/features/analysis/core/design";
 
 const flat = (pts: PointMm[]) => pts.flatMap((p) => [p.x, p.y]);
 
+const GASKET_DASH = [6, 3];
+
+/** One closed edge line of the drawing: a hairline whatever the zoom, never hit by the pointer. */
+function Edge({
+  id,
+  ring,
+  stroke,
+  width = 1,
+  dash,
+}: {
+  id: string;
+  ring: PointMm[];
+  stroke: string;
+  width?: number;
+  dash?: number[];
+}) {
+  return (
+    <Line
+      id={id}
+      points={flat(ring)}
+      closed
+      stroke={stroke}
+      strokeWidth={width}
+      dash={dash}
+      strokeScaleEnabled={false}
+      listening={false}
+    />
+  );
+}
+
 /** Flange plate, bore and gasket edges, in model coordinates. */
 export const FlangeShapes = memo(function FlangeShapes(props: {
   outline: PointMm[];
@@ -31,48 +61,10 @@ export const FlangeShapes = memo(function FlangeShapes(props: {
           context.fill("evenodd");
         }}
       />
-      <Line
-        id="flange-outline"
-        points={flat(outline)}
-        closed
-        stroke="#1d2739"
-        strokeWidth={1.5}
-        strokeScaleEnabled={false}
-        listening={false}
-      />
-      {bore && (
-        <Line
-          id="bore"
-          points={flat(bore)}
-          closed
-          stroke="#394864"
-          strokeWidth={1}
-          strokeScaleEnabled={false}
-          listening={false}
-        />
-      )}
-      <Line
-        id="gasket-outer"
-        points={flat(gasketOuter)}
-        closed
-        stroke="#845616"
-        strokeWidth={1}
-        dash={[6, 3]}
-        strokeScaleEnabled={false}
-        listening={false}
-      />
-      {gasketInner && (
-        <Line
-          id="gasket-inner"
-          points={flat(gasketInner)}
-          closed
-          stroke="#845616"
-          strokeWidth={1}
-          dash={[6, 3]}
-          strokeScaleEnabled={false}
-          listening={false}
-        />
-      )}
+      <Edge id="flange-outline" ring={outline} stroke="#1d2739" width={1.5} />
+      {bore && <Edge id="bore" ring={bore} stroke="#394864" />}
+      <Edge id="gasket-outer" ring={gasketOuter} stroke="#845616" dash={GASKET_DASH} />
+      {gasketInner && <Edge id="gasket-inner" ring={gasketInner} stroke="#845616" dash={GASKET_DASH} />}
     </>
   );
 });

@@ -2,6 +2,8 @@
 import { useEffect, useState } from "react";
 import { parseNumberField, type NumberFieldSpec } from "../model/field-specs";
 import { formatInputNumber, toDisplay, unitLabel } from "../model/quantities";
+import { FieldFrame } from "@/features/ui/field-frame";
+import { typedInputProps } from "./form-parts";
 import { fieldDomId, type FormContext } from "./form-context";
 
 interface Props {
@@ -52,19 +54,12 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
   };
   const unit = unitLabel(spec.quantity, units);
   return (
-    <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-micro text-ink-600">
-        {spec.label}
-        {unit ? ` (${unit})` : ""}
-      </label>
+    <FieldFrame look="dense" id={id} label={`${spec.label}${unit ? ` (${unit})` : ""}`} message={message}>
       <input
-        id={id}
+        {...typedInputProps(id, message, "num ")}
         inputMode="decimal"
-        className={`num rounded border px-2 py-1 text-table ${message ? "border-verdict-fail bg-verdict-fail-bg" : "border-ink-200"}`}
         value={raw}
         disabled={ctx.readOnly}
-        aria-invalid={message ? true : undefined}
-        aria-describedby={message ? `${id}-error` : undefined}
         onFocus={() => setFocused(true)}
         onChange={(e) => {
           setRaw(e.target.value);
@@ -79,11 +74,6 @@ export function NumberField({ ctx, spec, value, onCommit }: Props) {
           if (e.key === "Enter") commit();
         }}
       />
-      {message && (
-        <p id={`${id}-error`} role="alert" className="text-micro text-verdict-fail">
-          {message}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }

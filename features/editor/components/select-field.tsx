@@ -1,4 +1,5 @@
 "use client";
+import { FieldFrame } from "@/features/ui/field-frame";
 import { fieldDomId } from "./form-context";
 
 interface Props<T extends string> {
@@ -22,10 +23,7 @@ export function SelectField<T extends string>({
 }: Props<T>) {
   const id = fieldDomId(path);
   return (
-    <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-micro text-ink-600">
-        {label}
-      </label>
+    <FieldFrame look="dense" id={id} label={label} hint={hint}>
       <select
         id={id}
         className="rounded border border-ink-200 bg-white px-1.5 py-1 text-table"
@@ -40,11 +38,6 @@ export function SelectField<T extends string>({
           </option>
         ))}
       </select>
-      {hint && (
-        <p id={`${id}-hint`} className="text-micro text-ink-500">
-          {hint}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }

@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import { scaleLinear } from "d3-scale";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { decimateMinMax } from "../model/decimate";
@@ -14,6 +15,30 @@ export interface FeTrace {
 const W = 520,
   H = 190,
   M = { l: 52, r: 10, t: 12, b: 26 };
+
+/** A horizontal limit across the plot (seating, crush) with its label at the right end. */
+function LimitLine({
+  y,
+  stroke,
+  dash,
+  name,
+  children,
+}: {
+  y: number;
+  stroke: string;
+  dash: string;
+  name: string;
+  children: ReactNode;
+}) {
+  return (
+    <>
+      <line x1={M.l} x2={W - M.r} y1={y} y2={y} stroke={stroke} strokeDasharray={dash} data-line={name} />
+      <text x={W - M.r} y={y - 3} textAnchor="end" fontSize="9" fill={stroke}>
+        {children}
+      </text>
+    </>
+  );
+}
 
 /**
  * The "Seat trace": gasket stress along the gasket path at minimum and target preload, with the
@@ -72,33 +97,13 @@ export function StressProfileChart({
         {profile.boltSOnPathMm.map((s, i) => (
           <line key={i} x1={x(s)} x2={x(s)} y1={H - M.b} y2={H - M.b + 5} stroke="#1d2739" />
         ))}
-        <line
-          x1={M.l}
-          x2={W - M.r}
-          y1={y(seatingMpa)}
-          y2={y(seatingMpa)}
-          stroke="#b3261e"
-          strokeDasharray="5 3"
-          data-line="seating"
-        />
-        <text x={W - M.r} y={y(seatingMpa) - 3} textAnchor="end" fontSize="9" fill="#b3261e">
+        <LimitLine y={y(seatingMpa)} stroke="#b3261e" dash="5 3" name="seating">
           required seating {formatQuantity("stress", seatingMpa, units, 3)}
-        </text>
+        </LimitLine>
         {crushMpa !== null && (
-          <>
-            <line
-              x1={M.l}
-              x2={W - M.r}
-              y1={y(crushMpa)}
-              y2={y(crushMpa)}
-              stroke="#1d2739"
-              strokeDasharray="2 2"
-              data-line="crush"
-            />
-            <text x={W - M.r} y={y(crushMpa) - 3} textAnchor="end" fontSize="9" fill="#1d2739">
-              crush limit {formatQuantity("stress", crushMpa, units, 3)}
-            </text>
-          </>
+          <LimitLine y={y(crushMpa)} stroke="#1d2739" dash="2 2" name="crush">
+            crush limit {formatQuantity("stress", crushMpa, units, 3)}
+          </LimitLine>
         )}
         <path d={line(1)} fill="none" stroke="#c98d2b" strokeWidth="1.2" data-series="target" />
         <path

@@ -1,5 +1,7 @@
 "use client";
 import { useState } from "react";
+import { FieldFrame } from "@/features/ui/field-frame";
+import { typedInputProps } from "./form-parts";
 import { fieldDomId } from "./form-context";
 
 interface Props {
@@ -43,17 +45,11 @@ export function TextField({
         : null;
   const message = error ?? serverError;
   return (
-    <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-micro text-ink-600">
-        {label}
-      </label>
+    <FieldFrame look="dense" id={id} label={label} message={message}>
       <input
-        id={id}
-        className={`rounded border px-2 py-1 text-table ${message ? "border-verdict-fail bg-verdict-fail-bg" : "border-ink-200"}`}
+        {...typedInputProps(id, message)}
         value={raw}
         disabled={disabled}
-        aria-invalid={message ? true : undefined}
-        aria-describedby={message ? `${id}-error` : undefined}
         onChange={(e) => {
           setRaw(e.target.value);
           const m = check(e.target.value);
@@ -67,11 +63,6 @@ export function TextField({
           if (!m && raw.trim() !== value) onCommit(raw.trim());
         }}
       />
-      {message && (
-        <p id={`${id}-error`} role="alert" className="text-micro text-verdict-fail">
-          {message}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }

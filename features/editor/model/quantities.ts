@@ -26,46 +26,35 @@ interface Conversion {
 }
 
 const same = (v: number) => v;
+const conversion = (unit: string, toDisplay = same, fromDisplay = same): Conversion => ({
+  unit,
+  toDisplay,
+  fromDisplay,
+});
+const both = (SI: Conversion, US: Conversion): Record<UnitSystem, Conversion> => ({ SI, US });
+// Ratios, angles and counts read the same in both systems.
+const sameInBoth = (unit: string) => both(conversion(unit), conversion(unit));
+// Moments and torques are stored in N·mm and shown in N·m or ft·lb.
+const moment = both(conversion("N·m", nmmToNm, nmToNmm), conversion("ft·lb", nmmToFtLb, ftLbToNmm));
 
 // Temperatures are not in the core's units.ts; °F = °C·9/5 + 32 is an exact definition.
 const TABLE: Record<Quantity, Record<UnitSystem, Conversion>> = {
-  length: {
-    SI: { unit: "mm", toDisplay: same, fromDisplay: same },
-    US: { unit: "in", toDisplay: mmToIn, fromDisplay: inToMm },
-  },
-  stress: {
-    SI: { unit: "MPa", toDisplay: same, fromDisplay: same },
-    US: { unit: "psi", toDisplay: mpaToPsi, fromDisplay: psiToMpa },
-  },
-  force: {
-    SI: { unit: "N", toDisplay: same, fromDisplay: same },
-    US: { unit: "lbf", toDisplay: nToLbf, fromDisplay: lbfToN },
-  },
-  // Moments and torques are stored in N·mm and shown in N·m or ft·lb.
-  moment: {
-    SI: { unit: "N·m", toDisplay: nmmToNm, fromDisplay: nmToNmm },
-    US: { unit: "ft·lb", toDisplay: nmmToFtLb, fromDisplay: ftLbToNmm },
-  },
-  torque: {
-    SI: { unit: "N·m", toDisplay: nmmToNm, fromDisplay: nmToNmm },
-    US: { unit: "ft·lb", toDisplay: nmmToFtLb, fromDisplay: ftLbToNmm },
-  },
-  temperature: {
-    SI: { unit: "°C", toDisplay: same, fromDisplay: same },
-    US: { unit: "°F", toDisplay: (c) => (c * 9) / 5 + 32, fromDisplay: (f) => ((f - 32) * 5) / 9 },
-  },
-  ratio: {
-    SI: { unit: "", toDisplay: same, fromDisplay: same },
-    US: { unit: "", toDisplay: same, fromDisplay: same },
-  },
-  angle: {
-    SI: { unit: "°", toDisplay: same, fromDisplay: same },
-    US: { unit: "°", toDisplay: same, fromDisplay: same },
-  },
-  count: {
-    SI: { unit: "", toDisplay: same, fromDisplay: same },
-    US: { unit: "", toDisplay: same, fromDisplay: same },
-  },
+  length: both(conversion("mm"), conversion("in", mmToIn, inToMm)),
+  stress: both(conversion("MPa"), conversion("psi", mpaToPsi, psiToMpa)),
+  force: both(conversion("N"), conversion("lbf", nToLbf, lbfToN)),
+  moment,
+  torque: moment,
+  temperature: both(
+    conversion("°C"),
+    conversion(
+      "°F",
+      (c) => (c * 9) / 5 + 32,
+      (f) => ((f - 32) * 5) / 9,
+    ),
+  ),
+  ratio: sameInBoth(""),
+  angle: sameInBoth("°"),
+  count: sameInBoth(""),
 };
 
 export function unitLabel(q: Quantity, units: UnitSystem): string {
