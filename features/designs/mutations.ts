@@ -7,7 +7,7 @@ import { recordActivity } from "@/features/activity/queries";
 import { sha256OfJson } from "@/features/analysis/content-hash";
 import { isoString } from "@/db/dates";
 import { parseAnalysis, runAnalysis } from "./run-analysis";
-import type { JointAnalysis, WorkingRevisionStatus } from "./workspace-contract";
+import type { JointAnalysis, SaveWorkingRevisionInput, WorkingRevisionStatus } from "./workspace-contract";
 
 // Writes of the designs feature. Callers have validated the document and checked the policy;
 // these still scope every statement by organisation, and a refused save writes nothing.
@@ -81,15 +81,10 @@ export async function createDesign(
   });
 }
 
-export interface SaveWorkingRevisionCommand {
+/** A save as the editor sends it (the workspace contract), and who saves it in which organisation. */
+export interface SaveWorkingRevisionCommand extends SaveWorkingRevisionInput {
   organizationId: string;
   userId: string;
-  designId: string;
-  baseVersion: number;
-  document: JointDesign;
-  name?: string;
-  equipmentTag?: string;
-  patternOrigin?: { suggestion: number; of: number };
 }
 
 export type SaveOutcome =

@@ -49,33 +49,29 @@ const coverFields = (bolts: string): TemplateField[] => [
   mm("gasketWidthMm", "Gasket width", "20", "The band sits inside the bolts"),
 ];
 
+// The ring-gasket and the full-face round flange take the same dimensions.
+const roundFlangeFields: TemplateField[] = [
+  mm("outsideDiameterMm", "Outside diameter", "400"),
+  mm("boreDiameterMm", "Bore diameter", "200", "0 for a blind flange"),
+  mm("boltCircleDiameterMm", "Bolt circle diameter", "340"),
+  count("12"),
+  size("M20"),
+  mm("flangeThicknessMm", "Flange thickness", "30"),
+];
+
 export const TEMPLATE_CHOICES: readonly TemplateChoice[] = [
   {
     kind: "circular-flange",
     label: "Round flange by dimensions",
     description: "A circular flange pair with a bore, sized by its outside and bolt circle diameters.",
-    fields: [
-      mm("outsideDiameterMm", "Outside diameter", "400"),
-      mm("boreDiameterMm", "Bore diameter", "200", "0 for a blind flange"),
-      mm("boltCircleDiameterMm", "Bolt circle diameter", "340"),
-      count("12"),
-      size("M20"),
-      mm("flangeThicknessMm", "Flange thickness", "30"),
-    ],
+    fields: roundFlangeFields,
   },
   {
     kind: "full-face-flange",
     label: "Full-face round flange",
     description:
       "A round flange pair with one gasket sheet over the whole face, through the bolt holes (elastomer with fabric insertion).",
-    fields: [
-      mm("outsideDiameterMm", "Outside diameter", "400"),
-      mm("boreDiameterMm", "Bore diameter", "200", "0 for a blind flange"),
-      mm("boltCircleDiameterMm", "Bolt circle diameter", "340"),
-      count("12"),
-      size("M20"),
-      mm("flangeThicknessMm", "Flange thickness", "30"),
-    ],
+    fields: roundFlangeFields,
   },
   {
     kind: "pipe-flange",

@@ -93,15 +93,6 @@ const PIPE_OUTSIDE_DIAMETER_MM: Record<string, number> = {
   "24": 609.6,
 };
 
-function flangeLayer(role: "flange" | "cover", thicknessMm: number, materialName: string): Layer {
-  return { role, thicknessMm, materialName, modulusMpa: STEEL_MODULUS_MPA };
-}
-
-function withEqualBolts(design: Omit<JointDesign, "bolts">, count: number): JointDesign {
-  const length = getBoltPathLengthMm(design);
-  return { ...design, bolts: placeBoltsEqually(length, count) };
-}
-
 function base(
   meta: DocumentMeta,
 ): Pick<JointDesign, "schemaVersion" | "name" | "description" | "units"> &
@@ -112,6 +103,47 @@ function base(
     units: meta.units,
     ...defaultJointSettings(),
   };
+}
+
+// How the templates bolt a joint [practice]: metric 8.8 bolts with washers through carbon steel
+// plate, or B7 studs without washers through the forged steel of a catalogue pipe flange.
+const BOLTING = {
+  metric: { materialId: "iso-898-1-8.8", withWasher: true, plateMaterial: "Carbon steel plate" },
+  pipe: { materialId: "astm-a193-b7", withWasher: false, plateMaterial: "ASTM A105 forged steel" },
+} as const;
+
+type JointParts = Omit<JointDesign, "bolts" | "fastener" | "layers" | keyof ReturnType<typeof base>>;
+
+/**
+ * A template's design: two plates (a flange or a cover, then a flange) clamping the gasket, the
+ * fastener sized for that grip, and `count` bolts spaced equally along the bolt path.
+ */
+function boltedJoint(
+  meta: DocumentMeta,
+  parts: JointParts,
+  bolting: { kind: keyof typeof BOLTING; designation: string; holeDiameterMm: number; count: number },
+  plates: { first: "flange" | "cover"; firstMm: number; flangeMm: number },
+): JointDesign {
+  const { materialId, withWasher, plateMaterial } = BOLTING[bolting.kind];
+  const plate = (role: "flange" | "cover", thicknessMm: number): Layer => ({
+    role,
+    thicknessMm,
+    materialName: plateMaterial,
+    modulusMpa: STEEL_MODULUS_MPA,
+  });
+  const design: Omit<JointDesign, "bolts"> = {
+    ...base(meta),
+    ...parts,
+    fastener: buildFastener({
+      designation: bolting.designation,
+      materialId,
+      holeDiameterMm: bolting.holeDiameterMm,
+      clampedMm: plates.firstMm + plates.flangeMm + parts.gasket.material.thicknessMm,
+      withWasher,
+    }),
+    layers: [plate(plates.first, plates.firstMm), { role: "gasket" }, plate("flange", plates.flangeMm)],
+  };
+  return { ...design, bolts: placeBoltsEqually(getBoltPathLengthMm(design), bolting.count) };
 }
 
 export function buildCircularFlange(meta: DocumentMeta, p: CircularFlangeParams): JointDesign {
@@ -130,9 +162,9 @@ function roundFlange(meta: DocumentMeta, p: CircularFlangeParams, form: "ring" |
     form === "ring" ? DEFAULT_GASKET_TYPE_ID : FULL_FACE_GASKET_TYPE_ID,
   );
   const innerDiameterMm = p.boreDiameterMm > 0 ? p.boreDiameterMm + 2 * GAP_MM : 2 * GAP_MM;
-  return withEqualBolts(
+  return boltedJoint(
+    meta,
     {
-      ...base(meta),
       outline: { kind: "circle", diameterMm: p.outsideDiameterMm },
       bore: p.boreDiameterMm > 0 ? { kind: "circle", diameterMm: p.boreDiameterMm } : null,
       gasket:
@@ -148,20 +180,9 @@ function roundFlange(meta: DocumentMeta, p: CircularFlangeParams, form: "ring" |
               material: gasket,
             },
       boltPath: { kind: "circle", diameterMm: p.boltCircleDiameterMm },
-      fastener: buildFastener({
-        designation: p.boltSize,
-        materialId: "iso-898-1-8.8",
-        holeDiameterMm: hole,
-        clampedMm: 2 * p.flangeThicknessMm + gasket.thicknessMm,
-        withWasher: true,
-      }),
-      layers: [
-        flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"),
-        { role: "gasket" },
-        flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"),
-      ],
     },
-    p.boltCount,
+    { kind: "metric", designation: p.boltSize, holeDiameterMm: hole, count: p.boltCount },
+    { first: "flange", firstMm: p.flangeThicknessMm, flangeMm: p.flangeThicknessMm },
   );
 }
 
@@ -175,9 +196,9 @@ export function buildPipeFlange(meta: DocumentMeta, p: PipeFlangeParams): JointD
   if (!row) throw new Error(`unknown flange template ${p.flangeTemplateId}`);
   const pipeOd = PIPE_OUTSIDE_DIAMETER_MM[row.nps];
   const gasket = gasketMaterialFromCatalogue(DEFAULT_PIPE_GASKET_TYPE_ID);
-  return withEqualBolts(
+  return boltedJoint(
+    meta,
     {
-      ...base(meta),
       templateId: row.id,
       outline: { kind: "circle", diameterMm: row.outsideDiameterMm },
       bore: { kind: "circle", diameterMm: pipeOd },
@@ -191,20 +212,14 @@ export function buildPipeFlange(meta: DocumentMeta, p: PipeFlangeParams): JointD
         material: gasket,
       },
       boltPath: { kind: "circle", diameterMm: row.boltCircleDiameterMm },
-      fastener: buildFastener({
-        designation: row.boltDesignation,
-        materialId: "astm-a193-b7",
-        holeDiameterMm: row.holeDiameterMm,
-        clampedMm: 2 * p.flangeThicknessMm + gasket.thicknessMm,
-        withWasher: false,
-      }),
-      layers: [
-        flangeLayer("flange", p.flangeThicknessMm, "ASTM A105 forged steel"),
-        { role: "gasket" },
-        flangeLayer("flange", p.flangeThicknessMm, "ASTM A105 forged steel"),
-      ],
     },
-    row.boltCount,
+    {
+      kind: "pipe",
+      designation: row.boltDesignation,
+      holeDiameterMm: row.holeDiameterMm,
+      count: row.boltCount,
+    },
+    { first: "flange", firstMm: p.flangeThicknessMm, flangeMm: p.flangeThicknessMm },
   );
 }
 
@@ -226,9 +241,9 @@ export function coverBandLayout(p: CoverParams): {
 function buildCover(meta: DocumentMeta, p: CoverParams, outline: Outline, bore: Outline | null): JointDesign {
   const { holeDiameterMm, bandCentreOffsetMm } = coverBandLayout(p);
   const gasket = gasketMaterialFromCatalogue(DEFAULT_GASKET_TYPE_ID);
-  return withEqualBolts(
+  return boltedJoint(
+    meta,
     {
-      ...base(meta),
       outline,
       bore,
       gasket: {
@@ -237,20 +252,9 @@ function buildCover(meta: DocumentMeta, p: CoverParams, outline: Outline, bore: 
         material: gasket,
       },
       boltPath: { kind: "offset", offsetMm: p.boltEdgeDistanceMm },
-      fastener: buildFastener({
-        designation: p.boltSize,
-        materialId: "iso-898-1-8.8",
-        holeDiameterMm,
-        clampedMm: p.coverThicknessMm + p.flangeThicknessMm + gasket.thicknessMm,
-        withWasher: true,
-      }),
-      layers: [
-        flangeLayer("cover", p.coverThicknessMm, "Carbon steel plate"),
-        { role: "gasket" },
-        flangeLayer("flange", p.flangeThicknessMm, "Carbon steel plate"),
-      ],
     },
-    p.boltCount,
+    { kind: "metric", designation: p.boltSize, holeDiameterMm, count: p.boltCount },
+    { first: "cover", firstMm: p.coverThicknessMm, flangeMm: p.flangeThicknessMm },
   );
 }
 
