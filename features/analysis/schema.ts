@@ -8,10 +8,16 @@
  */
 import { z } from "zod";
 import { multilineText, plainText } from "@/features/forms/plain-text";
-import type { FlangeDesignInputs, GasketMaterial, JointDesign, Outline } from "./core/design";
+import type {
+  FlangeDesignInputs,
+  GasketMaterial,
+  JointDesign,
+  Outline,
+  StockedBoltMaterial,
+} from "./core/design";
 import { MAX_BOLT_COUNT } from "./core/design";
 import { INPUT_BOUNDS, boundMessage, describeBound, type BoundName, type InputBound } from "./core/bounds";
-import { validateJointDesign } from "./core/validate";
+import { MAX_STOCKED_RANGES, validateJointDesign } from "./core/validate";
 import { SUGGESTION_LIMITS, type SuggestionRequest } from "./core/suggest/request";
 
 /**
@@ -97,10 +103,41 @@ const terminationSchema = z.discriminatedUnion("kind", [
   }),
 ]);
 
+const positiveMpa = (what: string) =>
+  z
+    .number({ error: `${what} must be a number` })
+    .finite()
+    .gt(0, { message: `${what} must be greater than 0` });
+
+/** A Stockroom bolting row as stored (core/design.ts `StockedBoltMaterial`): the values its own schema accepted. */
+export const stockedBoltMaterialSchema = z
+  .object({
+    name: plainText().min(1).max(120),
+    modulusMpa: positiveMpa("modulusMpa"),
+    ranges: z
+      .array(
+        z
+          .object({
+            maxDiameterMm: positiveMpa("maxDiameterMm"),
+            proofMpa: positiveMpa("proofMpa").nullable(),
+            yieldMpa: positiveMpa("yieldMpa"),
+            tensileMpa: positiveMpa("tensileMpa"),
+            allowableMpa: positiveMpa("allowableMpa").nullable(),
+          })
+          .strict(),
+      )
+      .min(1, { message: "give at least one strength range" })
+      .max(MAX_STOCKED_RANGES, { message: `at most ${MAX_STOCKED_RANGES} strength ranges` }),
+    source: plainText().min(1).max(300),
+    edition: plainText().max(200),
+  })
+  .strict() satisfies z.ZodType<StockedBoltMaterial>;
+
 const fastenerSchema = z.object({
   designation: plainText().min(1).max(20),
   threadSeries: z.enum(["metric-coarse", "unified-8un", "unc"]),
   materialId: plainText().min(1).max(60),
+  stockedMaterial: stockedBoltMaterialSchema.nullable().optional(),
   form: z.enum(["stud", "hex-bolt"]),
   lengthMm: bounded("boltLengthMm"),
   holeDiameterMm: bounded("holeDiameterMm"),
@@ -285,6 +322,13 @@ export const suggestionRequestSchema = z
       .min(1, { message: "give at least one bolt material, or leave materialIds out for the design's" })
       .max(SUGGESTION_LIMITS.materials, { message: `at most ${SUGGESTION_LIMITS.materials} bolt materials` })
       .optional(),
+    stockedBolting: z
+      .array(z.object({ id: plainText().min(1).max(60), material: stockedBoltMaterialSchema }).strict())
+      .max(SUGGESTION_LIMITS.stockedRows, {
+        message: `at most ${SUGGESTION_LIMITS.stockedRows} Stockroom bolting rows`,
+      })
+      .optional(),
+    units: z.enum(["SI", "US"], { error: 'must be "SI" or "US"' }).optional(),
     offsetRangeMm: z
       .object({
         fromMm: lengthMm("fromMm"),

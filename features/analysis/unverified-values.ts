@@ -14,7 +14,7 @@
  */
 import type { UnverifiedValue } from "@/db/tables/reviews";
 import type { JointDesign } from "./core/design";
-import { getBoltMaterialById, getStrengthForDiameter } from "./core/catalogue/bolt-materials";
+import { boltMaterialOf, getBoltMaterialById, getStrengthForDiameter } from "./core/catalogue/bolt-materials";
 import { getFlangeTemplateById } from "./core/catalogue/flange-templates";
 import { getGasketTypeById } from "./core/catalogue/gaskets";
 import { getNutById } from "./core/catalogue/nuts";
@@ -115,7 +115,7 @@ function catalogueValues(
       return out;
     }
     case "bolt-allowables": {
-      const m = getBoltMaterialById(rowId);
+      const m = materialRow(rowId, document);
       if (!m) return null;
       const values = [...new Set(m.ranges.map((r) => r.allowableMpa).filter((v): v is number => v !== null))];
       return [{ what: `Bolt allowable stress S (${m.name})`, value: values.map(mpa).join(" / ") || "—" }];
@@ -167,7 +167,7 @@ function fromCatalogue(document: JointDesign, result: StoredResult): UnverifiedV
     const key = `catalogue:${str(e.table)}:${str(e.rowId)}`;
     const values =
       str(e.table) === "bolt-materials" && threadRow
-        ? boltStrengths(str(e.rowId), str(threadRow.rowId))
+        ? boltStrengths(str(e.rowId), str(threadRow.rowId), document)
         : catalogueValues(e, document);
     if (values === null) {
       out.push({
@@ -184,11 +184,19 @@ function fromCatalogue(document: JointDesign, result: StoredResult): UnverifiedV
   return out;
 }
 
+/** A bolting row by id: the design's own Stockroom copy when it is the design's material, else the catalogue's. */
+function materialRow(rowId: string, document: JointDesign) {
+  return rowId === document.fastener.materialId
+    ? boltMaterialOf(document.fastener)
+    : getBoltMaterialById(rowId);
+}
+
 function boltStrengths(
   materialId: string,
   threadId: string,
+  document: JointDesign,
 ): { what: string; value: string; sub?: string }[] | null {
-  const m = getBoltMaterialById(materialId);
+  const m = materialRow(materialId, document);
   if (!m) return null;
   const s = getStrengthForDiameter(m, getThreadById(threadId)?.nominalDiameterMm ?? 0);
   const parts = [

@@ -78,12 +78,41 @@ export type BoltTermination =
   /** Stud or cap screw into a tapped member of thickness t2 below the clamped layers. */
   | { kind: "tapped-hole"; engagementMm: number; memberThicknessMm: number; memberModulusMpa: number };
 
+/** One strength range of a bolting material: sizes up to `maxDiameterMm` (inclusive), MPa. */
+export interface BoltStrengthRange {
+  maxDiameterMm: number;
+  proofMpa: number | null;
+  yieldMpa: number;
+  tensileMpa: number;
+  /** ASME VIII-1 Appendix 2 allowable at room temperature (null: none). */
+  allowableMpa: number | null;
+}
+
+/** A Stockroom bolting row as stored (features/library): name, modulus, strengths by size, provenance. */
+export interface StockedBoltMaterial {
+  name: string;
+  modulusMpa: number;
+  /** At least one range; a size above the last range takes the last range's strengths. */
+  ranges: BoltStrengthRange[];
+  source: string;
+  edition: string;
+}
+
 export interface Fastener {
   /** Nominal size as in the thread catalogue: "M20", "3/4", "1-1/8". */
   designation: string;
   threadSeries: ThreadSeries;
-  /** Id of a row in catalogue/bolt-materials.ts, e.g. "astm-a193-b7". */
+  /**
+   * Id of a row in catalogue/bolt-materials.ts, e.g. "astm-a193-b7", or, with `stockedMaterial`,
+   * the Stockroom row's id ("org:<uuid>").
+   */
   materialId: string;
+  /**
+   * A copy of the organisation's Stockroom bolting row this fastener is made of (its properties as
+   * stored); absent or null: the catalogue row `materialId` names. Changing the Stockroom row later
+   * does not change the design.
+   */
+  stockedMaterial?: StockedBoltMaterial | null;
   /** "stud": threaded full length; "hex-bolt": shank plus standard thread length. */
   form: "stud" | "hex-bolt";
   lengthMm: number;

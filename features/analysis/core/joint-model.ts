@@ -10,7 +10,7 @@ import { buildGasketRegion, type GasketRegion } from "./gasket-region";
 import { offsetShape, outlineToShape, shapeAreaMm2, signedDistanceToShape } from "./shape";
 import { findThread, type ThreadRow } from "./catalogue/threads";
 import {
-  getBoltMaterialById,
+  boltMaterialOf,
   getStrengthForDiameter,
   type BoltMaterialRow,
   type StrengthRange,
@@ -110,7 +110,7 @@ export function buildJointModel(design: JointDesign): JointModel {
   const notes: string[] = [];
   const f = design.fastener;
   const thread = findThread(f.designation, f.threadSeries)!;
-  const material = getBoltMaterialById(f.materialId)!;
+  const material = boltMaterialOf(f)!;
   const d = thread.nominalDiameterMm;
   const strength = getStrengthForDiameter(material, d);
   const nut = findNut(thread.designation, f.nutSeries ?? "iso-4032") ?? null;

@@ -4,7 +4,7 @@
  * (`bolts[3].position: bolt hole lies outside the flange outline`). The zod schema calls this
  * from a refinement; `analyzeJoint` refuses a design with issues.
  */
-import type { JointDesign, Outline, PointMm } from "./design";
+import type { JointDesign, Outline, PointMm, StockedBoltMaterial } from "./design";
 import { MAX_BOLT_COUNT } from "./design";
 import { INPUT_BOUNDS, WORK_LIMITS, boundMessage, withinBound, type InputBound } from "./bounds";
 import { getBoltPath, getBoltPoint, outlineToPolyline } from "./geometry";
@@ -12,7 +12,7 @@ import { pathToPolyline } from "./path";
 import { buildPointHash, forEachNear } from "./point-hash";
 import { outlineToShape, signedDistanceToShape, type Shape } from "./shape";
 import { findThread } from "./catalogue/threads";
-import { getBoltMaterialById } from "./catalogue/bolt-materials";
+import { boltMaterialOf } from "./catalogue/bolt-materials";
 import { validateFlangeInputs } from "./flange-design/validate-flange-inputs";
 import * as fm from "./fixed-math";
 
@@ -39,6 +39,37 @@ export class DesignRefusedError extends Error {
   ) {
     super(`${prefix}: ${issues.map(formatIssue).join("; ")}`);
   }
+}
+
+/** Most strength ranges one bolting material may hold (the Stockroom's rows hold a few). */
+export const MAX_STOCKED_RANGES = 20;
+
+/**
+ * A Stockroom bolting row copied into a design (or offered to the pattern search): every number
+ * finite and positive, at least one range, tensile not below yield. `at` prefixes the paths.
+ */
+export function validateStockedMaterial(
+  m: StockedBoltMaterial,
+  at = "fastener.stockedMaterial",
+): DesignIssue[] {
+  const issues: DesignIssue[] = [];
+  const positive = (path: string, v: number | null) => {
+    if (v !== null && !(Number.isFinite(v) && v > 0))
+      issues.push({ path: `${at}.${path}`, message: "must be greater than 0" });
+  };
+  positive("modulusMpa", m.modulusMpa);
+  if (m.ranges.length === 0 || m.ranges.length > MAX_STOCKED_RANGES)
+    issues.push({ path: `${at}.ranges`, message: `give from 1 to ${MAX_STOCKED_RANGES} strength ranges` });
+  m.ranges.forEach((r, i) => {
+    positive(`ranges[${i}].maxDiameterMm`, r.maxDiameterMm);
+    positive(`ranges[${i}].proofMpa`, r.proofMpa);
+    positive(`ranges[${i}].yieldMpa`, r.yieldMpa);
+    positive(`ranges[${i}].tensileMpa`, r.tensileMpa);
+    positive(`ranges[${i}].allowableMpa`, r.allowableMpa);
+    if (r.tensileMpa < r.yieldMpa)
+      issues.push({ path: `${at}.ranges[${i}].tensileMpa`, message: "must not be below the yield strength" });
+  });
+  return issues;
 }
 
 function outlineNumbers(o: Outline): [string, number, InputBound][] {
@@ -187,8 +218,8 @@ export function validateJointDesign(design: JointDesign): DesignIssue[] {
   const thread = findThread(f.designation, f.threadSeries);
   if (!thread)
     add("fastener.designation", `no ${f.threadSeries} thread "${f.designation}" in the thread catalogue`);
-  if (!getBoltMaterialById(f.materialId))
-    add("fastener.materialId", `unknown bolt material "${f.materialId}"`);
+  if (f.stockedMaterial) issues.push(...validateStockedMaterial(f.stockedMaterial));
+  else if (!boltMaterialOf(f)) add("fastener.materialId", `unknown bolt material "${f.materialId}"`);
   if (thread && f.holeDiameterMm < thread.nominalDiameterMm)
     add("fastener.holeDiameterMm", "bolt hole is smaller than the bolt");
   if (f.washerActsAs !== undefined && f.washerActsAs !== "rigid" && f.washerActsAs !== "flexible")

@@ -47,8 +47,18 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
         label="Bolt material"
         value={f.materialId}
         disabled={ctx.readOnly}
-        onChange={(materialId) => setFastener({ ...f, materialId })}
-        options={BOLT_MATERIALS.map((m) => ({ value: m.id, label: m.name }))}
+        onChange={(materialId) => {
+          if (materialId === f.materialId) return;
+          // A catalogue material replaces the Stockroom copy the design carried.
+          const { stockedMaterial: _copy, ...rest } = f;
+          setFastener({ ...rest, materialId });
+        }}
+        options={[
+          ...(f.stockedMaterial
+            ? [{ value: f.materialId, label: `${f.stockedMaterial.name} (copied from our Stockroom)` }]
+            : []),
+          ...BOLT_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
+        ]}
       />
       <NumberField
         ctx={ctx}

@@ -1,8 +1,5 @@
 "use client";
-import {
-  getBoltMaterialById,
-  getStrengthForDiameter,
-} from "@/features/analysis/core/catalogue/bolt-materials";
+import { boltMaterialOf, getStrengthForDiameter } from "@/features/analysis/core/catalogue/bolt-materials";
 import { FLANGE_MATERIALS } from "@/features/analysis/core/catalogue/flange-materials";
 import { findThread } from "@/features/analysis/core/catalogue/threads";
 import type { FlangeDesignInputs } from "@/features/analysis/core/design";
@@ -43,7 +40,7 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
   const hasCover = d.layers.some((l) => l.role === "cover");
   const f = d.fastener;
   const nominal = findThread(f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
-  const row = getBoltMaterialById(f.materialId);
+  const row = boltMaterialOf(f);
   const catalogueAllowable = row ? (getStrengthForDiameter(row, nominal)?.allowableMpa ?? null) : null;
   const entered = f.enteredAllowable ?? null;
   const setBoltAllowable = (next: { valueMpa: number; source: string } | null) =>

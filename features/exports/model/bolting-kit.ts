@@ -1,5 +1,5 @@
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
-import { getBoltMaterialById } from "@/features/analysis/core/catalogue/bolt-materials";
+import { boltMaterialOf } from "@/features/analysis/core/catalogue/bolt-materials";
 import { findNutHeight, MATING_NUT_GRADES } from "@/features/analysis/core/catalogue/nut-heights";
 import { findNut } from "@/features/analysis/core/catalogue/nuts";
 import { findThread } from "@/features/analysis/core/catalogue/threads";
@@ -52,7 +52,7 @@ export function buildBoltingKit(design: JointDesign, units: UnitSystem = design.
   const nutSeries = f.nutSeries ?? "iso-4032";
   const nutRow = findNut(f.designation, nutSeries);
   const height = thread ? findNutHeight(f.designation, thread.nominalDiameterMm, nutSeries) : undefined;
-  const material = getBoltMaterialById(f.materialId)?.name ?? f.materialId;
+  const material = boltMaterialOf(f)?.name ?? f.materialId;
   const tapped = f.termination.kind === "tapped-hole" ? f.termination : null;
   const u = lengthUnitFor(units);
   const dec = u.suffix === "mm" ? 1 : 3;

@@ -1,5 +1,5 @@
 import type { JointDesign, TighteningMethod, UnitSystem } from "@/features/analysis/core/design";
-import { getBoltMaterialById } from "@/features/analysis/core/catalogue/bolt-materials";
+import { boltMaterialOf } from "@/features/analysis/core/catalogue/bolt-materials";
 import { mmToIn, nmmToFtLb, nmmToNm, nToLbf } from "@/features/analysis/core/units";
 import { stringifyCsv } from "@/features/forms/csv-cells";
 import type { BoltRow } from "./bolt-rows";
@@ -77,7 +77,7 @@ function stretchPerNewton(design: Pick<JointDesign, "fastener">, r: StoredPlan):
   const kb = r?.stiffness?.boltStiffnessNPerMm;
   const d = r?.fastener?.nominalDiameterMm;
   const as = r?.fastener?.tensileStressAreaMm2;
-  const e = getBoltMaterialById(design.fastener.materialId)?.modulusMpa;
+  const e = boltMaterialOf(design.fastener)?.modulusMpa;
   if (!finite(kb) || !finite(d) || !finite(as) || !finite(e)) return null;
   // A through bolt has a nut or head at both ends of its grip; into a tapped hole the core's grip
   // already reaches half the engagement, so only the nut or head end is added.

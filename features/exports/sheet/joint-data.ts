@@ -1,7 +1,7 @@
 import "server-only";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { SheetUnits } from "./format";
-import { getBoltMaterialById } from "@/features/analysis/core/catalogue/bolt-materials";
+import { boltMaterialOf } from "@/features/analysis/core/catalogue/bolt-materials";
 
 const METHOD: Record<string, string> = {
   "torque-wrench": "Torque wrench",
@@ -61,7 +61,7 @@ export function jointDataItems(d: JointDesign, u: SheetUnits): { label: string; 
     { label: "Bolts", value: `${d.bolts.length} × ${d.fastener.designation} ${d.fastener.form}` },
     {
       label: "Bolt material",
-      value: getBoltMaterialById(d.fastener.materialId)?.name ?? d.fastener.materialId,
+      value: boltMaterialOf(d.fastener)?.name ?? d.fastener.materialId,
     },
     { label: "Hole diameter", value: L(d.fastener.holeDiameterMm) },
     { label: "Fastener length", value: L(d.fastener.lengthMm) },

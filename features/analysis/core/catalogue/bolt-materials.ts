@@ -5,6 +5,7 @@
  */
 import { inToMm, ksiToMpa } from "../units";
 import type { Confidence, Provenance } from "./confidence";
+import type { Fastener, StockedBoltMaterial } from "../design";
 
 export interface StrengthRange {
   /** Upper limit of the nominal diameter range, mm (inclusive). */
@@ -260,6 +261,46 @@ export const BOLT_MATERIALS: readonly BoltMaterialRow[] = [
 
 export function getBoltMaterialById(id: string): BoltMaterialRow | undefined {
   return BOLT_MATERIALS.find((m) => m.id === id);
+}
+
+/**
+ * A Stockroom bolting row as a material row. The organisation's row carries no confidence tag of
+ * ours, so its values are tagged "mem" (never read as published); the row's own source travels
+ * with it. Ranges are put in ascending order of size.
+ */
+export function stockedBoltMaterialRow(id: string, m: StockedBoltMaterial): BoltMaterialRow {
+  return {
+    id,
+    name: m.name,
+    modulusMpa: m.modulusMpa,
+    ranges: [...m.ranges]
+      .sort((a, b) => a.maxDiameterMm - b.maxDiameterMm)
+      .map((r) => ({
+        maxDiameterMm: r.maxDiameterMm,
+        proofMpa: r.proofMpa,
+        yieldMpa: r.yieldMpa,
+        tensileMpa: r.tensileMpa,
+        allowableMpa: r.allowableMpa,
+        strengthConfidence: "mem",
+        allowableConfidence: r.allowableMpa === null ? null : "mem",
+      })),
+    allowableSource: m.ranges.some((r) => r.allowableMpa !== null) ? m.source : null,
+    source: m.source,
+    edition: m.edition,
+    confidence: "mem",
+  };
+}
+
+/**
+ * The material a fastener is made of: its embedded Stockroom row when it has one, else the
+ * catalogue row its `materialId` names (undefined when there is none).
+ */
+export function boltMaterialOf(
+  f: Pick<Fastener, "materialId" | "stockedMaterial">,
+): BoltMaterialRow | undefined {
+  return f.stockedMaterial
+    ? stockedBoltMaterialRow(f.materialId, f.stockedMaterial)
+    : getBoltMaterialById(f.materialId);
 }
 
 /**

@@ -61,9 +61,12 @@ export function computeAsmeAppendix2(model: JointModel): {
   const wm2N = b * reactionLengthMm * gm.yMpa;
   const entered = d.fastener.enteredAllowable ?? null;
   const S = entered ? entered.valueMpa : model.strength.allowableMpa;
+  const stocked = d.fastener.stockedMaterial ?? null;
   const allowableLabel = entered
     ? `entered by the designer: ${entered.source}`
-    : (model.strength.allowableConfidence ?? "mem");
+    : stocked
+      ? `Stockroom row ${stocked.name}: ${stocked.source}`
+      : (model.strength.allowableConfidence ?? "mem");
   notes.push(
     `Effective width b by the ${branch} branch (${geometry.unit}): b0 = ${geometry.b0.toFixed(4)}, b = ${geometry.b.toFixed(4)}, G = ${geometry.g.toFixed(4)} ${geometry.unit}.`,
   );

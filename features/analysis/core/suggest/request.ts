@@ -4,12 +4,20 @@
  * layout constraints. `checkSuggestionRequest` lists every problem (path and message), like
  * `validateJointDesign`; an empty list means the search can run. Lengths in mm.
  */
-import type { BoltPath, BoltPlacement, Fastener, JointDesign, ThreadSeries } from "../design";
+import type {
+  BoltPath,
+  BoltPlacement,
+  Fastener,
+  JointDesign,
+  StockedBoltMaterial,
+  ThreadSeries,
+  UnitSystem,
+} from "../design";
 import { MAX_BOLT_COUNT } from "../design";
 import { findThread, type ThreadRow, THREADS } from "../catalogue/threads";
 import { getBoltMaterialById } from "../catalogue/bolt-materials";
 import { getBoltPath, projectOntoPath, getBoltPoint } from "../geometry";
-import { validateJointDesign, type DesignIssue } from "../validate";
+import { validateJointDesign, validateStockedMaterial, type DesignIssue } from "../validate";
 import { inToMm } from "../units";
 import { intervalLengthMm, inInterval, widenAndMerge, type PathInterval } from "./layout";
 
@@ -20,12 +28,29 @@ export type KeepOutZone =
   /** Path parameter, 0…1 of the path length from the top centre line, clockwise. */
   | { kind: "parameter"; from: number; to: number; label?: string };
 
+/** A Stockroom bolting row offered to the search: its id (the fastener's `materialId` once applied) and its values as stored. */
+export interface StockedBoltingRow {
+  id: string;
+  material: StockedBoltMaterial;
+}
+
 export interface SuggestionRequest {
   design: JointDesign;
   /** Allowed sizes; default every catalogue size of the design's thread family (metric or inch). */
   sizes?: { designation: string; threadSeries: ThreadSeries }[];
-  /** Allowed bolt materials (catalogue ids); default the design's. */
+  /**
+   * Allowed bolt materials: catalogue ids or ids of `stockedBolting` rows. Default: every
+   * `stockedBolting` row when there are any, else the design's own material.
+   */
   materialIds?: string[];
+  /**
+   * The Stockroom's bolting rows the search may use, with their properties as stored (the API
+   * resolves them from the caller's organisation; the CLI reads them from an export file). A
+   * candidate of such a row carries a copy of it in `fastener.stockedMaterial`.
+   */
+  stockedBolting?: StockedBoltingRow[];
+  /** Unit system of the lengths in the result's sentences (blocking reasons, message); numbers stay mm. Default SI. */
+  units?: UnitSystem;
   /**
    * Bolt-path offsets inward from the outline to try, mm: an offset path's `offsetMm`, or for a
    * bolt circle on a circular outline (outline diameter − bolt circle)/2. Default: the design's.
@@ -53,6 +78,7 @@ export interface SuggestionRequest {
 export const SUGGESTION_LIMITS = {
   sizes: 40,
   materials: 8,
+  stockedRows: 200,
   offsets: 21,
   keepOuts: 32,
   combinations: 400,
@@ -113,7 +139,27 @@ export function sizesOf(req: SuggestionRequest): ThreadRow[] {
 }
 
 export function materialsOf(req: SuggestionRequest): string[] {
-  return [...new Set(req.materialIds ?? [req.design.fastener.materialId])];
+  const stocked = req.stockedBolting ?? [];
+  return [
+    ...new Set(
+      req.materialIds ?? (stocked.length > 0 ? stocked.map((r) => r.id) : [req.design.fastener.materialId]),
+    ),
+  ];
+}
+
+/**
+ * The Stockroom values behind a material id of the request: a `stockedBolting` row, or the
+ * design's own Stockroom copy; null for a catalogue material; undefined for an unknown id.
+ */
+export function stockedMaterialFor(
+  req: SuggestionRequest,
+  id: string,
+): StockedBoltMaterial | null | undefined {
+  const row = req.stockedBolting?.find((r) => r.id === id);
+  if (row) return row.material;
+  const f = req.design.fastener;
+  if (f.stockedMaterial && f.materialId === id) return f.stockedMaterial;
+  return getBoltMaterialById(id) ? null : undefined;
 }
 
 /** Keep-out zones as fractions of the design's bolt path length. */
@@ -160,14 +206,26 @@ export function clearanceHoleMm(t: ThreadRow): number {
     : t.nominalDiameterMm + inToMm(0.125);
 }
 
+/** The fastener made of another material: a catalogue id, or a Stockroom row whose copy it then carries. */
+function withMaterial(f: Fastener, materialId: string, stocked: StockedBoltMaterial | null): Fastener {
+  const { stockedMaterial: _copy, ...rest } = f;
+  return stocked ? { ...rest, materialId, stockedMaterial: stocked } : { ...rest, materialId };
+}
+
 /**
  * The design's fastener in another size and material: the design's own size keeps its hole and
  * washer; another size gets its clearance hole and the washer scaled with d. The length is set
- * later from the grip (see search.ts).
+ * later from the grip (see search.ts). `stocked`: the Stockroom row behind `materialId` (null:
+ * a catalogue material).
  */
-export function fastenerFor(f: Fastener, t: ThreadRow, materialId: string): Fastener {
+export function fastenerFor(
+  f: Fastener,
+  t: ThreadRow,
+  materialId: string,
+  stocked: StockedBoltMaterial | null = null,
+): Fastener {
   const own = findThread(f.designation, f.threadSeries);
-  if (own?.id === t.id) return { ...f, materialId };
+  if (own?.id === t.id) return withMaterial(f, materialId, stocked);
   const scale = t.nominalDiameterMm / (own?.nominalDiameterMm ?? t.nominalDiameterMm);
   const hole = clearanceHoleMm(t);
   const washer = f.washer
@@ -177,10 +235,9 @@ export function fastenerFor(f: Fastener, t: ThreadRow, materialId: string): Fast
       }
     : null;
   return {
-    ...f,
+    ...withMaterial(f, materialId, stocked),
     designation: t.designation,
     threadSeries: t.series,
-    materialId,
     holeDiameterMm: hole,
     washer,
     enteredAllowable: materialId === f.materialId ? f.enteredAllowable : null,
@@ -205,13 +262,26 @@ export function checkSuggestionRequest(req: SuggestionRequest): DesignIssue[] {
         add(`sizes[${i}]`, `no ${s.threadSeries} thread "${s.designation}" in the thread catalogue`);
     });
   }
-  if (req.materialIds) {
-    if (req.materialIds.length === 0 || req.materialIds.length > lim.materials)
-      add("materialIds", `give between 1 and ${lim.materials} bolt materials`);
+  const stocked = req.stockedBolting ?? [];
+  if (stocked.length > lim.stockedRows)
+    add("stockedBolting", `at most ${lim.stockedRows} Stockroom bolting rows`);
+  const stockedIds = new Set<string>();
+  stocked.forEach((r, i) => {
+    if (getBoltMaterialById(r.id))
+      add(`stockedBolting[${i}].id`, `"${r.id}" is a catalogue material; give the Stockroom row its own id`);
+    else if (stockedIds.has(r.id)) add(`stockedBolting[${i}].id`, `the id "${r.id}" is given twice`);
+    stockedIds.add(r.id);
+    issues.push(...validateStockedMaterial(r.material, `stockedBolting[${i}].material`));
+  });
+  const chosen = materialsOf(req);
+  const chosenPath = req.materialIds ? "materialIds" : "stockedBolting";
+  if (chosen.length === 0 || chosen.length > lim.materials)
+    add(chosenPath, `give between 1 and ${lim.materials} bolt materials`);
+  if (req.materialIds)
     req.materialIds.forEach((id, i) => {
-      if (!getBoltMaterialById(id)) add(`materialIds[${i}]`, `unknown bolt material "${id}"`);
+      if (stockedMaterialFor(req, id) === undefined)
+        add(`materialIds[${i}]`, `unknown bolt material "${id}"`);
     });
-  }
   const r = req.offsetRangeMm;
   if (r) {
     if (currentOffsetMm(req.design) === null)

@@ -17,13 +17,14 @@
  *
  * Example: a 600 × 400 mm full-face cover with M16 → M12…M36 candidates, the first with the fewest bolts.
  */
-import type { JointDesign } from "../design";
+import type { JointDesign, StockedBoltMaterial, UnitSystem } from "../design";
 import { analyzeJoint, type JointAnalysis } from "../analyze";
 import { buildJointModel } from "../joint-model";
 import { spacingLimits } from "../checks/spacing";
 import { requiredBoltLengthMm } from "../checks/bolt-checks";
 import { computeAsmeAppendix2 } from "../checks/asme-appendix2";
 import { getBoltMaterialById } from "../catalogue/bolt-materials";
+import { mmToIn, mpaToPsi } from "../units";
 import type { ThreadRow } from "../catalogue/threads";
 import { DesignRefusedError, formatIssue } from "../validate";
 import { countBounds, layoutBolts, type LayoutFrame } from "./layout";
@@ -36,11 +37,12 @@ import {
   materialsOf,
   offsetsOf,
   sizesOf,
+  stockedMaterialFor,
   SUGGESTION_LIMITS,
   type OffsetFrame,
   type SuggestionRequest,
 } from "./request";
-import { judge, ruleAsk, ruleMargins, ruleOf, type RuleMargin } from "./verdict";
+import { judge, moreBoltsHelp, ruleAsk, ruleMargins, ruleOf, type RuleMargin } from "./verdict";
 import { paretoFront } from "./pareto";
 import { WORK_LIMITS } from "../bounds";
 
@@ -113,9 +115,23 @@ export class SuggestionRefusedError extends DesignRefusedError {}
 
 const round = (v: number, k = 1) => Math.round(v * 10 ** k) / 10 ** k;
 
+/** A length for the result's sentences: "72 mm", or in the US system "2.83 in". */
+function lengthText(mm: number, units: UnitSystem): string {
+  return units === "US" ? `${round(mmToIn(mm), 2)} in` : `${round(mm)} mm`;
+}
+
+/** A check's value or limit (number, then unit), lengths and stresses in the request's unit system. */
+function quantityParts(v: number, unit: string, units: UnitSystem): [string, string] {
+  if (units === "US" && unit === "mm") return [String(round(mmToIn(v), 3)), "in"];
+  if (units === "US" && unit === "MPa") return [String(Math.round(mpaToPsi(v))), "psi"];
+  return [String(round(v, 2)), unit];
+}
+
 interface Combo {
   thread: ThreadRow;
   materialId: string;
+  /** The Stockroom row behind `materialId`, or null for a catalogue material. */
+  stocked: StockedBoltMaterial | null;
   frame: OffsetFrame;
 }
 
@@ -123,7 +139,7 @@ interface Combo {
 function designFor(base: JointDesign, c: Combo, layout: LayoutFrame, n: number): JointDesign | null {
   const bolts = layoutBolts(layout, n);
   if (!bolts) return null;
-  const fastener = fastenerFor(base.fastener, c.thread, c.materialId);
+  const fastener = fastenerFor(base.fastener, c.thread, c.materialId, c.stocked);
   const d: JointDesign = { ...base, fastener, boltPath: c.frame.boltPath, bolts };
   const needed = requiredBoltLengthMm(buildJointModel(d));
   const own =
@@ -157,7 +173,7 @@ function candidateOf(c: Combo, design: JointDesign, a: JointAnalysis, carried: s
     threadSeries: c.thread.series,
     nominalDiameterMm: c.thread.nominalDiameterMm,
     materialId: c.materialId,
-    materialName: getBoltMaterialById(c.materialId)?.name ?? c.materialId,
+    materialName: c.stocked?.name ?? getBoltMaterialById(c.materialId)?.name ?? c.materialId,
     offsetMm: c.frame.offsetMm,
     boltPath: c.frame.boltPath,
     pitchMm: pitchRange(a),
@@ -182,13 +198,17 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
   const pipePattern = isPipeFlange(base) && req.straddleCentreLines !== false;
   const judging = { pipePattern, allowLayoutWarnings: req.allowLayoutWarnings === true };
   const clearance = req.minToolClearanceMm ?? 0;
+  const units = req.units ?? "SI";
+  const len = (mm: number) => lengthText(mm, units);
   const maxAnalyses = req.maxAnalyses ?? SUGGESTION_LIMITS.defaultAnalyses;
   const nCap = Math.min(512, Math.floor(WORK_LIMITS.pathSamples.max / base.estimator.samplesPerPitch));
   const combos: Combo[] = [];
   for (const offsetMm of offsetsOf(req)) {
     const frame = frameFor(req, offsetMm);
-    for (const materialId of materialsOf(req))
-      for (const thread of sizesOf(req)) combos.push({ thread, materialId, frame });
+    for (const materialId of materialsOf(req)) {
+      const stocked = stockedMaterialFor(req, materialId) ?? null;
+      for (const thread of sizesOf(req)) combos.push({ thread, materialId, stocked, frame });
+    }
   }
   const found: PatternCandidate[] = [];
   const blocked: BlockedCombination[] = [];
@@ -214,7 +234,10 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
     const layout: LayoutFrame = {
       pathLengthMm: c.frame.pathLengthMm,
       fixed: c.frame.fixed,
-      keepOuts: keepOutsMm(c.frame, fastenerFor(base.fastener, c.thread, c.materialId).holeDiameterMm),
+      keepOuts: keepOutsMm(
+        c.frame,
+        fastenerFor(base.fastener, c.thread, c.materialId, c.stocked).holeDiameterMm,
+      ),
     };
     const L = layout.pathLengthMm;
     const probe = designFor(base, c, layout, Math.max(4, layout.fixed.length + 2 * layout.keepOuts.length));
@@ -243,7 +266,7 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
       return block(
         maxRule,
         b.gapMm,
-        `a keep-out leaves a ${round(b.gapMm)} mm gap, over the ${round(maxPitch)} mm largest pitch for ${c.thread.designation}`,
+        `a keep-out leaves a ${len(b.gapMm)} gap, over the ${len(maxPitch)} largest pitch for ${c.thread.designation}`,
       );
     // Two anchors (the bolts at a keep-out's ends, fixed bolts) closer than the smallest pitch: no
     // count spreads them, so the smallest-pitch rule blocks, not the largest.
@@ -252,8 +275,8 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
         minRule,
         b.short.lengthMm,
         b.short.acrossKeepOut
-          ? `the bolts at the ends of a keep-out stand ${round(b.short.lengthMm)} mm apart, under the ${round(minPitch)} mm smallest pitch for ${c.thread.designation} (${minRule})`
-          : `fixed bolts and keep-out ends leave a ${round(b.short.lengthMm)} mm span, under the ${round(minPitch)} mm smallest pitch for ${c.thread.designation} (${minRule})`,
+          ? `the bolts at the ends of a keep-out stand ${len(b.short.lengthMm)} apart, under the ${len(minPitch)} smallest pitch for ${c.thread.designation} (${minRule})`
+          : `fixed bolts and keep-out ends leave a ${len(b.short.lengthMm)} span, under the ${len(minPitch)} smallest pitch for ${c.thread.designation} (${minRule})`,
       );
     const asme = computeAsmeAppendix2(model).result;
     if (asme.requiredAreaMm2 !== null) {
@@ -270,8 +293,8 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
       const needs =
         loRule === "gasket.seating" || loRule === "asme.app2.bolt-area"
           ? `needs at least ${lo} bolts`
-          : `needs a pitch of at most ${round(maxPitch)} mm (${lo} bolts)`;
-      const allows = hi < 1 ? "no count" : `at most ${hi} (pitch ≥ ${round(minPitch)} mm, ${minRule})`;
+          : `needs a pitch of at most ${len(maxPitch)} (${lo} bolts)`;
+      const allows = hi < 1 ? "no count" : `at most ${hi} (pitch ≥ ${len(minPitch)}, ${minRule})`;
       return block(loRule, densest, `${c.thread.designation} ${needs}; the spacing allows ${allows}`);
     }
     let n = lo;
@@ -302,12 +325,13 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
         found.push(candidateOf(c, design, a, v.carried));
         return;
       }
-      const first = v.blocking[0];
+      // The check that ends the scan is the one to name: one more bolts do not help, when there is one.
+      const first = (!v.moreBoltsMayHelp && v.blocking.find((x) => !moreBoltsHelp(x))) || v.blocking[0];
       const pitch = pitchRange(a).max;
       last = {
         rule: ruleOf(first.id),
         pitch,
-        reason: `${n} × ${c.thread.designation}: ${first.title} (${first.status}${first.value !== null ? `, ${round(first.value, 2)} ${first.unit}` : ""}${first.limit !== null ? ` against ${round(first.limit, 2)}` : ""})`,
+        reason: `${n} × ${c.thread.designation}: ${first.title} (${first.status}${first.value !== null ? `, ${quantityParts(first.value, first.unit, units).join(" ")}` : ""}${first.limit !== null ? ` against ${quantityParts(first.limit, first.unit, units)[0]}` : ""})`,
       };
       if (!v.moreBoltsMayHelp) break;
       let next = n + step;
@@ -329,7 +353,7 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
   return {
     candidates,
     blocked,
-    message: candidates.length > 0 ? null : explainNothing(blocked, cancelled, truncated),
+    message: candidates.length > 0 ? null : explainNothing(blocked, cancelled, truncated, units),
     combinations: combos.length,
     analyses,
     truncated,
@@ -343,6 +367,7 @@ export function explainNothing(
   blocked: BlockedCombination[],
   cancelled: boolean,
   truncated: boolean,
+  units: UnitSystem = "SI",
 ): string {
   if (cancelled) return "The search was cancelled before any pattern qualified.";
   if (blocked.length === 0)
@@ -351,7 +376,7 @@ export function explainNothing(
   const largest = blocked[blocked.length - 1];
   if (rules.size === 1) {
     const rule = largest.rule;
-    const at = largest.pitchMm !== null ? ` at ${largest.pitchMm} mm pitch` : "";
+    const at = largest.pitchMm !== null ? ` at ${lengthText(largest.pitchMm, units)} pitch` : "";
     return `No size up to ${largest.designation} ${ruleAsk(rule)}${at}: ${largest.reason}.${truncated ? " (The work cap ended the search early.)" : ""}`;
   }
   const bySize = new Map<string, BlockedCombination>();

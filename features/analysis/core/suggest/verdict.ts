@@ -129,6 +129,13 @@ export interface Verdict {
   moreBoltsMayHelp: boolean;
 }
 
+/** True when more bolts move this blocking check towards holding (a pitch band above 6·d, seating, …). */
+export function moreBoltsHelp(c: Check): boolean {
+  const rule = ruleOf(c.id);
+  if (rule === "spacing.pitch-band") return (c.value ?? 0) > 6;
+  return MORE_BOLTS_HELP.has(rule) && !FEWER_BOLTS_HELP.has(rule);
+}
+
 /** Applies the counting above. */
 export function judge(checks: readonly Check[], o: JudgeOptions): Verdict {
   const blocking: Check[] = [];
@@ -138,13 +145,7 @@ export function judge(checks: readonly Check[], o: JudgeOptions): Verdict {
     if (c.status === "fail" || (c.status === "warn" && warningDisqualifies(rule, o))) blocking.push(c);
     else if (c.status === "warn" || c.status === "accepted-by-rating") carried.add(rule);
   }
-  const moreBoltsMayHelp =
-    blocking.length > 0 &&
-    blocking.every((c) => {
-      const rule = ruleOf(c.id);
-      if (rule === "spacing.pitch-band") return (c.value ?? 0) > 6;
-      return MORE_BOLTS_HELP.has(rule) && !FEWER_BOLTS_HELP.has(rule);
-    });
+  const moreBoltsMayHelp = blocking.length > 0 && blocking.every(moreBoltsHelp);
   return { ok: blocking.length === 0, blocking, carried: [...carried], moreBoltsMayHelp };
 }
 

@@ -212,6 +212,21 @@ describe("an impossible request", () => {
     expect(result.blocked.every((b) => b.rule === "gasket.seating")).toBe(true);
   });
 
+  it("in US customary units says the same in inches, the numbers unchanged", () => {
+    const design = rectangularCover({ widthMm: 500, heightMm: 340, boltCount: 16, coverThicknessMm: 40 });
+    design.gasket.material = { ...design.gasket.material, qMinMpa: 150 };
+    const req = { design, sizes: M("M20", "M24", "M30", "M36") };
+    const si = suggestPatterns(req);
+    const us = suggestPatterns({ ...req, units: "US" });
+    expect(us.blocked.map((b) => b.pitchMm)).toEqual(si.blocked.map((b) => b.pitchMm));
+    const pitch = si.blocked[si.blocked.length - 1].pitchMm!;
+    // 25.4 mm = 1 in exactly (the core's units.ts).
+    const inches = Math.round((pitch / 25.4) * 100) / 100;
+    expect(us.message).toContain(`No size up to M36 seats the gasket at ${inches} in pitch`);
+    expect(us.message).not.toMatch(/\d mm/);
+    expect(us.message).toMatch(/pitch ≥ \d+(\.\d+)? in, spacing\.pitch-band/);
+  });
+
   it("a keep-out longer than any allowed pitch is named", () => {
     const design = rectangularCover({ widthMm: 500, heightMm: 340, boltCount: 16, coverThicknessMm: 40 });
     const result = suggestPatterns({
