@@ -93,5 +93,13 @@ export const unitSystemSchema = z.enum(["SI", "US"], { error: "Unit system must 
 
 export const designIdSchema = uuid;
 
-/** POST /api/v1/suggestions: the pattern search's request, its design held to the saved document's limits. */
-export const suggestionApiSchema = suggestionRequestSchema.extend({ design: designDocumentSchema });
+/**
+ * POST /api/v1/suggestions: the pattern search's request, its design held to the saved document's
+ * limits. Stockroom bolting rows are named in `materialIds` by their Stockroom id ("org:<uuid>",
+ * or "builtin:<catalogue id>"); the server reads their values from the caller's organisation, so
+ * the body cannot carry `stockedBolting` itself.
+ */
+export const suggestionApiSchema = suggestionRequestSchema
+  .omit({ stockedBolting: true })
+  .extend({ design: designDocumentSchema })
+  .strict();

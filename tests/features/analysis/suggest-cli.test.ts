@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { promisify } from "node:util";
 import { describe, expect, it } from "vitest";
-import { rectangularCover } from "./core/fixtures";
+import { circularFlange, rectangularCover } from "./core/fixtures";
 
 // `npm run suggest -- request.json` as a real process (tsx scripts/suggest.ts): the ranked
 // candidates with their key numbers and the cautions, the blocking rule when nothing qualifies,
@@ -76,4 +76,92 @@ describe("npm run suggest", () => {
     );
     expect((usage as { code: number }).code).toBe(2);
   }, 60_000);
+
+  describe("--bolting: stocked bolting from the Stockroom's export", () => {
+    // Invented Stockroom rows (our demo data): a low-yield stud stock in two size ranges.
+    const csv = [
+      "name,modulus_mpa,max_diameter_mm,proof_mpa,yield_mpa,tensile_mpa,allowable_mpa,source,edition",
+      "Halden Creek yard stud stock,200000,24,,250,420,,Kestrel Ridge stores certificate KR-0042,2026",
+      "Halden Creek yard stud stock,200000,48,,240,410,,Kestrel Ridge stores certificate KR-0042,2026",
+    ].join("\n");
+    const flange = circularFlange({ boltCount: 8, flangeThicknessMm: 40 });
+    const request = {
+      design: flange,
+      sizes: [{ designation: "3/4", threadSeries: "unc" }],
+      allowLayoutWarnings: true,
+    };
+    const write = (name: string, text: string) => {
+      const f = path.join(dir, name);
+      writeFileSync(f, text);
+      return f;
+    };
+
+    it("a stocked CSV's weaker grade fails the bolt stress check that B7 passes (exit 3, the rule named)", async () => {
+      expect((await suggest(request)).code).toBe(0);
+      const out = await suggest(request, "--bolting", write("stockroom-bolting.csv", csv), "--json");
+      expect(out.code).toBe(3);
+      const result = JSON.parse(out.stdout);
+      expect(result.blocked.map((b: { rule: string; materialId: string }) => [b.rule, b.materialId])).toEqual(
+        [["bolt.assembly-stress-max", "csv:2"]],
+      );
+      expect(result.message).toMatch(/Assembly bolt stress at maximum preload/);
+    }, 60_000);
+
+    it("reads the Stockroom listing's JSON: built-in rows as catalogue materials, our own rows with their values", async () => {
+      const listing = {
+        rows: [
+          {
+            id: "builtin:astm-a193-b7",
+            origin: "builtin",
+            rowId: "astm-a193-b7",
+            name: "ASTM A193 B7",
+            modulusMpa: 205000,
+            ranges: [
+              { maxDiameterMm: 64, proofMpa: null, yieldMpa: 724, tensileMpa: 862, allowableMpa: 172 },
+            ],
+            source: "catalogue",
+            edition: "",
+            hidden: false,
+          },
+          {
+            id: "org:00000000-0000-4000-8000-000000000042",
+            origin: "organization",
+            rowId: "00000000-0000-4000-8000-000000000042",
+            name: "Halden Creek yard stud stock",
+            modulusMpa: 200000,
+            ranges: [
+              { maxDiameterMm: 48, proofMpa: null, yieldMpa: 250, tensileMpa: 420, allowableMpa: null },
+            ],
+            source: "Kestrel Ridge stores certificate KR-0042",
+            edition: "2026",
+            confidence: "organisation",
+          },
+        ],
+      };
+      const out = await suggest(
+        request,
+        "--bolting",
+        write("bolting.json", JSON.stringify(listing)),
+        "--json",
+      );
+      expect(out.code).toBe(0);
+      const result = JSON.parse(out.stdout);
+      expect(result.combinations).toBe(2);
+      expect(new Set(result.candidates.map((c: { materialId: string }) => c.materialId))).toEqual(
+        new Set(["astm-a193-b7"]),
+      );
+      expect(result.blocked[0].materialId).toBe("org:00000000-0000-4000-8000-000000000042");
+    }, 60_000);
+
+    it("a bad bolting file is refused with its line (exit 1), a missing file name is a usage error (exit 2)", async () => {
+      const bad = await suggest(
+        request,
+        "--bolting",
+        write("bad-bolting.csv", csv.replace(",250,420,", ",250,120,")),
+      );
+      expect(bad.code).toBe(1);
+      expect(bad.stderr).toMatch(/Row 2, field tensile_mpa: must not be below the yield strength/);
+      expect((await suggest(request, "--bolting")).code).toBe(2);
+    }, 60_000);
+  });
 });

@@ -13,7 +13,7 @@ import {
   type OrganizationFixture,
 } from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";
-import { rectangularCover } from "../analysis/core/fixtures";
+import { circularFlange, rectangularCover } from "../analysis/core/fixtures";
 
 // POST /api/v1/suggestions called with a real session (real PostgreSQL) and the real analysis
 // pool: a valid request gets ranked candidates, each of which passes every check when the core
@@ -101,6 +101,126 @@ describe("POST /api/v1/suggestions", () => {
     const capped = await post({ design, maxAnalyses: 5000 });
     expect(capped.status).toBe(422);
     expect((await capped.json()).error.fieldErrors.maxAnalyses[0]).toMatch(/at most 2000/);
+  });
+});
+
+describe("POST /api/v1/suggestions with stocked bolting", () => {
+  const design = rectangularCover({ widthMm: 500, heightMm: 340, boltCount: 16, coverThicknessMm: 40 });
+  // Invented Stockroom rows (our own demo data): a low-yield stud stock of this organisation and
+  // a row of another organisation, which this caller may not use.
+  const yard = {
+    name: "Halden Creek yard stud stock",
+    modulus_mpa: 200_000,
+    ranges: JSON.stringify([
+      { maxDiameterMm: 48, proofMpa: null, yieldMpa: 250, tensileMpa: 420, allowableMpa: null },
+    ]),
+    source: "Kestrel Ridge stores test certificate KR-0042 (demo data)",
+  };
+  let own: string;
+  let foreign: string;
+  let other: OrganizationFixture<"olga">;
+  beforeAll(async () => {
+    other = await createOrganizationWithMembers(db, { olga: ["designer"] });
+    own = (
+      await db
+        .insertInto("library_bolting")
+        .values({ organization_id: org.organizationId, ...yard })
+        .returning("id")
+        .executeTakeFirstOrThrow()
+    ).id;
+    foreign = (
+      await db
+        .insertInto("library_bolting")
+        .values({ organization_id: other.organizationId, ...yard, name: "Elsewhere studs" })
+        .returning("id")
+        .executeTakeFirstOrThrow()
+    ).id;
+  });
+  afterAll(async () => {
+    await db.deleteFrom("library_bolting").where("id", "in", [own, foreign]).execute();
+    await other.cleanup();
+  });
+
+  it("a stocked row's values decide: the size that qualifies with B7 fails the bolt stress check with the weaker stock", async () => {
+    // 50 ksi on the root area with the torque scatter: below B7's yield, above the stock's 250 MPa.
+    const flange = circularFlange({ boltCount: 8, flangeThicknessMm: 40 });
+    const sizes = [{ designation: "3/4", threadSeries: "unc" as const }];
+    const ask = (materialIds: string[]) =>
+      post({ design: flange, sizes, materialIds, allowLayoutWarnings: true }).then(async (r) => {
+        expect(r.status).toBe(200);
+        return (await r.json()) as SuggestionResult;
+      });
+    const b7 = await ask(["builtin:astm-a193-b7"]);
+    expect(b7.candidates.length).toBeGreaterThan(0);
+    const stocked = await ask([`org:${own}`]);
+    expect(stocked.candidates).toEqual([]);
+    expect(stocked.blocked.map((b) => b.rule)).toEqual(["bolt.assembly-stress-max"]);
+  });
+
+  it("candidates of a stocked row carry its values, pass every check and keep them when saved", async () => {
+    const response = await post({ design, sizes: M("M16", "M20"), materialIds: [`org:${own}`] });
+    expect(response.status).toBe(200);
+    const result = (await response.json()) as SuggestionResult;
+    expect(result.candidates.length).toBeGreaterThan(0);
+    for (const c of result.candidates) {
+      expect(c.materialId).toBe(`org:${own}`);
+      expect(c.materialName).toBe(yard.name);
+      expect(c.design.fastener.stockedMaterial).toMatchObject({ name: yard.name, modulusMpa: 200_000 });
+      const a = analyzeJoint(c.design);
+      expect(a.fastener.yieldMpa).toBe(250);
+      expect(a.checks.filter((x) => x.status === "fail").map((x) => x.id)).toEqual([]);
+      expect(judge(a.checks, { pipePattern: false }).blocking.map((x) => x.id)).toEqual([]);
+    }
+    const created = await designsPost(
+      appRequest("/api/v1/designs", {
+        method: "POST",
+        cookie: dana,
+        body: { name: "Stocked cover", equipmentTag: "HC-E-302", template: COVER_TEMPLATE },
+      }),
+    );
+    const { designId } = await created.json();
+    const saved = await designPut(
+      appRequest(`/api/v1/designs/${designId}`, {
+        method: "PUT",
+        cookie: dana,
+        body: {
+          document: result.candidates[0].design,
+          baseVersion: 1,
+          patternOrigin: { suggestion: 1, of: 1 },
+        },
+      }),
+      { params: Promise.resolve({ designId }) },
+    );
+    expect(saved.status).toBe(200);
+    const stored = await db
+      .selectFrom("design_revisions")
+      .select("document")
+      .where("design_id", "=", designId)
+      .executeTakeFirstOrThrow();
+    expect(stored.document.fastener.materialId).toBe(`org:${own}`);
+    expect(stored.document.fastener.stockedMaterial?.ranges[0].yieldMpa).toBe(250);
+  });
+
+  it("another organisation's row, an unknown id and rows in the body are 422s naming them", async () => {
+    const theirs = await post({ design, sizes: M("M16"), materialIds: ["iso-898-1-8.8", `org:${foreign}`] });
+    expect(theirs.status).toBe(422);
+    const body = await theirs.json();
+    expect(body.error.message).toBe(`Unknown Stockroom bolting row: org:${foreign}.`);
+    expect(body.error.fieldErrors["materialIds[1]"][0]).toBe(
+      `no bolting row "org:${foreign}" in your organisation's Stockroom`,
+    );
+    const none = await post({ design, sizes: M("M16"), materialIds: ["org:not-a-row"] });
+    expect(none.status).toBe(422);
+    expect((await none.json()).error.fieldErrors["materialIds[0]"][0]).toMatch(
+      /no bolting row "org:not-a-row"/,
+    );
+    const smuggled = await post({
+      design,
+      sizes: M("M16"),
+      stockedBolting: [{ id: "org:x", material: { ...yard, modulusMpa: 1 } }],
+    });
+    expect(smuggled.status).toBe(422);
+    expect(JSON.stringify(await smuggled.json())).toMatch(/stockedBolting/);
   });
 });
 
