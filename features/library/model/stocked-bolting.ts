@@ -1,6 +1,7 @@
 // Stockroom bolting rows as the pattern search takes them ("stocked bolting"): the row's values
 // as stored, copied into `StockedBoltingRow`s (core/suggest/request.ts). Built-in rows are the
 // catalogue's materials and are offered by their catalogue id instead. Pure (safe on the client).
+import { sortedStrengthRanges } from "@/features/analysis/core/catalogue/bolt-materials";
 import type { StockedBoltMaterial } from "@/features/analysis/core/design";
 import type { StockedBoltingRow } from "@/features/analysis/core/suggest/request";
 import type { BoltingInput } from "../schema";
@@ -13,15 +14,7 @@ export function stockedMaterialOf(row: BoltingValues): StockedBoltMaterial {
   return {
     name: row.name,
     modulusMpa: row.modulusMpa,
-    ranges: [...row.ranges]
-      .sort((a, b) => a.maxDiameterMm - b.maxDiameterMm)
-      .map((r) => ({
-        maxDiameterMm: r.maxDiameterMm,
-        proofMpa: r.proofMpa,
-        yieldMpa: r.yieldMpa,
-        tensileMpa: r.tensileMpa,
-        allowableMpa: r.allowableMpa,
-      })),
+    ranges: sortedStrengthRanges(row.ranges),
     source: row.source,
     edition: row.edition,
   };

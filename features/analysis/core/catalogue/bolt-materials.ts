@@ -5,7 +5,7 @@
  */
 import { inToMm, ksiToMpa } from "../units";
 import type { Confidence, Provenance } from "./confidence";
-import type { Fastener, StockedBoltMaterial } from "../design";
+import type { BoltStrengthRange, Fastener, StockedBoltMaterial } from "../design";
 
 export interface StrengthRange {
   /** Upper limit of the nominal diameter range, mm (inclusive). */
@@ -263,6 +263,19 @@ export function getBoltMaterialById(id: string): BoltMaterialRow | undefined {
   return BOLT_MATERIALS.find((m) => m.id === id);
 }
 
+/** The five stored values of each strength range, in ascending order of size (a copy). */
+export function sortedStrengthRanges(ranges: readonly BoltStrengthRange[]): BoltStrengthRange[] {
+  return [...ranges]
+    .sort((a, b) => a.maxDiameterMm - b.maxDiameterMm)
+    .map((r) => ({
+      maxDiameterMm: r.maxDiameterMm,
+      proofMpa: r.proofMpa,
+      yieldMpa: r.yieldMpa,
+      tensileMpa: r.tensileMpa,
+      allowableMpa: r.allowableMpa,
+    }));
+}
+
 /**
  * A Stockroom bolting row as a material row. The organisation's row carries no confidence tag of
  * ours, so its values are tagged "mem" (never read as published); the row's own source travels
@@ -273,17 +286,11 @@ export function stockedBoltMaterialRow(id: string, m: StockedBoltMaterial): Bolt
     id,
     name: m.name,
     modulusMpa: m.modulusMpa,
-    ranges: [...m.ranges]
-      .sort((a, b) => a.maxDiameterMm - b.maxDiameterMm)
-      .map((r) => ({
-        maxDiameterMm: r.maxDiameterMm,
-        proofMpa: r.proofMpa,
-        yieldMpa: r.yieldMpa,
-        tensileMpa: r.tensileMpa,
-        allowableMpa: r.allowableMpa,
-        strengthConfidence: "mem",
-        allowableConfidence: r.allowableMpa === null ? null : "mem",
-      })),
+    ranges: sortedStrengthRanges(m.ranges).map((r) => ({
+      ...r,
+      strengthConfidence: "mem",
+      allowableConfidence: r.allowableMpa === null ? null : "mem",
+    })),
     allowableSource: m.ranges.some((r) => r.allowableMpa !== null) ? m.source : null,
     source: m.source,
     edition: m.edition,
