@@ -8,6 +8,7 @@ import { analyzeJoint } from "@/features/analysis/core/analyze";
 import { closeAnalysisPool, createAnalysisPool } from "@/server/analysis/pool";
 import { heavyDesign, lightDesign } from "@/tests/setup/analysis-designs";
 import { printMedian } from "./measure";
+import { figure, formatMs } from "./report";
 
 async function longestGapMs(work: () => Promise<unknown>): Promise<{ gap: number; total: number }> {
   let last = performance.now();
@@ -37,13 +38,24 @@ export async function run(): Promise<void> {
     ["in-thread analyzeJoint + JSON (before the pool)", async () => JSON.stringify(analyzeJoint(heavy))],
     ["through the analysis pool", () => pool.run({ document: heavy })],
   ];
+  const stalls: number[] = [];
+  const totals: number[] = [];
   for (const [label, work] of cases) {
     await work();
     const runs: { gap: number; total: number }[] = [];
     for (let i = 0; i < n; i++) runs.push(await longestGapMs(work));
-    printMedian("analysis-pool", `heavy analysis, ${label}: total`, median(runs.map((r) => r.total)), n);
-    printMedian("analysis-pool", `  request thread's longest stall`, median(runs.map((r) => r.gap)), n);
+    totals.push(median(runs.map((r) => r.total)));
+    stalls.push(median(runs.map((r) => r.gap)));
+    printMedian("analysis-pool", `heavy analysis, ${label}: total`, totals.at(-1)!, n);
+    printMedian("analysis-pool", `  request thread's longest stall`, stalls.at(-1)!, n);
   }
+  figure(
+    "Request thread's longest stall during a heavy analysis (512 bolts × 128 samples), through the pool",
+    `${formatMs(stalls[1])}; the analysis took ${formatMs(totals[1])} (medians of ${n})`,
+    {
+      ratio: `in-thread in the same run: ${formatMs(stalls[0])} (${((100 * stalls[1]) / stalls[0]).toFixed(1)} %)`,
+    },
+  );
   await pool.close();
   await closeAnalysisPool();
 }

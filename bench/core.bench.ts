@@ -13,6 +13,7 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import { girthFlange96, rectangularCover } from "@/tests/features/analysis/core/fixtures";
 import { medianMs, printMedian } from "./measure";
 import { runCReference } from "./c-reference";
+import { figure, formatMs } from "./report";
 
 export async function run(): Promise<void> {
   const girth = girthFlange96();
@@ -24,28 +25,59 @@ export async function run(): Promise<void> {
     return d;
   });
   let f = 0;
-  const cases: [string, () => unknown, number][] = [
+  // [printed label, work, runs, the README table's row, its goal]
+  const cases: [string, () => unknown, number, string, string?][] = [
     [
       "96-bolt circle path (both estimators, 64/pitch)",
       () => computeGasketStressProfiles(buildJointModel(girth)),
       200,
+      "Core: 96-bolt path estimate with its joint model (both estimators, 64 samples per pitch)",
+      "≤ 2 ms",
     ],
-    ["96-bolt circle 256×256 grid", () => computeGasketStressGrid(girth, 256, 256), 50],
+    [
+      "96-bolt circle 256×256 grid",
+      () => computeGasketStressGrid(girth, 256, 256),
+      50,
+      "Core: 96-bolt 256 × 256 grid",
+      "≤ 30 ms",
+    ],
     [
       "48-bolt rectangular cover path (both, 64/pitch)",
       () => computeGasketStressProfiles(buildJointModel(rect)),
       200,
+      "Core: 48-bolt rectangular cover path (both estimators, 64 samples per pitch)",
     ],
     [
       "48-bolt rectangular cover 256×256 grid (cone)",
       () => computeGasketStressGrid(rect, 256, 256, { estimator: "cone" }),
       50,
+      "Core: 48-bolt rectangular cover 256 × 256 grid (cone)",
+      "≤ 30 ms",
     ],
-    ["96-bolt circle analyzeJoint (everything)", () => analyzeJoint(girth), 30],
-    ["96-bolt circle previewJoint (drag preview)", () => previewJoint(girth), 200],
-    ["96-bolt circle previewJoint, one bolt dragged", () => previewJoint(frames[f++ % frames.length]), 200],
+    [
+      "96-bolt circle analyzeJoint (everything)",
+      () => analyzeJoint(girth),
+      30,
+      "Core: 96-bolt analyzeJoint (everything)",
+    ],
+    [
+      "96-bolt circle previewJoint (drag preview)",
+      () => previewJoint(girth),
+      200,
+      "Core: 96-bolt previewJoint (drag preview)",
+    ],
+    [
+      "96-bolt circle previewJoint, one bolt dragged",
+      () => previewJoint(frames[f++ % frames.length]),
+      200,
+      "Core: 96-bolt previewJoint, one bolt dragged",
+    ],
   ];
-  for (const [label, fn, n] of cases) printMedian("core", label, medianMs(fn, n), n);
+  for (const [label, fn, n, row, goal] of cases) {
+    const ms = medianMs(fn, n);
+    printMedian("core", label, ms, n);
+    figure(row, `${formatMs(ms)} (median of ${n})`, goal ? { goal } : {});
+  }
 
   // The path estimate alone (model built once, as while a drag re-runs it) against compiled C.
   const model = buildJointModel(girth);
@@ -59,12 +91,18 @@ export async function run(): Promise<void> {
     model.boltPoints.map(() => model.preload.targetN),
     runs,
   );
+  const cRow = "Core: 96-bolt path estimate alone (model built) against the same arithmetic in C";
   if (!c.ok) {
     console.log(`core: C reference skipped: ${c.note}`);
+    figure(cRow, `${formatMs(core)} (median of ${runs})`, { goal: "≤ 3× C", ratio: `C skipped: ${c.note}` });
     return;
   }
   printMedian("core", `same arithmetic in C (${c.compiler} -O2)`, c.medianMs, runs);
   console.log(
     `core: path estimate core / C = ${(core / c.medianMs).toFixed(2)}× (goal ≤ 3×); max |core − C| ${c.maxAbsDiffMpa.toExponential(1)} MPa, ${c.maxAbsDiffMm.toExponential(1)} mm over ${profiles.sampleCount} samples`,
   );
+  figure(cRow, `${formatMs(core)}; C (${c.compiler} -O2) ${formatMs(c.medianMs)} (medians of ${runs})`, {
+    goal: "≤ 3× C",
+    ratio: `${(core / c.medianMs).toFixed(2)}× C; largest difference ${c.maxAbsDiffMpa === 0 && c.maxAbsDiffMm === 0 ? "0 (the same bits)" : `${c.maxAbsDiffMpa.toExponential(1)} MPa, ${c.maxAbsDiffMm.toExponential(1)} mm`}`,
+  });
 }

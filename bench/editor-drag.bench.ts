@@ -8,6 +8,7 @@
  * Prints the median and 95th percentile. Target: under 16 ms a frame.
  */
 import { chromium } from "@playwright/test";
+import { figure, formatMs } from "./report";
 
 const CHROMIUM_ARGS = [
   "--no-sandbox",
@@ -133,6 +134,19 @@ export async function run(): Promise<void> {
     line(`${boltCount}-bolt flange:   of which the core (preview)`, compute);
     line(`${boltCount}-bolt flange: Konva layer draw`, draw);
     line(`${boltCount}-bolt flange: release (full analysis + drawing)`, releases);
+    const stat = (a: number[]) =>
+      `median ${formatMs(quantile(a, 0.5))}, p95 ${formatMs(quantile(a, 0.95))} (${a.length} ${a === releases ? "releases" : "frames"})`;
+    figure(
+      "Drag one bolt on a 96-bolt flange: recompute + redraw per frame",
+      `${stat(frames)}${refused > 0 ? `; ${refused} refused frames left out` : ""}`,
+      { goal: "p95 ≤ 16 ms" },
+    );
+    figure("Drag, per frame: recompute + React update", stat(react));
+    figure("Drag, per frame: of which the core's preview", stat(compute));
+    figure("Drag, per frame: Konva layer draw", stat(draw));
+    figure("Release after a drag (full analysis + drawing, one blocking update)", stat(releases), {
+      goal: "≤ 20 ms",
+    });
     if (refused > 0)
       console.log(
         `editor-drag: ${refused} frames left out: the core refused the dragged layout there (not a speed)`,

@@ -13,6 +13,7 @@ import { runStackCheck, type StackCheckResult } from "@/features/fe-check/joint-
 import { solveStack } from "@/features/fe-check/stack-study";
 import { rectangularCover } from "@/tests/features/analysis/core/fixtures";
 import { printMedian } from "./measure";
+import { figure, formatMs } from "./report";
 
 async function median<T>(n: number, once: () => Promise<T>): Promise<{ ms: number; last: T }> {
   const times: number[] = [];
@@ -33,28 +34,47 @@ function example(name: string): JointDesign {
 }
 
 export async function run(): Promise<void> {
-  const cases: [string, JointDesign, number][] = [
-    ["NPS 6 example (spiral wound)", example("pipe-flange-nps6-spiral-wound"), 3],
-    ["obround manway example", example("obround-manway"), 1],
-    ["rectangular cover example (full face)", example("rectangular-cover-full-face"), 1],
+  // [printed label, design, runs, the README table's row label]
+  const cases: [string, JointDesign, number, string][] = [
+    ["NPS 6 example (spiral wound)", example("pipe-flange-nps6-spiral-wound"), 3, "NPS 6 example"],
+    ["obround manway example", example("obround-manway"), 1, "obround manway example"],
+    [
+      "rectangular cover example (full face)",
+      example("rectangular-cover-full-face"),
+      1,
+      "rectangular cover example (full face)",
+    ],
     [
       "48-bolt rectangular cover 1200×800",
       rectangularCover({ boltCount: 48, widthMm: 1200, heightMm: 800 }),
       1,
+      "48-bolt rectangular cover 1200 × 800",
     ],
   ];
-  for (const [label, design, n] of cases) {
+  for (const [label, design, n, row] of cases) {
     const stack = await median<StackCheckResult>(n, () => runStackCheck(buildJointModel(design), solveStack));
     printMedian("fe-check", `${label}, bolt stack`, stack.ms, n);
     const s = stack.last;
     console.log(
       `fe-check:   loaded radius ${s.estimate.loadedRadiusMm.toFixed(1)} → ${s.fe.loadedRadiusMm.toFixed(1)} mm (${pct(s.estimate.loadedRadiusMm, s.fe.loadedRadiusMm)}), stiffness ${pct(s.estimate.memberStiffnessNPerMm, s.fe.memberStiffnessNPerMm)}, peak ${pct(s.estimate.peakMpa, s.fe.peakMpa)}`,
     );
+    figure(`FE bolt stack: ${row}`, `${formatMs(stack.ms)}${n > 1 ? ` (median of ${n})` : ""}`, {
+      goal: "≤ 10 s",
+    });
     const path = await median<GasketPathFeResult>(n, () => runGasketPathCheck(design));
     printMedian("fe-check", `${label}, gasket path`, path.ms, n);
     const p = path.last;
     console.log(
       `fe-check:   ${p.modelKind}, ${p.mesh.elements} elements, ${p.linearRuns} linear runs, solver ${p.solverSeconds.toFixed(1)} s; min/max ${p.estimate.minMpa.toFixed(2)}/${p.estimate.maxMpa.toFixed(2)} MPa (${p.estimate.estimator}) → FE ${p.fe.minMpa.toFixed(2)}/${p.fe.maxMpa.toFixed(2)} MPa, lifted ${p.estimate.liftedLengthMm.toFixed(0)} → ${p.fe.liftedLengthMm.toFixed(0)} mm`,
+    );
+    figure(
+      `FE gasket path: ${row}`,
+      `${formatMs(path.ms)} (${p.modelKind}, ${p.mesh.elements} elements, solver ${p.solverSeconds.toFixed(1)} s)`,
+      row.startsWith("48-bolt")
+        ? { goal: "≤ 3 min" }
+        : p.modelKind === "circular-sector"
+          ? { goal: "≤ 60 s" }
+          : {},
     );
   }
 }

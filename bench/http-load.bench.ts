@@ -21,6 +21,7 @@ import { sql } from "kysely";
 import { getDb } from "@/db/index";
 import { getLucia, SESSION_COOKIE_NAME } from "@/server/auth/lucia";
 import { girthFlange96 } from "@/tests/features/analysis/core/fixtures";
+import { figure } from "./report";
 
 const DESIGNER = "dana.designer@kestrel-ridge.example";
 const SECONDS = 8;
@@ -61,6 +62,12 @@ async function load(
     errors: result.errors + result.timeouts,
     statuses,
   };
+}
+
+/** A load's cell in the README table: rate and latencies, and any errors. */
+function loadCell(l: Load, body?: string): string {
+  const p99 = l.p99 >= 1000 ? `${(l.p99 / 1000).toFixed(1)} s` : `${l.p99} ms`;
+  return `${l.reqPerSec.toFixed(0)} req/s, median ${l.p50} ms, p99 ${p99}${body ? `, ${body}` : ""}${l.errors > 0 ? `, ${l.errors} errors` : ""}`;
 }
 
 function line(label: string, l: Load): void {
@@ -156,14 +163,15 @@ export async function run(): Promise<void> {
     .orderBy(sql`pg_column_size(design_revisions.result)`, "desc")
     .executeTakeFirstOrThrow();
   const auth = { cookie };
-  const reads: { label: string; designId: string; read10?: Load }[] = [
-    { label: "demo design", designId: demo.id },
-    { label: "96 bolts", designId: bigId },
+  const reads: { label: string; row: string; designId: string; read10?: Load; body?: string }[] = [
+    { label: "demo design", row: "demo design", designId: demo.id },
+    { label: "96 bolts", row: "96-bolt flange", designId: bigId },
   ];
   for (const r of reads) {
     const url = `${appUrl}/api/v1/designs/${r.designId}`;
     const first = await fetch(url, { headers: auth });
     const bytes = (await first.arrayBuffer()).byteLength;
+    r.body = `${(bytes / 1024).toFixed(0)} KB`;
     const etag = first.headers.get("etag");
     console.log(
       `http: design read (${r.label}) body ${(bytes / 1024).toFixed(1)} KB, ETag ${etag ? "yes" : "none"}`,
@@ -171,23 +179,22 @@ export async function run(): Promise<void> {
     await load(url, { connections: 10, headers: auth }, 2); // warm-up
     r.read10 = await load(url, { connections: 10, headers: auth });
     line(`GET /api/v1/designs/:id (${r.label}), 10 connections`, r.read10);
-    line(
-      `GET /api/v1/designs/:id (${r.label}), 50 connections`,
-      await load(url, { connections: 50, headers: auth }),
-    );
+    const read50 = await load(url, { connections: 50, headers: auth });
+    line(`GET /api/v1/designs/:id (${r.label}), 50 connections`, read50);
+    figure(`\`GET /api/v1/designs/:id\`, ${r.row}, 50 connections`, loadCell(read50));
     if (etag) {
       const revalidate = { ...auth, "if-none-match": etag };
-      line(
-        `GET /api/v1/designs/:id (${r.label}), If-None-Match, 10 conn.`,
-        await load(url, { connections: 10, headers: revalidate }),
-      );
+      const fresh = await load(url, { connections: 10, headers: revalidate });
+      line(`GET /api/v1/designs/:id (${r.label}), If-None-Match, 10 conn.`, fresh);
+      figure(`\`GET /api/v1/designs/:id\`, ${r.row}, If-None-Match (304), 10 connections`, loadCell(fresh));
     }
   }
-  line(
-    "GET /api/v1/designs (register page 1), 10 connections",
-    await load(`${appUrl}/api/v1/designs`, { connections: 10, headers: auth }),
-  );
-  line("GET /api/health alone, 10 connections", await load(`${appUrl}/api/health`, { connections: 10 }));
+  const list = await load(`${appUrl}/api/v1/designs`, { connections: 10, headers: auth });
+  line("GET /api/v1/designs (register page 1), 10 connections", list);
+  figure("`GET /api/v1/designs` (the register), 10 connections", loadCell(list), { goal: "≥ 500 req/s" });
+  const healthAlone = await load(`${appUrl}/api/health`, { connections: 10 });
+  line("GET /api/health alone, 10 connections", healthAlone);
+  figure("`GET /api/health` alone, 10 connections", loadCell(healthAlone));
 
   const analysisBody = JSON.stringify({ document });
   const analysisHeaders = { cookie, origin, "content-type": "application/json" };
@@ -202,11 +209,23 @@ export async function run(): Promise<void> {
   ]);
   line("POST /api/v1/analyses (96 bolts), 10 connections", analyses);
   line("  GET /api/health (20/s) while analyses run", health);
+  figure("`POST /api/v1/analyses`, 96 bolts, 10 connections", loadCell(analyses), { goal: "≥ 2× before" });
+  figure("`GET /api/health` (20/s) while those analyses run", loadCell(health), { goal: "p99 < 100 ms" });
 
   for (const r of reads) {
     const tps = pgbench(databaseUrl, member.organization_id, r.designId);
+    const readRow = `\`GET /api/v1/designs/:id\`, ${r.row}, 10 connections`;
     if (typeof tps === "string") {
       console.log(`http: pgbench skipped: ${tps}`);
+      for (const rest of reads.slice(reads.indexOf(r)))
+        figure(
+          `\`GET /api/v1/designs/:id\`, ${rest.row}, 10 connections`,
+          loadCell(rest.read10!, rest.body),
+          {
+            goal: "≥ 30 % of pgbench",
+            ratio: `pgbench skipped: ${tps}`,
+          },
+        );
       break;
     }
     const label = `pgbench, the same design + revision rows (${r.label}), 10 conn.`;
@@ -214,6 +233,14 @@ export async function run(): Promise<void> {
     const share = (100 * r.read10!.reqPerSec) / tps;
     console.log(
       `http: design read (${r.label}) at 10 connections / pgbench = ${share.toFixed(1)} % (goal ≥ 30 %)`,
+    );
+    figure(readRow, loadCell(r.read10!, r.body), {
+      goal: "≥ 30 % of pgbench",
+      ratio: `${share.toFixed(1)} % of pgbench`,
+    });
+    figure(
+      `pgbench on the same design + revision rows (every column), ${r.row}, 10 connections`,
+      `${tps.toFixed(0)} tx/s`,
     );
   }
   await getLucia().invalidateSession(session.id);

@@ -8,6 +8,7 @@
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
+import { figure } from "./report";
 
 interface RouteStats {
   route: string;
@@ -45,6 +46,12 @@ export async function run(): Promise<void> {
     const s = stats.find((x) => x.route === route);
     if (!s) continue;
     const gzip = s.firstLoadChunkPaths.reduce((a, p) => a + gzipOf(p), 0);
+    if (route === "/designs/[designId]")
+      figure(
+        "First-load JavaScript of the Layout desk (`/designs/[designId]`)",
+        `${kb(s.firstLoadUncompressedJsBytes)} uncompressed, ${kb(gzip)} gzip (${s.firstLoadChunkPaths.length} chunks)`,
+        { goal: "≤ 180 kB gzip" },
+      );
     console.log(
       `route-size: ${route.padEnd(44)} first-load JS ${kb(s.firstLoadUncompressedJsBytes).padStart(9)}  gzip ${kb(gzip).padStart(8)}  (${s.firstLoadChunkPaths.length} chunks)`,
     );

@@ -7,6 +7,7 @@ import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { drillingTemplateFor, holeListFor } from "@/features/exports/shop-files";
 import { manyBoltFlange, sheetInputFor } from "@/tests/features/exports/fixtures";
 import { medianMs, printMedian } from "./measure";
+import { figure, formatMs } from "./report";
 
 // Wall time is what a user waits; CPU time (user + system of this process) is printed beside it
 // because a shared 2-core machine under load inflates wall time several-fold.
@@ -34,6 +35,9 @@ async function printSheet(label: string, fn: () => Promise<unknown>, n: number):
   const m = await medianAsyncMs(fn, n);
   printMedian("sheet", label, m.wall, n);
   printMedian("sheet", `${label} [cpu]`, m.cpu, n);
+  figure(`Sheet: ${label}`, `${formatMs(m.wall)}, CPU ${formatMs(m.cpu)} (medians of ${n})`, {
+    goal: "< 500 ms",
+  });
 }
 
 export async function run(): Promise<void> {
@@ -43,27 +47,21 @@ export async function run(): Promise<void> {
   const n = 10;
   await printSheet("96-bolt spacing sheet PDF (A4, SI, approved)", () => renderSpacingSheet(approved), n);
   await printSheet("96-bolt spacing sheet PDF (Letter, US, draft)", () => renderSpacingSheet(draft), n);
-  printMedian(
-    "sheet",
-    "96-bolt hole list CSV",
-    medianMs(() => holeListFor(design, approved.result), 50),
+  const csv = medianMs(() => holeListFor(design, approved.result), 50);
+  printMedian("sheet", "96-bolt hole list CSV", csv, 50);
+  figure("Sheet: 96-bolt hole list CSV", `${formatMs(csv)} (median of 50)`);
+  const dxf = medianMs(
+    () =>
+      drillingTemplateFor(design, approved.result, {
+        designName: design.name,
+        equipmentTag: "E-3301",
+        number: 1,
+        status: "approved",
+        approvedAt: "2026-11-30T09:15:00.000Z",
+        approverName: "Arlo Approver",
+      }),
     50,
   );
-  printMedian(
-    "sheet",
-    "96-bolt drilling template DXF",
-    medianMs(
-      () =>
-        drillingTemplateFor(design, approved.result, {
-          designName: design.name,
-          equipmentTag: "E-3301",
-          number: 1,
-          status: "approved",
-          approvedAt: "2026-11-30T09:15:00.000Z",
-          approverName: "Arlo Approver",
-        }),
-      50,
-    ),
-    50,
-  );
+  printMedian("sheet", "96-bolt drilling template DXF", dxf, 50);
+  figure("Sheet: 96-bolt drilling template DXF", `${formatMs(dxf)} (median of 50)`);
 }

@@ -5,6 +5,7 @@
 import { suggestPatterns } from "@/features/analysis/core/suggest/search";
 import { girthFlange96, rectangularCover } from "@/tests/features/analysis/core/fixtures";
 import { medianMs, printMedian } from "./measure";
+import { figure, formatMs } from "./report";
 
 export async function run(): Promise<void> {
   const cases = [
@@ -15,6 +16,11 @@ export async function run(): Promise<void> {
     const once = suggestPatterns({ design });
     const ms = medianMs(() => suggestPatterns({ design }), 5, 1);
     printMedian("suggest", label, ms, 5);
+    figure(
+      `Pattern search: ${label}`,
+      `${formatMs(ms)} (median of 5; ${once.analyses} full analyses over ${once.combinations} combinations)`,
+      { goal: "≤ 2 s" },
+    );
     const best = once.candidates[0];
     console.log(
       `suggest:   ${once.analyses} full analyses over ${once.combinations} combinations; ${once.candidates.length} candidates${best ? `, first ${best.boltCount} × ${best.designation}` : ""}`,

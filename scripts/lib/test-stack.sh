@@ -80,7 +80,7 @@ stack_build_wait() {
   fi
   say "production build: done $(($(date +%s) - BUILD_STARTED_AT)) s after it was started"
   # Next 16 prints no route sizes; the build's own diagnostics file has them (bench/route-size.bench.ts).
-  npx tsx bench/run.ts route-size || true
+  npx tsx bench/run.ts route-size --no-write || true
 }
 
 # stack_app_up: production build (unless stack_build_start began one), demo data, `next start` on
