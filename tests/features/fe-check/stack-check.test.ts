@@ -53,6 +53,17 @@ describe("bolt stack model (FE cross-check, model 1)", () => {
     expect(res.fe.loadedRadiusMm).toBeGreaterThan(model.bearingDiameterMm / 2);
   });
 
+  it("NPS 6 example: one run at a time and two side by side settle on the same contact set, in fewer runs than the plain loop's 7 (internal)", async () => {
+    const one = await runStackCheck(model, solveStack, { hooks: { parallelRuns: 1 } });
+    const two = await runStackCheck(model, solveStack, { hooks: { parallelRuns: 2 } });
+    for (const r of [one, two]) {
+      expect(r.fe).toEqual(res.fe);
+      expect(r.pressure).toEqual(res.pressure);
+    }
+    expect(one.linearRuns).toBeLessThan(7);
+    expect(two.linearRuns).toBeLessThan(7);
+  }, 120_000);
+
   it("a full-face gasket is a layer of its own with two contact interfaces", () => {
     const m = mapBoltStack(buildJointModel(example("rectangular-cover-full-face")));
     expect(m.spec.layers.map((l) => l.name)).toEqual(["S355 plate", "gasket", "S355 frame"]);
