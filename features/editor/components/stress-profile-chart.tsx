@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import { scaleLinear } from "d3-scale";
+import { linearScale } from "@/features/ui/linear-scale";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { decimateMinMax } from "../model/decimate";
 import type { ProfileView } from "../model/readout-view";
@@ -61,12 +61,8 @@ export function StressProfileChart({
   let feMax = 0;
   if (fe) for (const v of fe.stressMpa) feMax = Math.max(feMax, v);
   const top = Math.max(profile.maxMpa, seatingMpa, crushMpa ?? 0, feMax) * 1.08 || 1;
-  const x = scaleLinear()
-    .domain([0, profile.pathLengthMm])
-    .range([M.l, W - M.r]);
-  const y = scaleLinear()
-    .domain([0, top])
-    .range([H - M.b, M.t]);
+  const x = linearScale([0, profile.pathLengthMm], [M.l, W - M.r]);
+  const y = linearScale([0, top], [H - M.b, M.t]);
   // Two points per pixel column at most (every peak and trough kept): thousands of samples otherwise.
   const trace = decimateMinMax(profile.sMm, profile.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r);
   const line = (f: number) =>

@@ -1,9 +1,9 @@
 /**
- * Colour scale of the gasket-stress heat map and the profile chart (d3-scale). Anchored on the
+ * Colour scale of the gasket-stress heat map and the profile chart. Anchored on the
  * required seating stress: everything below it reads as a warning colour, so an unseated span is
  * visible at a glance whatever the maximum is. Stresses in MPa.
  */
-import { scaleLinear } from "d3-scale";
+import { colourRamp } from "@/features/ui/linear-scale";
 
 export interface HeatScale {
   colour: (stressMpa: number) => string;
@@ -36,9 +36,6 @@ export function buildHeatScale(
   } else {
     stops.push({ stressMpa: top, colour: SEATED, label: "max" });
   }
-  const s = scaleLinear<string>()
-    .domain(stops.map((x) => x.stressMpa))
-    .range(stops.map((x) => x.colour))
-    .clamp(true);
+  const s = colourRamp(stops.map((x) => ({ value: x.stressMpa, colour: x.colour })));
   return { colour: (v) => s(Math.max(0, v)), stops, maxMpa: top };
 }

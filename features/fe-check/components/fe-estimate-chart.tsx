@@ -1,4 +1,4 @@
-import { scaleLinear } from "d3-scale";
+import { linearScale } from "@/features/ui/linear-scale";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { mmToIn, mpaToPsi } from "@/features/analysis/core/units";
 import type { PressurePoint } from "../joint-stack";
@@ -31,12 +31,8 @@ function FeEstimateChart({
   const st = (mpa: number) => (units === "US" ? mpaToPsi(mpa) : mpa);
   let top = 0;
   for (let i = 0; i < xMm.length; i++) top = Math.max(top, st(feMpa[i]), st(estimateMpa[i]));
-  const x = scaleLinear()
-    .domain([len(xMm[0]), len(xMm[xMm.length - 1])])
-    .range([M.l, W - M.r]);
-  const y = scaleLinear()
-    .domain([0, top * 1.08 || 1])
-    .range([H - M.b, M.t]);
+  const x = linearScale([len(xMm[0]), len(xMm[xMm.length - 1])], [M.l, W - M.r]);
+  const y = linearScale([0, top * 1.08 || 1], [H - M.b, M.t]);
   const path = (v: number[]) =>
     xMm.map((s, i) => `${i ? "L" : "M"}${x(len(s)).toFixed(1)},${y(st(v[i])).toFixed(1)}`).join("");
   return (
