@@ -13,9 +13,7 @@ import { projectOntoPath } from "./path";
 import type { EstimatorName } from "./estimator-choice";
 import { DesignRefusedError, validateJointDesign } from "./validate";
 import * as fm from "./fixed-math";
-
-/** Value stored in cells that are not gasket material (outside, bore, bolt holes). */
-export const OUTSIDE_GASKET = -1;
+import { OUTSIDE_GASKET } from "./grid-cell";
 
 export interface GasketStressGrid {
   nx: number;

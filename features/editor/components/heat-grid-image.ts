@@ -1,6 +1,6 @@
 // Paints the core's gasket-stress grid into an offscreen canvas for a Konva Image. Browser only.
 import type { GasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
-import { OUTSIDE_GASKET } from "@/features/analysis/core/gasket-stress-grid";
+import { OUTSIDE_GASKET } from "@/features/analysis/core/grid-cell";
 
 function rgb(colour: string): [number, number, number] {
   const m = /^rgb\((\d+),\s*(\d+),\s*(\d+)\)$/.exec(colour);

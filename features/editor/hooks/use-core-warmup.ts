@@ -1,9 +1,9 @@
 "use client";
 import { useEffect } from "react";
+import { useEditorCore } from "./use-editor-core";
 import { useLatest } from "./use-latest";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { previewJoint } from "@/features/analysis/core/preview";
 import { buildHeatQuads } from "../model/heat-band";
 import { mergePreview } from "../model/merge-preview";
 import { moveBolt } from "../model/move-bolt";
@@ -18,12 +18,14 @@ export const WARMUP_RUNS = 24;
  * run per idle slice, results discarded. The page shows the stored result, so without this the
  * first drag would run that code cold, before the JavaScript engine has compiled it. Every other
  * run moves the first bolt a little, along and off the path, through the editor's own moveBolt,
- * so the engine also sees the bolt objects a drag produces.
+ * so the engine also sees the bolt objects a drag produces. Starts once the browser's core has come.
  */
 export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, enabled: boolean): void {
   const latest = useLatest({ design, base });
+  const core = useEditorCore();
   useEffect(() => {
-    if (!enabled) return;
+    if (!enabled || !core) return;
+    const { previewJoint } = core;
     let left = WARMUP_RUNS;
     let handle = 0;
     const idle = (cb: () => void) =>
@@ -52,5 +54,5 @@ export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, e
     };
     handle = idle(step);
     return () => cancel(handle);
-  }, [enabled, latest]);
+  }, [enabled, latest, core]);
 }

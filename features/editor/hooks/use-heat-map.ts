@@ -1,12 +1,12 @@
 "use client";
 import { useEffect, useMemo, useState } from "react";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { computeGasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
 import { buildHeatQuads } from "../model/heat-band";
 import { buildHeatScale } from "../model/heat-scale";
 import type { ReadoutView } from "../model/readout-view";
 import { paintGrid } from "../components/heat-grid-image";
 import type { HeatGridPicture } from "../components/heat-grid-node";
+import { loadEditorCore } from "./use-editor-core";
 
 /** Settling time before the full-area grid is recomputed after the last change, ms. */
 const GRID_DELAY_MS = 120;
@@ -23,6 +23,7 @@ export interface FeField {
  * analysis profile (cheap). Once edits settle: the core's full-area grid, painted to an image.
  * With `fe` (the FE field is switched on) the strip is coloured by the FE cross-check's gasket
  * stress instead, on a scale that covers both, and the estimate's full-area grid is not drawn.
+ * The grid comes from the browser's core, fetched after the page shows (use-editor-core.ts).
  */
 export function useHeatMap(
   design: JointDesign,
@@ -44,26 +45,33 @@ export function useHeatMap(
   const [grid, setGrid] = useState<{ design: JointDesign; picture: HeatGridPicture } | null>(null);
   useEffect(() => {
     if (dragging || !view || !scale || fe) return;
+    let live = true;
     const id = window.setTimeout(() => {
-      try {
-        const g = computeGasketStressGrid(design, design.estimator.grid.nx, design.estimator.grid.ny);
-        const f = view.profile.minFactor;
-        const scaled = { ...g, values: g.values.map((v) => (v < 0 ? v : v * f)), maxMpa: g.maxMpa * f };
-        setGrid({
-          design,
-          picture: {
-            canvas: paintGrid(scaled, scale.colour),
-            xMinMm: g.xMinMm,
-            xMaxMm: g.xMaxMm,
-            yMinMm: g.yMinMm,
-            yMaxMm: g.yMaxMm,
-          },
-        });
-      } catch {
-        setGrid(null);
-      }
+      void loadEditorCore().then(({ computeGasketStressGrid }) => {
+        if (!live) return;
+        try {
+          const g = computeGasketStressGrid(design, design.estimator.grid.nx, design.estimator.grid.ny);
+          const f = view.profile.minFactor;
+          const scaled = { ...g, values: g.values.map((v) => (v < 0 ? v : v * f)), maxMpa: g.maxMpa * f };
+          setGrid({
+            design,
+            picture: {
+              canvas: paintGrid(scaled, scale.colour),
+              xMinMm: g.xMinMm,
+              xMaxMm: g.xMaxMm,
+              yMinMm: g.yMinMm,
+              yMaxMm: g.yMaxMm,
+            },
+          });
+        } catch {
+          setGrid(null);
+        }
+      });
     }, GRID_DELAY_MS);
-    return () => window.clearTimeout(id);
+    return () => {
+      live = false;
+      window.clearTimeout(id);
+    };
   }, [design, view, scale, dragging, fe]);
   const current = grid && grid.design === design && !dragging && !fe ? grid.picture : null;
   return { scale, stage: scale ? { quads, grid: current, colour: scale.colour } : null };

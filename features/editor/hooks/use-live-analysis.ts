@@ -1,10 +1,10 @@
 "use client";
 import { useMemo, useState } from "react";
 import type { JointDesign } from "@/features/analysis/core/design";
-import { analyzeJoint, type JointAnalysis } from "@/features/analysis/core/analyze";
-import { previewJoint } from "@/features/analysis/core/preview";
-import { validateJointDesign, type DesignIssue } from "@/features/analysis/core/validate";
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
+import type { DesignIssue } from "@/features/analysis/core/validate";
 import { mergePreview } from "../model/merge-preview";
+import { useEditorCore, type EditorCore } from "./use-editor-core";
 
 // One shared empty list, so a memoised readout sees "no issues" as an unchanged prop.
 const NO_ISSUES: DesignIssue[] = [];
@@ -24,7 +24,8 @@ export interface LiveAnalysis {
  * it is the authoritative one, and the two must agree (see use-result-agreement.ts). While
  * dragging, the core's `previewJoint` (about half the work of `analyzeJoint`) runs instead and is
  * laid over the last full result (model/merge-preview.ts); the full analysis runs again as soon
- * as the drag ends.
+ * as the drag ends. The core itself arrives after the page shows (use-editor-core.ts); until
+ * then an edited document has no result (the stored one needs no core).
  */
 export function useLiveAnalysis(
   design: JointDesign,
@@ -34,7 +35,8 @@ export function useLiveAnalysis(
   // The last full result (stored or computed), laid under the previews while a bolt is dragged.
   const [lastFull, setLastFull] = useState<JointAnalysis | null>(null);
   const base = dragging ? lastFull : null;
-  const live = useMemo(() => runCore(design, stored, base), [design, stored, base]);
+  const core = useEditorCore();
+  const live = useMemo(() => runCore(core, design, stored, base), [core, design, stored, base]);
   if (!dragging && live.result && live.result !== lastFull) setLastFull(live.result);
   return live;
 }
@@ -42,22 +44,25 @@ export function useLiveAnalysis(
 /**
  * One run of the core for the Layout desk, timed (the drag benchmark reads `computeMs`): the
  * stored result when the document is the stored one, the preview over `base` when given, else
- * the full analysis; the validator's issues when the core refuses the layout.
+ * the full analysis; the validator's issues when the core refuses the layout; no result while
+ * the core is still loading.
  */
 function runCore(
+  core: EditorCore | null,
   design: JointDesign,
   stored: { document: JointDesign; result: JointAnalysis } | null,
   base: JointAnalysis | null,
 ): LiveAnalysis {
   if (stored && stored.document === design)
     return { result: stored.result, issues: NO_ISSUES, computeMs: 0, stored: true };
+  if (!core) return { result: null, issues: NO_ISSUES, computeMs: 0, stored: false };
   const t0 = performance.now();
   try {
     // analyzeJoint validates first; the issues are listed only when it refuses (no second pass per frame).
-    const result = base ? mergePreview(base, previewJoint(design)) : analyzeJoint(design);
+    const result = base ? mergePreview(base, core.previewJoint(design)) : core.analyzeJoint(design);
     return { result, issues: NO_ISSUES, computeMs: performance.now() - t0, stored: false };
   } catch (err) {
-    const issues = validateJointDesign(design);
+    const issues = core.validateJointDesign(design);
     return {
       result: null,
       issues:
