@@ -1,4 +1,5 @@
 "use client";
+import dynamic from "next/dynamic";
 import { useCallback, useDeferredValue, useMemo, useRef, useState, useTransition } from "react";
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
@@ -24,12 +25,15 @@ import { useSave } from "../hooks/use-save";
 import { DragGauge } from "./drag-gauge";
 import { JointCanvas } from "./joint-canvas";
 import { JointForm } from "./joint-form";
-import { PatternFinder, type AppliedSuggestion } from "./pattern-finder";
+import type { AppliedSuggestion } from "./pattern-finder";
 import { PatternToolbar } from "./pattern-toolbar";
 import { ReadoutPanel } from "./readout-panel";
 import { SaveBar } from "./save-bar";
 import { StressLegend } from "./stress-legend";
 import { UnitSwitch } from "./unit-switch";
+
+// The Pattern finder (with the suggestion request's rules) is fetched when it is first opened.
+const PatternFinder = dynamic(() => import("./pattern-finder").then((m) => m.PatternFinder), { ssr: false });
 
 /** The "Layout desk": drawing, pattern bench, joint data, readout and saving for one working revision. */
 export function DesignWorkspace({
