@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import type { ActionResult } from "@/features/forms/action-result";
-import { requireViewer } from "@/server/auth/guard";
+import { requireViewer, type Viewer } from "@/server/auth/guard";
 import { formFields } from "@/features/forms/form-data";
 import {
   changeMemberRolesCommand,
@@ -15,71 +15,55 @@ import {
 import { loggedAction } from "@/server/log/with-logging";
 
 // Crew screen forms. Admin only: requireViewer renders the 403 page for anybody else.
-function toActionResult(result: CommandResult<unknown>, success: string): ActionResult<string> {
-  if (result.ok) {
-    revalidatePath("/team");
-    return { ok: true, data: success };
-  }
-  return { ok: false, message: result.message, fieldErrors: result.fieldErrors };
+type FormInput = Record<string, unknown>;
+
+/** A Crew form action: runs the command on the form's fields; its success note, or the refusal. */
+function crewFormAction(
+  name: string,
+  command: (viewer: Viewer, input: FormInput) => Promise<CommandResult<unknown>>,
+  success: string | ((input: FormInput) => string),
+  arrays: readonly string[] = [],
+) {
+  return loggedAction(
+    name,
+    async (_previous: ActionResult<string> | null, formData: FormData): Promise<ActionResult<string>> => {
+      const viewer = await requireViewer({ role: "admin" });
+      const input = formFields(formData, arrays);
+      const result = await command(viewer, input);
+      if (!result.ok) return { ok: false, message: result.message, fieldErrors: result.fieldErrors };
+      revalidatePath("/team");
+      return { ok: true, data: typeof success === "string" ? success : success(input) };
+    },
+  );
 }
 
-async function inviteMemberActionImpl(
-  _previous: ActionResult<string> | null,
-  formData: FormData,
-): Promise<ActionResult<string>> {
-  const viewer = await requireViewer({ role: "admin" });
-  const input = formFields(formData, ["roles"]);
-  return toActionResult(
-    await inviteMemberCommand(viewer, input),
+export const inviteMemberAction = crewFormAction(
+  "accounts.inviteMember",
+  inviteMemberCommand,
+  (input) =>
     `Invitation sent to ${String(input.email ?? "")
       .trim()
       .toLowerCase()}.`,
-  );
-}
-
-async function resendInvitationActionImpl(
-  _previous: ActionResult<string> | null,
-  formData: FormData,
-): Promise<ActionResult<string>> {
-  const viewer = await requireViewer({ role: "admin" });
-  return toActionResult(
-    await resendInvitationCommand(viewer, formFields(formData)),
-    "Sent again with a new link.",
-  );
-}
-
-async function revokeInvitationActionImpl(
-  _previous: ActionResult<string> | null,
-  formData: FormData,
-): Promise<ActionResult<string>> {
-  const viewer = await requireViewer({ role: "admin" });
-  return toActionResult(await revokeInvitationCommand(viewer, formFields(formData)), "Invitation withdrawn.");
-}
-
-async function changeMemberRolesActionImpl(
-  _previous: ActionResult<string> | null,
-  formData: FormData,
-): Promise<ActionResult<string>> {
-  const viewer = await requireViewer({ role: "admin" });
-  return toActionResult(
-    await changeMemberRolesCommand(viewer, formFields(formData, ["roles"])),
-    "Roles saved.",
-  );
-}
-
-async function removeMemberActionImpl(
-  _previous: ActionResult<string> | null,
-  formData: FormData,
-): Promise<ActionResult<string>> {
-  const viewer = await requireViewer({ role: "admin" });
-  return toActionResult(await removeMemberCommand(viewer, formFields(formData)), "Member removed.");
-}
-
-export const inviteMemberAction = loggedAction("accounts.inviteMember", inviteMemberActionImpl);
-export const resendInvitationAction = loggedAction("accounts.resendInvitation", resendInvitationActionImpl);
-export const revokeInvitationAction = loggedAction("accounts.revokeInvitation", revokeInvitationActionImpl);
-export const changeMemberRolesAction = loggedAction(
-  "accounts.changeMemberRoles",
-  changeMemberRolesActionImpl,
+  ["roles"],
 );
-export const removeMemberAction = loggedAction("accounts.removeMember", removeMemberActionImpl);
+export const resendInvitationAction = crewFormAction(
+  "accounts.resendInvitation",
+  resendInvitationCommand,
+  "Sent again with a new link.",
+);
+export const revokeInvitationAction = crewFormAction(
+  "accounts.revokeInvitation",
+  revokeInvitationCommand,
+  "Invitation withdrawn.",
+);
+export const changeMemberRolesAction = crewFormAction(
+  "accounts.changeMemberRoles",
+  changeMemberRolesCommand,
+  "Roles saved.",
+  ["roles"],
+);
+export const removeMemberAction = crewFormAction(
+  "accounts.removeMember",
+  removeMemberCommand,
+  "Member removed.",
+);
