@@ -5,7 +5,7 @@ import type { Database } from "@/db/types";
 import type { Viewer } from "@/server/auth/guard";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { INVALID_FORM_MESSAGE, fieldErrorsOf } from "@/features/forms/form-data";
-import { findDesignState } from "./queries";
+import { findDesignState, type DesignStateDto } from "./queries";
 import {
   createDesign,
   deleteDesign,
@@ -163,17 +163,29 @@ export async function duplicateDesignForViewer(
   return copy ? { ok: true, data: copy } : refuse("not-found", NOT_FOUND);
 }
 
+/** The design `rawId` names in the viewer's organisation, if the viewer may archive or delete it (owner or admin). */
+async function designTheViewerMayArchive(
+  db: Kysely<Database>,
+  viewer: Viewer,
+  rawId: unknown,
+  verb: "archive" | "delete",
+): Promise<DesignStateDto | { refusal: CommandResult<never> }> {
+  const id = designIdSchema.safeParse(rawId);
+  const design = id.success ? await findDesignState(db, viewer.organizationId, id.data) : null;
+  if (!design) return { refusal: refuse("not-found", NOT_FOUND) };
+  if (!canArchiveDesign(viewer, design))
+    return { refusal: refuse("forbidden", `Only the owner or an admin can ${verb} a design.`) };
+  return design;
+}
+
 export async function setDesignArchivedForViewer(
   db: Kysely<Database>,
   viewer: Viewer,
   rawId: unknown,
   archived: boolean,
 ): Promise<CommandResult<{ archived: boolean }>> {
-  const id = designIdSchema.safeParse(rawId);
-  const design = id.success ? await findDesignState(db, viewer.organizationId, id.data) : null;
-  if (!design) return refuse("not-found", NOT_FOUND);
-  if (!canArchiveDesign(viewer, design))
-    return refuse("forbidden", "Only the owner or an admin can archive a design.");
+  const design = await designTheViewerMayArchive(db, viewer, rawId, "archive");
+  if ("refusal" in design) return design.refusal;
   await setDesignArchived(db, viewer.organizationId, design.designId, archived);
   return { ok: true, data: { archived } };
 }
@@ -183,11 +195,8 @@ export async function deleteDesignForViewer(
   viewer: Viewer,
   rawId: unknown,
 ): Promise<CommandResult<{ deleted: true }>> {
-  const id = designIdSchema.safeParse(rawId);
-  const design = id.success ? await findDesignState(db, viewer.organizationId, id.data) : null;
-  if (!design) return refuse("not-found", NOT_FOUND);
-  if (!canArchiveDesign(viewer, design))
-    return refuse("forbidden", "Only the owner or an admin can delete a design.");
+  const design = await designTheViewerMayArchive(db, viewer, rawId, "delete");
+  if ("refusal" in design) return design.refusal;
   if (!canDeleteDesign(viewer, design))
     return refuse(
       "conflict",

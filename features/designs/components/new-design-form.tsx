@@ -132,24 +132,22 @@ export function NewDesignForm({
         {errors.kind ? <p className="text-table text-verdict-fail">{errors.kind[0]}</p> : null}
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField
-          key={`name${valuesKey}`}
-          label="Name"
-          name="name"
-          errors={errors.name}
-          defaultValue={values.name ?? ""}
-          placeholder="Channel cover, E-2107"
-          autoComplete="off"
-        />
-        <TextField
-          key={`tag${valuesKey}`}
-          label="Equipment tag"
-          name="equipmentTag"
-          errors={errors.equipmentTag}
-          defaultValue={values.equipmentTag ?? ""}
-          placeholder="E-2107"
-          autoComplete="off"
-        />
+        {(
+          [
+            ["name", "Name", "Channel cover, E-2107"],
+            ["equipmentTag", "Equipment tag", "E-2107"],
+          ] as const
+        ).map(([name, label, placeholder]) => (
+          <TextField
+            key={`${name}${valuesKey}`}
+            label={label}
+            name={name}
+            errors={errors[name]}
+            defaultValue={values[name] ?? ""}
+            placeholder={placeholder}
+            autoComplete="off"
+          />
+        ))}
       </div>
       <fieldset key={`${choice.kind}${valuesKey}`} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         <legend className="mb-2 text-lead font-semibold">{choice.label}: dimensions</legend>

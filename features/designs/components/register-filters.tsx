@@ -34,6 +34,18 @@ function Select({
 
 /** A plain GET form: filters live in the URL, so the register is server-rendered and shareable. */
 export function RegisterFilters({ query, owners }: { query: ListDesignsQueryInput; owners: OwnerOption[] }) {
+  // The choice lists: field name, label, current value, [value, text] options.
+  const choices: [string, string, string | undefined, [string, string][]][] = [
+    ["status", "Status", query.status, REVISION_STATUSES.map((s) => [s, STATUS_LABELS[s]])],
+    ["owner", "Owner", query.owner, owners.map((o) => [o.userId, o.displayName])],
+    ["outline", "Outline", query.outline, OUTLINE_KINDS.map((k) => [k, OUTLINE_LABELS[k]])],
+    [
+      "updatedWithinDays",
+      "Updated",
+      query.updatedWithinDays,
+      UPDATED_WITHIN_DAYS.map((d) => [d, UPDATED_LABELS[d]]),
+    ],
+  ];
   return (
     <form
       method="get"
@@ -52,30 +64,9 @@ export function RegisterFilters({ query, owners }: { query: ListDesignsQueryInpu
           className="rounded-plate border border-ink-200 bg-white px-3 py-2 text-body"
         />
       </label>
-      <Select
-        name="status"
-        label="Status"
-        value={query.status}
-        options={REVISION_STATUSES.map((s) => [s, STATUS_LABELS[s]])}
-      />
-      <Select
-        name="owner"
-        label="Owner"
-        value={query.owner}
-        options={owners.map((o) => [o.userId, o.displayName])}
-      />
-      <Select
-        name="outline"
-        label="Outline"
-        value={query.outline}
-        options={OUTLINE_KINDS.map((k) => [k, OUTLINE_LABELS[k]])}
-      />
-      <Select
-        name="updatedWithinDays"
-        label="Updated"
-        value={query.updatedWithinDays}
-        options={UPDATED_WITHIN_DAYS.map((d) => [d, UPDATED_LABELS[d]])}
-      />
+      {choices.map(([name, label, value, options]) => (
+        <Select key={name} name={name} label={label} value={value} options={options} />
+      ))}
       {query.sort !== "updated" ? <input type="hidden" name="sort" value={query.sort} /> : null}
       {query.dir ? <input type="hidden" name="dir" value={query.dir} /> : null}
       {query.archived === "only" ? <input type="hidden" name="archived" value="only" /> : null}

@@ -18,6 +18,11 @@ const KIND_OPTIONS: { value: FlangeDesignInputs["kind"]; label: string }[] = [
   { value: "ring-loose", label: "Loose ring, no hub" },
 ];
 
+const MATERIAL_OPTIONS = [
+  { value: "", label: "Not chosen" },
+  ...FLANGE_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
+];
+
 const SPECS = {
   g0: FIELD_SPECS.hubSmallEnd,
   g1: FIELD_SPECS.hubBack,
@@ -43,6 +48,17 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
   const row = boltMaterialOf(f);
   const catalogueAllowable = row ? (getStrengthForDiameter(row, nominal)?.allowableMpa ?? null) : null;
   const entered = f.enteredAllowable ?? null;
+  // The flange's and the cover's material: a catalogue row, or none chosen yet.
+  const materialSelect = (key: "flangeMaterialId" | "coverMaterialId", label: string) => (
+    <SelectField
+      path={`flangeDesign.${key}`}
+      label={label}
+      value={fd[key] ?? ""}
+      disabled={ctx.readOnly}
+      onChange={(id) => set({ [key]: id === "" ? null : id })}
+      options={MATERIAL_OPTIONS}
+    />
+  );
   const setBoltAllowable = (next: { valueMpa: number; source: string } | null) =>
     ctx.dispatch({ type: "set-field", path: "fastener", value: { ...f, enteredAllowable: next } });
   return (
@@ -57,17 +73,7 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
         }
         options={KIND_OPTIONS}
       />
-      <SelectField
-        path="flangeDesign.flangeMaterialId"
-        label="Flange material"
-        value={fd.flangeMaterialId ?? ""}
-        disabled={ctx.readOnly}
-        onChange={(id) => set({ flangeMaterialId: id === "" ? null : id })}
-        options={[
-          { value: "", label: "Not chosen" },
-          ...FLANGE_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
-        ]}
-      />
+      {materialSelect("flangeMaterialId", "Flange material")}
       {(fd.kind === "integral-hub" || fd.kind === "integral-no-hub") && (
         <>
           <NumberField
@@ -109,17 +115,7 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
               ...COVER_SKETCHES.map((s) => ({ value: s.id, label: `${s.label} — C = ${s.c}` })),
             ]}
           />
-          <SelectField
-            path="flangeDesign.coverMaterialId"
-            label="Cover material"
-            value={fd.coverMaterialId ?? ""}
-            disabled={ctx.readOnly}
-            onChange={(id) => set({ coverMaterialId: id === "" ? null : id })}
-            options={[
-              { value: "", label: "Not chosen" },
-              ...FLANGE_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
-            ]}
-          />
+          {materialSelect("coverMaterialId", "Cover material")}
         </>
       )}
       <NumberField
