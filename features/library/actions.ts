@@ -22,7 +22,8 @@ import {
   gasketInputSchema,
   hideBuiltinSchema,
 } from "./schema";
-import { INVALID_FORM_MESSAGE, fieldErrorsOf, invalidForm } from "@/features/forms/form-data";
+import { INVALID_FORM_MESSAGE, fieldErrorsOf, formStrings, invalidForm } from "@/features/forms/form-data";
+import type { Viewer } from "@/server/auth/viewer";
 import { loggedAction } from "@/server/log/with-logging";
 
 // Stockroom entry points: authenticate, parse, authorise (admin), delegate, revalidate.
@@ -33,24 +34,28 @@ const PATHS: Record<LibraryKind, string> = {
 };
 const NOT_ADMIN = "Only an admin of this organisation can change the Stockroom.";
 
-function fields(formData: FormData): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [k, v] of formData.entries()) if (typeof v === "string" && !k.startsWith("$ACTION")) out[k] = v;
-  return out;
-}
-
 async function editor() {
   const viewer = await requireViewer();
   return canEditLibrary(viewer) ? viewer : null;
 }
 
-async function saveGasketActionImpl(
-  _prev: ActionResult<{ id: string }> | null,
-  formData: FormData,
-): Promise<ActionResult<{ id: string }>> {
-  const viewer = await editor();
-  if (!viewer) return { ok: false, message: NOT_ADMIN };
-  const raw = fields(formData);
+type SaveResult = ActionResult<{ id: string }>;
+
+/** A Stockroom form's action: only an admin; `save` parses and writes; the section is revalidated on success. */
+function stockroomSave(
+  kind: LibraryKind,
+  save: (viewer: Viewer, raw: Record<string, string>) => Promise<SaveResult>,
+): (prev: SaveResult | null, formData: FormData) => Promise<SaveResult> {
+  return async (_prev, formData) => {
+    const viewer = await editor();
+    if (!viewer) return { ok: false, message: NOT_ADMIN };
+    const result = await save(viewer, formStrings(formData));
+    if (result.ok) revalidatePath(PATHS[kind]);
+    return result;
+  };
+}
+
+const saveGasketActionImpl = stockroomSave("gasket", async (viewer, raw) => {
   const parsed = gasketInputSchema.safeParse(raw);
   if (!parsed.success) return invalidForm(parsed.error);
   const rowId = z.uuid().safeParse(raw.rowId);
@@ -60,18 +65,11 @@ async function saveGasketActionImpl(
     : await createGasket(db, viewer.organizationId, viewer.userId, parsed.data);
   if (!result.ok) return result;
   if (!result.data) return { ok: false, message: "That row no longer exists." };
-  revalidatePath(PATHS.gasket);
   return { ok: true, data: { id: result.data.id } };
-}
+});
 
 /** One material with up to three size ranges: fields `<name>_1`, `<name>_2`, `<name>_3`; empty ranges are skipped. */
-async function createBoltingActionImpl(
-  _prev: ActionResult<{ id: string }> | null,
-  formData: FormData,
-): Promise<ActionResult<{ id: string }>> {
-  const viewer = await editor();
-  if (!viewer) return { ok: false, message: NOT_ADMIN };
-  const raw = fields(formData);
+const createBoltingActionImpl = stockroomSave("bolting", async (viewer, raw) => {
   const common = { name: raw.name, modulus_mpa: raw.modulus_mpa, source: raw.source, edition: raw.edition };
   const rangeKeys = ["max_diameter_mm", "proof_mpa", "yield_mpa", "tensile_mpa", "allowable_mpa"] as const;
   const inputs = [];
@@ -89,28 +87,19 @@ async function createBoltingActionImpl(
   }
   if (Object.keys(fieldErrors).length > 0) return { ok: false, message: INVALID_FORM_MESSAGE, fieldErrors };
   const result = await createBolting(getDb(), viewer.organizationId, viewer.userId, inputs);
-  if (!result.ok) return result;
-  revalidatePath(PATHS.bolting);
-  return { ok: true, data: { id: result.data.id } };
-}
+  return result.ok ? { ok: true, data: { id: result.data.id } } : result;
+});
 
-async function createFlangeTemplateActionImpl(
-  _prev: ActionResult<{ id: string }> | null,
-  formData: FormData,
-): Promise<ActionResult<{ id: string }>> {
-  const viewer = await editor();
-  if (!viewer) return { ok: false, message: NOT_ADMIN };
-  const parsed = flangeInputSchema.safeParse(fields(formData));
+const createFlangeTemplateActionImpl = stockroomSave("flange", async (viewer, raw) => {
+  const parsed = flangeInputSchema.safeParse(raw);
   if (!parsed.success) return invalidForm(parsed.error);
   const result = await createFlangeTemplate(getDb(), viewer.organizationId, viewer.userId, parsed.data);
-  if (!result.ok) return result;
-  revalidatePath(PATHS.flange);
-  return { ok: true, data: { id: result.data.id } };
-}
+  return result.ok ? { ok: true, data: { id: result.data.id } } : result;
+});
 
 async function deleteLibraryRowActionImpl(formData: FormData): Promise<void> {
   const viewer = await editor();
-  const parsed = deleteRowSchema.safeParse(fields(formData));
+  const parsed = deleteRowSchema.safeParse(formStrings(formData));
   if (!viewer || !parsed.success) return;
   await deleteLibraryRow(getDb(), viewer.organizationId, parsed.data.kind, parsed.data.id);
   revalidatePath(PATHS[parsed.data.kind]);
@@ -118,7 +107,7 @@ async function deleteLibraryRowActionImpl(formData: FormData): Promise<void> {
 
 async function setBuiltinHiddenActionImpl(formData: FormData): Promise<void> {
   const viewer = await editor();
-  const parsed = hideBuiltinSchema.safeParse(fields(formData));
+  const parsed = hideBuiltinSchema.safeParse(formStrings(formData));
   if (!viewer || !parsed.success) return;
   await setBuiltinHidden(
     getDb(),

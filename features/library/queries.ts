@@ -23,12 +23,22 @@ async function hiddenIds(db: Executor, organizationId: string, kind: LibraryKind
   return new Set(rows.map((r) => r.builtin_id));
 }
 
-export function toGasketDto(r: LibraryGasketRow): GasketChoiceDto {
+/** What every own row's DTO starts with: its ids, never hidden, and its source as the organisation's. */
+function ownRow(r: { id: string; source: string; edition: string }) {
   return {
     id: `org:${r.id}`,
-    origin: "organization",
+    origin: "organization" as const,
     rowId: r.id,
     hidden: false,
+    source: r.source,
+    edition: r.edition,
+    confidence: "organisation" as const,
+  };
+}
+
+export function toGasketDto(r: LibraryGasketRow): GasketChoiceDto {
+  return {
+    ...ownRow(r),
     name: r.name,
     gasketType: r.gasket_type,
     m: r.m,
@@ -39,34 +49,22 @@ export function toGasketDto(r: LibraryGasketRow): GasketChoiceDto {
     egMpa: r.eg_mpa,
     modulusMpa: r.modulus_mpa,
     thicknessMm: r.thickness_mm,
-    source: r.source,
-    edition: r.edition,
-    confidence: "organisation",
   };
 }
 
 export function toBoltingDto(r: LibraryBoltingRow): BoltingChoiceDto {
   return {
-    id: `org:${r.id}`,
-    origin: "organization",
-    rowId: r.id,
-    hidden: false,
+    ...ownRow(r),
     name: r.name,
     modulusMpa: r.modulus_mpa,
     ranges: r.ranges,
     allowableSource: r.ranges.some((x) => x.allowableMpa !== null) ? r.source : null,
-    source: r.source,
-    edition: r.edition,
-    confidence: "organisation",
   };
 }
 
 export function toFlangeDto(r: LibraryFlangeTemplateRow): FlangeTemplateChoiceDto {
   return {
-    id: `org:${r.id}`,
-    origin: "organization",
-    rowId: r.id,
-    hidden: false,
+    ...ownRow(r),
     standard: r.standard,
     pressureClass: r.pressure_class,
     size: r.size,
@@ -77,9 +75,6 @@ export function toFlangeDto(r: LibraryFlangeTemplateRow): FlangeTemplateChoiceDt
     boltDesignation: r.bolt_designation,
     boltDiameterMm: r.bolt_diameter_mm,
     holeDiameterMm: r.hole_diameter_mm,
-    source: r.source,
-    edition: r.edition,
-    confidence: "organisation",
   };
 }
 
@@ -130,63 +125,50 @@ export async function listOwnFlangeTemplates(
   return rows.map(toFlangeDto);
 }
 
+interface KindRow {
+  gasket: GasketChoiceDto;
+  bolting: BoltingChoiceDto;
+  flange: FlangeTemplateChoiceDto;
+}
+
+const KIND_ROWS: {
+  [K in LibraryKind]: {
+    builtins: () => KindRow[K][];
+    own: (db: Executor, organizationId: string) => Promise<KindRow[K][]>;
+  };
+} = {
+  gasket: { builtins: builtinGaskets, own: listOwnGaskets },
+  bolting: { builtins: builtinBolting, own: listOwnBolting },
+  flange: { builtins: builtinFlangeTemplates, own: listOwnFlangeTemplates },
+};
+
+async function listKind<K extends LibraryKind>(
+  db: Executor,
+  organizationId: string,
+  kind: K,
+  includeHidden: boolean,
+): Promise<KindRow[K][]> {
+  const rows = KIND_ROWS[kind];
+  return merge(
+    rows.builtins(),
+    await hiddenIds(db, organizationId, kind),
+    await rows.own(db, organizationId),
+    includeHidden,
+  );
+}
+
 /** Gaskets a designer may pick: the organisation's own rows first, then visible built-ins. */
-export async function listGasketChoices(db: Executor, organizationId: string): Promise<GasketChoiceDto[]> {
-  return merge(
-    builtinGaskets(),
-    await hiddenIds(db, organizationId, "gasket"),
-    await listOwnGaskets(db, organizationId),
-    false,
-  );
-}
+export const listGasketChoices = (db: Executor, organizationId: string) =>
+  listKind(db, organizationId, "gasket", false);
+export const listBoltingChoices = (db: Executor, organizationId: string) =>
+  listKind(db, organizationId, "bolting", false);
+export const listFlangeTemplateChoices = (db: Executor, organizationId: string) =>
+  listKind(db, organizationId, "flange", false);
 
-export async function listBoltingChoices(db: Executor, organizationId: string): Promise<BoltingChoiceDto[]> {
-  return merge(
-    builtinBolting(),
-    await hiddenIds(db, organizationId, "bolting"),
-    await listOwnBolting(db, organizationId),
-    false,
-  );
-}
-
-export async function listFlangeTemplateChoices(
-  db: Executor,
-  organizationId: string,
-): Promise<FlangeTemplateChoiceDto[]> {
-  return merge(
-    builtinFlangeTemplates(),
-    await hiddenIds(db, organizationId, "flange"),
-    await listOwnFlangeTemplates(db, organizationId),
-    false,
-  );
-}
-
-export async function listGasketListing(db: Executor, organizationId: string): Promise<GasketChoiceDto[]> {
-  return merge(
-    builtinGaskets(),
-    await hiddenIds(db, organizationId, "gasket"),
-    await listOwnGaskets(db, organizationId),
-    true,
-  );
-}
-
-export async function listBoltingListing(db: Executor, organizationId: string): Promise<BoltingChoiceDto[]> {
-  return merge(
-    builtinBolting(),
-    await hiddenIds(db, organizationId, "bolting"),
-    await listOwnBolting(db, organizationId),
-    true,
-  );
-}
-
-export async function listFlangeTemplateListing(
-  db: Executor,
-  organizationId: string,
-): Promise<FlangeTemplateChoiceDto[]> {
-  return merge(
-    builtinFlangeTemplates(),
-    await hiddenIds(db, organizationId, "flange"),
-    await listOwnFlangeTemplates(db, organizationId),
-    true,
-  );
-}
+/** The Stockroom screen's rows: as the choices, with the hidden built-ins included and flagged. */
+export const listGasketListing = (db: Executor, organizationId: string) =>
+  listKind(db, organizationId, "gasket", true);
+export const listBoltingListing = (db: Executor, organizationId: string) =>
+  listKind(db, organizationId, "bolting", true);
+export const listFlangeTemplateListing = (db: Executor, organizationId: string) =>
+  listKind(db, organizationId, "flange", true);

@@ -54,18 +54,8 @@ export const CSV_COLUMNS: Record<LibraryKind, readonly string[]> = {
 export const REQUIRED_COLUMNS: Record<LibraryKind, readonly string[]> = {
   gasket: ["name", "gasket_type", "m", "y_mpa", "modulus_mpa", "thickness_mm", "source"],
   bolting: ["name", "modulus_mpa", "max_diameter_mm", "yield_mpa", "tensile_mpa", "source"],
-  flange: [
-    "standard",
-    "pressure_class",
-    "size",
-    "outside_diameter_mm",
-    "bolt_circle_diameter_mm",
-    "bolt_count",
-    "bolt_designation",
-    "bolt_diameter_mm",
-    "hole_diameter_mm",
-    "source",
-  ],
+  // Every flange column but the bore and the edition.
+  flange: CSV_COLUMNS.flange.filter((c) => c !== "bore_diameter_mm" && c !== "edition"),
 };
 
 export const KIND_LABELS: Record<LibraryKind, { plural: string; file: string }> = {

@@ -10,7 +10,7 @@ export const LEAKAGE_CLASSES: readonly LeakageClass[] = ["L1.0", "L0.1", "L0.01"
 export type RowOrigin = "builtin" | "organization";
 export type RowConfidence = Confidence | "organisation";
 
-interface RowBase {
+export interface RowBase {
   /** "builtin:<catalogue id>" or "org:<uuid>". */
   id: string;
   origin: RowOrigin;
