@@ -5,6 +5,7 @@ import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { RevisionStatus } from "@/db/tables/designs";
 import { isoOrNull } from "@/db/dates";
+import { selectRevisionOfDesign } from "@/features/reviews/queries";
 
 // Reads for the export routes and the background sheet job. Every read filters by the viewer's
 // organisation: another organisation's design is simply not found (the route answers 404).
@@ -33,9 +34,7 @@ export async function findExportRevision(
   designId: string,
   number: number,
 ): Promise<ExportRevisionDto | undefined> {
-  const row = await db
-    .selectFrom("design_revisions as r")
-    .innerJoin("designs as d", "d.id", "r.design_id")
+  const row = await selectRevisionOfDesign(db, organizationId, designId, number)
     .innerJoin("users as c", "c.id", "r.created_by")
     .leftJoin("users as s", "s.id", "r.submitted_by")
     .leftJoin("users as a", "a.id", "r.decided_by")
@@ -55,10 +54,6 @@ export async function findExportRevision(
       "s.display_name as submitter_name",
       "a.display_name as decider_name",
     ])
-    .where("r.organization_id", "=", organizationId)
-    .where("d.organization_id", "=", organizationId)
-    .where("r.design_id", "=", designId)
-    .where("r.number", "=", number)
     .executeTakeFirst();
   if (!row) return undefined;
   const document = row.document;

@@ -147,7 +147,11 @@ export async function listRevisionSummaries(
   }));
 }
 
-async function findRevisionRow(
+/**
+ * Revision `number` of a design of the organisation, as `r` joined to its design `d` (both scoped
+ * to the organisation); the caller adds its joins and columns.
+ */
+export function selectRevisionOfDesign(
   db: Kysely<Database>,
   organizationId: string,
   designId: string,
@@ -156,6 +160,19 @@ async function findRevisionRow(
   return db
     .selectFrom("design_revisions as r")
     .innerJoin("designs as d", "d.id", "r.design_id")
+    .where("r.organization_id", "=", organizationId)
+    .where("d.organization_id", "=", organizationId)
+    .where("r.design_id", "=", designId)
+    .where("r.number", "=", number);
+}
+
+async function findRevisionRow(
+  db: Kysely<Database>,
+  organizationId: string,
+  designId: string,
+  number: number,
+) {
+  return selectRevisionOfDesign(db, organizationId, designId, number)
     .innerJoin("users as creator", "creator.id", "r.created_by")
     .innerJoin("users as editor", "editor.id", "r.last_edited_by")
     .leftJoin("users as submitter", "submitter.id", "r.submitted_by")
@@ -182,10 +199,6 @@ async function findRevisionRow(
       "submitter.display_name as submitter_name",
       "decider.display_name as decider_name",
     ])
-    .where("r.organization_id", "=", organizationId)
-    .where("d.organization_id", "=", organizationId)
-    .where("r.design_id", "=", designId)
-    .where("r.number", "=", number)
     .executeTakeFirst();
 }
 

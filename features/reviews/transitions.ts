@@ -1,10 +1,11 @@
 import "server-only";
-import { sql, type Kysely, type Transaction } from "kysely";
+import { sql, type Insertable, type Kysely, type Transaction } from "kysely";
+import type { RevisionDecisionsTable } from "@/db/tables/reviews";
 import type { Database } from "@/db/types";
 import { CORE_VERSION } from "@/features/analysis/core/version";
 import { analyzeInWorker } from "@/server/analysis/pool";
 import { formatIssue, validateJointDesign } from "@/features/analysis/core/validate";
-import { recordActivity } from "@/features/activity/queries";
+import { recordActivity, type ActivityInput } from "@/features/activity/queries";
 import { feCheckForApproval } from "@/features/fe-check/store";
 import type { ActionResult } from "@/features/forms/action-result";
 import { computeContentHash, verifySnapshot } from "@/features/analysis/content-hash";
@@ -17,7 +18,7 @@ import {
 } from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
 import { ruleOf, rulesNeedingJustification } from "@/features/analysis/rule-groups";
-import { listRevisionEditorIds } from "./queries";
+import { listRevisionEditorIds, selectRevisionOfDesign } from "./queries";
 import type { CommentDto } from "./review-dto";
 import type {
   AddCommentInput,
@@ -66,9 +67,7 @@ export async function lockRevisionForUpdate(
   designId: string,
   number: number,
 ) {
-  const row = await trx
-    .selectFrom("design_revisions as r")
-    .innerJoin("designs as d", "d.id", "r.design_id")
+  const row = await selectRevisionOfDesign(trx, organizationId, designId, number)
     .select([
       "r.id",
       "r.design_id",
@@ -84,10 +83,6 @@ export async function lockRevisionForUpdate(
       "r.submitted_by",
       "d.name as design_name",
     ])
-    .where("r.organization_id", "=", organizationId)
-    .where("d.organization_id", "=", organizationId)
-    .where("r.design_id", "=", designId)
-    .where("r.number", "=", number)
     .forUpdate("r")
     .executeTakeFirst();
   if (!row) return undefined;
@@ -150,12 +145,73 @@ function outcomeOf(
   };
 }
 
-async function touchDesign(trx: Transaction<Database>, designId: string): Promise<void> {
+/** Every transition's last step: the design's updated_at, and the entry in its activity log. */
+async function touchAndRecord(
+  trx: Transaction<Database>,
+  actor: TransitionActor,
+  revision: LockedRevision,
+  kind: ActivityInput["kind"],
+  detail: string,
+  revisionId = revision.id,
+): Promise<void> {
   await trx
     .updateTable("designs")
     .set({ updated_at: sql`now()` })
-    .where("id", "=", designId)
+    .where("id", "=", revision.design_id)
     .execute();
+  await recordActivity(trx, {
+    organizationId: actor.organizationId,
+    designId: revision.design_id,
+    revisionId,
+    actorId: actor.userId,
+    kind,
+    detail,
+  });
+}
+
+/**
+ * The approver's decision: its record (comment, the content hash decided on, and what an approval
+ * cites), the revision row's status, who and when (version bumped), then touchAndRecord.
+ */
+async function recordDecision(
+  trx: Transaction<Database>,
+  actor: TransitionActor,
+  revision: LockedRevision,
+  status: "approved" | "returned",
+  decision: {
+    comment: string;
+    contentHash: string;
+    cites?: Pick<
+      Insertable<RevisionDecisionsTable>,
+      "acknowledged_unverified" | "fe_check_id" | "fe_result_hash"
+    >;
+  },
+  detail: string,
+): Promise<void> {
+  await trx
+    .insertInto("revision_decisions")
+    .values({
+      revision_id: revision.id,
+      organization_id: actor.organizationId,
+      kind: status,
+      actor_id: actor.userId,
+      comment: decision.comment,
+      content_hash: decision.contentHash,
+      ...decision.cites,
+    })
+    .execute();
+  await trx
+    .updateTable("design_revisions")
+    .set({
+      status,
+      decided_by: actor.userId,
+      decided_at: sql`now()`,
+      version: sql`version + 1`,
+      updated_at: sql`now()`,
+    })
+    .where("id", "=", revision.id)
+    .execute();
+  await touchAndRecord(trx, actor, revision, status, detail);
 }
 
 /** Draft or Returned → In review: recomputes the result on the server and freezes the snapshot. */
@@ -196,15 +252,13 @@ export async function submitRevision(
       })
       .where("id", "=", revision.id)
       .execute();
-    await touchDesign(trx, revision.design_id);
-    await recordActivity(trx, {
-      organizationId: actor.organizationId,
-      designId: revision.design_id,
-      revisionId: revision.id,
-      actorId: actor.userId,
-      kind: "submitted",
-      detail: revision.status === "returned" ? "resubmitted after changes" : "",
-    });
+    await touchAndRecord(
+      trx,
+      actor,
+      revision,
+      "submitted",
+      revision.status === "returned" ? "resubmitted after changes" : "",
+    );
     return { ok: true, data: { ...outcomeOf(revision, "in_review", actor), designerIds: [actor.userId] } };
   });
 }
@@ -276,39 +330,21 @@ export async function approveRevision(
     // The FE cross-check the approver saw (the latest finished run of this very document, its
     // result hash re-verified) is cited by the decision, which freezes it with the approval.
     const fe = await feCheckForApproval(trx, actor.organizationId, revision.id, revision.document);
-    await trx
-      .insertInto("revision_decisions")
-      .values({
-        revision_id: revision.id,
-        organization_id: actor.organizationId,
-        kind: "approved",
-        actor_id: actor.userId,
+    await recordDecision(
+      trx,
+      actor,
+      revision,
+      "approved",
+      {
         comment: input.comment,
-        content_hash: integrity.storedHash,
-        acknowledged_unverified: JSON.stringify(unverified),
-        fe_check_id: fe?.id ?? null,
-        fe_result_hash: fe?.resultHash ?? null,
-      })
-      .execute();
-    await trx
-      .updateTable("design_revisions")
-      .set({
-        status: "approved",
-        decided_by: actor.userId,
-        decided_at: sql`now()`,
-        version: sql`version + 1`,
-        updated_at: sql`now()`,
-      })
-      .where("id", "=", revision.id)
-      .execute();
-    await touchDesign(trx, revision.design_id);
-    await recordActivity(trx, {
-      organizationId: actor.organizationId,
-      designId: revision.design_id,
-      revisionId: revision.id,
-      actorId: actor.userId,
-      kind: "approved",
-      detail: [
+        contentHash: integrity.storedHash,
+        cites: {
+          acknowledged_unverified: JSON.stringify(unverified),
+          fe_check_id: fe?.id ?? null,
+          fe_result_hash: fe?.resultHash ?? null,
+        },
+      },
+      [
         needing.length > 0 ? `with ${needing.length} justified rule${needing.length === 1 ? "" : "s"}` : "",
         unverified.length > 0
           ? `${unverified.length} unverified table value${unverified.length === 1 ? "" : "s"} acknowledged`
@@ -316,7 +352,7 @@ export async function approveRevision(
       ]
         .filter(Boolean)
         .join("; "),
-    });
+    );
     return { ok: true, data: outcomeOf(revision, "approved", actor, input.comment) };
   });
 }
@@ -334,17 +370,6 @@ export async function returnRevision(
     });
   return withLockedRevision(db, actor, input, "return", async (trx, revision) => {
     await trx
-      .insertInto("revision_decisions")
-      .values({
-        revision_id: revision.id,
-        organization_id: actor.organizationId,
-        kind: "returned",
-        actor_id: actor.userId,
-        comment,
-        content_hash: revision.content_hash ?? "",
-      })
-      .execute();
-    await trx
       .insertInto("revision_comments")
       .values({
         revision_id: revision.id,
@@ -353,26 +378,14 @@ export async function returnRevision(
         body: `Returned: ${comment}`,
       })
       .execute();
-    await trx
-      .updateTable("design_revisions")
-      .set({
-        status: "returned",
-        decided_by: actor.userId,
-        decided_at: sql`now()`,
-        version: sql`version + 1`,
-        updated_at: sql`now()`,
-      })
-      .where("id", "=", revision.id)
-      .execute();
-    await touchDesign(trx, revision.design_id);
-    await recordActivity(trx, {
-      organizationId: actor.organizationId,
-      designId: revision.design_id,
-      revisionId: revision.id,
-      actorId: actor.userId,
-      kind: "returned",
-      detail: comment.slice(0, 200),
-    });
+    await recordDecision(
+      trx,
+      actor,
+      revision,
+      "returned",
+      { comment, contentHash: revision.content_hash ?? "" },
+      comment.slice(0, 200),
+    );
     return { ok: true, data: outcomeOf(revision, "returned", actor, comment) };
   });
 }
@@ -401,15 +414,14 @@ export async function startNewRevision(
       })
       .returning("id")
       .executeTakeFirstOrThrow();
-    await touchDesign(trx, revision.design_id);
-    await recordActivity(trx, {
-      organizationId: actor.organizationId,
-      designId: revision.design_id,
-      revisionId: created.id,
-      actorId: actor.userId,
-      kind: "new-revision",
-      detail: `from approved revision ${revision.number}`,
-    });
+    await touchAndRecord(
+      trx,
+      actor,
+      revision,
+      "new-revision",
+      `from approved revision ${revision.number}`,
+      created.id,
+    );
     return { ok: true, data: outcomeOf(revision, "draft", actor, "", created.id, number) };
   });
 }

@@ -13,6 +13,7 @@ import {
   computeGasketStressProfiles,
   forceBalanceIssue,
   governingProfile,
+  profileArrays,
   type ProfileSummary,
 } from "./gasket-stress";
 import { computeSafetyFactors, shareExternalLoad } from "./joint-loads";
@@ -27,7 +28,7 @@ import { checkSpacing } from "./checks/spacing";
 import { checkEdgesAndPattern } from "./checks/edge-and-pattern";
 import { countChecks, type CheckRecord } from "./checks/check-record";
 import { collectCatalogueEditions, type CatalogueEdition } from "./catalogue-editions";
-import { onGasketFlags, toFiniteJson } from "./finite-json";
+import { toFiniteJson } from "./finite-json";
 
 export interface BoltResult {
   id: string;
@@ -358,15 +359,7 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
       boltSOnPathMm: profiles.boltSOnPathMm,
       cone: { ...profiles.cone, missesGasket: profiles.coneMisses },
       beam: { ...profiles.beam, ...profiles.beamInfo },
-      profile: {
-        sMm: arr(profiles.sMm),
-        xMm: arr(profiles.xMm),
-        yMm: arr(profiles.yMm),
-        stressMpa: arr(gov.values),
-        coneMpa: arr(profiles.coneMpa),
-        beamMpa: arr(profiles.beamMpa),
-        onGasket: onGasketFlags(profiles.onGasket),
-      },
+      profile: profileArrays(profiles, arr),
     },
     asmeAppendix2: asme.result,
     flangeDesign: flange.result,

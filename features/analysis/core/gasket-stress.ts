@@ -11,6 +11,7 @@ import { projectOntoPath, samplePathUniform } from "./path";
 import { isOnGasket } from "./gasket-region";
 import { solveBeamOnFoundation } from "./beam-foundation";
 import { buildConeField, coneMissesGasket, conePressuresInto, type ConeField } from "./cone-superposition";
+import { onGasketFlags } from "./finite-json";
 import { chooseEstimator, type EstimatorChoice, type EstimatorName } from "./estimator-choice";
 
 export interface ProfileSummary {
@@ -218,6 +219,23 @@ export function governingProfile(p: GasketStressProfiles): {
   return p.choice.estimator === "cone"
     ? { estimator: "cone", values: p.coneMpa, summary: p.cone }
     : { estimator: "beam", values: p.beamMpa, summary: p.beam };
+}
+
+/**
+ * The profiles along the path as a result carries them: plain arrays, each written by `copy` (the
+ * result's copy, or the preview's that writes null for a non-finite value), the governing values
+ * as `stressMpa`.
+ */
+export function profileArrays(p: GasketStressProfiles, copy: (a: ArrayLike<number>) => number[]) {
+  return {
+    sMm: copy(p.sMm),
+    xMm: copy(p.xMm),
+    yMm: copy(p.yMm),
+    stressMpa: copy(governingProfile(p).values),
+    coneMpa: copy(p.coneMpa),
+    beamMpa: copy(p.beamMpa),
+    onGasket: onGasketFlags(p.onGasket),
+  };
 }
 
 /** Largest relative difference between the beam estimate's gasket force and the bolt forces. */

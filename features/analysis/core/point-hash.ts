@@ -63,6 +63,32 @@ export function buildPointHash(xs: ArrayLike<number>, ys: ArrayLike<number>, cel
   };
 }
 
+/**
+ * Calls `test(index, distanceSquared)` for every point in the cells around (x, y) (a cell is at
+ * least the search radius wide, so these hold every point within it) until one returns true.
+ */
+function someInNearCells(
+  hash: PointHash,
+  x: number,
+  y: number,
+  test: (i: number, d2: number) => boolean,
+): boolean {
+  const cx = Math.floor((x - hash.x0) / hash.cellMm);
+  const cy = Math.floor((y - hash.y0) / hash.cellMm);
+  for (let iy = Math.max(cy - 1, 0); iy <= Math.min(cy + 1, hash.ny - 1); iy++) {
+    for (let ix = Math.max(cx - 1, 0); ix <= Math.min(cx + 1, hash.nx - 1); ix++) {
+      const c = iy * hash.nx + ix;
+      for (let k = hash.cellStart[c]; k < hash.cellStart[c + 1]; k++) {
+        const i = hash.items[k];
+        const ex = hash.xs[i] - x;
+        const ey = hash.ys[i] - y;
+        if (test(i, ex * ex + ey * ey)) return true;
+      }
+    }
+  }
+  return false;
+}
+
 /** Calls `visit(index, distanceSquared)` for every point within `radiusMm` of (x, y). */
 export function forEachNear(
   hash: PointHash,
@@ -71,38 +97,15 @@ export function forEachNear(
   radiusMm: number,
   visit: (i: number, d2: number) => void,
 ): void {
-  const cx = Math.floor((x - hash.x0) / hash.cellMm);
-  const cy = Math.floor((y - hash.y0) / hash.cellMm);
   const r2 = radiusMm * radiusMm;
-  for (let iy = Math.max(cy - 1, 0); iy <= Math.min(cy + 1, hash.ny - 1); iy++) {
-    for (let ix = Math.max(cx - 1, 0); ix <= Math.min(cx + 1, hash.nx - 1); ix++) {
-      const c = iy * hash.nx + ix;
-      for (let k = hash.cellStart[c]; k < hash.cellStart[c + 1]; k++) {
-        const i = hash.items[k];
-        const ex = hash.xs[i] - x;
-        const ey = hash.ys[i] - y;
-        const d2 = ex * ex + ey * ey;
-        if (d2 <= r2) visit(i, d2);
-      }
-    }
-  }
+  someInNearCells(hash, x, y, (i, d2) => {
+    if (d2 <= r2) visit(i, d2);
+    return false;
+  });
 }
 
 /** True when any point lies strictly within `radiusMm` of (x, y). */
 export function hasPointNear(hash: PointHash, x: number, y: number, radiusMm: number): boolean {
-  const cx = Math.floor((x - hash.x0) / hash.cellMm);
-  const cy = Math.floor((y - hash.y0) / hash.cellMm);
   const r2 = radiusMm * radiusMm;
-  for (let iy = Math.max(cy - 1, 0); iy <= Math.min(cy + 1, hash.ny - 1); iy++) {
-    for (let ix = Math.max(cx - 1, 0); ix <= Math.min(cx + 1, hash.nx - 1); ix++) {
-      const c = iy * hash.nx + ix;
-      for (let k = hash.cellStart[c]; k < hash.cellStart[c + 1]; k++) {
-        const i = hash.items[k];
-        const ex = hash.xs[i] - x;
-        const ey = hash.ys[i] - y;
-        if (ex * ex + ey * ey < r2) return true;
-      }
-    }
-  }
-  return false;
+  return someInNearCells(hash, x, y, (_i, d2) => d2 < r2);
 }

@@ -13,12 +13,17 @@ import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
 import { DesignRefusedError, validateJointDesign } from "./validate";
 import { buildJointModel } from "./joint-model";
-import { computeGasketStressProfiles, forceBalanceIssue, governingProfile } from "./gasket-stress";
+import {
+  computeGasketStressProfiles,
+  forceBalanceIssue,
+  governingProfile,
+  profileArrays,
+} from "./gasket-stress";
 import { checkGasketStress } from "./checks/gasket-stress-checks";
 import { checkSpacing } from "./checks/spacing";
 import type { CheckRecord } from "./checks/check-record";
 import type { JointAnalysis } from "./analyze";
-import { onGasketFlags, toFiniteJson, toFiniteRecords } from "./finite-json";
+import { toFiniteJson, toFiniteRecords } from "./finite-json";
 
 export type PreviewCheck = CheckRecord & { boltIds: string[] };
 
@@ -67,15 +72,7 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
   const preview: Omit<JointPreview, "seating"> = {
     coreVersion: CORE_VERSION,
     governingEstimator: gov.estimator,
-    profile: {
-      sMm: arr(profiles.sMm),
-      xMm: arr(profiles.xMm),
-      yMm: arr(profiles.yMm),
-      stressMpa: arr(gov.values),
-      coneMpa: arr(profiles.coneMpa),
-      beamMpa: arr(profiles.beamMpa),
-      onGasket: onGasketFlags(profiles.onGasket),
-    },
+    profile: profileArrays(profiles, arr),
     boltSOnPathMm: arr(profiles.boltSOnPathMm),
     // The records and the summary get the conversion analyzeJoint applies (flat records: the short form).
     summary: toFiniteJson({

@@ -1,21 +1,22 @@
 // Reads the checks out of a stored JointAnalysis. The result is JSON from the core
 // (features/analysis/core/analyze.ts: each check `{id, title, value, limit, unit, status, source,
 // note}`); it is read defensively because a frozen snapshot may come from an older core version.
-import { rulesNeedingJustification, type RuleRow } from "@/features/analysis/rule-groups";
+import {
+  rulesNeedingJustification,
+  type GroupableCheck,
+  type RuleRow,
+  type RuleStatus,
+} from "@/features/analysis/rule-groups";
 
-export type CheckStatus = "pass" | "warn" | "fail" | "not-applicable" | "accepted-by-rating";
+/** A check's status is one of its rule's: the same words everywhere. */
+export type CheckStatus = RuleStatus;
 
-export interface ReviewCheck {
-  id: string;
-  title: string;
+/** A stored check; its bolt ids come from `boltIds` in the core's record, or `subject` in older results. */
+export interface ReviewCheck extends GroupableCheck {
   status: CheckStatus;
-  value: number | string | null;
-  limit: number | string | null;
   unit: string;
   source: string;
   note: string;
-  /** Bolt ids the check is about (the core lists them in `boltIds`; older results in `subject`). */
-  boltIds: string[];
 }
 
 export const CHECK_STATUS_LABELS: Record<CheckStatus, string> = {
