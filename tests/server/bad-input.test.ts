@@ -22,6 +22,7 @@ import {
   type OrganizationFixture,
 } from "../setup/fixtures";
 import { getTestDb } from "../setup/test-db";
+import { countOrgRows } from "../setup/suite-org";
 
 // No input may end in a 500: NUL and other control characters in text, deep JSON and huge
 // bodies each get a clear 4xx with a message, and nothing is stored.
@@ -30,16 +31,7 @@ let org: OrganizationFixture<"dana" | "ines">;
 let dana: string;
 let ines: string;
 
-const countDesigns = async () =>
-  Number(
-    (
-      await db
-        .selectFrom("designs")
-        .select((eb) => eb.fn.countAll().as("n"))
-        .where("organization_id", "=", org.organizationId)
-        .executeTakeFirstOrThrow()
-    ).n,
-  );
+const countDesigns = () => countOrgRows("designs", org.organizationId);
 
 const rawRequest = (path: string, body: BodyInit, headers: Record<string, string> = {}) =>
   new Request(new URL(path, process.env.APP_URL ?? "http://127.0.0.1:3100"), {

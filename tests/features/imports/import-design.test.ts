@@ -1,45 +1,21 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { createDesignFromFiles } from "@/features/imports/mutations";
 import { getTestDb } from "../../setup/test-db";
-import { createOrgWithUsers, dropOrg } from "../library/helpers";
+import { orgWithUsersForSuite } from "../library/helpers";
+import { countOrgRows } from "../../setup/suite-org";
 
 // The Drawing intake's server side against the real PostgreSQL: a refused file stores nothing,
 // and the layer and unit choices made in the browser are what the server reads.
 const db = getTestDb();
 const DIR = join(process.cwd(), "tests/fixtures/intake");
 const bytes = (name: string) => new Uint8Array(readFileSync(join(DIR, name)));
-let org: Awaited<ReturnType<typeof createOrgWithUsers>>;
-
-const designCount = async () =>
-  Number(
-    (
-      await db
-        .selectFrom("designs")
-        .select((eb) => eb.fn.countAll().as("n"))
-        .where("organization_id", "=", org.organizationId)
-        .executeTakeFirstOrThrow()
-    ).n,
-  );
-const revisionCount = async () =>
-  Number(
-    (
-      await db
-        .selectFrom("design_revisions")
-        .select((eb) => eb.fn.countAll().as("n"))
-        .where("organization_id", "=", org.organizationId)
-        .executeTakeFirstOrThrow()
-    ).n,
-  );
+const org = orgWithUsersForSuite("drawing-intake");
+const designCount = () => countOrgRows("designs", org.organizationId);
+const revisionCount = () => countOrgRows("design_revisions", org.organizationId);
 
 describe("Drawing intake: create a design from files (real PostgreSQL)", () => {
-  beforeAll(async () => {
-    org = await createOrgWithUsers("drawing-intake");
-  });
-  afterAll(async () => {
-    await dropOrg(org.organizationId);
-  });
   const viewer = () => ({
     organizationId: org.organizationId,
     userId: org.designerId,

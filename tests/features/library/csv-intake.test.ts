@@ -1,6 +1,6 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import {
   boltingToCsv,
   flangesToCsv,
@@ -10,7 +10,7 @@ import {
 import { importLibraryCsv, planLibraryImport } from "@/features/library/mutations";
 import { listOwnBolting, listOwnFlangeTemplates, listOwnGaskets } from "@/features/library/queries";
 import { getTestDb } from "../../setup/test-db";
-import { createOrgWithUsers, dropOrg } from "./helpers";
+import { orgWithUsersForSuite } from "./helpers";
 
 // The Stockroom's CSV intake against the real PostgreSQL: files as spreadsheets write them
 // (fixtures from tests/fixtures/intake/generate-fixtures.ts), refusals that store nothing, the
@@ -19,8 +19,6 @@ const db = getTestDb();
 const DIR = join(process.cwd(), "tests/fixtures/intake");
 const bytes = (name: string) => new Uint8Array(readFileSync(join(DIR, name)));
 const manifest = JSON.parse(readFileSync(join(DIR, "manifest.json"), "utf8"));
-let org: Awaited<ReturnType<typeof createOrgWithUsers>>;
-let other: Awaited<ReturnType<typeof createOrgWithUsers>>;
 
 async function counts(organizationId: string) {
   return {
@@ -44,14 +42,8 @@ const FLANGES = [
 ].join("\n");
 
 describe("Stockroom CSV intake as spreadsheets write it (real PostgreSQL)", () => {
-  beforeAll(async () => {
-    org = await createOrgWithUsers("csv-intake");
-    other = await createOrgWithUsers("csv-intake-other");
-  });
-  afterAll(async () => {
-    await dropOrg(org.organizationId);
-    await dropOrg(other.organizationId);
-  });
+  const org = orgWithUsersForSuite("csv-intake");
+  const other = orgWithUsersForSuite("csv-intake-other");
 
   it("stores a Windows-1252 file's °, µ and en dash exactly, and exports them as UTF-8", async () => {
     const r = await importLibraryCsv(

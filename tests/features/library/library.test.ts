@@ -1,5 +1,5 @@
 import { parse } from "csv-parse/sync";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { buildCircularFlange } from "@/features/designs/model/templates";
 import { toGasketMaterial } from "@/features/library/model/gasket-material";
@@ -14,11 +14,9 @@ import {
 import { gasketInputSchema } from "@/features/library/schema";
 import { gasketsToCsv } from "@/features/library/model/library-csv";
 import { getTestDb } from "../../setup/test-db";
-import { createOrgWithUsers, dropOrg } from "./helpers";
+import { createOrgWithUsers, dropOrg, orgWithUsersForSuite } from "./helpers";
 
 const db = getTestDb();
-let org: Awaited<ReturnType<typeof createOrgWithUsers>>;
-let other: Awaited<ReturnType<typeof createOrgWithUsers>>;
 
 const gasketForm = (over: Record<string, string> = {}) =>
   gasketInputSchema.parse({
@@ -38,14 +36,8 @@ const gasketForm = (over: Record<string, string> = {}) =>
   });
 
 describe("Stockroom (real PostgreSQL)", () => {
-  beforeAll(async () => {
-    org = await createOrgWithUsers("stockroom");
-    other = await createOrgWithUsers("stockroom-other");
-  });
-  afterAll(async () => {
-    await dropOrg(org.organizationId);
-    await dropOrg(other.organizationId);
-  });
+  const org = orgWithUsersForSuite("stockroom");
+  const other = orgWithUsersForSuite("stockroom-other");
 
   it("merges built-in rows with the organisation's own rows and hides built-ins per organisation", async () => {
     const created = await createGasket(

@@ -1,6 +1,6 @@
 import Drawing from "dxf-writer";
 import { sql } from "kysely";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { createDesign, saveWorkingRevision } from "@/features/designs/mutations";
 import { recordActivity } from "@/features/activity/queries";
@@ -14,20 +14,13 @@ import {
   submitRevision,
 } from "@/features/reviews/transitions";
 import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
-import { createReviewOrg, createSampleDesign, dropReviewOrg, justifyAll, revisionRow } from "./helpers";
+import { reviewOrgForSuite, createSampleDesign, justifyAll, revisionRow } from "./helpers";
 
 // Four-eyes independence over a revision's whole life: everyone who created, saved (at any time),
 // imported, started or submitted it is recorded in revision_editors in the same transaction, and
 // neither the app nor the database lets any of them approve or return it.
 const db = getTestDb();
-let org: Awaited<ReturnType<typeof createReviewOrg>>;
-
-beforeAll(async () => {
-  org = await createReviewOrg("four-eyes");
-});
-afterAll(async () => {
-  await dropReviewOrg(org.organizationId);
-});
+const org = reviewOrgForSuite("four-eyes");
 
 async function editorsOf(revisionId: string): Promise<string[]> {
   const rows = await db

@@ -1,40 +1,34 @@
-import { randomUUID } from "node:crypto";
 import { sampleCover } from "@/tests/fixtures/sample-cover";
 import type { Role } from "@/db/tables/core";
 import { createDesign } from "@/features/designs/mutations";
 import type { TransitionActor } from "@/features/reviews/transitions";
 import { readChecks } from "@/features/reviews/model/review-checks";
 import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
-import { getTestDb, deleteWithFrozenGuardOff } from "../../setup/test-db";
+import { getTestDb } from "../../setup/test-db";
+import { createTaggedOrg, dropTaggedOrg, orgForSuite } from "../../setup/suite-org";
 
-// Each review suite makes its own organisation and people (unique slugs and e-mails), so it never
-// collides with the e2e seed or other suites sharing the database.
+/** A review suite's organisation: a designer, two approvers and a lead who is both. */
 export async function createReviewOrg(label: string) {
-  const db = getTestDb();
-  const tag = `${label}-${randomUUID().slice(0, 8)}`;
-  const org = await db
-    .insertInto("organizations")
-    .values({ name: `Org ${tag}`, slug: tag })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  const person = async (who: string, roles: Role[]): Promise<TransitionActor & { email: string }> => {
-    const email = `${who}.${tag}@test.example`;
-    const u = await db
-      .insertInto("users")
-      .values({ email, display_name: `${who} ${tag}`, password_hash: null })
-      .returning("id")
-      .executeTakeFirstOrThrow();
-    await db.insertInto("memberships").values({ organization_id: org.id, user_id: u.id, roles }).execute();
-    return { userId: u.id, organizationId: org.id, roles, email };
-  };
+  const { organizationId, person } = await createTaggedOrg(label);
+  const actor = async (who: string, roles: Role[]): Promise<TransitionActor & { email: string }> => ({
+    ...(await person(who, roles)),
+    organizationId,
+    roles,
+  });
   return {
-    organizationId: org.id,
-    designer: await person("designer", ["designer"]),
-    approver: await person("approver", ["approver"]),
-    approver2: await person("approver2", ["approver"]),
-    lead: await person("lead", ["designer", "approver"]),
+    organizationId,
+    designer: await actor("designer", ["designer"]),
+    approver: await actor("approver", ["approver"]),
+    approver2: await actor("approver2", ["approver"]),
+    lead: await actor("lead", ["designer", "approver"]),
   };
 }
+
+/** createReviewOrg for the whole file: made before its tests, dropped after them. */
+export const reviewOrgForSuite = (label: string) => orgForSuite(() => createReviewOrg(label));
+
+/** Removes a suite's organisation (tests/setup/suite-org.ts). */
+export const dropReviewOrg = dropTaggedOrg;
 
 export function sampleDocument(name = "E-2107 channel cover") {
   return sampleCover(name, "E-2107");
@@ -52,29 +46,6 @@ export async function createSampleDesign(
     equipmentTag: "E-2107",
     document: sampleDocument(name),
   });
-}
-
-/** Removes the suite's organisation; approved revisions refuse DELETE, so that trigger is off inside the one transaction. */
-export async function dropReviewOrg(organizationId: string) {
-  const db = getTestDb();
-  const members = await db
-    .selectFrom("memberships")
-    .select("user_id")
-    .where("organization_id", "=", organizationId)
-    .execute();
-  await deleteWithFrozenGuardOff(async (trx) => {
-    await trx.deleteFrom("design_revisions").where("organization_id", "=", organizationId).execute();
-    await trx.deleteFrom("organizations").where("id", "=", organizationId).execute();
-  });
-  if (members.length)
-    await db
-      .deleteFrom("users")
-      .where(
-        "id",
-        "in",
-        members.map((m) => m.user_id),
-      )
-      .execute();
 }
 
 /** The stored row of revision `number` of a design. */

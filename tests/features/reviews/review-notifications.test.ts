@@ -1,21 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { notifyReviewOutcome } from "@/features/reviews/notifications";
 import { approveRevision, returnRevision, submitRevision } from "@/features/reviews/transitions";
 import { readChecks } from "@/features/reviews/model/review-checks";
 import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb } from "../../setup/test-db";
 import { messagesTo } from "../accounts/outbox";
-import { createReviewOrg, createSampleDesign, dropReviewOrg } from "./helpers";
+import { reviewOrgForSuite, createSampleDesign } from "./helpers";
 
 // Review mail through the real fake SMTP server: who gets which message, with the review link.
 const db = getTestDb();
-let org: Awaited<ReturnType<typeof createReviewOrg>>;
-beforeAll(async () => {
-  org = await createReviewOrg("review-mail");
-});
-afterAll(async () => {
-  await dropReviewOrg(org.organizationId);
-});
+const org = reviewOrgForSuite("review-mail");
 
 async function waitFor(address: string, subjectPart: string) {
   for (let i = 0; i < 50; i++) {

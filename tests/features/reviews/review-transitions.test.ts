@@ -1,6 +1,6 @@
 import { Kysely, PostgresDialect, sql } from "kysely";
 import pg from "pg";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import type { Database } from "@/db/types";
 import { listActivity, recordActivity } from "@/features/activity/queries";
 import { saveWorkingRevision } from "@/features/designs/mutations";
@@ -18,19 +18,19 @@ import {
 } from "@/features/reviews/transitions";
 import type { JointDesign } from "@/features/analysis/core/design";
 import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
-import { createReviewOrg, createSampleDesign, dropReviewOrg, justifyAll, revisionRow } from "./helpers";
+import {
+  reviewOrgForSuite,
+  createReviewOrg,
+  dropReviewOrg,
+  createSampleDesign,
+  justifyAll,
+  revisionRow,
+} from "./helpers";
 
 // The review state machine against the real PostgreSQL: every transition, the refused ones, the
 // database's own guards, two approvals racing, and tamper detection.
 const db = getTestDb();
-let org: Awaited<ReturnType<typeof createReviewOrg>>;
-
-beforeAll(async () => {
-  org = await createReviewOrg("reviews");
-});
-afterAll(async () => {
-  await dropReviewOrg(org.organizationId);
-});
+const org = reviewOrgForSuite("reviews");
 
 describe("review transitions (real PostgreSQL)", () => {
   it("walks submit → return → fix → resubmit → approve → new revision, freezing a verifiable snapshot", async () => {

@@ -1,5 +1,5 @@
 import { sql } from "kysely";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { POST as approveRoute } from "@/app/api/v1/designs/[designId]/revisions/[number]/approval/route";
 import { listUnverifiedValues } from "@/features/analysis/unverified-values";
 import type { JointDesign } from "@/features/analysis/core/design";
@@ -8,20 +8,13 @@ import { approveRevisionSchema } from "@/features/reviews/schema";
 import { approveRevision, returnRevision, submitRevision } from "@/features/reviews/transitions";
 import { appRequest, sessionCookieFor } from "../../setup/fixtures";
 import { getTestDb } from "../../setup/test-db";
-import { createReviewOrg, createSampleDesign, dropReviewOrg, justifyAll, revisionRow } from "./helpers";
+import { reviewOrgForSuite, createSampleDesign, justifyAll, revisionRow } from "./helpers";
 
 // Approving a result that uses table values taken from memory, through the real command and the
 // real PostgreSQL: refused without the acknowledgement (nothing written), accepted with it, and the
 // acknowledged list stored with the decision; the API route takes the same acknowledgement.
 const db = getTestDb();
-let org: Awaited<ReturnType<typeof createReviewOrg>>;
-
-beforeAll(async () => {
-  org = await createReviewOrg("unverified");
-});
-afterAll(async () => {
-  await dropReviewOrg(org.organizationId);
-});
+const org = reviewOrgForSuite("unverified");
 
 async function submittedSample(name: string) {
   const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, name);
