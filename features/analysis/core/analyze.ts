@@ -9,13 +9,7 @@ import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
 import { DesignRefusedError, validateJointDesign } from "./validate";
 import { buildJointModel, type JointModel } from "./joint-model";
-import {
-  computeGasketStressProfiles,
-  forceBalanceIssue,
-  governingProfile,
-  profileArrays,
-  type ProfileSummary,
-} from "./gasket-stress";
+import { balancedProfiles, profileArrays, type ProfileSummary } from "./gasket-stress";
 import { computeSafetyFactors, shareExternalLoad } from "./joint-loads";
 import { torqueFromPreloadNmm } from "./torque";
 import { getNeighbourSpacings } from "./geometry";
@@ -188,10 +182,7 @@ export function analyzeJoint(design: JointDesign): JointAnalysis {
   const issues = validateJointDesign(design);
   if (issues.length > 0) throw new DesignRefusedError(issues);
   const model = buildJointModel(design);
-  const profiles = computeGasketStressProfiles(model);
-  const imbalance = forceBalanceIssue(profiles);
-  if (imbalance) throw new DesignRefusedError([imbalance], "results refused");
-  const gov = governingProfile(profiles);
+  const { profiles, gov } = balancedProfiles(model);
   const p = model.preload;
   const C = model.jointConstant;
   const d = model.nominalDiameterMm;

@@ -13,6 +13,7 @@ import { solveBeamOnFoundation } from "./beam-foundation";
 import { buildConeField, coneMissesGasket, conePressuresInto, type ConeField } from "./cone-superposition";
 import { onGasketFlags } from "./finite-json";
 import { chooseEstimator, type EstimatorChoice, type EstimatorName } from "./estimator-choice";
+import { DesignRefusedError } from "./validate";
 
 export interface ProfileSummary {
   minMpa: number;
@@ -256,4 +257,18 @@ export function forceBalanceIssue(
     path: "design",
     message: `the beam estimate's gasket force is ${off} the bolt forces (${p.totalForceN.toPrecision(4)} N), more than ${FORCE_BALANCE_TOLERANCE * 100} % off; the inputs lie outside what the solver resolves (check the gasket modulus and thickness and the flange thicknesses and moduli), so no numbers are returned`,
   };
+}
+
+/**
+ * The model's profiles and the governing one, as `analyzeJoint` and `previewJoint` both start:
+ * throws a DesignRefusedError ("results refused", no numbers) when `forceBalanceIssue` finds one.
+ */
+export function balancedProfiles(model: JointModel): {
+  profiles: GasketStressProfiles;
+  gov: ReturnType<typeof governingProfile>;
+} {
+  const profiles = computeGasketStressProfiles(model);
+  const imbalance = forceBalanceIssue(profiles);
+  if (imbalance) throw new DesignRefusedError([imbalance], "results refused");
+  return { profiles, gov: governingProfile(profiles) };
 }

@@ -13,12 +13,7 @@ import type { JointDesign } from "./design";
 import { CORE_VERSION } from "./version";
 import { DesignRefusedError, validateJointDesign } from "./validate";
 import { buildJointModel } from "./joint-model";
-import {
-  computeGasketStressProfiles,
-  forceBalanceIssue,
-  governingProfile,
-  profileArrays,
-} from "./gasket-stress";
+import { balancedProfiles, profileArrays } from "./gasket-stress";
 import { checkGasketStress } from "./checks/gasket-stress-checks";
 import { checkSpacing } from "./checks/spacing";
 import type { CheckRecord } from "./checks/check-record";
@@ -54,10 +49,7 @@ export function previewJoint(design: JointDesign, options: { validate?: boolean 
     if (issues.length > 0) throw new DesignRefusedError(issues);
   }
   const model = buildJointModel(design);
-  const profiles = computeGasketStressProfiles(model);
-  const imbalance = forceBalanceIssue(profiles);
-  if (imbalance) throw new DesignRefusedError([imbalance], "results refused");
-  const gov = governingProfile(profiles);
+  const { profiles, gov } = balancedProfiles(model);
   const withIds = (c: CheckRecord): PreviewCheck => ({ ...c, boltIds: c.subject ?? [] });
   // Plain arrays with non-finite values as null: what toFiniteJson gives analyzeJoint, in one pass.
   const arr = (a: ArrayLike<number>): number[] => {

@@ -2,6 +2,7 @@
 // (features/analysis/core/analyze.ts: each check `{id, title, value, limit, unit, status, source,
 // note}`); it is read defensively because a frozen snapshot may come from an older core version.
 import {
+  ruleStatus,
   rulesNeedingJustification,
   type GroupableCheck,
   type RuleRow,
@@ -27,19 +28,9 @@ export const CHECK_STATUS_LABELS: Record<CheckStatus, string> = {
   "accepted-by-rating": "Accepted by its rating",
 };
 
-function normaliseStatus(raw: unknown): CheckStatus {
-  if (
-    raw === "pass" ||
-    raw === "warn" ||
-    raw === "fail" ||
-    raw === "not-applicable" ||
-    raw === "accepted-by-rating"
-  )
-    return raw;
-  if (raw === "na" || raw === "n/a") return "not-applicable";
-  // An unknown status is treated as a failure so it can never slip through an approval.
-  return "fail";
-}
+// In the rule's words (`ruleStatus`, so "rated" reads as accepted by its rating here too); anything
+// unknown is a failure, so it can never slip through an approval.
+const normaliseStatus = (raw: unknown): CheckStatus => (typeof raw === "string" ? ruleStatus(raw) : "fail");
 
 const scalar = (v: unknown): number | string | null =>
   typeof v === "number" || typeof v === "string" ? v : null;
