@@ -5,7 +5,7 @@ import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { RevisionStatus } from "@/db/tables/designs";
 import { isoOrNull } from "@/db/dates";
-import { selectRevisionOfDesign } from "@/features/reviews/queries";
+import { selectRevisionOfDesign, SNAPSHOT_COLUMNS } from "@/features/reviews/queries";
 
 // Reads for the export routes and the background sheet job. Every read filters by the viewer's
 // organisation: another organisation's design is simply not found (the route answers 404).
@@ -45,10 +45,7 @@ export async function findExportRevision(
       "r.id as revision_id",
       "r.number",
       "r.status",
-      "r.document",
-      "r.result",
-      "r.core_version",
-      "r.content_hash",
+      ...SNAPSHOT_COLUMNS,
       "r.decided_at",
       "c.display_name as creator_name",
       "s.display_name as submitter_name",

@@ -147,6 +147,9 @@ export async function listRevisionSummaries(
   }));
 }
 
+/** A revision's frozen snapshot, the columns `verifySnapshot` checks (select them beside `r`). */
+export const SNAPSHOT_COLUMNS = ["r.document", "r.result", "r.core_version", "r.content_hash"] as const;
+
 /**
  * Revision `number` of a design of the organisation, as `r` joined to its design `d` (both scoped
  * to the organisation); the caller adds its joins and columns.
@@ -183,10 +186,7 @@ async function findRevisionRow(
       "r.number",
       "r.status",
       "r.version",
-      "r.document",
-      "r.result",
-      "r.core_version",
-      "r.content_hash",
+      ...SNAPSHOT_COLUMNS,
       "r.created_by",
       "r.last_edited_by",
       "r.submitted_by",

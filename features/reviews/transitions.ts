@@ -18,7 +18,7 @@ import {
 } from "./model/review-states";
 import { missingJustifications, readChecks } from "./model/review-checks";
 import { ruleOf, rulesNeedingJustification } from "@/features/analysis/rule-groups";
-import { listRevisionEditorIds, selectRevisionOfDesign } from "./queries";
+import { listRevisionEditorIds, selectRevisionOfDesign, SNAPSHOT_COLUMNS } from "./queries";
 import type { CommentDto } from "./review-dto";
 import type {
   AddCommentInput,
@@ -73,10 +73,7 @@ export async function lockRevisionForUpdate(
       "r.design_id",
       "r.number",
       "r.status",
-      "r.document",
-      "r.result",
-      "r.core_version",
-      "r.content_hash",
+      ...SNAPSHOT_COLUMNS,
       "r.version",
       "r.created_by",
       "r.last_edited_by",

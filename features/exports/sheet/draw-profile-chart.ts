@@ -126,24 +126,22 @@ export function drawProfileChart(
   const lx = right - 190;
   const ly = top + 7;
   doc.rect(lx - 4, ly - 3, 190, profile.minFactor < 0.999 ? 21 : 12).fill("#ffffff");
-  doc
-    .lineWidth(1)
-    .strokeColor(C.ink900)
-    .moveTo(lx, ly + 3)
-    .lineTo(lx + 14, ly + 3)
-    .stroke();
+  // A legend entry's line sample, 14 pt long, in the width and colour of its curve.
+  const sample = (y: number, width: number, colour: string) =>
+    doc
+      .lineWidth(width)
+      .strokeColor(colour)
+      .moveTo(lx, y)
+      .lineTo(lx + 14, y)
+      .stroke();
+  sample(ly + 3, 1, C.ink900);
   doc
     .font("sans")
     .fontSize(6.2)
     .fillColor(C.ink700)
     .text("at target preload (stored result)", lx + 18, ly, { lineBreak: false });
   if (profile.minFactor < 0.999) {
-    doc
-      .lineWidth(0.6)
-      .strokeColor(C.ink300)
-      .moveTo(lx, ly + 12)
-      .lineTo(lx + 14, ly + 12)
-      .stroke();
+    sample(ly + 12, 0.6, C.ink300);
     doc.text(`at minimum preload (× ${profile.minFactor.toFixed(2)})`, lx + 18, ly + 9, { lineBreak: false });
   }
   doc.restore();

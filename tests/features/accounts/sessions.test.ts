@@ -12,6 +12,9 @@ import * as hashSessionsMigration from "../../../migrations/2026_12_02_134100_ha
 
 const db = getTestDb();
 let org: OrganizationFixture<"dana" | "arlo">;
+/** The stored row of a session (its id is kept hashed), or undefined once it is gone. */
+const storedSessionRow = (sessionId: string) =>
+  db.selectFrom("sessions").select("id").where("id", "=", hashSessionId(sessionId)).executeTakeFirst();
 
 beforeAll(async () => {
   org = await createOrganizationWithMembers(db, { dana: ["designer"], arlo: ["approver", "admin"] });
@@ -92,13 +95,7 @@ describe("the Kysely adapter over sessions/users", () => {
       .execute();
     try {
       expect((await getLucia().validateSession(session.id)).session).toBeNull();
-      expect(
-        await db
-          .selectFrom("sessions")
-          .select("id")
-          .where("id", "=", hashSessionId(session.id))
-          .executeTakeFirst(),
-      ).toBeUndefined();
+      expect(await storedSessionRow(session.id)).toBeUndefined();
     } finally {
       await db
         .updateTable("users")
@@ -215,13 +212,7 @@ describe("sliding expiry", () => {
       .where("id", "=", hashSessionId(session.id))
       .execute();
     expect((await lucia.validateSession(session.id)).session).toBeNull();
-    expect(
-      await db
-        .selectFrom("sessions")
-        .select("id")
-        .where("id", "=", hashSessionId(session.id))
-        .executeTakeFirst(),
-    ).toBeUndefined();
+    expect(await storedSessionRow(session.id)).toBeUndefined();
   });
 });
 

@@ -1,6 +1,7 @@
 import { sql } from "kysely";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Viewer } from "@/server/auth/guard";
+import type { JointDesign } from "@/features/analysis/core/design";
 import {
   createDesignFromApi,
   createDesignFromForm,
@@ -50,6 +51,11 @@ async function createCover(name: string, who = "dana"): Promise<string> {
   const result = await createDesignFromForm(db, viewerOf(home, who), formDefaults("rectangular-cover", name));
   if (!result.ok) throw new Error(result.message);
   return result.data.designId;
+}
+
+/** Dana saves a document over the working revision she read at `baseVersion`. */
+function danaSaves(designId: string, document: JointDesign, baseVersion = 1) {
+  return saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), { designId, baseVersion, document });
 }
 
 beforeAll(async () => {
@@ -185,11 +191,7 @@ describe("saving the working revision", () => {
     const base = (await findDesign(db, home.organizationId, id))!.document;
     // Three autosaves in a row by Dana: one entry, naming the version of the first.
     for (const p of [1.1, 1.2, 1.3]) {
-      const r = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-        designId: id,
-        baseVersion: version,
-        document: { ...base, loads: { ...base.loads, designPressureMpa: p } },
-      });
+      const r = await danaSaves(id, { ...base, loads: { ...base.loads, designPressureMpa: p } }, version);
       if (!r.ok) throw new Error(r.message);
       version = r.data.version;
     }
@@ -204,15 +206,7 @@ describe("saving the working revision", () => {
       document: base,
     });
     expect(piet.ok).toBe(true);
-    expect(
-      (
-        await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-          designId: id,
-          baseVersion: version,
-          document: base,
-        })
-      ).ok,
-    ).toBe(false);
+    expect((await danaSaves(id, base, version)).ok).toBe(false);
     expect(await kinds()).toEqual([
       `created:${home.users.dana.displayName}:Logged cover`,
       `saved:${home.users.dana.displayName}:version 2`,
@@ -234,11 +228,7 @@ describe("saving the working revision", () => {
       ).ok,
     ).toBe(true);
     const second = { ...base.document, loads: { ...base.document.loads, designPressureMpa: 0.2 } };
-    const refused = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-      designId: id,
-      baseVersion: 1,
-      document: second,
-    });
+    const refused = await danaSaves(id, second);
     expect(refused).toMatchObject({ ok: false, conflict: true, reason: "conflict" });
     expect(!refused.ok && refused.message).toMatch(
       new RegExp(
@@ -260,11 +250,7 @@ describe("saving the working revision", () => {
       .where("id", "=", base.revisionId)
       .execute();
     const changed = { ...base.document, loads: { ...base.document.loads, designPressureMpa: 3 } };
-    const inReview = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-      designId: id,
-      baseVersion: 1,
-      document: changed,
-    });
+    const inReview = await danaSaves(id, changed);
     expect(inReview).toMatchObject({
       ok: false,
       reason: "frozen",
@@ -275,11 +261,7 @@ describe("saving the working revision", () => {
       .set({ status: "approved", decided_by: home.users.arlo.userId, decided_at: new Date() })
       .where("id", "=", base.revisionId)
       .execute();
-    const approved = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-      designId: id,
-      baseVersion: 1,
-      document: changed,
-    });
+    const approved = await danaSaves(id, changed);
     expect(approved).toMatchObject({ ok: false, message: "This revision is approved and cannot be edited." });
     const stored = (await findDesign(db, home.organizationId, id))!;
     expect(stored).toMatchObject({ version: 1, status: "approved" });
@@ -297,22 +279,14 @@ describe("saving the working revision", () => {
       ...base.document,
       bolts: base.document.bolts.map((b, i) => (i === 2 ? { ...b, offPathMm: 400 } : b)),
     };
-    const r1 = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-      designId: id,
-      baseVersion: 1,
-      document: outside,
-    });
+    const r1 = await danaSaves(id, outside);
     expect(r1).toMatchObject({
       ok: false,
       reason: "invalid",
       fieldErrors: { "document.bolts[2].position": [expect.stringMatching(/outside the flange outline/)] },
     });
     const negative = { ...base.document, fastener: { ...base.document.fastener, lengthMm: -5 } };
-    const r2 = await saveWorkingRevisionForViewer(db, viewerOf(home, "dana"), {
-      designId: id,
-      baseVersion: 1,
-      document: negative,
-    });
+    const r2 = await danaSaves(id, negative);
     expect(r2.ok === false && Object.keys(r2.fieldErrors ?? {})).toContain("document.fastener.lengthMm");
     expect((await findDesign(db, home.organizationId, id))!.version).toBe(1);
   });

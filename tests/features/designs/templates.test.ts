@@ -6,6 +6,7 @@ import { buildDesignFromTemplate, type TemplateInput } from "@/features/designs/
 import { TEMPLATE_CHOICES } from "@/features/designs/model/template-fields";
 import { newDesignFormSchema } from "@/features/designs/template-schema";
 import { withGasketForm } from "@/features/editor/model/gasket-form";
+import { COVER_TEMPLATE } from "../../setup/fixtures";
 
 // Templates in Node: each builds a document the core's schema accepts and the core analyses
 // with finite numbers everywhere; the new-design form's defaults are valid; bad input in every
@@ -101,18 +102,7 @@ describe("full-face gaskets from the interface", () => {
     const back = withGasketForm(full, "ring");
     expect(back).toEqual(ring.gasket); // the template's ring: bore + 2·3 mm to bolt circle − hole − 2·3 mm
     expect(jointDesignSchema.safeParse({ ...full, gasket: back }).success).toBe(true);
-    const cover = buildDesignFromTemplate(meta, {
-      kind: "rectangular-cover",
-      widthMm: 600,
-      heightMm: 400,
-      cornerRadiusMm: 40,
-      boltEdgeDistanceMm: 35,
-      boltCount: 16,
-      boltSize: "M20",
-      coverThicknessMm: 30,
-      flangeThicknessMm: 30,
-      gasketWidthMm: 20,
-    });
+    const cover = buildDesignFromTemplate(meta, COVER_TEMPLATE);
     const band = withGasketForm({ ...cover, gasket: withGasketForm(cover, "full-face") }, "ring");
     expect(band).toEqual(cover.gasket); // the cover template's band sits where the switch puts it
   });

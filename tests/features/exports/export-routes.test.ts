@@ -109,6 +109,15 @@ afterAll(async () => {
   await dropOrg(rival);
 });
 
+/** A 200 download of the small design's revision 1 under our file name, ending in `ending`. */
+function expectDownload(res: Response, ending: string, contentType?: string) {
+  expect(res.status).toBe(200);
+  if (contentType) expect(res.headers.get("content-type")).toBe(contentType);
+  expect(res.headers.get("content-disposition")).toBe(
+    `attachment; filename="e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-${ending}"`,
+  );
+}
+
 describe("export routes", () => {
   it("streams the sheet to any member with our file name, in the viewer's units, and logs the export", async () => {
     const cookie = await works.cookieFor("approver");
@@ -116,11 +125,7 @@ describe("export routes", () => {
       appRequest(url(smallId, "sheet.pdf", "?paper=letter&units=US"), { cookie }),
       ctx(smallId),
     );
-    expect(res.status).toBe(200);
-    expect(res.headers.get("content-type")).toBe("application/pdf");
-    expect(res.headers.get("content-disposition")).toBe(
-      `attachment; filename="e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-spacing-sheet.pdf"`,
-    );
+    expectDownload(res, "spacing-sheet.pdf", "application/pdf");
     const pdf = Buffer.from(await res.arrayBuffer());
     const text = pdfToText(pdf);
     expect(text).toContain("APPROVED");
@@ -139,26 +144,16 @@ describe("export routes", () => {
   it("answers the hole list and drilling template with the design's unit", async () => {
     const cookie = await works.cookieFor("designer");
     const csv = await csvGet(appRequest(url(smallId, "holes.csv"), { cookie }), ctx(smallId));
-    expect(csv.status).toBe(200);
-    expect(csv.headers.get("content-disposition")).toContain(
-      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-hole-list.csv`,
-    );
+    expectDownload(csv, "hole-list.csv");
     const rows = parse(await csv.text(), { columns: true }) as Record<string, string>[];
     expect(rows).toHaveLength(8);
     expect(Object.keys(rows[0])).toContain("x_in"); // the example is a US design
     const dxf = await dxfGet(appRequest(url(smallId, "drilling.dxf"), { cookie }), ctx(smallId));
-    expect(dxf.status).toBe(200);
-    expect(dxf.headers.get("content-disposition")).toContain(
-      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-drilling-template.dxf`,
-    );
+    expectDownload(dxf, "drilling-template.dxf");
     const parsed = new DxfParser().parseSync(await dxf.text());
     expect((parsed!.header as Record<string, unknown>).$INSUNITS).toBe(1);
     const kit = await kitGet(appRequest(url(smallId, "bolting-kit.csv"), { cookie }), ctx(smallId));
-    expect(kit.status).toBe(200);
-    expect(kit.headers.get("content-type")).toBe("text/csv; charset=utf-8");
-    expect(kit.headers.get("content-disposition")).toContain(
-      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-bolting-kit.csv`,
-    );
+    expectDownload(kit, "bolting-kit.csv", "text/csv; charset=utf-8");
     const kitRows = parse(await kit.text(), { columns: true }) as Record<string, string>[];
     expect(kitRows.map((r) => [r.part, r.quantity, r.length_in])).toEqual([
       ["stud", "8", "4.000"],
@@ -172,10 +167,7 @@ describe("export routes", () => {
       .execute();
     expect(log.some((l) => l.detail.endsWith("-bolting-kit.csv"))).toBe(true);
     const passLog = await logGet(appRequest(url(smallId, "pass-log.csv"), { cookie }), ctx(smallId));
-    expect(passLog.status).toBe(200);
-    expect(passLog.headers.get("content-disposition")).toContain(
-      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-pass-log.csv`,
-    );
+    expectDownload(passLog, "pass-log.csv");
     const logRows = parse(await passLog.text(), { columns: true }) as Record<string, string>[];
     expect(logRows).toHaveLength(5 * 8);
     expect(Object.keys(logRows[0])).toContain("target_torque_ft_lb");
@@ -183,11 +175,7 @@ describe("export routes", () => {
       appRequest(url(smallId, "pass-log.pdf", "?paper=letter&units=US"), { cookie }),
       ctx(smallId),
     );
-    expect(logPdf.status).toBe(200);
-    expect(logPdf.headers.get("content-type")).toBe("application/pdf");
-    expect(logPdf.headers.get("content-disposition")).toContain(
-      `e-2107-inlet-nozzle-n1-nps-6-class-150-rf-${smallId.slice(0, 8)}-rev1-pass-log.pdf`,
-    );
+    expectDownload(logPdf, "pass-log.pdf", "application/pdf");
     const logText = pdfToText(Buffer.from(await logPdf.arrayBuffer()));
     expect(logText).toContain("PASS LOG");
     expect(logText).toContain("ft·lb");

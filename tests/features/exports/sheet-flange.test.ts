@@ -4,17 +4,24 @@ import { renderSpacingSheet } from "@/features/exports/sheet/render-sheet";
 import { analyse, loadExample, pdfToText, sheetInputFor } from "./fixtures";
 
 // The bolt-spacing sheet's "Flange" section, read back with poppler (pdftotext).
+
+/** The NPS 6 example with an integral hubbed SA-105 flange: its result and its SI sheet as text. */
+async function hubbedSheet(extra: { testPressureMpa?: number }) {
+  const design = loadExample("pipe-flange-nps6-spiral-wound");
+  design.flangeDesign = {
+    kind: "integral-hub",
+    hub: { g0Mm: 7.1, g1Mm: 14.2, hMm: 44 },
+    flangeMaterialId: "sa-105",
+    ...extra,
+  };
+  const result = analyse(design);
+  const pdf = await renderSpacingSheet(sheetInputFor(design, { result, units: "SI" }));
+  return { result, text: pdfToText(pdf).replace(/\s+/g, " ") };
+}
+
 describe("bolt-spacing sheet: Flange section", () => {
   it("prints the Appendix 2 stresses, rigidity and the test pressure suggestion of the stored result, with the caution", async () => {
-    const design = loadExample("pipe-flange-nps6-spiral-wound");
-    design.flangeDesign = {
-      kind: "integral-hub",
-      hub: { g0Mm: 7.1, g1Mm: 14.2, hMm: 44 },
-      flangeMaterialId: "sa-105",
-    };
-    const result = analyse(design);
-    const pdf = await renderSpacingSheet(sheetInputFor(design, { result, units: "SI" }));
-    const text = pdfToText(pdf).replace(/\s+/g, " ");
+    const { result, text } = await hubbedSheet({});
     expect(text).toContain("FLANGE");
     expect(text).toContain("Appendix 2 flange");
     expect(text).toContain("integral, with tapered hub");
@@ -26,18 +33,7 @@ describe("bolt-spacing sheet: Flange section", () => {
     expect(text).toContain(`${Number(st.toPrecision(4))} MPa`);
   });
   it("prints the hydrostatic test case at the entered test pressure", async () => {
-    const design = loadExample("pipe-flange-nps6-spiral-wound");
-    design.flangeDesign = {
-      kind: "integral-hub",
-      hub: { g0Mm: 7.1, g1Mm: 14.2, hMm: 44 },
-      flangeMaterialId: "sa-105",
-      testPressureMpa: 3,
-    };
-    const result = analyse(design);
-    const text = pdfToText(await renderSpacingSheet(sheetInputFor(design, { result, units: "SI" }))).replace(
-      /\s+/g,
-      " ",
-    );
+    const { result, text } = await hubbedSheet({ testPressureMpa: 3 });
     expect(text).toContain("Test case: Wm1 at Pt / bolts at min preload");
     expect(text).toContain("Test case: flange SH, SR, ST");
     const st = result.flangeDesign.hydrotest.testCase!.flange!.stMpa;

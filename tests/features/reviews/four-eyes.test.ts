@@ -14,7 +14,7 @@ import {
   submitRevision,
 } from "@/features/reviews/transitions";
 import { getOwnerTestDb, getTestDb } from "../../setup/test-db";
-import { reviewOrgForSuite, createSampleDesign, justifyAll, revisionRow } from "./helpers";
+import { reviewOrgForSuite, createSampleDesign, justifyAll, revisionRow, approval } from "./helpers";
 
 // Four-eyes independence over a revision's whole life: everyone who created, saved (at any time),
 // imported, started or submitted it is recorded in revision_editors in the same transaction, and
@@ -81,13 +81,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     // The app: no buttons, refused commands, not on the lead's desk list.
     const review = await getRevisionReview(db, org.lead, designId, 1);
     expect(review?.permissions).toMatchObject({ canApprove: false, canReturn: false });
-    const approved = await approveRevision(db, org.lead, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications: justifyAll(row.result),
-    });
+    const approved = await approveRevision(db, org.lead, approval(designId, justifyAll(row.result)));
     expect(approved).toMatchObject({ ok: false, message: expect.stringContaining("four-eyes") });
     const returned = await returnRevision(db, org.lead, {
       designId,
@@ -136,13 +130,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     expect((await revisionRow(designId)).status).toBe("in_review");
 
     // An independent approver still can.
-    const ok = await approveRevision(db, org.approver, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications: justifyAll(row.result),
-    });
+    const ok = await approveRevision(db, org.approver, approval(designId, justifyAll(row.result)));
     expect(ok).toMatchObject({ ok: true, data: { status: "approved" } });
   });
 
@@ -150,13 +138,7 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     const { designId } = await createSampleDesign(org.organizationId, org.designer.userId, "Revision two");
     await submitRevision(db, org.designer, { designId, number: 1 });
     const first = await revisionRow(designId);
-    await approveRevision(db, org.approver, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications: justifyAll(first.result),
-    });
+    await approveRevision(db, org.approver, approval(designId, justifyAll(first.result)));
     expect(await startNewRevision(db, org.lead, { designId, number: 1 })).toMatchObject({ ok: true });
     const second = await revisionRow(designId, 2);
     expect(await editorsOf(second.id)).toEqual([org.lead.userId]);
@@ -219,15 +201,10 @@ describe("four-eyes independence (real PostgreSQL)", () => {
     const rev = await revisionRow(designId);
     expect(await editorsOf(rev.id)).toEqual([org.lead.userId]);
     await submitRevision(db, org.designer, { designId, number: 1 });
-    expect(
-      await approveRevision(db, org.lead, {
-        acknowledgeUnverifiedValues: true,
-        designId,
-        number: 1,
-        comment: "",
-        justifications: justifyAll(rev.result),
-      }),
-    ).toMatchObject({ ok: false, message: expect.stringContaining("four-eyes") });
+    expect(await approveRevision(db, org.lead, approval(designId, justifyAll(rev.result)))).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("four-eyes"),
+    });
   });
 
   it("records editors written by hand too (the trigger, not the app, writes the list)", async () => {

@@ -2,6 +2,7 @@ import { sampleCover } from "@/tests/fixtures/sample-cover";
 import type { Role } from "@/db/tables/core";
 import { createDesign } from "@/features/designs/mutations";
 import type { TransitionActor } from "@/features/reviews/transitions";
+import type { ApproveRevisionInput } from "@/features/reviews/schema";
 import { readChecks } from "@/features/reviews/model/review-checks";
 import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb } from "../../setup/test-db";
@@ -63,4 +64,19 @@ export function justifyAll(result: unknown): Record<string, string> {
   return Object.fromEntries(
     rulesNeedingJustification(readChecks(result)).map((r) => [r.rule, `Accepted for ${r.title}: hydrotest`]),
   );
+}
+
+/** What an approver sends for revision 1 (unless `number` says otherwise), unverified values acknowledged. */
+export function approval(
+  designId: string,
+  justifications: Record<string, string>,
+  options: { comment?: string; number?: number } = {},
+): ApproveRevisionInput {
+  return {
+    acknowledgeUnverifiedValues: true,
+    designId,
+    number: options.number ?? 1,
+    comment: options.comment ?? "",
+    justifications,
+  };
 }

@@ -5,7 +5,7 @@ import { readChecks } from "@/features/reviews/model/review-checks";
 import { rulesNeedingJustification } from "@/features/analysis/rule-groups";
 import { getTestDb } from "../../setup/test-db";
 import { messagesTo } from "../accounts/outbox";
-import { reviewOrgForSuite, createSampleDesign } from "./helpers";
+import { reviewOrgForSuite, createSampleDesign, approval } from "./helpers";
 
 // Review mail through the real fake SMTP server: who gets which message, with the review link.
 const db = getTestDb();
@@ -60,13 +60,7 @@ describe("review notifications (fake SMTP)", () => {
     const justifications = Object.fromEntries(
       rulesNeedingJustification(readChecks(row.result)).map((r) => [r.rule, "accepted"]),
     );
-    const approved = await approveRevision(db, org.approver2, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications,
-    });
+    const approved = await approveRevision(db, org.approver2, approval(designId, justifications));
     if (!approved.ok) throw new Error(approved.message);
     await notifyReviewOutcome(db, org.organizationId, approved.data);
     const [done] = await waitFor(org.lead.email, "Approved: Mail cover revision 1");

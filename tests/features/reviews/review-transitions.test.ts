@@ -25,6 +25,7 @@ import {
   createSampleDesign,
   justifyAll,
   revisionRow,
+  approval,
 } from "./helpers";
 
 // The review state machine against the real PostgreSQL: every transition, the refused ones, the
@@ -95,13 +96,7 @@ describe("review transitions (real PostgreSQL)", () => {
     expect(needing.length).toBeGreaterThan(0); // the sample has warnings (max pitch), so justifications are exercised
     // One rule with many warning pairs needs one justification, not one per pair.
     expect(needing.some((r) => r.open.length > 1)).toBe(true);
-    const bare = await approveRevision(db, org.approver, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications: {},
-    });
+    const bare = await approveRevision(db, org.approver, approval(designId, {}));
     expect(bare).toMatchObject({ ok: false, message: expect.stringContaining("justification") });
     const partial = await approveRevision(db, org.approver, {
       acknowledgeUnverifiedValues: true,
@@ -113,13 +108,11 @@ describe("review transitions (real PostgreSQL)", () => {
     });
     expect(partial).toMatchObject({ ok: false });
     expect((await revisionRow(designId)).status).toBe("in_review");
-    const approved = await approveRevision(db, org.approver, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "Seating margin fine.",
-      justifications: justifyAll(row.result),
-    });
+    const approved = await approveRevision(
+      db,
+      org.approver,
+      approval(designId, justifyAll(row.result), { comment: "Seating margin fine." }),
+    );
     expect(approved).toMatchObject({ ok: true, data: { status: "approved" } });
     expect((await listJustifications(db, org.organizationId, row.id)).map((j) => j.checkId).sort()).toEqual(
       needing.map((r) => r.rule).sort(),
@@ -153,41 +146,24 @@ describe("review transitions (real PostgreSQL)", () => {
 
   it("refuses approving a draft, approving your own, the wrong role, and returning without being independent", async () => {
     const { designId } = await createSampleDesign(org.organizationId, org.lead.userId, "Own work");
-    expect(
-      await approveRevision(db, org.approver, {
-        acknowledgeUnverifiedValues: true,
-        designId,
-        number: 1,
-        comment: "",
-        justifications: {},
-      }),
-    ).toMatchObject({ ok: false, message: expect.stringContaining("Draft") });
+    expect(await approveRevision(db, org.approver, approval(designId, {}))).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("Draft"),
+    });
     expect(await submitRevision(db, org.approver, { designId, number: 1 })).toMatchObject({
       ok: false,
       message: expect.stringContaining("designer"),
     });
     expect(await submitRevision(db, org.lead, { designId, number: 1 })).toMatchObject({ ok: true });
     const row = await revisionRow(designId);
-    const own = await approveRevision(db, org.lead, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications: justifyAll(row.result),
-    });
+    const own = await approveRevision(db, org.lead, approval(designId, justifyAll(row.result)));
     expect(own).toMatchObject({ ok: false, message: expect.stringContaining("four-eyes") });
     expect(await returnRevision(db, org.lead, { designId, number: 1, comment: "withdrawn" })).toMatchObject({
       ok: false,
     });
-    expect(
-      await approveRevision(db, org.designer, {
-        acknowledgeUnverifiedValues: true,
-        designId,
-        number: 1,
-        comment: "",
-        justifications: justifyAll(row.result),
-      }),
-    ).toMatchObject({ ok: false, message: expect.stringContaining("approver") });
+    expect(await approveRevision(db, org.designer, approval(designId, justifyAll(row.result)))).toMatchObject(
+      { ok: false, message: expect.stringContaining("approver") },
+    );
     expect((await revisionRow(designId)).status).toBe("in_review");
     // The lead does not see their own submission as waiting for review; another approver does.
     expect((await getDeskLists(db, org.lead)).waitingForMyReview.map((i) => i.designId)).not.toContain(
@@ -200,13 +176,7 @@ describe("review transitions (real PostgreSQL)", () => {
     const other = await createReviewOrg("reviews-other");
     try {
       expect(
-        await approveRevision(db, other.approver, {
-          acknowledgeUnverifiedValues: true,
-          designId,
-          number: 1,
-          comment: "",
-          justifications: justifyAll(row.result),
-        }),
+        await approveRevision(db, other.approver, approval(designId, justifyAll(row.result))),
       ).toMatchObject({ ok: false, message: expect.stringContaining("does not exist") });
       expect(await getRevisionReview(db, other.approver, designId, 1)).toBeUndefined();
     } finally {
@@ -228,20 +198,8 @@ describe("review transitions (real PostgreSQL)", () => {
     try {
       const justifications = justifyAll(row.result);
       const outcomes = await Promise.all([
-        approveRevision(a, org.approver, {
-          acknowledgeUnverifiedValues: true,
-          designId,
-          number: 1,
-          comment: "first",
-          justifications,
-        }),
-        approveRevision(b, org.approver2, {
-          acknowledgeUnverifiedValues: true,
-          designId,
-          number: 1,
-          comment: "second",
-          justifications,
-        }),
+        approveRevision(a, org.approver, approval(designId, justifications, { comment: "first" })),
+        approveRevision(b, org.approver2, approval(designId, justifications, { comment: "second" })),
       ]);
       expect(outcomes.filter((o) => o.ok)).toHaveLength(1);
       expect(outcomes.filter((o) => !o.ok)).toHaveLength(1);
@@ -264,13 +222,7 @@ describe("review transitions (real PostgreSQL)", () => {
     await submitRevision(db, org.designer, { designId, number: 1 });
     const before = await revisionRow(designId);
     expect(
-      await approveRevision(db, org.approver, {
-        acknowledgeUnverifiedValues: true,
-        designId,
-        number: 1,
-        comment: "",
-        justifications: justifyAll(before.result),
-      }),
+      await approveRevision(db, org.approver, approval(designId, justifyAll(before.result))),
     ).toMatchObject({ ok: true });
     const row = await revisionRow(designId);
 
@@ -321,13 +273,7 @@ describe("review transitions (real PostgreSQL)", () => {
     expect(review?.integrity.state === "mismatch" && review.integrity.recomputedHash).not.toBe(
       row.content_hash,
     );
-    const refused = await approveRevision(db, org.approver, {
-      acknowledgeUnverifiedValues: true,
-      designId,
-      number: 1,
-      comment: "",
-      justifications: justifyAll(row.result),
-    });
+    const refused = await approveRevision(db, org.approver, approval(designId, justifyAll(row.result)));
     expect(refused).toMatchObject({ ok: false, message: expect.stringContaining("content hash") });
   });
 
