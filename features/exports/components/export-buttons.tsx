@@ -43,6 +43,45 @@ export interface JobStatus {
 
 const fetchJob = (url: string) => fetchJson<JobStatus>(url, (status) => `HTTP ${status}`);
 
+const PAPERS = [
+  ["a4", "A4"],
+  ["letter", "Letter"],
+] as const;
+const UNIT_SYSTEMS = [
+  ["SI", "SI (mm, MPa, N·m)"],
+  ["US", "US (in, psi, ft·lb)"],
+] as const;
+
+/** One of the files' choices (paper, units): a labelled select over `options` ([value, words]). */
+function SheetChoice<T extends string>({
+  label,
+  value,
+  onChange,
+  options,
+}: {
+  label: string;
+  value: T;
+  onChange: (v: T) => void;
+  options: readonly (readonly [T, string])[];
+}) {
+  return (
+    <label className="flex flex-col text-micro text-ink-600">
+      {label}
+      <select
+        className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900"
+        value={value}
+        onChange={(e) => onChange(e.target.value as T)}
+      >
+        {options.map(([v, words]) => (
+          <option key={v} value={v}>
+            {words}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
+
 /** Sheet and Pass log (PDF), hole list (CSV), drilling template (DXF), Bolting kit and Pass log (CSV) of one stored revision. */
 export function ExportButtons({
   designId,
@@ -117,28 +156,8 @@ export function ExportButtons({
       className="flex flex-col gap-2 rounded-plate border border-ink-200 bg-white p-3 shadow-plate"
     >
       <div className="flex flex-wrap items-end gap-3">
-        <label className="flex flex-col text-micro text-ink-600">
-          Paper
-          <select
-            className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900"
-            value={paper}
-            onChange={(e) => setPaper(e.target.value as "a4" | "letter")}
-          >
-            <option value="a4">A4</option>
-            <option value="letter">Letter</option>
-          </select>
-        </label>
-        <label className="flex flex-col text-micro text-ink-600">
-          Units
-          <select
-            className="rounded-plate border border-ink-200 px-2 py-1 text-table text-ink-900"
-            value={units}
-            onChange={(e) => setUnits(e.target.value as "SI" | "US")}
-          >
-            <option value="SI">SI (mm, MPa, N·m)</option>
-            <option value="US">US (in, psi, ft·lb)</option>
-          </select>
-        </label>
+        <SheetChoice label="Paper" value={paper} onChange={setPaper} options={PAPERS} />
+        <SheetChoice label="Units" value={units} onChange={setUnits} options={UNIT_SYSTEMS} />
         {queued ? (
           <button
             type="button"
