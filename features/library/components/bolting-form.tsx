@@ -30,24 +30,19 @@ export function BoltingForm() {
       action={createBoltingAction}
       title="Add a bolting material"
       submitLabel="Add bolting material"
-      success="Added to the Stockroom."
+      fields={MATERIAL}
     >
-      {(e) => (
-        <>
-          <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-            <Fields specs={MATERIAL} errors={e} />
-          </div>
-          {[1, 2, 3].map((i) => (
-            <fieldset key={i} className="grid gap-3 sm:grid-cols-5">
-              <legend className="mb-1 text-table font-medium text-ink-700">
-                Size range {i}
-                {i > 1 ? " (optional)" : ""}
-              </legend>
-              <Fields specs={rangeFields(i)} errors={e} />
-            </fieldset>
-          ))}
-        </>
-      )}
+      {(e) =>
+        [1, 2, 3].map((i) => (
+          <fieldset key={i} className="grid gap-3 sm:grid-cols-5">
+            <legend className="mb-1 text-table font-medium text-ink-700">
+              Size range {i}
+              {i > 1 ? " (optional)" : ""}
+            </legend>
+            <Fields specs={rangeFields(i)} errors={e} />
+          </fieldset>
+        ))
+      }
     </StockroomForm>
   );
 }

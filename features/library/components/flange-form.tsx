@@ -1,7 +1,7 @@
 "use client";
 
 import { createFlangeTemplateAction } from "../actions";
-import { Fields, StockroomForm, type FieldSpec } from "./stockroom-form";
+import { StockroomForm, type FieldSpec } from "./stockroom-form";
 
 // A flange template from the standard in hand (circular outline): dimensions in mm.
 const FIELDS: FieldSpec[] = [
@@ -25,13 +25,7 @@ export function FlangeForm() {
       action={createFlangeTemplateAction}
       title="Add a flange template"
       submitLabel="Add flange template"
-      success="Added to the Stockroom."
-    >
-      {(e) => (
-        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-          <Fields specs={FIELDS} errors={e} />
-        </div>
-      )}
-    </StockroomForm>
+      fields={FIELDS}
+    />
   );
 }

@@ -84,24 +84,20 @@ export function GasketForm({ editing, onDone }: { editing?: GasketChoiceDto | nu
       action={saveGasketAction}
       title={g ? `Edit ${g.name}` : "Add a gasket"}
       submitLabel={g ? "Save changes" : "Add gasket"}
-      success={g ? "Saved. Designs that used the old values keep their copy." : "Added to the Stockroom."}
+      success={g ? "Saved. Designs that used the old values keep their copy." : undefined}
       keepValues={Boolean(g)}
       onSaved={onDone}
       onCancel={g ? onDone : undefined}
       hiddenFields={g ? { rowId: g.rowId } : undefined}
+      fields={mainFields(g)}
     >
       {(e) => (
-        <>
-          <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-            <Fields specs={mainFields(g)} errors={e} />
-          </div>
-          <fieldset className="grid gap-3 sm:grid-cols-3 lg:grid-cols-6">
-            <legend className="mb-2 text-table font-medium text-ink-700">
-              Tightness parameters (optional, MPa)
-            </legend>
-            <Fields specs={tightnessFields(g)} errors={e} />
-          </fieldset>
-        </>
+        <fieldset className="grid gap-3 sm:grid-cols-3 lg:grid-cols-6">
+          <legend className="mb-2 text-table font-medium text-ink-700">
+            Tightness parameters (optional, MPa)
+          </legend>
+          <Fields specs={tightnessFields(g)} errors={e} />
+        </fieldset>
       )}
     </StockroomForm>
   );

@@ -36,15 +36,17 @@ export function Fields({ specs, errors }: { specs: FieldSpec[]; errors: FieldErr
 }
 
 /**
- * The frame of every Stockroom form: the action's state, the title, the submit button (with Cancel
- * when `onCancel` is given) and the status line. A successful save clears the form unless
- * `keepValues`, then calls `onSaved`.
+ * The frame of every Stockroom form: the action's state, the title, the main `fields` in four
+ * columns, then `children` (a form's further fieldsets), the submit button (with Cancel when
+ * `onCancel` is given) and the status line. A successful save clears the form unless `keepValues`,
+ * then calls `onSaved`.
  */
 export function StockroomForm({
   action,
   title,
   submitLabel,
-  success,
+  success = "Added to the Stockroom.",
+  fields,
   keepValues = false,
   onSaved,
   onCancel,
@@ -54,12 +56,13 @@ export function StockroomForm({
   action: SaveAction;
   title: string;
   submitLabel: string;
-  success: string;
+  success?: string;
+  fields: FieldSpec[];
   keepValues?: boolean;
   onSaved?: () => void;
   onCancel?: () => void;
   hiddenFields?: Record<string, string>;
-  children: (errors: FieldErrors) => ReactNode;
+  children?: (errors: FieldErrors) => ReactNode;
 }) {
   const [state, dispatch, pending] = useActionState(action, null);
   const form = useRef<HTMLFormElement>(null);
@@ -87,7 +90,10 @@ export function StockroomForm({
       {Object.entries(hiddenFields ?? {}).map(([name, value]) => (
         <input key={name} type="hidden" name={name} value={value} />
       ))}
-      {children(errors)}
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+        <Fields specs={fields} errors={errors} />
+      </div>
+      {children?.(errors)}
       <div className="flex items-center gap-3">
         <button type="submit" className={buttonStyles.primary} disabled={pending}>
           {submitLabel}
