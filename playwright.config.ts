@@ -1,4 +1,5 @@
 import { defineConfig, devices } from "@playwright/test";
+import { DEBIAN_CHROMIUM } from "./e2e/helpers/chromium";
 
 // Browser tests run in Debian's chromium (never a downloaded browser) against the production
 // build that scripts/test.sh starts on APP_URL.
@@ -13,18 +14,7 @@ export default defineConfig({
     baseURL: process.env.APP_URL ?? "http://127.0.0.1:3100",
     trace: "off",
     screenshot: "only-on-failure",
-    launchOptions: {
-      executablePath: "/usr/bin/chromium",
-      args: [
-        "--no-sandbox",
-        "--disable-gpu",
-        "--disable-quic",
-        "--no-first-run",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-      ],
-    },
+    launchOptions: DEBIAN_CHROMIUM,
   },
   projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"], channel: undefined } }],
 });

@@ -8,17 +8,9 @@
  * Prints the median and 95th percentile. Target: under 16 ms a frame.
  */
 import { chromium } from "@playwright/test";
+import { DEBIAN_CHROMIUM } from "../e2e/helpers/chromium";
 import { figure, formatMs } from "./report";
 
-const CHROMIUM_ARGS = [
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-quic",
-  "--no-first-run",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-];
 const DESIGNER = "dana.designer@kestrel-ridge.example";
 const PASSWORD = "halden-creek-2026";
 
@@ -45,7 +37,7 @@ export async function run(): Promise<void> {
     );
     return;
   }
-  const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_ARGS });
+  const browser = await chromium.launch(DEBIAN_CHROMIUM);
   try {
     const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
     await page.goto(`${appUrl}/sign-in`);

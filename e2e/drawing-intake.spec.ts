@@ -20,14 +20,18 @@ async function signedInPage(browser: Browser, email: string): Promise<Page> {
   return page;
 }
 
+/** Dana's Drawing intake with one of our DXF fixtures chosen. */
+async function drawingOpened(browser: Browser, fixture: string): Promise<Page> {
+  const dana = await signedInPage(browser, DANA);
+  await dana.goto("/designs/import");
+  await dana.getByLabel("DXF drawing (outline and holes)").setInputFiles(path.join(FIXTURES, fixture));
+  return dana;
+}
+
 test("layer switches: the title block is off by default, and switching the holes off refuses with names", async ({
   browser,
 }) => {
-  const dana = await signedInPage(browser, DANA);
-  await dana.goto("/designs/import");
-  await dana
-    .getByLabel("DXF drawing (outline and holes)")
-    .setInputFiles(path.join(FIXTURES, "layered-title-block.dxf"));
+  const dana = await drawingOpened(browser, "layered-title-block.dxf");
   const layers = dana.getByRole("group", { name: "Layer switches" });
   await expect(layers.getByRole("checkbox", { name: /^TITLE-BLOCK/ })).not.toBeChecked();
   await expect(layers.getByRole("checkbox", { name: /^DIMS/ })).not.toBeChecked();
@@ -56,11 +60,7 @@ test("layer switches: the title block is off by default, and switching the holes
 test("a drawing that states no unit is confirmed in inches and created at its true size", async ({
   browser,
 }) => {
-  const dana = await signedInPage(browser, DANA);
-  await dana.goto("/designs/import");
-  await dana
-    .getByLabel("DXF drawing (outline and holes)")
-    .setInputFiles(path.join(FIXTURES, "r12-inch-cover.dxf"));
+  const dana = await drawingOpened(browser, "r12-inch-cover.dxf");
   const unit = dana.getByRole("group", { name: "Drawing unit switch" });
   await expect(unit.getByRole("radio", { name: "millimetres" })).toBeChecked();
   await expect(dana.getByTestId("size-read")).toHaveText(

@@ -1,11 +1,11 @@
 import { randomUUID } from "node:crypto";
-import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import Drawing from "dxf-writer";
 import { expect, test, type Browser, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
+import { createSampleCover } from "./helpers/designs";
 
 // The Stockroom and attachment flows with the demo crew of Kestrel Ridge: Ines (admin) adds a
 // gasket, Dana (designer) finds it, attaches a datasheet to a design and gets the same bytes
@@ -65,13 +65,7 @@ test("an admin adds a gasket to the Stockroom and a designer picks it in a desig
   // In the Layout desk the gasket picker offers the organisation's row; picking it copies its
   // values (with the Qmin of the chosen tightness class) into the design, which saves them.
   const title = `Stockroom gasket pick E-2107 ${suffix}`;
-  const document = sampleCover(title, "E-2107");
-  const created = await dana.request.post("/api/v1/designs", {
-    data: { name: title, equipmentTag: "E-2107", document },
-    headers: { origin: APP_URL },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const { designId } = (await created.json()) as { designId: string };
+  const designId = await createSampleCover(dana, title, "E-2107");
   await dana.goto(`/designs/${designId}`);
   const picker = dana.getByLabel("Gasket material");
   await expect(picker.locator("optgroup[label='Our Stockroom'] option", { hasText: name })).toHaveCount(1);
@@ -101,13 +95,7 @@ test("a designer attaches a datasheet PDF and downloads it byte-identical; a ren
 }) => {
   const dana = await signedInPage(browser, DANA);
   const name = `Datasheet carrier E-2107 ${suffix}`;
-  const document = sampleCover(name, "E-2107");
-  const created = await dana.request.post("/api/v1/designs", {
-    data: { name, equipmentTag: "E-2107", document },
-    headers: { origin: APP_URL },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const { designId } = (await created.json()) as { designId: string };
+  const designId = await createSampleCover(dana, name, "E-2107");
 
   const pdf = Buffer.concat([
     Buffer.from(`%PDF-1.4\n% Kestrel Ridge gasket datasheet ${suffix}\n`),

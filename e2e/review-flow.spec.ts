@@ -2,6 +2,7 @@ import { randomUUID } from "node:crypto";
 import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { expect, test, type APIRequestContext, type Browser, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
+import { createSampleCover } from "./helpers/designs";
 
 // The whole review loop with two people at two browsers: Dana designs and submits, Arlo gets the
 // mail, comments on a bolt and returns it, Dana fixes and resubmits, Arlo approves. Both desks stay
@@ -65,13 +66,7 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
   await arloDesk.goto("/desk");
   await expect(arloDesk.getByTestId("desk-waiting")).not.toContainText(name);
 
-  const document = sampleCover(name, "E-2107");
-  const created = await dana.request.post("/api/v1/designs", {
-    data: { name, equipmentTag: "E-2107", document },
-    headers: { origin: APP_URL },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const { designId } = (await created.json()) as { designId: string };
+  const designId = await createSampleCover(dana, name, "E-2107");
   const reviewPath = `/designs/${designId}/revisions/1`;
 
   // Dana submits.
@@ -118,7 +113,7 @@ test("submit → mail → comment on a bolt → return → fix → resubmit → 
 
   // Dana fixes it through the designs API (a returned revision is editable) and resubmits.
   const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
-    workingRevision: { version: number; document: typeof document };
+    workingRevision: { version: number; document: ReturnType<typeof sampleCover> };
   };
   const fixed = {
     ...current.workingRevision.document,
@@ -217,12 +212,7 @@ test("an approved revision starts the next one, and the comparison shows what ch
   const name = `Compare E-2107 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
   const arlo = await signedInPage(browser, ARLO);
-  const document = sampleCover(name, "E-2107");
-  const created = await dana.request.post("/api/v1/designs", {
-    data: { name, equipmentTag: "E-2107", document },
-    headers: { origin: APP_URL },
-  });
-  const { designId } = (await created.json()) as { designId: string };
+  const designId = await createSampleCover(dana, name, "E-2107");
   await dana.goto(`/designs/${designId}/revisions/1`);
   await dana.getByRole("button", { name: "Submit for review" }).click();
   await expect(dana.getByTestId("revision-status")).toHaveText("In review");
@@ -242,7 +232,7 @@ test("an approved revision starts the next one, and the comparison shows what ch
   await expect(dana.getByTestId("revision-status")).toHaveText("Draft");
 
   const current = (await (await dana.request.get(`/api/v1/designs/${designId}`)).json()) as {
-    workingRevision: { version: number; document: typeof document };
+    workingRevision: { version: number; document: ReturnType<typeof sampleCover> };
   };
   // Revision 2 turns the whole pattern by 15° (a 24th of the 290 mm bolt circle), moves b5 a further
   // 6 mm and raises the design pressure: the comparison must say so in the form's words.
