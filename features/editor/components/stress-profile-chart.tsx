@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { ValueGrid, linePath } from "@/features/ui/chart-grid";
 import { linearScale } from "@/features/ui/linear-scale";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { decimateMinMax } from "../model/decimate";
@@ -65,10 +66,8 @@ export function StressProfileChart({
   const y = linearScale([0, top], [H - M.b, M.t]);
   // Two points per pixel column at most (every peak and trough kept): thousands of samples otherwise.
   const trace = decimateMinMax(profile.sMm, profile.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r);
-  const line = (f: number) =>
-    trace.xs.map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(trace.ys[i] * f).toFixed(1)}`).join("");
+  const line = (f: number) => linePath(trace.xs, trace.ys, x, (v) => y(v * f));
   const feTrace = fe ? decimateMinMax(fe.sMm, fe.stressMpa, 0, profile.pathLengthMm, W - M.l - M.r) : null;
-  const yTicks = y.ticks(4);
   const unit = unitLabel("stress", units);
   const minAtMin = profile.minMpa * profile.minFactor;
   return (
@@ -79,14 +78,13 @@ export function StressProfileChart({
         role="img"
         aria-label={`Minimum ${formatQuantity("stress", minAtMin, units)} at minimum preload, maximum ${formatQuantity("stress", profile.maxMpa, units)} at target preload`}
       >
-        {yTicks.map((t) => (
-          <g key={t}>
-            <line x1={M.l} x2={W - M.r} y1={y(t)} y2={y(t)} stroke="#e2e7ef" />
-            <text x={M.l - 4} y={y(t) + 3} textAnchor="end" fontSize="9" fill="#4c5d7d">
-              {Number(toDisplay("stress", t, units).toPrecision(3))}
-            </text>
-          </g>
-        ))}
+        <ValueGrid
+          y={y}
+          ticks={y.ticks(4)}
+          left={M.l}
+          right={W - M.r}
+          value={(t) => toDisplay("stress", t, units)}
+        />
         <text x={4} y={M.t + 2} fontSize="9" fill="#4c5d7d">
           {unit}
         </text>
@@ -111,9 +109,7 @@ export function StressProfileChart({
         />
         {feTrace && (
           <path
-            d={feTrace.xs
-              .map((s, i) => `${i ? "L" : "M"}${x(s).toFixed(1)},${y(feTrace.ys[i]).toFixed(1)}`)
-              .join("")}
+            d={linePath(feTrace.xs, feTrace.ys, x, y)}
             fill="none"
             stroke="#2f7d5b"
             strokeWidth="1.5"

@@ -1,3 +1,4 @@
+import { ValueGrid, linePath } from "@/features/ui/chart-grid";
 import { linearScale } from "@/features/ui/linear-scale";
 import type { UnitSystem } from "@/features/analysis/core/design";
 import { mmToIn, mpaToPsi } from "@/features/analysis/core/units";
@@ -34,18 +35,16 @@ function FeEstimateChart({
   const x = linearScale([len(xMm[0]), len(xMm[xMm.length - 1])], [M.l, W - M.r]);
   const y = linearScale([0, top * 1.08 || 1], [H - M.b, M.t]);
   const path = (v: number[]) =>
-    xMm.map((s, i) => `${i ? "L" : "M"}${x(len(s)).toFixed(1)},${y(st(v[i])).toFixed(1)}`).join("");
+    linePath(
+      xMm,
+      v,
+      (mm) => x(len(mm)),
+      (mpa) => y(st(mpa)),
+    );
   return (
     <figure aria-label={label}>
       <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={label}>
-        {y.ticks(4).map((t) => (
-          <g key={t}>
-            <line x1={M.l} x2={W - M.r} y1={y(t)} y2={y(t)} stroke="#e2e7ef" />
-            <text x={M.l - 4} y={y(t) + 3} textAnchor="end" fontSize="9" fill="#4c5d7d">
-              {Number(t.toPrecision(3))}
-            </text>
-          </g>
-        ))}
+        <ValueGrid y={y} ticks={y.ticks(4)} left={M.l} right={W - M.r} value={(t) => t} />
         {x.ticks(6).map((t) => (
           <text key={t} x={x(t)} y={H - M.b + 12} textAnchor="middle" fontSize="9" fill="#4c5d7d">
             {Number(t.toPrecision(3))}
