@@ -1,11 +1,9 @@
 import Link from "next/link";
 import { ActivityList } from "@/features/activity/components/activity-list";
 import type { ActivityEntryDto } from "@/features/activity/activity-kinds";
-import { AttachmentPanel } from "@/features/attachments/components/attachment-panel";
 import { canUploadAttachment } from "@/features/attachments/policies";
 import type { WorkspaceDesignDto } from "@/features/designs/workspace-contract";
 import { ExportButtons } from "@/features/exports/components/export-buttons";
-import { FeCheckPanel } from "@/features/fe-check/components/fe-check-panel";
 import { canRunFeCheck } from "@/features/fe-check/policies";
 import { buttonStyles } from "@/features/ui/button-styles";
 import { Panel } from "@/features/ui/panel";
@@ -13,6 +11,7 @@ import { REVISION_STATUS_LABELS } from "@/features/ui/revision-status";
 import type { Viewer } from "@/server/auth/guard";
 import type { ExportJobDto } from "@/server/jobs/export-files";
 import { retrySheetAction } from "@/features/exports/actions";
+import { LazyAttachmentPanel, LazyFeCheckPanel } from "./lazy-companions";
 
 // Where the editor meets the other features on the design page: the sign-off sheet (submit and
 // review), the shop files, the FE cross-check, the attachments and the activity log of the design.
@@ -57,7 +56,7 @@ export function DesignCompanions({
         </div>
       </Panel>
       <div className="lg:col-span-2">
-        <FeCheckPanel
+        <LazyFeCheckPanel
           designId={design.designId}
           revisionNumber={design.revisionNumber}
           units={viewer.unitSystem}
@@ -65,7 +64,7 @@ export function DesignCompanions({
           frozen={design.status === "approved"}
         />
       </div>
-      <AttachmentPanel
+      <LazyAttachmentPanel
         designId={design.designId}
         canUpload={canUploadAttachment(viewer)}
         canDeleteAny={viewer.roles.includes("admin") && design.status !== "approved"}
