@@ -238,6 +238,7 @@ export function DesignWorkspace({
             {finderOpen && (
               <PatternFinder
                 design={design}
+                units={units}
                 onClose={() => setFinderOpen(false)}
                 onApply={(candidate, origin) => {
                   // One undoable step: the whole document with the candidate's fastener, path and bolts.

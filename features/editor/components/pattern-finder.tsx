@@ -1,9 +1,8 @@
 "use client";
 import { useEffect, useMemo, useRef, useState } from "react";
-import type { JointDesign, Outline } from "@/features/analysis/core/design";
-import { BOLT_MATERIALS } from "@/features/analysis/core/catalogue/bolt-materials";
+import type { JointDesign, Outline, UnitSystem } from "@/features/analysis/core/design";
 import { THREADS } from "@/features/analysis/core/catalogue/threads";
-import { getBoltPathLengthMm, getBoltPoints, outlineToPolyline } from "@/features/analysis/core/geometry";
+import { getBoltPoints, outlineToPolyline } from "@/features/analysis/core/geometry";
 import {
   SUGGESTION_LIMITS,
   checkSuggestionRequest,
@@ -18,6 +17,22 @@ import { toolButtonStyles } from "@/features/ui/button-styles";
 import { CautionPanel } from "@/features/ui/caution-panel";
 import { fetchJson } from "@/features/ui/fetch-json";
 import { usePatternSearch } from "../hooks/use-pattern-search";
+import {
+  cardLength,
+  finderLengthsToMm,
+  initialFinderLengths,
+  pathLengthText,
+  type FinderLengths,
+  type KeepOutRow,
+} from "../model/finder-lengths";
+import {
+  catalogueChoices,
+  stockOfRequest,
+  stockroomChoices,
+  strengthText,
+  type StockSource,
+} from "../model/finder-stock";
+import { formatQuantity, unitLabel } from "../model/quantities";
 
 /** What the Layout desk records when a candidate is applied ("pattern applied from suggestion 2 of 7"). */
 export interface AppliedSuggestion {
@@ -27,14 +42,10 @@ export interface AppliedSuggestion {
 
 interface Props {
   design: JointDesign;
+  /** The Layout desk's unit system: every length of the dialog is typed and shown in it. */
+  units: UnitSystem;
   onApply: (candidate: PatternCandidate, origin: AppliedSuggestion) => void;
   onClose: () => void;
-}
-
-interface KeepOutRow {
-  fromMm: string;
-  toMm: string;
-  label: string;
 }
 
 const inputClass = "num w-20 rounded border border-ink-200 px-1.5 py-1";
@@ -55,60 +66,60 @@ function sizeChoices(design: JointDesign) {
 }
 
 /**
- * The "Pattern finder": the dialog behind Suggest pattern. Stock to try (sizes and bolt materials,
- * from the Stockroom's bolting rows the core can analyse, else the catalogue), Path rules (offset
- * range, keep-out zones, fixed bolts, tool clearance), a run in a worker with progress and Cancel,
- * and the Candidate cards; "Use this pattern" hands the chosen candidate back to the desk.
+ * The "Pattern finder": the dialog behind Suggest pattern. Stock to try (sizes, and bolt materials
+ * from our Stockroom's bolting rows, our own analysed with their stored values, or from the
+ * catalogue), Path rules (offset range, keep-out zones, fixed bolts, tool clearance, in the desk's
+ * units), a run in a worker with progress and Cancel, and the Candidate cards; "Use this pattern"
+ * hands the chosen candidate back to the desk.
  */
-export function PatternFinder({ design, onApply, onClose }: Props) {
+export function PatternFinder({ design, units, onApply, onClose }: Props) {
   const dialog = useRef<HTMLDialogElement>(null);
   const search = usePatternSearch();
   const sizes = useMemo(() => sizeChoices(design), [design]);
   const [sizeIds, setSizeIds] = useState<Set<string>>(sizes.ticked);
-  const [stockroom, setStockroom] = useState<{ id: string; name: string; usable: boolean }[] | null>(null);
-  const [materialIds, setMaterialIds] = useState<Set<string>>(new Set([design.fastener.materialId]));
+  // null while loading; false when the Stockroom cannot be read (the catalogue stands in).
+  const [stockroomRows, setStockroomRows] = useState<BoltingChoiceDto[] | null | false>(null);
+  const [source, setSource] = useState<StockSource>("stockroom");
+  const from = stockroomRows === false ? "catalogue" : source;
+  // Ticked materials by search id, one set per source; the design's own material starts ticked.
+  const [ticked, setTicked] = useState<Record<StockSource, Set<string>>>(() => ({
+    stockroom: new Set([design.fastener.materialId]),
+    catalogue: new Set([design.fastener.materialId]),
+  }));
   const offset = currentOffsetMm(design);
-  const [tryOffsets, setTryOffsets] = useState(false);
-  const [offsetFrom, setOffsetFrom] = useState(
-    offset === null ? "" : String(Math.max(1, Math.round(offset - 5))),
-  );
-  const [offsetTo, setOffsetTo] = useState(offset === null ? "" : String(Math.round(offset + 5)));
-  const [offsetStep, setOffsetStep] = useState("5");
-  const [keepOuts, setKeepOuts] = useState<KeepOutRow[]>([]);
+  const [lengths, setLengths] = useState<FinderLengths>(() => initialFinderLengths(design, units));
+  const setLength = (patch: Partial<FinderLengths>) => setLengths((cur) => ({ ...cur, ...patch }));
+  const setKeepOuts = (change: (rows: KeepOutRow[]) => KeepOutRow[]) =>
+    setLengths((cur) => ({ ...cur, keepOuts: change(cur.keepOuts) }));
+  const { tryOffsets, offsetFrom, offsetTo, offsetStep, keepOuts, clearance } = lengths;
+  const unit = unitLabel("length", units);
   const [keepFixed, setKeepFixed] = useState(false);
-  const [clearance, setClearance] = useState("0");
   const [allowWarnings, setAllowWarnings] = useState(false);
   const pipe = isPipeFlange(design);
   const [straddle, setStraddle] = useState(true);
   const [problems, setProblems] = useState<string[]>([]);
-  const pathLengthMm = getBoltPathLengthMm(design);
 
   useEffect(() => {
     const d = dialog.current;
     if (d && !d.open) d.showModal();
   }, []);
 
-  // The Stockroom's bolting rows: built-in ones the organisation did not hide can be searched; its own
-  // rows are listed but cannot be analysed yet (designs reference the core's catalogue materials).
+  // Our Stockroom's bolting rows: the built-in rows the organisation did not hide and its own rows,
+  // which the search analyses with their stored values (as POST /api/v1/suggestions does).
   useEffect(() => {
     let live = true;
     fetchJson<{ rows: BoltingChoiceDto[] }>("/api/v1/library/bolting", "The Stockroom could not be read.")
-      .then(({ rows }) => {
-        if (!live) return;
-        setStockroom(
-          rows.map((r) => ({
-            id: r.rowId,
-            name: r.name,
-            usable: r.origin === "builtin" && BOLT_MATERIALS.some((m) => m.id === r.rowId),
-          })),
-        );
-      })
-      .catch(() => live && setStockroom(null));
+      .then(({ rows }) => live && setStockroomRows(rows))
+      .catch(() => live && setStockroomRows(false));
     return () => {
       live = false;
     };
   }, []);
-  const materials = stockroom ?? BOLT_MATERIALS.map((m) => ({ id: m.id, name: m.name, usable: true }));
+  const materials = useMemo(
+    () => (from === "catalogue" ? catalogueChoices() : stockroomChoices(stockroomRows || [])),
+    [from, stockroomRows],
+  );
+  const materialIds = ticked[from];
 
   const toggle = (set: Set<string>, id: string, on: boolean) => {
     const next = new Set(set);
@@ -118,34 +129,18 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
   };
 
   const buildRequest = (): SuggestionRequest | string[] => {
-    const errors: string[] = [];
-    const num = (raw: string, what: string) => {
-      const v = Number(raw);
-      if (raw.trim() === "" || !Number.isFinite(v)) errors.push(`${what} must be a number`);
-      return v;
-    };
+    const mm = finderLengthsToMm(design, lengths, units);
+    const errors = mm.ok ? [] : mm.messages;
+    const stock = stockOfRequest(from, stockroomRows || [], materialIds);
     const request: SuggestionRequest = {
       design,
+      units,
       sizes: sizes.rows
         .filter((t) => sizeIds.has(t.id))
         .map((t) => ({ designation: t.designation, threadSeries: t.series })),
-      materialIds: [...materialIds],
-      offsetRangeMm:
-        tryOffsets && offset !== null
-          ? {
-              fromMm: num(offsetFrom, "Offset from"),
-              toMm: num(offsetTo, "Offset to"),
-              stepMm: num(offsetStep, "Offset step"),
-            }
-          : null,
-      keepOuts: keepOuts.map((k, i) => ({
-        kind: "arc-length" as const,
-        fromMm: num(k.fromMm, `Keep-out ${i + 1} from`),
-        toMm: num(k.toMm, `Keep-out ${i + 1} to`),
-        ...(k.label.trim() ? { label: k.label.trim() } : {}),
-      })),
+      ...stock,
+      ...(mm.ok ? mm.value : {}),
       fixedBoltIds: keepFixed ? design.bolts.map((b) => b.id) : [],
-      minToolClearanceMm: num(clearance, "Tool clearance"),
       allowLayoutWarnings: allowWarnings,
       ...(pipe ? { straddleCentreLines: straddle } : {}),
     };
@@ -191,8 +186,8 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
             Pattern finder
           </h2>
           <p className="text-micro text-ink-600">
-            The fewest bolts of the stock you allow that pass every rule; lengths in mm, along the bolt path
-            clockwise from the top centre line (path length {pathLengthMm.toFixed(1)} mm).
+            The fewest bolts of the stock you allow that pass every rule; lengths in {unit}, along the bolt
+            path clockwise from the top centre line (path length {pathLengthText(design, units)}).
           </p>
         </div>
         <button type="button" className={toolButtonStyles.quiet} onClick={close}>
@@ -215,22 +210,48 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
               </label>
             ))}
           </div>
+          <div role="radiogroup" aria-label="Bolt materials from" className="flex flex-wrap gap-x-3">
+            {(
+              [
+                ["stockroom", "Our Stockroom's bolting rows"],
+                ["catalogue", "The catalogue"],
+              ] as const
+            ).map(([value, label]) => (
+              <label key={value} className="flex items-center gap-1">
+                <input
+                  type="radio"
+                  name="stock-source"
+                  value={value}
+                  checked={from === value}
+                  disabled={value === "stockroom" && stockroomRows === false}
+                  onChange={() => setSource(value)}
+                />
+                {label}
+              </label>
+            ))}
+          </div>
           <div role="group" aria-label="Bolt materials" className="space-y-0.5">
             <p className="text-micro text-ink-600">
-              {stockroom ? "Bolting rows of our Stockroom" : "Bolt materials of the catalogue"}
+              {from === "catalogue"
+                ? `Bolt materials of the catalogue${stockroomRows === false ? " (the Stockroom could not be read)" : ""}`
+                : stockroomRows === null
+                  ? "Reading our Stockroom…"
+                  : "Built-in rows we did not hide and our own rows (analysed with their stored values); tick the rows to try"}
             </p>
             {materials.map((m) => (
-              <label key={m.id} className="flex items-center gap-1">
+              <label key={m.searchId} className="flex items-baseline gap-1">
                 <input
                   type="checkbox"
-                  disabled={!m.usable}
-                  checked={materialIds.has(m.id)}
-                  onChange={(e) => setMaterialIds((cur) => toggle(cur, m.id, e.target.checked))}
+                  checked={materialIds.has(m.searchId)}
+                  onChange={(e) =>
+                    setTicked((cur) => ({ ...cur, [from]: toggle(cur[from], m.searchId, e.target.checked) }))
+                  }
                 />
-                {m.name}
-                {!m.usable && (
-                  <span className="text-micro text-ink-500"> (our own row: not analysed yet)</span>
-                )}
+                <span>
+                  {m.name}
+                  {m.ours && <span className="text-micro text-ink-500"> (Ours)</span>}
+                  <span className="num text-micro text-ink-600"> {strengthText(m.ranges, units)}</span>
+                </span>
               </label>
             ))}
           </div>
@@ -244,25 +265,27 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
                 <input
                   type="checkbox"
                   checked={tryOffsets}
-                  onChange={(e) => setTryOffsets(e.target.checked)}
+                  onChange={(e) => setLength({ tryOffsets: e.target.checked })}
                 />
-                Try bolt-path offsets (now {offset.toFixed(1)} mm)
+                Try bolt-path offsets (now {cardLength(offset, units)} {unit})
               </label>
               {(
                 [
-                  ["from", "Offset from", offsetFrom, setOffsetFrom],
-                  ["to", "Offset to", offsetTo, setOffsetTo],
-                  ["step", "Offset step", offsetStep, setOffsetStep],
+                  ["from", "Offset from", offsetFrom, "offsetFrom"],
+                  ["to", "Offset to", offsetTo, "offsetTo"],
+                  ["step", "Offset step", offsetStep, "offsetStep"],
                 ] as const
-              ).map(([caption, label, value, set]) => (
+              ).map(([caption, label, value, key]) => (
                 <label key={label} className="flex flex-col">
-                  <span className="text-micro text-ink-600">{caption}, mm</span>
+                  <span className="text-micro text-ink-600">
+                    {caption}, {unit}
+                  </span>
                   <input
-                    aria-label={label}
+                    aria-label={`${label}, ${unit}`}
                     className={inputClass}
                     value={value}
                     disabled={!tryOffsets}
-                    onChange={(e) => set(e.target.value)}
+                    onChange={(e) => setLength({ [key]: e.target.value })}
                   />
                 </label>
               ))}
@@ -274,23 +297,20 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
             </p>
             {keepOuts.map((k, i) => (
               <div key={i} className="flex flex-wrap items-center gap-1">
-                <input
-                  aria-label={`Keep-out ${i + 1} from, mm`}
-                  className={inputClass}
-                  value={k.fromMm}
-                  onChange={(e) =>
-                    setKeepOuts((c) => c.map((x, j) => (j === i ? { ...x, fromMm: e.target.value } : x)))
-                  }
-                />
-                <span>to</span>
-                <input
-                  aria-label={`Keep-out ${i + 1} to, mm`}
-                  className={inputClass}
-                  value={k.toMm}
-                  onChange={(e) =>
-                    setKeepOuts((c) => c.map((x, j) => (j === i ? { ...x, toMm: e.target.value } : x)))
-                  }
-                />
+                {(["from", "to"] as const).map((end) => (
+                  <label key={end} className="flex items-center gap-1">
+                    {end === "to" && <span>to</span>}
+                    <input
+                      aria-label={`Keep-out ${i + 1} ${end}, ${unit}`}
+                      className={inputClass}
+                      value={k[end]}
+                      onChange={(e) =>
+                        setKeepOuts((c) => c.map((x, j) => (j === i ? { ...x, [end]: e.target.value } : x)))
+                      }
+                    />
+                  </label>
+                ))}
+                <span>{unit}</span>
                 <input
                   aria-label={`Keep-out ${i + 1} label`}
                   placeholder="label"
@@ -314,7 +334,7 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
               <button
                 type="button"
                 className={toolButtonStyles.secondary}
-                onClick={() => setKeepOuts((c) => [...c, { fromMm: "", toMm: "", label: "" }])}
+                onClick={() => setKeepOuts((c) => [...c, { from: "", to: "", label: "" }])}
               >
                 Add keep-out
               </button>
@@ -325,12 +345,12 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
             Keep the current {design.bolts.length} bolts where they are (add bolts between them)
           </label>
           <label className="flex items-center gap-2">
-            <span>Extra tool clearance, mm</span>
+            <span>Extra tool clearance, {unit}</span>
             <input
-              aria-label="Extra tool clearance, mm"
+              aria-label={`Extra tool clearance, ${unit}`}
               className={inputClass}
               value={clearance}
-              onChange={(e) => setClearance(e.target.value)}
+              onChange={(e) => setLength({ clearance: e.target.value })}
             />
           </label>
           <label className="flex items-center gap-1">
@@ -415,21 +435,28 @@ export function PatternFinder({ design, onApply, onClose }: Props) {
                         {c.boltCount} × {c.designation}
                       </dd>
                       <dt>Material</dt>
-                      <dd>{c.materialName}</dd>
+                      <dd>
+                        {c.materialName}
+                        {c.design.fastener.stockedMaterial && (
+                          <span className="text-ink-500"> (our Stockroom row)</span>
+                        )}
+                      </dd>
                       {c.offsetMm !== null && (
                         <>
                           <dt>Offset</dt>
-                          <dd className="num">{c.offsetMm.toFixed(1)} mm</dd>
+                          <dd className="num">
+                            {cardLength(c.offsetMm, units)} {unit}
+                          </dd>
                         </>
                       )}
                       <dt>Pitch</dt>
                       <dd className="num">
-                        {c.pitchMm.min.toFixed(1)}–{c.pitchMm.max.toFixed(1)} mm
+                        {cardLength(c.pitchMm.min, units)}–{cardLength(c.pitchMm.max, units)} {unit}
                       </dd>
                       <dt>Lowest seating</dt>
                       <dd className="num">
-                        {c.seating.minMpa.toFixed(1)} / {c.seating.limitMpa.toFixed(1)} MPa (
-                        {pct(c.seating.margin)})
+                        {formatQuantity("stress", c.seating.minMpa, units)} /{" "}
+                        {formatQuantity("stress", c.seating.limitMpa, units)} ({pct(c.seating.margin)})
                       </dd>
                       <dt>Governing</dt>
                       <dd>{c.governing ? `${c.governing.title} (${pct(c.governing.margin)})` : "—"}</dd>
