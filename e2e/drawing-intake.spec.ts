@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import iconv from "iconv-lite";
 import { expect, test, type Browser, type Page } from "./helpers/test";
-import { signIn } from "./helpers/sign-in";
+import { signedInPage } from "./helpers/sign-in";
 
 // The Drawing intake's confirmation (layer switches, the drawing unit of a file that states none)
 // on fixtures written by independent DXF libraries (tests/fixtures/intake/generate-fixtures.ts),
@@ -13,12 +13,6 @@ const INES = "ines.admin@kestrel-ridge.example";
 const DANA = "dana.designer@kestrel-ridge.example";
 const FIXTURES = path.join(process.cwd(), "tests/fixtures/intake");
 const suffix = randomUUID().slice(0, 6);
-
-async function signedInPage(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await signIn(page, email);
-  return page;
-}
 
 /** Dana's Drawing intake with one of our DXF fixtures chosen. */
 async function drawingOpened(browser: Browser, fixture: string): Promise<Page> {

@@ -1,11 +1,11 @@
 import { execFileSync } from "node:child_process";
-import { sampleCover } from "@/tests/fixtures/sample-cover";
 import { randomUUID } from "node:crypto";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { expect, test, type Browser, type Page } from "./helpers/test";
-import { signIn } from "./helpers/sign-in";
+import { expect, test } from "./helpers/test";
+import { signedInPage } from "./helpers/sign-in";
+import { createSampleCover } from "./helpers/designs";
 
 // The FE cross-check as a designer and an approver use it, on the production build with the
 // server's own FE worker and the real CalculiX and Gmsh: run it from the design page, watch the
@@ -13,13 +13,6 @@ import { signIn } from "./helpers/sign-in";
 // then approve and find the run cited on the bolt-spacing sheet. The design is this spec's own.
 const DANA = "dana.designer@kestrel-ridge.example";
 const ARLO = "arlo.approver@kestrel-ridge.example";
-const APP_URL = process.env.APP_URL ?? "http://127.0.0.1:3100";
-
-async function signedInPage(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await signIn(page, email);
-  return page;
-}
 
 function pdfText(bytes: Buffer): string {
   const dir = mkdtempSync(path.join(tmpdir(), "sealpitch-fe-sheet-"));
@@ -38,13 +31,7 @@ test("a designer runs the FE cross-check, sees it beside the estimate, and the a
   test.setTimeout(240_000);
   const name = `FE check E-3310 ${randomUUID().slice(0, 6)}`;
   const dana = await signedInPage(browser, DANA);
-  const document = sampleCover(name, "E-3310");
-  const created = await dana.request.post("/api/v1/designs", {
-    data: { name, equipmentTag: "E-3310", document },
-    headers: { origin: APP_URL },
-  });
-  expect(created.status(), await created.text()).toBe(201);
-  const { designId } = (await created.json()) as { designId: string };
+  const designId = await createSampleCover(dana, name, "E-3310");
 
   await dana.goto(`/designs/${designId}`);
   const panel = dana.getByRole("region", { name: "FE cross-check" });

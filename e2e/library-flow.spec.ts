@@ -3,8 +3,8 @@ import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import Drawing from "dxf-writer";
-import { expect, test, type Browser, type Page } from "./helpers/test";
-import { signIn } from "./helpers/sign-in";
+import { expect, test } from "./helpers/test";
+import { signedInPage } from "./helpers/sign-in";
 import { createSampleCover } from "./helpers/designs";
 
 // The Stockroom and attachment flows with the demo crew of Kestrel Ridge: Ines (admin) adds a
@@ -14,12 +14,6 @@ const INES = "ines.admin@kestrel-ridge.example";
 const DANA = "dana.designer@kestrel-ridge.example";
 const APP_URL = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const suffix = randomUUID().slice(0, 6);
-
-async function signedInPage(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await signIn(page, email);
-  return page;
-}
 
 test("an admin adds a gasket to the Stockroom and a designer picks it in a design", async ({ browser }) => {
   const name = `Halden Creek graphite sheet ${suffix}`;

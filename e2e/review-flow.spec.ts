@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { sampleCover } from "@/tests/fixtures/sample-cover";
-import { expect, test, type APIRequestContext, type Browser, type Page } from "./helpers/test";
-import { signIn } from "./helpers/sign-in";
+import { expect, test, type APIRequestContext } from "./helpers/test";
+import { signedInPage } from "./helpers/sign-in";
 import { createSampleCover } from "./helpers/designs";
 
 // The whole review loop with two people at two browsers: Dana designs and submits, Arlo gets the
@@ -42,13 +42,6 @@ async function waitForMail(
 async function mailsTo(request: APIRequestContext, to: string, subjectPart: string): Promise<number> {
   const response = await request.get(`${OUTBOX_URL}/api/messages?to=${encodeURIComponent(to)}`);
   return ((await response.json()) as OutboxMessage[]).filter((m) => m.subject.includes(subjectPart)).length;
-}
-
-async function signedInPage(browser: Browser, email: string): Promise<Page> {
-  const context = await browser.newContext();
-  const page = await context.newPage();
-  await signIn(page, email);
-  return page;
 }
 
 test("submit → mail → comment on a bolt → return → fix → resubmit → approve, desks updating live", async ({

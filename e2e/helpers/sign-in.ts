@@ -1,4 +1,4 @@
-import { expect, type Page } from "@playwright/test";
+import { expect, type Browser, type Page } from "@playwright/test";
 
 export const DEMO_PASSWORD = "halden-creek-2026";
 
@@ -21,4 +21,11 @@ export async function signOut(page: Page): Promise<void> {
   await page.getByLabel("Account menu").click();
   await page.getByRole("button", { name: "Sign out", exact: true }).click();
   await expect(page).toHaveURL(/\/sign-in/);
+}
+
+/** A page in a fresh browser context (cookies of its own), signed in as `email`. */
+export async function signedInPage(browser: Browser, email: string): Promise<Page> {
+  const page = await (await browser.newContext()).newPage();
+  await signIn(page, email);
+  return page;
 }
