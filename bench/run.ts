@@ -64,7 +64,12 @@ async function main(): Promise<void> {
   );
 }
 
-main().catch((e: unknown) => {
-  console.error(e instanceof Error ? e.message : e);
-  process.exit(1);
-});
+// Exits once every section is done: a section's database pool (getDb keeps two idle connections
+// open) would otherwise hold the process, and npm run bench with it, open for good.
+main().then(
+  () => process.exit(process.exitCode ?? 0),
+  (e: unknown) => {
+    console.error(e instanceof Error ? e.message : e);
+    process.exit(1);
+  },
+);

@@ -23,6 +23,8 @@ for f in bench/*.bench.ts; do
   [ "$name" = fe-check ] && needs_fe=1
 done
 
+# The app as npm start runs it: one web worker per core (scripts/serve.ts), unless WEB_WORKERS is set.
+export WEB_WORKERS="${WEB_WORKERS:-$(nproc)}"
 [ -z "$needs_fe" ] || ensure_fe_tools
 stack_up
 [ -z "$needs_app" ] || stack_app_up >/dev/null

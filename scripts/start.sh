@@ -64,9 +64,15 @@ if [ "$MODE" = production ] && { [ ! -f .next/BUILD_ID ] || [ -n "$(find app fea
   npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -30 "$RUN_DIR/build.log" >&2; die "the build failed (log: $RUN_DIR/build.log)"; }
 fi
 
-NEXT_COMMAND=start
-[ "$MODE" = development ] && NEXT_COMMAND=dev
-setsid npx next "$NEXT_COMMAND" -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+# Production: the web launcher (scripts/serve.ts), WEB_WORKERS `next start` processes on one port
+# (unset: one per core). Development: one `next dev`.
+if [ "$MODE" = development ]; then
+  NEXT_COMMAND=dev
+  setsid npx next dev -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+else
+  NEXT_COMMAND="start, ${WEB_WORKERS:-$(nproc)} web workers"
+  setsid npx tsx --conditions=react-server scripts/serve.ts -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+fi
 echo $! >"$RUN_DIR/app.pid"
 for _ in $(seq 1 240); do
   http_ok "http://127.0.0.1:$APP_PORT/api/health" && break

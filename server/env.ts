@@ -19,7 +19,16 @@ const envSchema = z.object({
     .string()
     .regex(/^postgres(ql)?:\/\//, "must be a postgres:// connection URL")
     .optional(),
+  /**
+   * PostgreSQL connections of the app's request pool. Under the web launcher (scripts/serve.ts)
+   * this is the budget of the whole instance, split between its web workers (at least 2 each).
+   */
   DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  /**
+   * `next start` processes the web launcher (scripts/serve.ts, used by `npm start` and the bench)
+   * runs on one port through Node's cluster module. Unset: the machine's cores; the test stack sets 1.
+   */
+  WEB_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
   APP_URL: z.url({ error: "must be the public origin of the app, e.g. http://127.0.0.1:3000" }),
   SMTP_HOST: z.string({ error: "is missing" }).min(1, "is empty"),
   SMTP_PORT: z.coerce.number({ error: "must be a port number" }).int().min(1).max(65535),

@@ -1,8 +1,8 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { closeSync, openSync } from "node:fs";
 
-// Extra `next start` instances of the build that npm test just made, for specs that need the app
-// with settings of their own (workers, limits, another database). Each runs in its own process
+// Extra `next start` instances (or web launchers) of the build that npm test just made, for specs
+// that need the app with settings of their own (workers, limits, another database). Each runs in its own process
 // group, so stopping it stops npx and the server under it.
 
 /** Polls `path` until it answers 2xx; fails when the process stops or after two minutes. */
@@ -21,8 +21,18 @@ export async function waitReady(origin: string, child: ChildProcess, path = "/ap
 
 /** Starts `next start` on origin's port with `env`, its output appended to `logFile`. */
 export function startInstance(origin: string, env: NodeJS.ProcessEnv, logFile: string): ChildProcess {
+  return startCommand(["next", "start", "-H", "127.0.0.1", "-p", new URL(origin).port], env, logFile);
+}
+
+/** Starts the web launcher (scripts/serve.ts, WEB_WORKERS from `env`) on origin's port. */
+export function startWebLauncher(origin: string, env: NodeJS.ProcessEnv, logFile: string): ChildProcess {
+  const serve = ["tsx", "--conditions=react-server", "scripts/serve.ts"];
+  return startCommand([...serve, "-H", "127.0.0.1", "-p", new URL(origin).port], env, logFile);
+}
+
+function startCommand(args: string[], env: NodeJS.ProcessEnv, logFile: string): ChildProcess {
   const out = openSync(logFile, "w");
-  const child = spawn("npx", ["next", "start", "-H", "127.0.0.1", "-p", new URL(origin).port], {
+  const child = spawn("npx", args, {
     env,
     stdio: ["ignore", out, out],
     detached: true,

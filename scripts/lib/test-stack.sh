@@ -83,8 +83,9 @@ stack_build_wait() {
   npx tsx bench/run.ts route-size --no-write || true
 }
 
-# stack_app_up: production build (unless stack_build_start began one), demo data, `next start` on
-# APP_URL, waits for /api/health.
+# stack_app_up: production build (unless stack_build_start began one), demo data, the web launcher
+# (scripts/serve.ts: WEB_WORKERS `next start` processes, 1 unless set; npm run bench sets the
+# machine's cores) on APP_URL, waits for /api/health.
 stack_app_up() {
   [ -n "${BUILD_PID:-}" ] || stack_build_start
   stack_build_wait
@@ -92,7 +93,7 @@ stack_app_up() {
   npx tsx --conditions=react-server scripts/seed.ts --e2e >"$WORK/seed.log" 2>&1 || { cat "$WORK/seed.log" >&2; die "seeding the test database failed"; }
   # The app's JSON log lines; e2e/ops-logs.spec.ts reads them back.
   export SEALPITCH_APP_LOG="$WORK/app.log"
-  setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$WORK/app.log" 2>&1 &
+  WEB_WORKERS="${WEB_WORKERS:-1}" setsid npx tsx --conditions=react-server scripts/serve.ts -H 127.0.0.1 -p "$APP_PORT" >"$WORK/app.log" 2>&1 &
   APP_PID=$!
   local healthy=""
   for _ in $(seq 1 120); do

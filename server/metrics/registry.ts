@@ -69,6 +69,8 @@ function createMetrics(): Metrics {
       name: "sealpitch_queue_jobs",
       help: "Jobs in the queue by state (queued: waiting for a worker; active: being worked).",
       labelNames: ["queue", "state"],
+      // Every web worker counts the same rows: across workers the figure is one count, not a sum.
+      aggregator: "max",
       registers: [registry],
     }),
     poolConnections: new Gauge({

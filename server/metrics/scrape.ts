@@ -5,9 +5,23 @@ import { getEnv } from "@/server/env";
 import { peekAnalysisPool } from "@/server/analysis/pool";
 import { SHEET_QUEUE } from "@/server/jobs/queue";
 import { getMetrics } from "./registry";
+import { gatherFromWebWorkers } from "./web-workers";
 
-/** Fills the scrape-time gauges (pool use, queue depth) and returns the exposition text. */
+/**
+ * The exposition text of this process, or under the web launcher (scripts/serve.ts) of every web
+ * worker summed (server/metrics/web-workers.ts): counters and histograms add up, the gauges of
+ * the pools too, the queue depth is one count.
+ */
 export async function renderMetrics(): Promise<{ body: string; contentType: string }> {
+  const whole = await gatherFromWebWorkers();
+  if (whole) return whole;
+  const metrics = getMetrics();
+  await fillScrapeGauges();
+  return { body: await metrics.registry.metrics(), contentType: metrics.registry.contentType };
+}
+
+/** Fills the scrape-time gauges (pool use, queue depth) of this process. */
+export async function fillScrapeGauges(): Promise<void> {
   const metrics = getMetrics();
   const pool = getPoolStats();
   metrics.poolConnections.set({ state: "total" }, pool.total);
@@ -33,5 +47,4 @@ export async function renderMetrics(): Promise<{ body: string; contentType: stri
     // Queue tables not there yet (no job ever queued) or the database is down: the gauges keep
     // their last values and readiness says what is wrong.
   }
-  return { body: await metrics.registry.metrics(), contentType: metrics.registry.contentType };
 }

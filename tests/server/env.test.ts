@@ -14,6 +14,12 @@ describe("server settings", () => {
     expect(env.SMTP_PORT).toBe(2525);
     expect(env.SMTP_SECURE).toBe(false);
     expect(env.DATABASE_POOL_MAX).toBe(10);
+    expect(env.WEB_WORKERS).toBeUndefined();
+  });
+
+  it("reads WEB_WORKERS (the web launcher's processes) as a count from 1 to 64", () => {
+    expect(parseEnv({ ...valid, WEB_WORKERS: "2" }).WEB_WORKERS).toBe(2);
+    expect(() => parseEnv({ ...valid, WEB_WORKERS: "0" })).toThrow(/WEB_WORKERS/);
   });
 
   it("lists every missing or bad variable in one message", () => {
