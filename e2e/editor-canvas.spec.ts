@@ -1,5 +1,7 @@
 import { expect, test, type Page } from "./helpers/test";
 import { signIn } from "./helpers/sign-in";
+import { analyzeJoint, type JointAnalysis } from "@/features/analysis/core/analyze";
+import type { JointDesign } from "@/features/analysis/core/design";
 
 const DESIGNER = "dana.designer@kestrel-ridge.example";
 
@@ -75,6 +77,16 @@ test("lay out 16 bolts, break a spacing rule by dragging, undo, save, reload, sw
   await page.mouse.up();
   expect(failed).toBe(true);
   await expect(page.getByRole("status", { name: "Drag gauge" })).toHaveCount(0);
+  // On release the full analysis runs in the core worker; what the desk then shows is exactly
+  // analyzeJoint of the dropped layout (the same core; compared as JSON, every double's digits).
+  await expect.poll(() => page.evaluate(() => window.__sealpitchReleased?.result != null)).toBe(true);
+  const released = JSON.parse(await page.evaluate(() => JSON.stringify(window.__sealpitchReleased))) as {
+    document: JointDesign;
+    result: JointAnalysis;
+  };
+  // The dropped layout's, not the stored one's: b1 sits too close to b2 there.
+  expect(released.result.checks.find((c) => c.id === "spacing.min-pitch:b1-b2")?.status).toBe("fail");
+  expect(JSON.stringify(released.result)).toBe(JSON.stringify(analyzeJoint(released.document)));
   await expect(page.getByTestId("save-state")).toHaveText("Unsaved changes");
   // The Readout groups checks by rule: one row for the minimum-spacing rule, failing, whose
   // pairs are listed on expand; picking the rule highlights its failing pair on the drawing.

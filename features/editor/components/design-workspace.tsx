@@ -69,7 +69,7 @@ export function DesignWorkspace({
   );
 
   const live = useLiveAnalysis(design, stored, editor.dragging);
-  useCoreWarmup(design, live.result, !ro);
+  useCoreWarmup(design, live.result, !ro, live.channel);
   useResultAgreement(stored);
   const view = useMemo(() => (live.result ? toReadoutView(live.result) : null), [live.result]);
   // The last view the core gave, kept while it refuses the layout (view is null then).
@@ -78,8 +78,11 @@ export function DesignWorkspace({
   // drag start (their tables are the costly part of a frame); the canvas and the drag gauge stay live.
   // The Readout's tables render after the drawing: on release the bolt lands and its marks update
   // at once, and the Readout catches up in a background render React may interrupt.
-  const readoutView = useDeferredValue(useHeldWhile(view, editor.dragging));
-  const readoutIssues = useDeferredValue(useHeldWhile(live.issues, editor.dragging));
+  // After a release they hold until the core worker's full result has come (`live.pending`), so the
+  // pointerup update is only the bolt landing.
+  const settling = editor.dragging || live.pending;
+  const readoutView = useDeferredValue(useHeldWhile(view, settling));
+  const readoutIssues = useDeferredValue(useHeldWhile(live.issues, settling));
   // A drag frame the core refuses (a hole over its neighbour's) keeps the last strip on the drawing.
   // A finished FE cross-check of the saved document: its curve on the Seat trace, and the heat
   // map may show its field. Never over an edited layout: the run is of the saved one.
@@ -88,7 +91,7 @@ export function DesignWorkspace({
   const fePath = savedPath && live.stored && !editor.dragging ? savedPath : null;
   const [heatSource, setHeatSource] = useState<"estimate" | "fe">("estimate");
   const feField = heatSource === "fe" ? fePath : null;
-  const heat = useHeatMap(design, editor.dragging ? lastView : view, editor.dragging, feField);
+  const heat = useHeatMap(design, editor.dragging ? lastView : view, settling, feField);
 
   const setInvalid = useCallback((path: string, bad: boolean) => {
     setInvalidState((cur) => {
@@ -105,7 +108,7 @@ export function DesignWorkspace({
     if (applied.current?.bolts === doc.bolts) applied.current = null;
   }, []);
   const invalidCount = Object.keys(invalid).length;
-  const docErrors = useDocumentErrors(design, editor.dragging, null);
+  const docErrors = useDocumentErrors(design, settling, null);
   const blockedReason =
     invalidCount > 0
       ? "Fix the marked fields before saving; nothing with a refused value is written."
@@ -119,7 +122,7 @@ export function DesignWorkspace({
     document: design,
     meta,
     saveAction,
-    blocked: !!blockedReason || editor.dragging,
+    blocked: !!blockedReason || settling,
     enabled: !ro,
     onSaved,
     patternOriginOf,
@@ -133,8 +136,12 @@ export function DesignWorkspace({
 
   const act = useCallback((a: DesignAction) => dispatch(a), [dispatch]);
   // The core's share of a drag frame, for the drag benchmark (read after the frame's commit).
-  const frameCompute = useLatest({ computeMs: live.computeMs, analysed: live.result !== null });
-  const drag = useDragLoop(design, dispatch, frameCompute);
+  const frameCompute = useLatest({
+    computeMs: live.computeMs,
+    workerMs: live.workerMs,
+    analysed: live.result !== null,
+  });
+  const drag = useDragLoop(design, dispatch, frameCompute, live.frames);
 
   const reloadTheirs = () => {
     if (!window.confirm("Discard your unsaved edits and load the version someone else saved?")) return;
@@ -179,7 +186,7 @@ export function DesignWorkspace({
     () => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }),
     [design, units, ro, act, setInvalid, errorFor],
   );
-  const sectionsCtx = useHeldWhile(ctx, editor.dragging);
+  const sectionsCtx = useHeldWhile(ctx, settling);
 
   return (
     <div className="space-y-3" data-testid="design-workspace">
@@ -292,7 +299,7 @@ export function DesignWorkspace({
             activeCheckId={activeCheck}
             onPickCheck={setActiveCheck}
             onPickBolt={setSelected}
-            basis={editor.dragging ? "held" : live.stored ? "stored" : "preview"}
+            basis={settling ? "held" : live.stored ? "stored" : "preview"}
             feTrace={fePath}
           />
         </div>

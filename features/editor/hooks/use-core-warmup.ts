@@ -8,6 +8,7 @@ import { buildHeatQuads } from "../model/heat-band";
 import { mergePreview } from "../model/merge-preview";
 import { moveBolt } from "../model/move-bolt";
 import { toReadoutView } from "../model/readout-view";
+import type { AnalysisChannel } from "./analysis-channel";
 
 /** Drag frames computed, and thrown away, in idle time after the Layout desk opens. */
 export const WARMUP_RUNS = 24;
@@ -19,8 +20,15 @@ export const WARMUP_RUNS = 24;
  * first drag would run that code cold, before the JavaScript engine has compiled it. Every other
  * run moves the first bolt a little, along and off the path, through the editor's own moveBolt,
  * so the engine also sees the bolt objects a drag produces. Starts once the browser's core has come.
+ * The same documents go to the core worker (`channel`), previews and full analyses in turn, which
+ * computes them in its own engine while the page is idle; their answers are dropped.
  */
-export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, enabled: boolean): void {
+export function useCoreWarmup(
+  design: JointDesign,
+  base: JointAnalysis | null,
+  enabled: boolean,
+  channel: AnalysisChannel | null,
+): void {
   const latest = useLatest({ design, base });
   const core = useEditorCore();
   useEffect(() => {
@@ -41,6 +49,7 @@ export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, e
         left % 2 === 0 || !b
           ? d
           : moveBolt(d, b.id, { sMm: b.sMm + 0.1, offPathMm: (b.offPathMm ?? 0) + 0.1 });
+      channel?.request(moved, left % 4 < 2 ? "preview" : "full", true);
       try {
         const preview = previewJoint(moved);
         if (full) {
@@ -54,5 +63,5 @@ export function useCoreWarmup(design: JointDesign, base: JointAnalysis | null, e
     };
     handle = idle(step);
     return () => cancel(handle);
-  }, [enabled, latest, core]);
+  }, [enabled, latest, core, channel]);
 }

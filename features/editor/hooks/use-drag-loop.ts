@@ -5,6 +5,7 @@ import { flushSync } from "react-dom";
 import type { JointDesign, PointMm } from "@/features/analysis/core/design";
 import type { HistoryAction } from "../model/editor-action";
 import { resolveMoveTarget } from "../model/move-bolt";
+import type { LiveFrames } from "./use-live-analysis";
 
 /**
  * One drag frame: the synchronous update (of which `computeMs` in the core), Konva's draw, and
@@ -14,6 +15,8 @@ import { resolveMoveTarget } from "../model/move-bolt";
 export interface FrameTiming {
   reactMs: number;
   computeMs: number;
+  /** The core worker's time for the preview this frame shows (off the page's thread), ms. */
+  workerMs: number;
   drawMs: number;
   totalMs: number;
   analysed: boolean;
@@ -22,12 +25,21 @@ export interface FrameTiming {
 /** What the workspace reports of the frame it just rendered. */
 export interface FrameCompute {
   computeMs: number;
+  workerMs: number;
   analysed: boolean;
 }
 
 declare global {
   interface Window {
-    __sealpitchPerf?: { frames: FrameTiming[]; releases?: number[] };
+    __sealpitchPerf?: {
+      frames: FrameTiming[];
+      /** The synchronous pointerup update of each release, ms. */
+      releases?: number[];
+      /** performance.now() when the full result after the last release was committed. */
+      releaseShownAt?: number;
+      /** Written by bench/editor-drag's release probe. */
+      releaseProbe?: { blockMs: number; settleMs: number; shownMs: number }[];
+    };
   }
 }
 
@@ -42,11 +54,14 @@ interface Move {
  * Turns pointer moves into at most one document change per animation frame. Each frame is
  * rendered synchronously (flushSync) so the recompute + React work can be timed, and the Konva
  * draw that follows is added to it: `window.__sealpitchPerf.frames` (read by bench/editor-drag).
+ * A frame also shows the newest preview the core worker has sent (`live.take`), in the same
+ * update as the bolt's move; a preview that comes when no move is waiting gets a frame of its own.
  */
 export function useDragLoop(
   design: JointDesign,
   dispatch: (a: HistoryAction) => void,
   compute: { current: FrameCompute },
+  live: LiveFrames,
 ) {
   const designRef = useLatest(design);
   const pending = useRef<Move | null>(null);
@@ -57,12 +72,23 @@ export function useDragLoop(
     raf.current = 0;
     const m = pending.current;
     pending.current = null;
-    if (!m) return;
     const t0 = performance.now();
-    const t = resolveMoveTarget(designRef.current, m.id, m.point, { free: m.free, snapMm: m.snapMm });
-    flushSync(() => dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm }));
-    frame.current = { reactMs: performance.now() - t0, ...compute.current };
-  }, [dispatch, compute, designRef]);
+    let changed = false;
+    flushSync(() => {
+      changed = live.take();
+      if (!m) return;
+      const t = resolveMoveTarget(designRef.current, m.id, m.point, { free: m.free, snapMm: m.snapMm });
+      dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm });
+      changed = true;
+    });
+    if (changed) frame.current = { reactMs: performance.now() - t0, ...compute.current };
+  }, [dispatch, compute, designRef, live]);
+  useEffect(() => {
+    live.listen(() => {
+      if (!raf.current) raf.current = requestAnimationFrame(flush);
+    });
+    return () => live.listen(null);
+  }, [live, flush]);
 
   const onDragStart = useCallback(() => dispatch({ type: "drag-start" }), [dispatch]);
   const onDragMove = useCallback(
@@ -72,8 +98,9 @@ export function useDragLoop(
     },
     [flush],
   );
-  // Release: the full analysis and the drawing catch up in one synchronous update, timed too (the
-  // Readout follows in a deferred render, see design-workspace.tsx).
+  // Release: the last move lands and the drag ends in one synchronous update, timed too; the
+  // full analysis follows from the core worker (use-live-analysis.ts), the Readout in a deferred
+  // render (design-workspace.tsx).
   const onDragEnd = useCallback(() => {
     if (raf.current) cancelAnimationFrame(raf.current);
     flush();
@@ -90,6 +117,7 @@ export function useDragLoop(
     perf.frames.push({
       reactMs: f.reactMs,
       computeMs: f.computeMs,
+      workerMs: f.workerMs,
       analysed: f.analysed,
       drawMs,
       totalMs: f.reactMs + drawMs,

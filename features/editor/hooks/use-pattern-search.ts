@@ -2,7 +2,7 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { SuggestionRequest } from "@/features/analysis/core/suggest/request";
 import type { SuggestionProgress, SuggestionResult } from "@/features/analysis/core/suggest/search";
-import type { SuggestWorkerReply, SuggestWorkerRequest } from "../workers/suggest-protocol";
+import type { SuggestWorkerReply, SuggestWorkerRequest } from "../workers/core-worker-protocol";
 
 type PatternSearchState =
   | { status: "idle" }
@@ -28,7 +28,7 @@ export function usePatternSearch() {
   const run = useCallback(
     (request: SuggestionRequest) => {
       stop();
-      const w = new Worker(new URL("../workers/suggest-worker.ts", import.meta.url), { type: "module" });
+      const w = new Worker(new URL("../workers/core-worker.ts", import.meta.url), { type: "module" });
       worker.current = w;
       setState({ status: "running", progress: null });
       w.onmessage = (event: MessageEvent<SuggestWorkerReply>) => {
@@ -49,7 +49,7 @@ export function usePatternSearch() {
         setState({ status: "error", message: event.message || "The search stopped unexpectedly." });
         stop();
       };
-      w.postMessage({ request } satisfies SuggestWorkerRequest);
+      w.postMessage({ type: "suggest", request } satisfies SuggestWorkerRequest);
     },
     [stop],
   );
