@@ -10,7 +10,9 @@
  * [practice]; Ab = n·root area ≥ Am (ASME VIII-1 Appendix 2); and the mean gasket stress at
  * minimum preload, n·Fmin/A, must reach the seating stress (the minimum never exceeds the mean).
  * It then scans the count upwards from that bound, running the full analysis on each layout, and
- * keeps the first that qualifies (verdict.ts says how warnings count). A layout that fails only
+ * keeps the first that qualifies (verdict.ts says how warnings count). At each count it tries
+ * every keep-out edge-anchor variant the bounds leave open (layout.ts `edgeVariants`, the one
+ * with a bolt at both ends of every zone first) before the next count. A layout that fails only
  * rules more bolts help moves the scan on; the seating rule also lifts the bound from the stress
  * just computed. So within the search space no qualifying layout of that size, material and
  * offset has fewer bolts than the one returned.
@@ -27,7 +29,7 @@ import { getBoltMaterialById } from "../catalogue/bolt-materials";
 import { mmToIn, mpaToPsi } from "../units";
 import type { ThreadRow } from "../catalogue/threads";
 import { DesignRefusedError, formatIssue } from "../validate";
-import { countBounds, layoutBolts, type LayoutFrame } from "./layout";
+import { countBounds, edgeVariants, layoutBolts, type EdgeAnchors, type LayoutFrame } from "./layout";
 import {
   checkSuggestionRequest,
   fastenerFor,
@@ -136,8 +138,14 @@ interface Combo {
 }
 
 /** The design of one layout: fastener for the size (length from the grip), path and bolts. */
-function designFor(base: JointDesign, c: Combo, layout: LayoutFrame, n: number): JointDesign | null {
-  const bolts = layoutBolts(layout, n);
+function designFor(
+  base: JointDesign,
+  c: Combo,
+  layout: LayoutFrame,
+  n: number,
+  edges?: EdgeAnchors,
+): JointDesign | null {
+  const bolts = layoutBolts(layout, n, edges);
   if (!bolts) return null;
   const fastener = fastenerFor(base.fastener, c.thread, c.materialId, c.stocked);
   const d: JointDesign = { ...base, fastener, boltPath: c.frame.boltPath, bolts };
@@ -256,7 +264,27 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
     const maxRule = strict && maxPitch === 6 * d ? "spacing.pitch-band" : "spacing.max-pitch";
     const minPitch = Math.max(lim.minChordMm + clearance, strict ? 3 * d : 0);
     const minRule = strict && minPitch === 3 * d ? "spacing.pitch-band" : "spacing.min-pitch";
-    const b = countBounds(layout, maxPitch, minPitch);
+    // Every edge-anchor variant (the first keeps a bolt at both ends of every keep-out) with its
+    // count bounds; the ones no count can lay out are left out before any analysis.
+    const variants = edgeVariants(layout)
+      .map((edges) => ({ edges, b: countBounds(layout, maxPitch, minPitch, edges), dead: false }))
+      .filter((v, i) => i === 0 || v.b.short || (v.b.lo <= v.b.hi && v.b.gapMm <= maxPitch + 1e-9));
+    // When none can, name the default's reason, or, when every variant has anchors closer than
+    // the smallest pitch, the widest such span (the one no choice of edges widens).
+    const shorts = variants.every((v) => v.b.short)
+      ? variants.reduce((w, v) => (v.b.short!.lengthMm > w.b.short!.lengthMm ? v : w))
+      : variants[0];
+    const b0 = shorts.b;
+    const open = variants.filter((v) => v.b.lo <= v.b.hi && v.b.gapMm <= maxPitch + 1e-9 && !v.b.short);
+    const b =
+      open.length === 0
+        ? b0
+        : {
+            lo: Math.min(...open.map((v) => v.b.lo)),
+            hi: Math.max(...open.map((v) => v.b.hi)),
+            gapMm: 0,
+            short: null,
+          };
     const step = pipePattern ? 4 : 1;
     const up = (n: number) => Math.ceil(n / step) * step;
     let lo = up(Math.max(b.lo, 2, layout.fixed.length));
@@ -300,45 +328,59 @@ export function suggestPatterns(req: SuggestionRequest, hooks: SuggestionHooks =
     let n = lo;
     let last: { rule: string; pitch: number; reason: string } | null = null;
     while (n <= hi) {
-      if (hooks.shouldStop?.()) {
-        cancelled = true;
-        return;
-      }
-      if (analyses >= maxAnalyses) {
-        truncated = true;
-        return;
-      }
-      const design = designFor(base, c, layout, n);
-      if (!design) break;
-      let a: JointAnalysis;
-      analyses++;
-      try {
-        a = analyzeJoint(design);
-      } catch (e) {
-        const why = e instanceof DesignRefusedError ? e.issues.map(formatIssue).join("; ") : String(e);
-        return block("core", L / n, `the core refuses ${n} × ${c.thread.designation}: ${why}`);
-      }
-      if (!areaByOffset.has(c.frame.offsetMm) && a.summary.meanGasketStressMpa > 0)
-        areaByOffset.set(c.frame.offsetMm, (n * a.preload.targetN) / a.summary.meanGasketStressMpa);
-      const v = judge(a.checks, judging);
-      if (v.ok) {
-        found.push(candidateOf(c, design, a, v.carried));
-        return;
-      }
-      // The check that ends the scan is the one to name: one more bolts do not help, when there is one.
-      const first = (!v.moreBoltsMayHelp && v.blocking.find((x) => !moreBoltsHelp(x))) || v.blocking[0];
-      const pitch = pitchRange(a).max;
-      last = {
-        rule: ruleOf(first.id),
-        pitch,
-        reason: `${n} × ${c.thread.designation}: ${first.title} (${first.status}${first.value !== null ? `, ${quantityParts(first.value, first.unit, units).join(" ")}` : ""}${first.limit !== null ? ` against ${quantityParts(first.limit, first.unit, units)[0]}` : ""})`,
-      };
-      if (!v.moreBoltsMayHelp) break;
       let next = n + step;
-      if (v.blocking.some((x) => x.id === "gasket.seating")) {
-        const meanAtMin = (a.summary.meanGasketStressMpa * a.preload.minN) / a.preload.targetN;
-        if (meanAtMin > 0) next = Math.max(next, up(Math.ceil((0.98 * n * seatLimit) / meanAtMin)));
+      let anyLaid = false;
+      const tried = new Set<string>();
+      for (const v of open) {
+        if (v.dead || n < v.b.lo || n > v.b.hi) continue;
+        if (hooks.shouldStop?.()) {
+          cancelled = true;
+          return;
+        }
+        if (analyses >= maxAnalyses) {
+          truncated = true;
+          return;
+        }
+        const design = designFor(base, c, layout, n, v.edges);
+        if (!design) continue;
+        // Two variants may lay out the same bolts; analyse each layout once.
+        const key = design.bolts.map((x) => x.sMm.toFixed(6)).join(",");
+        if (tried.has(key)) continue;
+        tried.add(key);
+        anyLaid = true;
+        let a: JointAnalysis;
+        analyses++;
+        try {
+          a = analyzeJoint(design);
+        } catch (e) {
+          const why = e instanceof DesignRefusedError ? e.issues.map(formatIssue).join("; ") : String(e);
+          return block("core", L / n, `the core refuses ${n} × ${c.thread.designation}: ${why}`);
+        }
+        if (!areaByOffset.has(c.frame.offsetMm) && a.summary.meanGasketStressMpa > 0)
+          areaByOffset.set(c.frame.offsetMm, (n * a.preload.targetN) / a.summary.meanGasketStressMpa);
+        const verdict = judge(a.checks, judging);
+        if (verdict.ok) {
+          found.push(candidateOf(c, design, a, verdict.carried));
+          return;
+        }
+        // The check that ends the scan is the one to name: one more bolts do not help, when there is one.
+        const first =
+          (!verdict.moreBoltsMayHelp && verdict.blocking.find((x) => !moreBoltsHelp(x))) ||
+          verdict.blocking[0];
+        const pitch = pitchRange(a).max;
+        last = {
+          rule: ruleOf(first.id),
+          pitch,
+          reason: `${n} × ${c.thread.designation}: ${first.title} (${first.status}${first.value !== null ? `, ${quantityParts(first.value, first.unit, units).join(" ")}` : ""}${first.limit !== null ? ` against ${quantityParts(first.limit, first.unit, units)[0]}` : ""})`,
+        };
+        if (!verdict.moreBoltsMayHelp) v.dead = true;
+        // The mean gasket stress does not depend on where the bolts stand: the lift holds for every variant.
+        else if (verdict.blocking.some((x) => x.id === "gasket.seating")) {
+          const meanAtMin = (a.summary.meanGasketStressMpa * a.preload.minN) / a.preload.targetN;
+          if (meanAtMin > 0) next = Math.max(next, up(Math.ceil((0.98 * n * seatLimit) / meanAtMin)));
+        }
       }
+      if (open.every((v) => v.dead || (!anyLaid && n >= v.b.hi))) break;
       n = next;
     }
     if (last) block(last.rule, last.pitch, last.reason);
