@@ -6,6 +6,7 @@ import type { JointDesign, UnitSystem } from "@/features/analysis/core/design";
 import type { DesignWorkspaceProps } from "@/features/designs/workspace-contract";
 import { nextBoltId } from "../model/bolt-path";
 import type { DesignAction } from "../model/editor-action";
+import type { EditorChoices } from "../model/editor-choices";
 import { highlightedBolts, toReadoutView } from "../model/readout-view";
 import { renumberBolts } from "../model/renumber-bolts";
 import { degreesToArcMm } from "../model/rotate-pattern";
@@ -42,7 +43,8 @@ export function DesignWorkspace({
   unitSystem,
   setUnitSystemAction,
   readOnly,
-}: DesignWorkspaceProps) {
+  choices,
+}: DesignWorkspaceProps & { choices: EditorChoices }) {
   const ro = readOnly ?? !dto.canEdit;
   const editor = useEditorHistory(dto.document);
   const { design, dispatch } = editor;
@@ -183,8 +185,8 @@ export function DesignWorkspace({
   const checks = lastView?.checks ?? [];
   const highlight = highlightedBolts(view, { checkId: activeCheck ?? undefined });
   const ctx = useMemo(
-    () => ({ design, units, readOnly: ro, dispatch: act, setInvalid, errorFor }),
-    [design, units, ro, act, setInvalid, errorFor],
+    () => ({ design, units, readOnly: ro, choices, dispatch: act, setInvalid, errorFor }),
+    [design, units, ro, choices, act, setInvalid, errorFor],
   );
   const sectionsCtx = useHeldWhile(ctx, settling);
 

@@ -1,8 +1,4 @@
 "use client";
-import {
-  TIGHTENING_METHODS,
-  getTighteningMethodById,
-} from "@/features/analysis/core/catalogue/tightening-methods";
 import type { ConeAngleSetting, PreloadRule, TighteningMethod } from "@/features/analysis/core/design";
 import { DEFAULT_FIXED_CONE_ANGLE_DEG } from "@/features/analysis/core/design";
 import { FIELD_SPECS, fromBound } from "../model/field-specs";
@@ -22,7 +18,8 @@ const PRELOAD_DEFAULTS: Record<PreloadRule["kind"], number> = {
 export function FormSectionAssembly({ ctx }: { ctx: FormContext }) {
   const a = ctx.design.assembly;
   const e = ctx.design.estimator;
-  const method = getTighteningMethodById(a.method);
+  const methods = ctx.choices.tighteningMethods;
+  const method = methods.find((m) => m.value === a.method);
   const preloadSpec =
     a.preload.kind === "bolt-stress"
       ? { ...FIELD_SPECS.preloadValue, label: "Target bolt stress", quantity: "stress" as const }
@@ -42,12 +39,8 @@ export function FormSectionAssembly({ ctx }: { ctx: FormContext }) {
           onChange={(m: TighteningMethod) =>
             ctx.dispatch({ type: "set-field", path: "assembly.method", value: m })
           }
-          options={TIGHTENING_METHODS.map((m) => ({ value: m.id, label: m.name }))}
-          hint={
-            method
-              ? `Preload scatter ±${Math.round(method.scatter * 100)} % (${method.source}; ${method.edition})`
-              : undefined
-          }
+          options={methods.map((m) => ({ value: m.value, label: m.label }))}
+          hint={method?.hint}
         />
       </div>
       <SelectField

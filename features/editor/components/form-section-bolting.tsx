@@ -1,6 +1,5 @@
 "use client";
-import { BOLT_MATERIALS } from "@/features/analysis/core/catalogue/bolt-materials";
-import { THREADS, findThread } from "@/features/analysis/core/catalogue/threads";
+import { findThreadIn } from "@/features/analysis/core/catalogue/lookups";
 import type { Fastener } from "@/features/analysis/core/design";
 import { inToMm } from "@/features/analysis/core/units";
 import { FIELD_SPECS } from "../model/field-specs";
@@ -9,16 +8,16 @@ import type { FormContext } from "./form-context";
 import { NumberField } from "./number-field";
 import { SelectField } from "./select-field";
 
-const SERIES_LABEL = { "metric-coarse": "metric coarse", unc: "UNC", "unified-8un": "8UN" } as const;
-
 /** Bolt size, material, count, length, hole, washers and the nut or tapped hole. */
 export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
   const d = ctx.design;
   const f = d.fastener;
+  const { threads, boltMaterials } = ctx.choices;
   const setFastener = (next: Fastener) => ctx.dispatch({ type: "set-field", path: "fastener", value: next });
-  const size = THREADS.find((t) => t.designation === f.designation && t.series === f.threadSeries)?.id ?? "";
+  const size =
+    threads.find((t) => t.designation === f.designation && t.series === f.threadSeries)?.value ?? "";
   const chooseSize = (id: string) => {
-    const t = THREADS.find((x) => x.id === id);
+    const t = threads.find((x) => x.value === id);
     if (!t) return;
     // A new size brings its usual clearance hole (ISO 273 medium ≈ d + 2/3 mm; inch d + 1/8 in) [practice].
     const hole =
@@ -31,7 +30,7 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
         : f.washer;
     setFastener({ ...f, designation: t.designation, threadSeries: t.series, holeDiameterMm: hole, washer });
   };
-  const nominal = findThread(f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
+  const nominal = findThreadIn(threads, f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
   return (
     <FormSection title="Bolting">
       <SelectField
@@ -40,7 +39,7 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
         value={size}
         disabled={ctx.readOnly}
         onChange={chooseSize}
-        options={THREADS.map((t) => ({ value: t.id, label: `${t.designation} (${SERIES_LABEL[t.series]})` }))}
+        options={threads.map((t) => ({ value: t.value, label: t.label }))}
       />
       <SelectField
         path="fastener.materialId"
@@ -57,7 +56,7 @@ export function FormSectionBolting({ ctx }: { ctx: FormContext }) {
           ...(f.stockedMaterial
             ? [{ value: f.materialId, label: `${f.stockedMaterial.name} (copied from our Stockroom)` }]
             : []),
-          ...BOLT_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
+          ...boltMaterials.map((m) => ({ value: m.value, label: m.label })),
         ]}
       />
       <NumberField

@@ -1,9 +1,10 @@
 "use client";
-import { boltMaterialOf, getStrengthForDiameter } from "@/features/analysis/core/catalogue/bolt-materials";
-import { FLANGE_MATERIALS } from "@/features/analysis/core/catalogue/flange-materials";
-import { findThread } from "@/features/analysis/core/catalogue/threads";
+import {
+  findThreadIn,
+  rangeForDiameter,
+  sortedStrengthRanges,
+} from "@/features/analysis/core/catalogue/lookups";
 import type { FlangeDesignInputs } from "@/features/analysis/core/design";
-import { COVER_SKETCHES } from "@/features/analysis/core/flange-design/flat-cover";
 import { FIELD_SPECS } from "../model/field-specs";
 import { FormSection } from "./form-parts";
 import type { FormContext } from "./form-context";
@@ -16,11 +17,6 @@ const KIND_OPTIONS: { value: FlangeDesignInputs["kind"]; label: string }[] = [
   { value: "integral-hub", label: "Integral, with tapered hub (weld neck)" },
   { value: "integral-no-hub", label: "Integral, no hub taper (g1 = g0)" },
   { value: "ring-loose", label: "Loose ring, no hub" },
-];
-
-const MATERIAL_OPTIONS = [
-  { value: "", label: "Not chosen" },
-  ...FLANGE_MATERIALS.map((m) => ({ value: m.id, label: m.name })),
 ];
 
 const SPECS = {
@@ -44,9 +40,18 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
   const hub = fd.hub ?? { g0Mm: 6, g1Mm: 12, hMm: 40 };
   const hasCover = d.layers.some((l) => l.role === "cover");
   const f = d.fastener;
-  const nominal = findThread(f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
-  const row = boltMaterialOf(f);
-  const catalogueAllowable = row ? (getStrengthForDiameter(row, nominal)?.allowableMpa ?? null) : null;
+  const { threads, boltMaterials, flangeMaterials, coverSketches } = ctx.choices;
+  const nominal = findThreadIn(threads, f.designation, f.threadSeries)?.nominalDiameterMm ?? 20;
+  // The bolting's allowable: its embedded Stockroom copy's, else the catalogue row's (none: undefined).
+  const catalogueRow = f.stockedMaterial ? undefined : boltMaterials.find((m) => m.value === f.materialId);
+  const boltingName = f.stockedMaterial ? f.stockedMaterial.name : catalogueRow?.label;
+  const allowables = f.stockedMaterial
+    ? sortedStrengthRanges(f.stockedMaterial.ranges)
+    : catalogueRow?.allowables;
+  const catalogueAllowable = allowables
+    ? (rangeForDiameter(allowables, nominal)?.allowableMpa ?? null)
+    : null;
+  const materialOptions = [{ value: "", label: "Not chosen" }, ...flangeMaterials];
   const entered = f.enteredAllowable ?? null;
   // The flange's and the cover's material: a catalogue row, or none chosen yet.
   const materialSelect = (key: "flangeMaterialId" | "coverMaterialId", label: string) => (
@@ -56,7 +61,7 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
       value={fd[key] ?? ""}
       disabled={ctx.readOnly}
       onChange={(id) => set({ [key]: id === "" ? null : id })}
-      options={MATERIAL_OPTIONS}
+      options={materialOptions}
     />
   );
   const setBoltAllowable = (next: { valueMpa: number; source: string } | null) =>
@@ -110,10 +115,7 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
             value={fd.coverSketch?.kind === "catalogue" ? fd.coverSketch.id : ""}
             disabled={ctx.readOnly}
             onChange={(id) => set({ coverSketch: id === "" ? null : { kind: "catalogue", id } })}
-            options={[
-              { value: "", label: "Not chosen" },
-              ...COVER_SKETCHES.map((s) => ({ value: s.id, label: `${s.label} — C = ${s.c}` })),
-            ]}
+            options={[{ value: "", label: "Not chosen" }, ...coverSketches]}
           />
           {materialSelect("coverMaterialId", "Cover material")}
         </>
@@ -144,8 +146,8 @@ export function FormSectionFlange({ ctx }: { ctx: FormContext }) {
             serverError={ctx.errorFor("fastener.enteredAllowable.source")}
           />
           <p className="col-span-2 text-micro text-ink-500">
-            {row?.name ?? "This bolting"} has no ASME II-D allowable: the Appendix 2 bolt-area check runs only
-            on an allowable you enter, with its source.
+            {boltingName ?? "This bolting"} has no ASME II-D allowable: the Appendix 2 bolt-area check runs
+            only on an allowable you enter, with its source.
           </p>
         </>
       )}

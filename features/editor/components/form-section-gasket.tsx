@@ -27,7 +27,7 @@ function copiedClass(row: GasketChoiceDto | undefined, qMinMpa: number | undefin
 export function FormSectionGasket({ ctx }: { ctx: FormContext }) {
   const g = ctx.design.gasket;
   const mat = g.material;
-  const choices = useGasketChoices(!ctx.readOnly);
+  const choices = useGasketChoices(ctx.choices.builtinGaskets, !ctx.readOnly);
   const currentId = choiceIdOfMaterial(mat.catalogueId);
   const row = currentId ? choices.rows.find((r) => r.id === currentId) : undefined;
   const hasTightness = !!row && LEAKAGE_CLASSES.some((c) => row.tightness[c]?.qMinMpa != null);

@@ -1,7 +1,7 @@
 // Stockroom bolting rows as the pattern search takes them ("stocked bolting"): the row's values
 // as stored, copied into `StockedBoltingRow`s (core/suggest/request.ts). Built-in rows are the
 // catalogue's materials and are offered by their catalogue id instead. Pure (safe on the client).
-import { sortedStrengthRanges } from "@/features/analysis/core/catalogue/bolt-materials";
+import { sortedStrengthRanges } from "@/features/analysis/core/catalogue/lookups";
 import type { StockedBoltMaterial } from "@/features/analysis/core/design";
 import type { StockedBoltingRow } from "@/features/analysis/core/suggest/request";
 import type { BoltingInput } from "../schema";

@@ -6,6 +6,7 @@ import { saveWorkingRevisionAction, setUnitSystemAction } from "@/features/desig
 import { findDesign } from "@/features/designs/queries";
 import { toWorkspaceDesign } from "@/features/designs/workspace-dto";
 import { DesignWorkspace } from "@/features/editor/components/design-workspace";
+import { buildEditorChoices } from "@/features/editor/model/editor-choices";
 import { requireViewer } from "@/server/auth/guard";
 import { findLatestExportJob } from "@/server/jobs/export-files";
 import { DesignCompanions } from "./_components/design-companions";
@@ -35,6 +36,7 @@ export default async function DesignPage({ params }: { params: Promise<{ designI
         saveAction={saveWorkingRevisionAction}
         unitSystem={viewer.unitSystem}
         setUnitSystemAction={setUnitSystemAction}
+        choices={buildEditorChoices()}
       />
       <DesignCompanions
         design={workspace}

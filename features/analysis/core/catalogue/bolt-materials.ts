@@ -5,7 +5,8 @@
  */
 import { inToMm, ksiToMpa } from "../units";
 import type { Confidence, Provenance } from "./confidence";
-import type { BoltStrengthRange, Fastener, StockedBoltMaterial } from "../design";
+import { rangeForDiameter, sortedStrengthRanges } from "./lookups";
+import type { Fastener, StockedBoltMaterial } from "../design";
 
 export interface StrengthRange {
   /** Upper limit of the nominal diameter range, mm (inclusive). */
@@ -170,19 +171,6 @@ export function getBoltMaterialById(id: string): BoltMaterialRow | undefined {
   return BOLT_MATERIALS.find((m) => m.id === id);
 }
 
-/** The five stored values of each strength range, in ascending order of size (a copy). */
-export function sortedStrengthRanges(ranges: readonly BoltStrengthRange[]): BoltStrengthRange[] {
-  return [...ranges]
-    .sort((a, b) => a.maxDiameterMm - b.maxDiameterMm)
-    .map((r) => ({
-      maxDiameterMm: r.maxDiameterMm,
-      proofMpa: r.proofMpa,
-      yieldMpa: r.yieldMpa,
-      tensileMpa: r.tensileMpa,
-      allowableMpa: r.allowableMpa,
-    }));
-}
-
 /**
  * A Stockroom bolting row as a material row. The organisation's row carries no confidence tag of
  * ours, so its values are tagged "mem" (never read as published); the row's own source travels
@@ -222,8 +210,5 @@ export function boltMaterialOf(
  * Example: `getStrengthForDiameter(getBoltMaterialById("iso-898-1-8.8")!, 20).proofMpa` → 600.
  */
 export function getStrengthForDiameter(material: BoltMaterialRow, nominalDiameterMm: number): StrengthRange {
-  return (
-    material.ranges.find((r) => nominalDiameterMm <= r.maxDiameterMm + 1e-9) ??
-    material.ranges[material.ranges.length - 1]
-  );
+  return rangeForDiameter(material.ranges, nominalDiameterMm);
 }

@@ -6,6 +6,7 @@
 import { in2ToMm2, inToMm } from "../units";
 import type { ThreadSeries } from "../design";
 import type { Provenance } from "./confidence";
+import { findThreadIn } from "./lookups";
 
 export interface ThreadRow extends Provenance {
   id: string;
@@ -124,10 +125,5 @@ export function getThreadById(id: string): ThreadRow | undefined {
  * Example: `findThread("1-1/8", "unified-8un")?.id` → "1-1/8-8UN".
  */
 export function findThread(designation: string, series: ThreadSeries): ThreadRow | undefined {
-  const exact = THREADS.find((t) => t.designation === designation && t.series === series);
-  if (exact) return exact;
-  if (series === "metric-coarse") return undefined;
-  return THREADS.find(
-    (t) => t.designation === designation && t.series !== "metric-coarse" && t.threadsPerInch === 8,
-  );
+  return findThreadIn(THREADS, designation, series);
 }
