@@ -26,9 +26,14 @@ interface Props {
   basis: "preview" | "stored" | "held";
 }
 
+// Off-screen sections are skipped by the browser's layout and paint (content-visibility), so a
+// Readout that catches up after a release redraws only what is on screen.
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
   return (
-    <section aria-label={title} className="border-t border-ink-100 pt-2">
+    <section
+      aria-label={title}
+      className="border-t border-ink-100 pt-2 [contain-intrinsic-size:auto_240px] [content-visibility:auto]"
+    >
       <h3 className="mb-1 text-body font-semibold text-ink-800">{title}</h3>
       {children}
     </section>

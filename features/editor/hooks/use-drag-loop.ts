@@ -20,6 +20,8 @@ export interface FrameTiming {
   drawMs: number;
   totalMs: number;
   analysed: boolean;
+  /** True when the frame moved the bolt; false for a frame that only shows a preview that came. */
+  moved: boolean;
 }
 
 /** What the workspace reports of the frame it just rendered. */
@@ -66,7 +68,7 @@ export function useDragLoop(
   const designRef = useLatest(design);
   const pending = useRef<Move | null>(null);
   const raf = useRef(0);
-  const frame = useRef<({ reactMs: number } & FrameCompute) | null>(null);
+  const frame = useRef<({ reactMs: number; moved: boolean } & FrameCompute) | null>(null);
 
   const flush = useCallback(() => {
     raf.current = 0;
@@ -81,7 +83,7 @@ export function useDragLoop(
       dispatch({ type: "move-bolt", boltId: m.id, sMm: t.sMm, offPathMm: t.offPathMm });
       changed = true;
     });
-    if (changed) frame.current = { reactMs: performance.now() - t0, ...compute.current };
+    if (changed) frame.current = { reactMs: performance.now() - t0, moved: !!m, ...compute.current };
   }, [dispatch, compute, designRef, live]);
   useEffect(() => {
     live.listen(() => {
@@ -119,6 +121,7 @@ export function useDragLoop(
       computeMs: f.computeMs,
       workerMs: f.workerMs,
       analysed: f.analysed,
+      moved: f.moved,
       drawMs,
       totalMs: f.reactMs + drawMs,
     });

@@ -1,12 +1,14 @@
 "use client";
 import { useEffect, useMemo, useState } from "react";
 import type { JointDesign } from "@/features/analysis/core/design";
+import type { GasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
 import { buildHeatQuads } from "../model/heat-band";
 import { buildHeatScale } from "../model/heat-scale";
 import type { ReadoutView } from "../model/readout-view";
 import { paintGrid } from "../components/heat-grid-image";
 import type { HeatGridPicture } from "../components/heat-grid-node";
 import { loadEditorCore } from "./use-editor-core";
+import { gridInWorker } from "./grid-in-worker";
 
 /** Settling time before the full-area grid is recomputed after the last change, ms. */
 const GRID_DELAY_MS = 120;
@@ -23,7 +25,8 @@ export interface FeField {
  * analysis profile (cheap). Once edits settle: the core's full-area grid, painted to an image.
  * With `fe` (the FE field is switched on) the strip is coloured by the FE cross-check's gasket
  * stress instead, on a scale that covers both, and the estimate's full-area grid is not drawn.
- * The grid comes from the browser's core, fetched after the page shows (use-editor-core.ts).
+ * The grid comes from a core worker (grid-in-worker.ts), or from the browser's core on the page,
+ * fetched after the page shows (use-editor-core.ts), when there is no worker.
  */
 export function useHeatMap(
   design: JointDesign,
@@ -47,10 +50,10 @@ export function useHeatMap(
     if (dragging || !view || !scale || fe) return;
     let live = true;
     const id = window.setTimeout(() => {
-      void loadEditorCore().then(({ computeGasketStressGrid }) => {
+      const { nx, ny } = design.estimator.grid;
+      const show = (g: GasketStressGrid) => {
         if (!live) return;
         try {
-          const g = computeGasketStressGrid(design, design.estimator.grid.nx, design.estimator.grid.ny);
           const f = view.profile.minFactor;
           const scaled = { ...g, values: g.values.map((v) => (v < 0 ? v : v * f)), maxMpa: g.maxMpa * f };
           setGrid({
@@ -66,7 +69,12 @@ export function useHeatMap(
         } catch {
           setGrid(null);
         }
-      });
+      };
+      // In a core worker (the page's thread only paints it); on the page when there is none.
+      const grid =
+        gridInWorker(design, nx, ny) ??
+        loadEditorCore().then(({ computeGasketStressGrid }) => computeGasketStressGrid(design, nx, ny));
+      grid.then(show, () => live && setGrid(null));
     }, GRID_DELAY_MS);
     return () => {
       live = false;

@@ -1,5 +1,6 @@
 import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
+import type { GasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
 import type { SuggestionRequest } from "@/features/analysis/core/suggest/request";
 import type { SuggestionProgress, SuggestionResult } from "@/features/analysis/core/suggest/search";
 import type { DesignIssue } from "@/features/analysis/core/validate";
@@ -7,7 +8,8 @@ import type { PackedPreview } from "./preview-transfer";
 
 // Messages between the Layout desk and its core worker (core-worker.ts). One module, two uses:
 // the Pattern finder starts a worker per search (and terminates it to cancel); the live analysis
-// keeps one for the page's life and sends it the drag previews and the full analysis on release.
+// keeps one for the page's life and sends it the drag previews and the full analysis on release;
+// the heat map keeps one for the full-area grid once edits settle (hooks/grid-in-worker.ts).
 
 /** A pattern search. */
 export interface SuggestWorkerRequest {
@@ -44,4 +46,18 @@ export type AnalyseWorkerReply = {
   | { ok: false; mode: "preview" | "full"; issues: DesignIssue[] }
 );
 
-export type CoreWorkerRequest = SuggestWorkerRequest | AnalyseWorkerRequest;
+/** The full-area gasket-stress grid of a document (the settled heat map). */
+export interface GridWorkerRequest {
+  type: "grid";
+  seq: number;
+  design: JointDesign;
+  nx: number;
+  ny: number;
+}
+
+/** The grid (its values transferred), or the reason the core gave none. */
+export type GridWorkerReply = { type: "grid"; seq: number } & (
+  { ok: true; grid: GasketStressGrid } | { ok: false; message: string }
+);
+
+export type CoreWorkerRequest = SuggestWorkerRequest | AnalyseWorkerRequest | GridWorkerRequest;

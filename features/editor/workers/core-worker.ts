@@ -6,8 +6,10 @@
 //   combination, then the result; Cancel terminates the worker, so the search never polls for it;
 // - the live analysis (use-live-analysis.ts, analysis-channel.ts): the drag preview or the full
 //   analysis of one document per request, its arrays transferred. The page sends the next
-//   request only when this one has answered, and only the newest document (latest wins).
+//   request only when this one has answered, and only the newest document (latest wins);
+// - the heat map (grid-in-worker.ts): the full-area gasket-stress grid, its values transferred.
 import { analyzeJoint } from "@/features/analysis/core/analyze";
+import { computeGasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
 import { previewJoint } from "@/features/analysis/core/preview";
 import { suggestPatterns } from "@/features/analysis/core/suggest/search";
 import { validateJointDesign, type DesignIssue } from "@/features/analysis/core/validate";
@@ -15,6 +17,8 @@ import type {
   AnalyseWorkerReply,
   AnalyseWorkerRequest,
   CoreWorkerRequest,
+  GridWorkerReply,
+  GridWorkerRequest,
   SuggestWorkerReply,
 } from "./core-worker-protocol";
 import { packPreview } from "./preview-transfer";
@@ -67,7 +71,18 @@ function analyse({ seq, mode, design }: AnalyseWorkerRequest) {
   scope.postMessage(reply, transfer);
 }
 
+function grid({ seq, design, nx, ny }: GridWorkerRequest) {
+  let reply: GridWorkerReply;
+  try {
+    reply = { type: "grid", seq, ok: true, grid: computeGasketStressGrid(design, nx, ny) };
+  } catch (err) {
+    reply = { type: "grid", seq, ok: false, message: err instanceof Error ? err.message : String(err) };
+  }
+  scope.postMessage(reply, reply.ok ? [reply.grid.values.buffer as ArrayBuffer] : []);
+}
+
 scope.onmessage = (event: MessageEvent<CoreWorkerRequest>) => {
   if (event.data.type === "analyse") analyse(event.data);
+  else if (event.data.type === "grid") grid(event.data);
   else suggest(event.data);
 };
