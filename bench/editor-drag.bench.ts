@@ -177,7 +177,7 @@ export async function run(): Promise<void> {
     line(`${boltCount}-bolt flange: recompute + redraw per frame`, frames);
     line(`${boltCount}-bolt flange:   frames that moved the bolt`, moves);
     line(`${boltCount}-bolt flange: recompute + React update`, react);
-    line(`${boltCount}-bolt flange:   of which the core (preview)`, compute);
+    line(`${boltCount}-bolt flange:   of which the core on the page`, compute);
     line(`${boltCount}-bolt flange: Konva layer draw`, draw);
     if (worker.length > 0) line(`${boltCount}-bolt flange: the preview in the core worker`, worker);
     line(`${boltCount}-bolt flange: release, the pointerup update`, releases);
@@ -193,7 +193,10 @@ export async function run(): Promise<void> {
     );
     figure("Drag, frames that moved the bolt: recompute + redraw", stat(moves), { goal: "p95 ≤ 16 ms" });
     figure("Drag, per frame: recompute + React update", stat(react));
-    figure("Drag, per frame: of which the core's preview", stat(compute));
+    figure(
+      "Drag, per frame: the core on the page's thread (the preview laid over the full result)",
+      stat(compute),
+    );
     figure("Drag, per frame: Konva layer draw", stat(draw));
     if (worker.length > 0)
       figure("Drag: the core's preview in the core worker (off the page's thread)", stat(worker));
