@@ -55,6 +55,11 @@ const envSchema = z.object({
   FE_WORKERS: z.coerce.number().int().min(0).max(8).default(1),
   /** Wall-time limit of one FE cross-check run, s. */
   FE_TIME_LIMIT_SECONDS: z.coerce.number().int().min(10).max(3600).default(600),
+  /**
+   * How often an open desk asks for its review lists again, ms (the desk's SWR refresh). 3 s by
+   * default; the test stack sets it lower so its browser tests wait less for a list to change.
+   */
+  DESK_REFRESH_MS: z.coerce.number().int().min(250).max(60_000).default(3000),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   /** Bearer token for GET /api/metrics; unset (the default) turns the endpoint off (404). */
   METRICS_TOKEN: z.string().min(24, "must be at least 24 characters").optional(),

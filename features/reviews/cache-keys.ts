@@ -1,7 +1,5 @@
 // SWR keys and cache tags of the review feature (neutral module: imported by server and client).
 export const DESK_LISTS_KEY = "/api/v1/desk";
-/** How often the desk lists poll, ms: new submissions appear without a reload. */
-export const DESK_REFRESH_MS = 3000;
 
 export const revisionPath = (designId: string, number: number): string =>
   `/designs/${designId}/revisions/${number}`;

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import useSWR from "swr";
-import { DESK_LISTS_KEY, DESK_REFRESH_MS } from "../cache-keys";
+import { DESK_LISTS_KEY } from "../cache-keys";
 import type { DeskItemDto, DeskListsDto } from "../review-dto";
 import { formatUtcMinute } from "@/features/ui/format-when";
 
@@ -59,11 +59,14 @@ function DeskList({
   );
 }
 
-/** "Waiting for my review" and "Returned to me", polled with SWR so they change without a reload. */
-export function DeskReviewLists({ fallback }: { fallback: DeskListsDto }) {
+/**
+ * "Waiting for my review" and "Returned to me", polled with SWR every `refreshMs` (the server's
+ * DESK_REFRESH_MS setting) so they change without a reload.
+ */
+export function DeskReviewLists({ fallback, refreshMs }: { fallback: DeskListsDto; refreshMs: number }) {
   const { data, error } = useSWR(DESK_LISTS_KEY, fetchDesk, {
     fallbackData: fallback,
-    refreshInterval: DESK_REFRESH_MS,
+    refreshInterval: refreshMs,
     revalidateOnFocus: true,
   });
   const lists = data ?? fallback;
