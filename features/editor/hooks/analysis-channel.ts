@@ -4,7 +4,7 @@ import type { JointDesign } from "@/features/analysis/core/design";
 import type { JointPreview } from "@/features/analysis/core/preview";
 import type { DesignIssue } from "@/features/analysis/core/validate";
 import type { AnalyseWorkerReply, AnalyseWorkerRequest } from "../workers/core-worker-protocol";
-import { unpackPreview } from "../workers/preview-transfer";
+import { unpackFull, unpackPreview } from "../workers/preview-transfer";
 
 /** What the worker gave for one document (the very object that was sent). */
 export type ChannelReply = { design: JointDesign; workerMs: number } & (
@@ -93,7 +93,8 @@ export class AnalysisChannel {
     if (job.warmUp) return;
     const base = { design: job.design, workerMs: m.ms };
     if (!m.ok) this.onReply({ ...base, mode: m.mode, issues: m.issues });
-    else if (m.mode === "full") this.onReply({ ...base, mode: "full", full: m.full, issues: null });
+    else if (m.mode === "full")
+      this.onReply({ ...base, mode: "full", full: unpackFull(m.full), issues: null });
     else this.onReply({ ...base, mode: "preview", preview: unpackPreview(m.preview), issues: null });
   }
 

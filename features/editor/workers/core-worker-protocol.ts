@@ -1,10 +1,9 @@
-import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { GasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
 import type { SuggestionRequest } from "@/features/analysis/core/suggest/request";
 import type { SuggestionProgress, SuggestionResult } from "@/features/analysis/core/suggest/search";
 import type { DesignIssue } from "@/features/analysis/core/validate";
-import type { PackedPreview } from "./preview-transfer";
+import type { PackedFull, PackedPreview } from "./preview-transfer";
 
 // Messages between the Layout desk and its core worker (core-worker.ts). One module, two uses:
 // the Pattern finder starts a worker per search (and terminates it to cancel); the live analysis
@@ -41,7 +40,7 @@ export type AnalyseWorkerReply = {
   seq: number;
   ms: number;
 } & (
-  | { ok: true; mode: "full"; full: JointAnalysis }
+  | { ok: true; mode: "full"; full: PackedFull }
   | { ok: true; mode: "preview"; preview: PackedPreview }
   | { ok: false; mode: "preview" | "full"; issues: DesignIssue[] }
 );

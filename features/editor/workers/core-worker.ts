@@ -21,7 +21,7 @@ import type {
   GridWorkerRequest,
   SuggestWorkerReply,
 } from "./core-worker-protocol";
-import { packPreview } from "./preview-transfer";
+import { packFull, packPreview } from "./preview-transfer";
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
 const post = (m: SuggestWorkerReply) => scope.postMessage(m);
@@ -51,8 +51,9 @@ function analyse({ seq, mode, design }: AnalyseWorkerRequest) {
   try {
     if (mode === "full") {
       // analyzeJoint validates first; the issues are listed only when it refuses.
-      const full = analyzeJoint(design);
-      reply = { type: "analysis", seq, ms: performance.now() - t0, ok: true, mode, full };
+      const packed = packFull(analyzeJoint(design));
+      transfer = packed.transfer;
+      reply = { type: "analysis", seq, ms: performance.now() - t0, ok: true, mode, full: packed.packed };
     } else {
       const packed = packPreview(previewJoint(design));
       transfer = packed.transfer;

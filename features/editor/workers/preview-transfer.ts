@@ -6,6 +6,7 @@
  *
  * Example: `unpackPreview(packPreview(p).packed)` deep-equals `p`.
  */
+import type { JointAnalysis } from "@/features/analysis/core/analyze";
 import type { JointPreview } from "@/features/analysis/core/preview";
 
 const NUMBER_KEYS = ["sMm", "xMm", "yMm", "stressMpa", "coneMpa", "beamMpa"] as const;
@@ -67,5 +68,54 @@ export function unpackPreview(p: PackedPreview): JointPreview {
     profile: { ...numbers, onGasket },
     boltSOnPathMm: unpackNumbers(boltSOnPathMm),
     seating: rest.gasket[0],
+  };
+}
+
+/** A full result whose profile arrays are packed like the preview's (`packFull`). */
+export type PackedFull = Omit<JointAnalysis, "gasketStress"> & {
+  gasketStress: Omit<JointAnalysis["gasketStress"], "profile" | "boltSOnPathMm"> & {
+    profile: PackedPreview["profile"];
+    boltSOnPathMm: Float64Array;
+  };
+};
+
+/**
+ * The full result with its profile arrays packed (the bulk of its size), and the buffers to
+ * transfer: the page then decodes typed arrays instead of tens of thousands of cloned numbers,
+ * which left the page's collector a large heap to sweep after every release. Every key keeps its
+ * place, so `unpackFull(packFull(r).packed)` gives the same JSON text as `r`.
+ */
+export function packFull(r: JointAnalysis): { packed: PackedFull; transfer: ArrayBuffer[] } {
+  const gs = r.gasketStress;
+  const onGasket = new Uint8Array(gs.profile.onGasket.length);
+  for (let i = 0; i < onGasket.length; i++) onGasket[i] = gs.profile.onGasket[i] ? 1 : 0;
+  const numbers = Object.fromEntries(NUMBER_KEYS.map((k) => [k, packNumbers(gs.profile[k])])) as Record<
+    NumberKey,
+    Float64Array
+  >;
+  const bolts = packNumbers(gs.boltSOnPathMm);
+  const packed: PackedFull = {
+    ...r,
+    gasketStress: { ...gs, boltSOnPathMm: bolts, profile: { ...gs.profile, ...numbers, onGasket } },
+  };
+  const transfer = [...NUMBER_KEYS.map((k) => numbers[k].buffer), onGasket.buffer, bolts.buffer];
+  return { packed, transfer: transfer as ArrayBuffer[] };
+}
+
+export function unpackFull(p: PackedFull): JointAnalysis {
+  const gs = p.gasketStress;
+  const onGasket = new Array<boolean>(gs.profile.onGasket.length);
+  for (let i = 0; i < onGasket.length; i++) onGasket[i] = gs.profile.onGasket[i] === 1;
+  const numbers = Object.fromEntries(NUMBER_KEYS.map((k) => [k, unpackNumbers(gs.profile[k])])) as Record<
+    NumberKey,
+    number[]
+  >;
+  return {
+    ...p,
+    gasketStress: {
+      ...gs,
+      boltSOnPathMm: unpackNumbers(gs.boltSOnPathMm),
+      profile: { ...gs.profile, ...numbers, onGasket },
+    },
   };
 }

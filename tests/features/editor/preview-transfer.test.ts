@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { previewJoint } from "@/features/analysis/core/preview";
 import { moveBolt } from "@/features/editor/model/move-bolt";
-import { packPreview, unpackPreview } from "@/features/editor/workers/preview-transfer";
+import { packFull, packPreview, unpackFull, unpackPreview } from "@/features/editor/workers/preview-transfer";
+import { analyzeJoint } from "@/features/analysis/core/analyze";
 import { makeCircle, makeCover } from "./fixtures";
 
 // The drag preview crosses from the core worker to the page as typed arrays (transferred, not
@@ -45,5 +46,18 @@ describe("packPreview / unpackPreview (core worker → page)", () => {
     expect(back.profile.beamMpa[0]).toBeNull();
     expect(sameBits(back, withNull)).toBeNull();
     expect(back.profile.onGasket).toEqual(p.profile.onGasket);
+  });
+});
+
+describe("packFull / unpackFull (core worker → page, the release's result)", () => {
+  it("gives back the same JSON text as analyzeJoint's result, the arrays transferred", () => {
+    const d = makeCircle(12);
+    const r = analyzeJoint(moveBolt(d, "b5", { sMm: d.bolts[4].sMm - 11.25 }));
+    const { packed, transfer } = packFull(r);
+    expect(packed.gasketStress.profile.sMm).toBeInstanceOf(Float64Array);
+    expect(transfer).toHaveLength(8);
+    const back = unpackFull(structuredClone(packed, { transfer }));
+    expect(JSON.stringify(back)).toBe(JSON.stringify(r));
+    expect(sameBits(back, r)).toBeNull();
   });
 });
