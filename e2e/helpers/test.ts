@@ -5,7 +5,7 @@ import { test as base, expect, type BrowserContext, type Page } from "@playwrigh
 // Content-Security-Policy violations, through the browser's own `securitypolicyviolation` event and
 // its console messages, and the test fails if any came in. The app runs with its real policy
 // (proxy.ts), so a script, style or font the policy refuses fails the browser tests instead of
-// silently breaking a screen.
+// silently breaking a screen. Contexts a test opens are closed when it ends.
 
 const REPORT = "[csp-violation]";
 const CSP_TEXT = /Content[- ]Security[- ]Policy/i;
@@ -36,8 +36,10 @@ export const test = base.extend<{ cspViolations: string[] }>({
       };
       await instrument(context);
       const newContext = browser.newContext;
+      const opened: BrowserContext[] = [];
       browser.newContext = async (...args: Parameters<typeof newContext>) => {
         const ctx = await newContext.apply(browser, args);
+        opened.push(ctx);
         await instrument(ctx);
         return ctx;
       };
@@ -45,6 +47,9 @@ export const test = base.extend<{ cspViolations: string[] }>({
         await runTest(violations);
       } finally {
         browser.newContext = newContext;
+        // A context the test opened and did not close (it failed first, or it forgot) would keep
+        // its pages polling the app through the later tests: close them all here.
+        await Promise.all(opened.map((ctx) => ctx.close().catch(() => undefined)));
       }
       expect(violations, "Content-Security-Policy violations in the browser console").toEqual([]);
     },
