@@ -5,6 +5,7 @@ import type { JointPreview } from "@/features/analysis/core/preview";
 import type { DesignIssue } from "@/features/analysis/core/validate";
 import type { AnalyseWorkerReply, AnalyseWorkerRequest } from "../workers/core-worker-protocol";
 import { unpackFull, unpackPreview } from "../workers/preview-transfer";
+import { startCoreWorker } from "../workers/start-core-worker";
 
 /** What the worker gave for one document (the very object that was sent). */
 export type ChannelReply = { design: JointDesign; workerMs: number } & (
@@ -41,15 +42,15 @@ export class AnalysisChannel {
 
   private start(): Worker | null {
     if (this.worker || this.failed) return this.worker;
-    try {
-      const w = new Worker(new URL("../workers/core-worker.ts", import.meta.url), { type: "module" });
-      w.onmessage = (e: MessageEvent<AnalyseWorkerReply>) => this.answer(e.data);
-      w.onerror = () => this.fail();
-      this.worker = w;
-    } catch {
+    const w = startCoreWorker();
+    if (!w) {
       this.fail();
+      return null;
     }
-    return this.worker;
+    w.onmessage = (e: MessageEvent<AnalyseWorkerReply>) => this.answer(e.data);
+    w.onerror = () => this.fail();
+    this.worker = w;
+    return w;
   }
 
   private fail() {

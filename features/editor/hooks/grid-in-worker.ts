@@ -2,6 +2,7 @@
 import type { JointDesign } from "@/features/analysis/core/design";
 import type { GasketStressGrid } from "@/features/analysis/core/gasket-stress-grid";
 import type { GridWorkerReply, GridWorkerRequest } from "../workers/core-worker-protocol";
+import { startCoreWorker } from "../workers/start-core-worker";
 
 // One core worker for the heat map's grid, started on the first request and kept for the page's
 // life (a grid is asked for at most once per settled edit); null once it failed to start or stopped.
@@ -11,8 +12,9 @@ const waiting = new Map<number, { resolve: (g: GasketStressGrid) => void; reject
 
 function gridWorker(): Worker | null {
   if (worker !== undefined) return worker;
-  try {
-    const w = new Worker(new URL("../workers/core-worker.ts", import.meta.url), { type: "module" });
+  const w = startCoreWorker();
+  worker = w;
+  if (w) {
     w.onmessage = (e: MessageEvent<GridWorkerReply>) => {
       const m = e.data;
       const job = waiting.get(m.seq);
@@ -27,9 +29,6 @@ function gridWorker(): Worker | null {
       for (const job of waiting.values()) job.reject(new Error("The core worker stopped."));
       waiting.clear();
     };
-    worker = w;
-  } catch {
-    worker = null;
   }
   return worker;
 }

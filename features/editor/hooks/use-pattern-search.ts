@@ -3,6 +3,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import type { SuggestionRequest } from "@/features/analysis/core/suggest/request";
 import type { SuggestionProgress, SuggestionResult } from "@/features/analysis/core/suggest/search";
 import type { SuggestWorkerReply, SuggestWorkerRequest } from "../workers/core-worker-protocol";
+import { startCoreWorker } from "../workers/start-core-worker";
 
 type PatternSearchState =
   | { status: "idle" }
@@ -28,7 +29,11 @@ export function usePatternSearch() {
   const run = useCallback(
     (request: SuggestionRequest) => {
       stop();
-      const w = new Worker(new URL("../workers/core-worker.ts", import.meta.url), { type: "module" });
+      const w = startCoreWorker();
+      if (!w) {
+        setState({ status: "error", message: "This browser could not start the search." });
+        return;
+      }
       worker.current = w;
       setState({ status: "running", progress: null });
       w.onmessage = (event: MessageEvent<SuggestWorkerReply>) => {
