@@ -2,7 +2,7 @@ import { randomUUID } from "node:crypto";
 import { readFileSync } from "node:fs";
 import type { Locator } from "@playwright/test";
 import { expect, test, type Page } from "./helpers/test";
-import { signIn } from "./helpers/sign-in";
+import { signIn, signedInPage } from "./helpers/sign-in";
 
 // Suggest pattern on the Layout desk: the Pattern finder runs the search in a worker, shows the
 // Candidate cards with the cautions, applies one as one undoable step, and a save records where
@@ -169,8 +169,7 @@ test("Suggest pattern on our own Stockroom bolting row: candidates name it and t
   // Ines (admin) adds a bolting row to the Stockroom: stud stock of our own scenario with its
   // test certificate's strengths (invented demo data, close to ISO 898-1 class 8.8).
   const name = `Halden Creek stud stock ${randomUUID().slice(0, 6)}`;
-  const ines = await (await browser.newContext()).newPage();
-  await signIn(ines, ADMIN);
+  const ines = await signedInPage(browser, ADMIN);
   await ines.goto("/library/bolting");
   await ines.getByRole("button", { name: "New bolting material" }).click();
   const form = ines.getByRole("form", { name: "Add a bolting material" });
